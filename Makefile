@@ -1,0 +1,56 @@
+# holent: top-level targets.  See README.md and DEVELOPERS.md.
+SHELL := /bin/bash
+.SHELLFLAGS := -o pipefail -c
+
+VERSION := 0.1.0
+PKG := holent-$(VERSION)
+TARBALL := $(PKG).tar.gz
+BUILD := $(CURDIR)/build
+PREFIX := $(BUILD)/prefix
+OCTAVE ?= octave-cli
+OCT := $(OCTAVE) --norc --no-history --quiet
+# Debian's Octave 7 prints a harmless message at exit; drop it.
+FILTER := sed -u '/ignoring const execution_exception/d'
+PKGSETUP := pkg ("prefix", "$(PREFIX)", "$(PREFIX)"); pkg ("local_list", "$(PREFIX)/octave_packages");
+
+DIST_SRC := $(shell find inst src doc -type f ! -name '*.o' ! -name '*.mex' ! -name '*.oct' 2>/dev/null)
+
+all: dist
+
+dist: $(TARBALL)
+
+$(TARBALL): $(DIST_SRC) DESCRIPTION INDEX LICENSE Makefile
+	rm -rf $(BUILD)/dist && mkdir -p $(BUILD)/dist/$(PKG)/src/core
+	cp -r DESCRIPTION INDEX inst doc $(BUILD)/dist/$(PKG)/
+	cp LICENSE $(BUILD)/dist/$(PKG)/COPYING
+	cp src/Makefile src/*.c src/*.h $(BUILD)/dist/$(PKG)/src/
+	cp src/core/*.c src/core/*.h $(BUILD)/dist/$(PKG)/src/core/
+	tar -C $(BUILD)/dist -czf $@ $(PKG)
+	@echo "built $@"
+
+deps:
+	@bash tests/ensure_deps.sh
+
+# Into the user's own package prefix: no root needed.
+install: $(TARBALL)
+	$(OCT) --eval 'pkg ("install", "-local", "$(TARBALL)")' 2>&1 | $(FILTER)
+
+# Into a throwaway prefix under build/, never the user's.
+throwaway-install: deps $(TARBALL)
+	rm -rf $(PREFIX) && mkdir -p $(PREFIX)
+	$(OCT) --eval '$(PKGSETUP) pkg ("install", "-local", "$(TARBALL)");' 2>&1 | $(FILTER)
+
+check: throwaway-install
+	bash tests/run_all.sh "$(PREFIX)"
+
+demo: throwaway-install
+	$(OCT) --eval '$(PKGSETUP) pkg load holent; holent_demo ();' 2>&1 | $(FILTER)
+
+bench: throwaway-install
+	$(OCT) --eval '$(PKGSETUP) pkg load holent; addpath ("$(CURDIR)/bench"); run_benchmarks ();' 2>&1 | $(FILTER)
+
+clean:
+	rm -rf $(BUILD) $(TARBALL)
+	$(MAKE) -C src clean
+
+.PHONY: all dist deps install throwaway-install check demo bench clean

@@ -1,0 +1,371 @@
+## Copyright (C) 2026 The holent developers.
+##
+## This program is free software: you can redistribute it and/or modify it
+## under the terms of the GNU General Public License as published by the
+## Free Software Foundation, either version 3 of the License, or (at your
+## option) any later version.  See the file COPYING.
+
+## -*- texinfo -*-
+## @deftypefn  {} {@var{bg} =} ads3_background (@var{state}, @var{boundary})
+## @deftypefnx {} {@var{bg} =} ads3_background (@dots{}, @var{name}, @var{value}, @dots{})
+## The AdS3 bulk dual of a state of a 2D CFT.
+##
+## @var{state} is one of
+## @table @asis
+## @item @qcode{"vacuum"}
+## the ground state: Poincare AdS3 on a line, global AdS3 on a circle.
+## @item @qcode{"thermal"}
+## a thermal state at inverse temperature beta: the planar BTZ black brane on
+## a line; on a circle the BTZ black hole or thermal AdS, whichever saddle
+## dominates (option @qcode{"saddle"}).
+## @item @qcode{"rotating"}
+## a thermal state with different left and right temperatures (angular
+## velocity Omega): planar rotating BTZ on a line, rotating BTZ (or thermal
+## AdS) on a circle.
+## @item @qcode{"heavy"}
+## a spinless heavy primary of weight h = hbar = (c/24)(1 - alpha^2) below the
+## black hole threshold, dual to a conical defect; circle only.
+## @end table
+##
+## @var{boundary} is @qcode{"line"} or @qcode{"circle"}.
+##
+## Options (name/value pairs, names case-insensitive):
+## @table @asis
+## @item @qcode{"c"}
+## central charge (default 1, unless @qcode{"G"} is given).
+## @item @qcode{"G"}, @qcode{"ell"}
+## three-dimensional Newton constant and AdS radius (default ell = 1);
+## Brown-Henneaux c = 3 ell/(2 G).  Giving c, G and ell that disagree is an
+## error.
+## @item @qcode{"cutoff"}
+## the UV cutoff epsilon, a length in boundary units (default 1e-6).  A
+## warning @code{holent:cutoff} is issued when it is not below 1/100 of every
+## length scale of the state (circumference, beta_L, beta_R).
+## @item @qcode{"circumference"}
+## circumference L of the boundary circle (default 2*pi); circle only.
+## @item @qcode{"beta"}, @qcode{"T"}
+## inverse temperature or temperature (thermal; or with Omega, rotating).
+## @item @qcode{"beta_L"}, @qcode{"beta_R"}
+## left and right inverse temperatures (rotating), or instead
+## @item @qcode{"Omega"}
+## the angular velocity, |Omega| < 1, with beta_L = beta (1 - Omega) and
+## beta_R = beta (1 + Omega).
+## @item @qcode{"alpha"}, @qcode{"h"}
+## defect parameter in (0, 1] or conformal weight h in [0, c/24) (heavy).
+## @item @qcode{"saddle"}
+## thermal or rotating state on a circle: @qcode{"dominant"} (default: BTZ
+## when beta_L beta_R < L^2, i.e. above the Hawking-Page temperature, thermal
+## AdS otherwise), @qcode{"btz"} or @qcode{"thermal_ads"}.
+## @end table
+##
+## The result is a scalar struct with fields @code{state}, @code{boundary},
+## @code{bulk} (one of @qcode{"poincare"}, @qcode{"global_ads"},
+## @qcode{"planar_btz"}, @qcode{"btz"}, @qcode{"thermal_ads"},
+## @qcode{"rotating_btz"}, @qcode{"planar_rotating_btz"},
+## @qcode{"conical_defect"}), @code{c}, @code{G}, @code{ell}, @code{cutoff},
+## @code{circumference} (Inf on a line), @code{beta}, @code{T}, @code{beta_L},
+## @code{beta_R}, @code{T_L}, @code{T_R}, @code{Omega} (Inf/0 where not
+## thermal), @code{alpha}, @code{h}, @code{saddle}, @code{horizon} (logical),
+## @code{pure} (logical: the state is pure, so S(A) = S(A^c)),
+## @code{S_BH} (horizon entropy, (pi c/6) L (1/beta_L + 1/beta_R); 0 without
+## a horizon, Inf on a line), @code{entropy_density} (horizon entropy per unit
+## boundary length) and @code{r_plus}, @code{r_minus} (horizon radii, in units
+## of ell, for the circle rescaled to circumference 2 pi; 0 without a horizon).
+##
+## Conventions are in @file{doc/conventions.md} of the package.
+##
+## @seealso{geodesic_length, interval_entropy}
+## @end deftypefn
+
+function bg = ads3_background (state, boundary, varargin)
+
+  fn = "ads3_background";
+  if (nargin < 2)
+    print_usage ();
+  endif
+  state = check_word (fn, "STATE", state, {"vacuum", "thermal", "rotating", "heavy"});
+  boundary = check_word (fn, "BOUNDARY", boundary, {"line", "circle"});
+
+  names = {"c", "G", "ell", "cutoff", "circumference", "beta", "T", ...
+           "beta_L", "beta_R", "Omega", "alpha", "h", "saddle"};
+  o = __holent_opts__ (fn, names, varargin);
+
+  ## Which options belong to which state.
+  allowed.vacuum = {};
+  allowed.thermal = {"beta", "T", "saddle"};
+  allowed.rotating = {"beta", "T", "beta_L", "beta_R", "Omega", "saddle"};
+  allowed.heavy = {"alpha", "h"};
+  common = {"c", "G", "ell", "cutoff", "circumference"};
+  given = fieldnames (o);
+  for k = 1:numel (given)
+    if (! any (strcmp (given{k}, [common, allowed.(state)])))
+      error ("holent:option", "%s: option '%s' does not apply to the %s state",
+             fn, given{k}, state);
+    endif
+  endfor
+  circle = strcmp (boundary, "circle");
+  if (! circle && isfield (o, "circumference"))
+    error ("holent:option", "%s: option 'circumference' applies to a circle only", fn);
+  endif
+  if (! circle && isfield (o, "saddle"))
+    error ("holent:option", "%s: option 'saddle' applies to a circle only", fn);
+  endif
+  if (strcmp (state, "heavy") && ! circle)
+    error ("holent:boundary",
+           "%s: the heavy state (conical defect) lives on a circle, not a line", fn);
+  endif
+
+  ## Central charge, Newton constant, AdS radius (Brown-Henneaux).
+  ell = 1;
+  if (isfield (o, "ell"))
+    ell = __holent_scalar__ (fn, "ell", o.ell, "positive");
+  endif
+  if (isfield (o, "G"))
+    G = __holent_scalar__ (fn, "G", o.G, "positive");
+    c = 3 * ell / (2 * G);
+    if (isfield (o, "c"))
+      cc = __holent_scalar__ (fn, "c", o.c, "positive");
+      if (abs (cc - c) > 1e-12 * c)
+        error ("holent:inconsistent",
+               "%s: c = %g disagrees with 3 ell/(2G) = %g (Brown-Henneaux)",
+               fn, cc, c);
+      endif
+    endif
+  else
+    c = 1;
+    if (isfield (o, "c"))
+      c = __holent_scalar__ (fn, "c", o.c, "positive");
+    endif
+    G = 3 * ell / (2 * c);
+  endif
+
+  cutoff = 1e-6;
+  if (isfield (o, "cutoff"))
+    cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");
+  endif
+  L = Inf;
+  if (circle)
+    L = 2 * pi;
+    if (isfield (o, "circumference"))
+      L = __holent_scalar__ (fn, "circumference", o.circumference, "positive");
+    endif
+  endif
+
+  bg = struct ("state", state, "boundary", boundary, "bulk", "", "c", c,
+               "G", G, "ell", ell, "cutoff", cutoff, "circumference", L,
+               "beta", Inf, "T", 0, "beta_L", Inf, "beta_R", Inf, "T_L", 0,
+               "T_R", 0, "Omega", 0, "alpha", 1, "h", 0, "saddle", "",
+               "horizon", false, "pure", true, "S_BH", 0,
+               "entropy_density", 0, "r_plus", 0, "r_minus", 0);
+
+  switch (state)
+    case "vacuum"
+      bg.bulk = ifelse (circle, "global_ads", "poincare");
+      scales = L;
+
+    case {"thermal", "rotating"}
+      [bl, br] = temperatures (fn, state, o);
+      bg.beta_L = bl;
+      bg.beta_R = br;
+      bg.beta = (bl + br) / 2;
+      bg.T = 1 / bg.beta;
+      bg.T_L = 1 / bl;
+      bg.T_R = 1 / br;
+      bg.Omega = (br - bl) / (br + bl);
+      bg.pure = false;
+      scales = [L, bl, br];
+      rot = strcmp (state, "rotating");
+      if (! circle)
+        bg.bulk = ifelse (rot, "planar_rotating_btz", "planar_btz");
+        bg.saddle = "btz";
+      else
+        sad = "dominant";
+        if (isfield (o, "saddle"))
+          sad = check_word (fn, "saddle", o.saddle, {"dominant", "btz", "thermal_ads"});
+        endif
+        if (strcmp (sad, "dominant"))
+          ## Hawking-Page: BTZ dominates when beta_L beta_R < L^2.
+          if (bl * br < L^2)
+            sad = "btz";
+          else
+            sad = "thermal_ads";
+          endif
+        endif
+        bg.saddle = sad;
+        if (strcmp (sad, "btz"))
+          bg.bulk = ifelse (rot, "rotating_btz", "btz");
+        else
+          bg.bulk = "thermal_ads";
+        endif
+      endif
+      if (! strcmp (bg.bulk, "thermal_ads"))
+        bg.horizon = true;
+        bg.entropy_density = pi * c / 6 * (1 / bl + 1 / br);
+        bg.S_BH = ifelse (circle, bg.entropy_density * L, Inf);
+        Lr = ifelse (circle, L, 2 * pi);
+        bg.r_plus = Lr / 2 * (1 / bl + 1 / br);
+        bg.r_minus = Lr / 2 * (1 / bl - 1 / br);
+      endif
+
+    case "heavy"
+      if (isfield (o, "alpha") && isfield (o, "h"))
+        error ("holent:option", "%s: give either 'alpha' or 'h', not both", fn);
+      elseif (isfield (o, "alpha"))
+        alpha = __holent_scalar__ (fn, "alpha", o.alpha, {0, 1, "(]"});
+      elseif (isfield (o, "h"))
+        h = __holent_scalar__ (fn, "h", o.h, {0, c / 24, "[)"});
+        alpha = sqrt (1 - 24 * h / c);
+      else
+        error ("holent:option", "%s: the heavy state needs 'alpha' or 'h'", fn);
+      endif
+      bg.alpha = alpha;
+      bg.h = c / 24 * (1 - alpha^2);
+      bg.bulk = "conical_defect";
+      scales = L;
+  endswitch
+
+  if (cutoff > 1e-2 * min (scales))
+    warning ("holent:cutoff",
+             "%s: cutoff %g is not small against the smallest scale %g of the state",
+             fn, cutoff, min (scales));
+  endif
+endfunction
+
+function w = check_word (fn, name, w, choices)
+  if (! ischar (w) || ! (isrow (w) || isempty (w)))
+    error ("holent:type", "%s: %s must be a string", fn, name);
+  endif
+  idx = find (strcmpi (w, choices));
+  if (isempty (idx))
+    error ("holent:option", "%s: unknown %s '%s' (expected one of: %s)",
+           fn, name, w, strjoin (choices, ", "));
+  endif
+  w = choices{idx};
+endfunction
+
+function [bl, br] = temperatures (fn, state, o)
+  has = @(f) isfield (o, f);
+  if (has ("beta") && has ("T"))
+    error ("holent:option", "%s: give either 'beta' or 'T', not both", fn);
+  endif
+  beta = [];
+  if (has ("beta"))
+    beta = __holent_scalar__ (fn, "beta", o.beta, "positive");
+  elseif (has ("T"))
+    beta = 1 / __holent_scalar__ (fn, "T", o.T, "positive");
+  endif
+  if (strcmp (state, "thermal"))
+    if (isempty (beta))
+      error ("holent:option", "%s: the thermal state needs 'beta' or 'T'", fn);
+    endif
+    bl = br = beta;
+    return;
+  endif
+  if (has ("beta_L") || has ("beta_R"))
+    if (! (has ("beta_L") && has ("beta_R")))
+      error ("holent:option", "%s: give both 'beta_L' and 'beta_R'", fn);
+    endif
+    if (! isempty (beta) || has ("Omega"))
+      error ("holent:option",
+             "%s: give 'beta_L' with 'beta_R', or 'beta' with 'Omega', not both", fn);
+    endif
+    bl = __holent_scalar__ (fn, "beta_L", o.beta_L, "positive");
+    br = __holent_scalar__ (fn, "beta_R", o.beta_R, "positive");
+  else
+    if (isempty (beta) || ! has ("Omega"))
+      error ("holent:option",
+             "%s: the rotating state needs 'beta_L' and 'beta_R', or 'beta' (or 'T') and 'Omega'", fn);
+    endif
+    Om = __holent_scalar__ (fn, "Omega", o.Omega, {-1, 1, "()"});
+    bl = beta * (1 - Om);
+    br = beta * (1 + Om);
+  endif
+endfunction
+
+function r = ifelse (c, a, b)
+  if (c)
+    r = a;
+  else
+    r = b;
+  endif
+endfunction
+
+%!test
+%! bg = ads3_background ("vacuum", "line");
+%! assert (bg.bulk, "poincare");
+%! assert (bg.c, 1);
+%! assert (bg.pure);
+%! assert (bg.S_BH, 0);
+
+%!test
+%! ## Brown and Henneaux 1986 (Commun. Math. Phys. 104, 207): c = 3 ell/(2G).
+%! bg = ads3_background ("vacuum", "circle", "G", 0.01, "ell", 2);
+%! assert (bg.c, 3 * 2 / (2 * 0.01), 1e-12);
+%! bg = ads3_background ("vacuum", "circle", "c", 600, "ell", 2);
+%! assert (bg.G, 3 * 2 / (2 * 600), 1e-15);
+%! assert (bg.bulk, "global_ads");
+%! assert (bg.circumference, 2 * pi);
+
+%!test
+%! ## Thermal entropy density s = pi c T / 3 (Cardy 1986; Bekenstein-Hawking for BTZ).
+%! bg = ads3_background ("thermal", "line", "T", 2.5, "c", 12);
+%! assert (bg.bulk, "planar_btz");
+%! assert (bg.entropy_density, pi * 12 * 2.5 / 3, 1e-12);
+%! assert (bg.S_BH, Inf);
+
+%!test
+%! ## Above the Hawking-Page temperature T = 1/L the BTZ saddle dominates.
+%! bg = ads3_background ("thermal", "circle", "beta", 1, "circumference", 3);
+%! assert (bg.bulk, "btz");
+%! assert (bg.horizon);
+%! assert (bg.S_BH, pi * 1 / 3 * 3 / 1, 1e-12);
+%! assert (bg.r_plus, 3 / 1, 1e-12);
+%! bg = ads3_background ("thermal", "circle", "beta", 4, "circumference", 3);
+%! assert (bg.bulk, "thermal_ads");
+%! assert (bg.S_BH, 0);
+%! bg = ads3_background ("thermal", "circle", "beta", 4, "circumference", 3, "saddle", "btz");
+%! assert (bg.bulk, "btz");
+
+%!test
+%! bg = ads3_background ("rotating", "circle", "beta", 0.5, "Omega", 0.3);
+%! assert (bg.bulk, "rotating_btz");
+%! assert ([bg.beta_L, bg.beta_R], [0.35, 0.65], 1e-14);
+%! assert (bg.Omega, 0.3, 1e-14);
+%! assert (bg.r_minus / bg.r_plus, 0.3, 1e-14);
+%! bg2 = ads3_background ("rotating", "circle", "beta_L", 0.35, "beta_R", 0.65);
+%! assert (bg2.S_BH, bg.S_BH, 1e-12);
+%! bg = ads3_background ("rotating", "line", "T", 2, "Omega", -0.5);
+%! assert (bg.bulk, "planar_rotating_btz");
+
+%!test
+%! bg = ads3_background ("heavy", "circle", "h", 1, "c", 48);
+%! assert (bg.alpha, sqrt (1 - 24 / 48), 1e-15);
+%! assert (bg.bulk, "conical_defect");
+%! bg = ads3_background ("heavy", "circle", "alpha", 0.5, "c", 24);
+%! assert (bg.h, 0.75, 1e-15);
+
+%!warning <cutoff> ads3_background ("thermal", "line", "beta", 1e-3, "cutoff", 1e-4);
+
+%!error <Invalid call> ads3_background ("vacuum")
+%!error <unknown STATE> ads3_background ("excited", "line")
+%!error <unknown BOUNDARY> ads3_background ("vacuum", "torus")
+%!error <unknown option 'colour'> ads3_background ("vacuum", "line", "colour", 1)
+%!error <must be positive> ads3_background ("thermal", "line", "beta", -1)
+%!error <must be positive> ads3_background ("thermal", "line", "beta", 0)
+%!error <must lie in> ads3_background ("rotating", "line", "beta", 1, "Omega", 1)
+%!error <must lie in> ads3_background ("rotating", "line", "beta", 1, "Omega", -1.5)
+%!error <must lie in> ads3_background ("heavy", "circle", "alpha", 0)
+%!error <must lie in> ads3_background ("heavy", "circle", "alpha", 1.2)
+%!error <must lie in> ads3_background ("heavy", "circle", "h", 1, "c", 24)
+%!error <cutoff must be positive> ads3_background ("vacuum", "line", "cutoff", 0)
+%!error <disagrees> ads3_background ("vacuum", "line", "c", 10, "G", 1)
+%!error <circle, not a line> ads3_background ("heavy", "line", "alpha", 0.5)
+%!error <does not apply> ads3_background ("vacuum", "line", "beta", 1)
+%!error <needs 'beta' or 'T'> ads3_background ("thermal", "line")
+%!error <NaN> ads3_background ("thermal", "line", "beta", NaN)
+%!error <real and full> ads3_background ("thermal", "line", "beta", 1i)
+%!error <real numeric scalar> ads3_background ("thermal", "line", "beta", [1 2])
+%!error <real numeric scalar> ads3_background ("thermal", "line", "beta", "1")
+%!error <finite> ads3_background ("thermal", "line", "beta", Inf)
+%!error <circle only> ads3_background ("thermal", "line", "beta", 1, "saddle", "btz")
+%!error <name/value pairs> ads3_background ("vacuum", "line", "c")

@@ -1,0 +1,106 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+
+## -*- texinfo -*-
+## @deftypefn  {} {@var{len} =} geodesic_length (@var{bg}, @var{x1}, @var{x2})
+## @deftypefnx {} {@var{len} =} geodesic_length (@dots{}, "class", @var{cls})
+## Regulated length, in units of the AdS radius ell, of the boundary-anchored
+## geodesic of background @var{bg} (from @code{ads3_background}) between the
+## boundary points @var{x1} and @var{x2}.
+##
+## @var{x1} and @var{x2} are real arrays that broadcast against each other;
+## @var{len} has the broadcast size.  The geodesic is cut off at the UV
+## cutoff @code{bg.cutoff}: for an interval or arc of length l the result is
+## the standard regulated length whose leading divergence is 2 log(l/eps);
+## corrections of order (eps/l)^2, which depend on the regularisation scheme,
+## are dropped.  The entropy of the surface is (c/6) * @var{len}.
+##
+## On a circle the boundary points are taken modulo the circumference L and
+## the option @qcode{"class"} picks the homotopy class of the geodesic:
+## @qcode{"positive"} (the geodesic over the arc running from @var{x1} to
+## @var{x2} in the positive direction), @qcode{"negative"} (over the other
+## arc) or @qcode{"shorter"} (the shorter of the two, the default).  In
+## global and thermal AdS both classes give the same geodesic; in BTZ and the
+## conical defect they differ.  On a line the option is ignored.
+##
+## Coincident points (on a circle: equal modulo L) are an error.
+##
+## @seealso{ads3_background, interval_entropy}
+## @end deftypefn
+
+function len = geodesic_length (bg, x1, x2, varargin)
+  fn = "geodesic_length";
+  if (nargin != 3 && nargin != 5)
+    print_usage ();
+  endif
+  __holent_check_bg__ (fn, bg);
+  o = __holent_opts__ (fn, {"class"}, varargin);
+  cls = 0;
+  if (isfield (o, "class"))
+    v = o.class;
+    choices = {"shorter", "positive", "negative"};
+    if (! ischar (v) || ! any (strcmpi (v, choices)))
+      error ("holent:option",
+             "%s: 'class' must be \"shorter\", \"positive\" or \"negative\"", fn);
+    endif
+    cls = find (strcmpi (v, choices)) - 1;
+  endif
+  x1 = __holent_array__ (fn, "X1", x1);
+  x2 = __holent_array__ (fn, "X2", x2);
+  if (! size_equal (x1, x2))
+    try
+      z = zeros (size (x1 + x2));
+    catch
+      error ("holent:size", "%s: X1 (%s) and X2 (%s) do not broadcast", fn,
+             mat2str (size (x1)), mat2str (size (x2)));
+    end_try_catch
+    x1 = x1 + z;
+    x2 = x2 + z;
+  endif
+  if (strcmp (bg.boundary, "line"))
+    k = find (x1(:) == x2(:), 1);
+  else
+    L = bg.circumference;
+    k = find (mod (x2(:) - x1(:), L) == 0, 1);
+  endif
+  if (! isempty (k))
+    error ("holent:coincident",
+           "%s: X1(%d) and X2(%d) coincide: no geodesic joins a point to itself",
+           fn, k, k);
+  endif
+  len = __holent_geodesic__ (bg, x1, x2, cls);
+endfunction
+
+%!shared bgl, bgc
+%! bgl = ads3_background ("vacuum", "line", "cutoff", 1e-3);
+%! bgc = ads3_background ("thermal", "circle", "beta", 1, "cutoff", 1e-4);
+
+%!test
+%! ## Calabrese and Cardy 2004 (J. Stat. Mech. P06002): vacuum on a line,
+%! ## S = (c/3) log(l/eps), i.e. a regulated length 2 log(l/eps).
+%! assert (geodesic_length (bgl, 0, [1 2 5]), 2 * log ([1 2 5] / 1e-3), 1e-12);
+%! assert (geodesic_length (bgl, [1; 2], [3 4]), 2 * log (abs ([2 3; 1 2]) / 1e-3), 1e-12);
+
+%!test
+%! ## BTZ: the two homotopy classes over arcs l and L - l.
+%! L = 2 * pi;  l = 1;
+%! f = @(a) 2 * log (1 / (pi * 1e-4) * sinh (pi * a));
+%! assert (geodesic_length (bgc, 0.5, 1.5, "class", "positive"), f (l), 1e-12);
+%! assert (geodesic_length (bgc, 0.5, 1.5, "class", "negative"), f (L - l), 1e-10);
+%! assert (geodesic_length (bgc, 1.5, 0.5), f (l), 1e-12);
+%! assert (geodesic_length (bgc, 0.5 + 3 * L, 1.5 - L), f (l), 1e-10);
+
+%!test
+%! assert (size (geodesic_length (bgl, zeros (0, 3), 1)), [0 3]);
+
+%!error <Invalid call> geodesic_length (bgl, 1)
+%!error <coincide> geodesic_length (bgl, 1, [2 1])
+%!error <coincide> geodesic_length (bgc, 1, 1 + 2 * pi)
+%!error <do not broadcast> geodesic_length (bgl, [1 2 3], [4 5])
+%!error <NaN> geodesic_length (bgl, NaN, 1)
+%!error <finite> geodesic_length (bgl, Inf, 1)
+%!error <real> geodesic_length (bgl, 1i, 1)
+%!error <numeric array> geodesic_length (bgl, true, 2)
+%!error <numeric array> geodesic_length (bgl, "a", 2)
+%!error <background struct> geodesic_length (struct (), 1, 2)
+%!error <'class' must be> geodesic_length (bgc, 1, 2, "class", "long")
+%!error <unknown option> geodesic_length (bgc, 1, 2, "klass", "shorter")

@@ -1,0 +1,27 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
+## -*- texinfo -*-
+## @deftypefn {} {@var{x} =} __holent_array__ (@var{fn}, @var{name}, @var{x})
+## Check that @var{x} is a real, full, non-logical numeric array with no NaN
+## or Inf, and return it as double.  Empty arrays pass.
+## Errors: @code{holent:type}, @code{holent:nan}, @code{holent:domain}.
+## @end deftypefn
+function x = __holent_array__ (fn, name, x)
+  if (! isnumeric (x) || islogical (x))
+    error ("holent:type", "%s: %s must be a numeric array, got %s", fn, name, class (x));
+  endif
+  if (! isreal (x))
+    error ("holent:type", "%s: %s must be real, not complex", fn, name);
+  endif
+  if (issparse (x))
+    x = full (x);
+  endif
+  x = double (x);
+  if (any (isnan (x(:))))
+    error ("holent:nan", "%s: %s must not contain NaN (element %d)", fn, name,
+           find (isnan (x(:)), 1));
+  endif
+  if (any (isinf (x(:))))
+    error ("holent:domain", "%s: %s must be finite (element %d is Inf)", fn, name,
+           find (isinf (x(:)), 1));
+  endif
+endfunction

@@ -1,0 +1,14 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
+## -*- texinfo -*-
+## @deftypefn {} {} __holent_check_bg__ (@var{fn}, @var{bg})
+## Raise @code{holent:background} unless @var{bg} is a background struct
+## made by @code{ads3_background}.
+## @end deftypefn
+function __holent_check_bg__ (fn, bg)
+  req = {"bulk", "boundary", "circumference", "cutoff", "beta_L", "beta_R", ...
+         "alpha", "c", "S_BH", "horizon"};
+  if (! isstruct (bg) || ! isscalar (bg) || ! all (isfield (bg, req)))
+    error ("holent:background",
+           "%s: BG must be a background struct made by ads3_background", fn);
+  endif
+endfunction

@@ -1,0 +1,30 @@
+/* holent.h: status codes and shared declarations of the holent core.
+ *
+ * The core is plain C11: no Octave headers, no global state, no I/O.
+ * Every public function returns a status code and writes its results
+ * through pointers supplied (and owned) by the caller.
+ *
+ * Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.  */
+#ifndef HOLENT_H
+#define HOLENT_H
+
+#include <stddef.h>
+
+enum holent_status
+{
+  HOLENT_SUCCESS = 0,
+  HOLENT_EINVAL = 1,    /* argument invalid: NULL, NaN, wrong kind       */
+  HOLENT_EDOM = 2,      /* argument outside its domain (range error)     */
+  HOLENT_ENOMEM = 3,    /* allocation failed                              */
+  HOLENT_EOVERLAP = 4,  /* intervals of a region overlap                  */
+  HOLENT_EEMPTY = 5,    /* empty or zero-length interval                  */
+  HOLENT_ENOCONV = 6,   /* iteration (root finder, quadrature) failed     */
+  HOLENT_EUNSUP = 7,    /* not implemented for this background            */
+  HOLENT_ETOOBIG = 8,   /* problem size beyond what the core accepts      */
+  HOLENT_ECOINCIDE = 9  /* two boundary points coincide                   */
+};
+
+/* Short English description of a status code; never NULL.  */
+const char *holent_strerror (int status);
+
+#endif /* HOLENT_H */

@@ -1,0 +1,22 @@
+/* holent_interval.h: RT entropy of a single boundary interval, with the
+ * homology constraint when the bulk has a horizon.  GPL-3.0-or-later.  */
+#ifndef HOLENT_INTERVAL_H
+#define HOLENT_INTERVAL_H
+
+#include <stddef.h>
+#include "holent_geo.h"
+
+/* S[i] = RT entropy of an interval of length l[i]:
+ *   line:   (c/6) len(l)
+ *   circle: min((c/6) len(l), (c/6) len(L - l) + S_BH), l in (0, L];
+ *           l = L (the whole circle) gives S_BH.
+ * branch[i] (may be NULL) is 0 when the geodesic over the interval itself
+ * wins and 1 when the complementary geodesic (plus the horizon, if any)
+ * wins; ties go to 0.  *n_short (may be NULL) counts lengths not longer
+ * than twice the cutoff, where the regulated formula is meaningless.  */
+int holent_interval_entropy (const holent_geo_bg *bg, size_t n,
+                             const double *l, double *S,
+                             unsigned char *branch, size_t *bad,
+                             size_t *n_short);
+
+#endif /* HOLENT_INTERVAL_H */

@@ -1,0 +1,28 @@
+## run_tests (ROOT, RESULT): run the BIST blocks of every inst/*.m of the
+## installed package and every cross-check file tests/check_*.m; write
+## "passed failed" to the file RESULT.  Used by tests/run_all.sh.
+function run_tests (root, result)
+  files = dir (fullfile (root, "inst", "*.m"));
+  names = cellfun (@(f) f(1:end-2), {files.name}, "uniformoutput", false);
+  checks = dir (fullfile (root, "tests", "check_*.m"));
+  names = [names, cellfun(@(f) f(1:end-2), {checks.name}, "uniformoutput", false)];
+  pass = 0;  fail = 0;
+  for k = 1:numel (names)
+    nm = names{k};
+    t0 = tic ();
+    try
+      [n, nmax] = test (nm, "quiet", stdout);
+    catch err
+      printf ("FAIL %s: the test run raised: %s\n", nm, err.message);
+      n = 0;  nmax = 1;
+    end_try_catch
+    pass += n;
+    fail += nmax - n;
+    printf ("%-32s %4d of %4d passed  (%.1f s)\n", nm, n, nmax, toc (t0));
+    fflush (stdout);
+  endfor
+  printf ("octave: %d passed, %d failed\n", pass, fail);
+  fid = fopen (result, "w");
+  fprintf (fid, "%d %d\n", pass, fail);
+  fclose (fid);
+endfunction
