@@ -1,11 +1,14 @@
 # holent: top-level targets.  See README.md and DEVELOPERS.md.
+# make check TESTS="name ..." runs only the BIST/cross-check files and C
+# unit tests whose names contain one of the words.
 SHELL := /bin/bash
 .SHELLFLAGS := -o pipefail -c
 
 VERSION := 0.1.0
 PKG := holent-$(VERSION)
-TARBALL := $(PKG).tar.gz
-BUILD := $(CURDIR)/build
+# BUILD and TARBALL may be overridden (parallel work trees, CI).
+BUILD ?= $(CURDIR)/build
+TARBALL ?= $(CURDIR)/$(PKG).tar.gz
 PREFIX := $(BUILD)/prefix
 OCTAVE ?= octave-cli
 OCT := $(OCTAVE) --norc --no-history --quiet
@@ -41,7 +44,7 @@ throwaway-install: deps $(TARBALL)
 	$(OCT) --eval '$(PKGSETUP) pkg ("install", "-local", "$(TARBALL)");' 2>&1 | $(FILTER)
 
 check: throwaway-install
-	bash tests/run_all.sh "$(PREFIX)"
+	BUILD="$(BUILD)" TESTS="$(TESTS)" bash tests/run_all.sh "$(PREFIX)"
 
 demo: throwaway-install
 	$(OCT) --eval '$(PKGSETUP) pkg load holent; holent_demo ();' 2>&1 | $(FILTER)

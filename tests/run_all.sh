@@ -9,7 +9,14 @@ set -u
 PREFIX=${1:?usage: run_all.sh PREFIX}
 ROOT=$(cd "$(dirname "$0")/.." && pwd)
 OCTAVE=${OCTAVE:-octave-cli}
-WORK="$ROOT/build/ctest"
+BUILD=${BUILD:-$ROOT/build}
+TESTS=${TESTS:-}
+WORK="$BUILD/ctest"
+selected () {
+  [ -z "$TESTS" ] && return 0
+  for w in $TESTS; do case "$1" in *"$w"*) return 0;; esac; done
+  return 1
+}
 mkdir -p "$WORK"
 pass=0; fail=0
 
@@ -19,6 +26,7 @@ echo "== C unit tests of the core (ASan + UBSan)"
 for t in "$ROOT"/tests/core/test_*.c; do
   [ -e "$t" ] || continue
   name=$(basename "$t" .c)
+  selected "$name" || continue
   if ! gcc -std=c11 -D_DEFAULT_SOURCE -g -O1 -Wall -Wextra -fopenmp \
        -fsanitize=address,undefined -fno-sanitize-recover=all \
        -fno-omit-frame-pointer -I"$ROOT/src/core" $GSL_CFLAGS \
@@ -48,7 +56,7 @@ rm -f "$res"
   pkg ('local_list', '$PREFIX/octave_packages');
   pkg load holent;
   addpath ('$ROOT/tests');
-  run_tests ('$ROOT', '$res');" 2>&1 | sed -u '/ignoring const execution_exception/d'
+  run_tests ('$ROOT', '$res', '$TESTS');" 2>&1 | sed -u '/ignoring const execution_exception/d'
 if [ -s "$res" ]; then
   read p f < "$res"
   pass=$((pass + p)); fail=$((fail + f))

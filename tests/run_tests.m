@@ -1,11 +1,17 @@
 ## run_tests (ROOT, RESULT): run the BIST blocks of every inst/*.m of the
-## installed package and every cross-check file tests/check_*.m; write
+## installed package and every cross-check file tests/check_*.m (only the
+## names containing a word of FILTER, when given); write
 ## "passed failed" to the file RESULT.  Used by tests/run_all.sh.
-function run_tests (root, result)
+function run_tests (root, result, filter)
   files = dir (fullfile (root, "inst", "*.m"));
   names = cellfun (@(f) f(1:end-2), {files.name}, "uniformoutput", false);
   checks = dir (fullfile (root, "tests", "check_*.m"));
   names = [names, cellfun(@(f) f(1:end-2), {checks.name}, "uniformoutput", false)];
+  if (nargin > 2 && ! isempty (strtrim (filter)))
+    words = strsplit (strtrim (filter));
+    keep = cellfun (@(nm) any (cellfun (@(w) ! isempty (strfind (nm, w)), words)), names);
+    names = names(keep);
+  endif
   pass = 0;  fail = 0;
   for k = 1:numel (names)
     nm = names{k};
