@@ -33,6 +33,32 @@ function [S, branch] = interval_entropy (bg, l)
     print_usage ();
   endif
   __holent_check_bg__ (fn, bg);
+  if (! (isnumeric (l) && isreal (l)) || islogical (l) || issparse (l)
+      || ! isa (l, "double"))
+    ## Slow path only for unusual input: full checks and conversion.
+    l = __holent_array__ (fn, "L", l);
+  endif
+  try
+    ## Range, NaN and Inf are checked in the core in the same pass as the
+    ## evaluation; a failure is explained below.
+    if (nargout > 1)
+      [S, br, nshort] = __holent_interval__ (bg, l);
+      branch = logical (br);
+    else
+      [S, ~, nshort] = __holent_interval__ (bg, l);
+    endif
+  catch err
+    explain_bad_length (fn, bg, l);
+    rethrow (err);
+  end_try_catch
+  if (nshort > 0)
+    warning ("holent:cutoff",
+             "%s: %d interval(s) not longer than twice the cutoff %g", fn,
+             nshort, bg.cutoff);
+  endif
+endfunction
+
+function explain_bad_length (fn, bg, l)
   l = __holent_array__ (fn, "L", l);
   if (strcmp (bg.boundary, "line"))
     k = find (! (l(:) > 0), 1);
@@ -45,17 +71,6 @@ function [S, branch] = interval_entropy (bg, l)
       error ("holent:domain", "%s: L(%d) = %g must lie in (0, circumference = %g]",
              fn, k, l(k), bg.circumference);
     endif
-  endif
-  if (nargout > 1)
-    [S, br, nshort] = __holent_interval__ (bg, l);
-    branch = logical (br);
-  else
-    [S, ~, nshort] = __holent_interval__ (bg, l);
-  endif
-  if (nshort > 0)
-    warning ("holent:cutoff",
-             "%s: %d interval(s) not longer than twice the cutoff %g", fn,
-             nshort, bg.cutoff);
   endif
 endfunction
 
@@ -104,7 +119,7 @@ endfunction
 %! assert (size (S), [2 0]);
 %! assert (islogical (b));
 
-%!warning <twice the cutoff> interval_entropy (ads3_background ("vacuum", "line", "cutoff", 1e-3), 1e-3)
+%!warning <twice the cutoff> interval_entropy (ads3_background ("vacuum", "line", "cutoff", 1e-3), 1e-3);
 %!error <Invalid call> interval_entropy (ads3_background ("vacuum", "line"))
 %!error <positive length> interval_entropy (ads3_background ("vacuum", "line"), [1 -1])
 %!error <must lie in> interval_entropy (ads3_background ("vacuum", "circle"), 7)

@@ -92,50 +92,27 @@ holent_geo_bg_init (holent_geo_bg *bg, holent_bulk bulk, double L,
     default:
       break;
     }
+
+  switch (bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+      bg->pref = -2.0 * log (eps);
+      break;
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+    case HOLENT_BULK_CONICAL_DEFECT:
+      bg->kL = bg->kR = M_PI * bg->alpha / L;
+      bg->pref = 2.0 * log (L / (M_PI * bg->alpha * eps));
+      bg->wgt = 1.0;
+      break;
+    default:
+      bg->kL = M_PI / bg->beta_L;
+      bg->kR = M_PI / bg->beta_R;
+      bg->pref = log (bg->beta_L / (M_PI * eps)) + log (bg->beta_R / (M_PI * eps));
+      bg->wgt = 1.0;
+      break;
+    }
   return HOLENT_SUCCESS;
-}
-
-double
-holent_geo_lnsinh (double x)
-{
-  /* log sinh x = x - log 2 + log(1 - e^{-2x}); direct form near 0 where
-     the rewrite loses digits in log1p's argument.  */
-  if (x < 0.5)
-    return log (sinh (x));
-  return x - M_LN2 + log1p (-exp (-2.0 * x));
-}
-
-/* The kernels below assume validated input: see holent_geo_arc_length.  */
-static inline double
-len_poincare (const holent_geo_bg *bg, double l)
-{
-  return 2.0 * log (l / bg->eps);
-}
-
-static inline double
-len_global (const holent_geo_bg *bg, double l)
-{
-  return 2.0 * log (bg->L / (M_PI * bg->eps) * sin (M_PI * l / bg->L));
-}
-
-static inline double
-len_btz (const holent_geo_bg *bg, double l)
-{
-  const double bl = bg->beta_L, br = bg->beta_R;
-  return log (bl * br / (M_PI * M_PI * bg->eps * bg->eps))
-         + holent_geo_lnsinh (M_PI * l / bl) + holent_geo_lnsinh (M_PI * l / br);
-}
-
-static inline double
-len_defect (const holent_geo_bg *bg, double l)
-{
-  /* Beyond alpha*theta = pi no geodesic on that side of the defect
-     exists; the infimum over curves in the class is the path through
-     the apex, length 2 log(L/(pi alpha eps)).  */
-  double ph = M_PI * bg->alpha * l / bg->L;
-  if (ph > M_PI_2)
-    ph = M_PI_2;
-  return 2.0 * log (bg->L / (M_PI * bg->alpha * bg->eps) * sin (ph));
 }
 
 static int
@@ -157,23 +134,6 @@ arc_ok (const holent_geo_bg *bg, double arc)
     }
 }
 
-static inline double
-arc_len_unchecked (const holent_geo_bg *bg, double arc)
-{
-  switch (bg->bulk)
-    {
-    case HOLENT_BULK_POINCARE:
-      return len_poincare (bg, arc);
-    case HOLENT_BULK_GLOBAL_ADS:
-    case HOLENT_BULK_THERMAL_ADS:
-      return len_global (bg, arc);
-    case HOLENT_BULK_CONICAL_DEFECT:
-      return len_defect (bg, arc);
-    default:
-      return len_btz (bg, arc);
-    }
-}
-
 int
 holent_geo_arc_length (const holent_geo_bg *bg, double arc, double *len)
 {
@@ -181,7 +141,7 @@ holent_geo_arc_length (const holent_geo_bg *bg, double arc, double *len)
     return HOLENT_EINVAL;
   if (!arc_ok (bg, arc))
     return HOLENT_EDOM;
-  *len = arc_len_unchecked (bg, arc);
+  *len = holent_geo_len_unchecked (bg, arc);
   return HOLENT_SUCCESS;
 }
 
@@ -202,7 +162,7 @@ holent_geo_arc_lengths (const holent_geo_bg *bg, size_t n,
   const long nn = (long) n;
 #pragma omp parallel for schedule(static) if (nn > 20000)
   for (long i = 0; i < nn; i++)
-    len[i] = arc_len_unchecked (bg, arc[i]);
+    len[i] = holent_geo_len_unchecked (bg, arc[i]);
   return HOLENT_SUCCESS;
 }
 

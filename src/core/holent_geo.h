@@ -37,6 +37,10 @@ typedef struct
   int horizon;       /* 1 when the bulk has a horizon                    */
   double S_BH;       /* horizon entropy (circle), 0 without horizon      */
   double s_density;  /* horizon entropy per unit boundary length         */
+  /* Set by init, so the kernels do no repeated work:
+     len(l) = pref + wgt * (g(kL l) + g(kR l)), g = log sin or log sinh,
+     or pref + 2 log l on the Poincare line.  */
+  double pref, kL, kR, wgt;
 } holent_geo_bg;
 
 /* Fill *bg after checking every parameter the bulk uses; the others are
@@ -73,7 +77,75 @@ int holent_geo_point_lengths (const holent_geo_bg *bg, size_t n,
                               holent_geo_class cls, double *len,
                               size_t *bad);
 
+/* Inline kernels, for hot loops of other core modules.  They assume an
+   initialised bg and an arc that holent_geo_arc_length accepts; no
+   checks.  */
+#include <math.h>
+#include <gsl/gsl_math.h>
+
 /* log(sinh(x)) for x > 0 without overflow.  */
-double holent_geo_lnsinh (double x);
+static inline double
+holent_geo_lnsinh (double x)
+{
+  /* log sinh x = x - log 2 + log(1 - e^{-2x}); direct form near 0 where
+     the rewrite loses digits in log1p's argument.  */
+  if (x < 0.5)
+    return log (sinh (x));
+  if (x > 19.0)  /* exp(-2x) < 4e-17: below double rounding */
+    return x - M_LN2;
+  return x - M_LN2 + log1p (-exp (-2.0 * x));
+}
+
+static inline double
+holent_geo_len_poincare_ (const holent_geo_bg *bg, double l)
+{
+  return bg->pref + 2.0 * log (l);
+}
+
+static inline double
+holent_geo_len_global_ (const holent_geo_bg *bg, double l)
+{
+  return bg->pref + 2.0 * log (sin (bg->kL * l));
+}
+
+static inline double
+holent_geo_len_btz_ (const holent_geo_bg *bg, double l)
+{
+  if (bg->kL == bg->kR)
+    return bg->pref + 2.0 * holent_geo_lnsinh (bg->kL * l);
+  return bg->pref + holent_geo_lnsinh (bg->kL * l)
+         + holent_geo_lnsinh (bg->kR * l);
+}
+
+static inline double
+holent_geo_len_defect_ (const holent_geo_bg *bg, double l)
+{
+  /* Beyond alpha*theta = pi no geodesic on that side of the defect
+     exists; the infimum over curves in the class is the path through
+     the apex, length 2 log(L/(pi alpha eps)).  */
+  double ph = bg->kL * l;
+  if (ph >= M_PI_2)
+    return bg->pref;
+  return bg->pref + 2.0 * log (sin (ph));
+}
+
+/* Regulated length for a validated arc.  */
+static inline double
+holent_geo_len_unchecked (const holent_geo_bg *bg, double arc)
+{
+  switch (bg->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+      return holent_geo_len_poincare_ (bg, arc);
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+      return holent_geo_len_global_ (bg, arc);
+    case HOLENT_BULK_CONICAL_DEFECT:
+      return holent_geo_len_defect_ (bg, arc);
+    default:
+      return holent_geo_len_btz_ (bg, arc);
+    }
+}
+
 
 #endif /* HOLENT_GEO_H */

@@ -16,59 +16,64 @@ holent_interval_entropy (const holent_geo_bg *bg, size_t n, const double *l,
                          double *S, unsigned char *branch, size_t *bad,
                          size_t *n_short)
 {
-  size_t nshort = 0;
   if (bg == NULL || (n > 0 && (l == NULL || S == NULL)))
     return HOLENT_EINVAL;
-  for (size_t i = 0; i < n; i++)
-    {
-      if (!length_ok (bg, l[i]))
-        {
-          if (bad)
-            *bad = i;
-          return isnan (l[i]) ? HOLENT_EINVAL : HOLENT_EDOM;
-        }
-      if (l[i] <= 2.0 * bg->eps)
-        nshort++;
-    }
-  if (n_short)
-    *n_short = nshort;
 
-  const double c6 = bg->c / 6.0;
+  const double c6 = bg->c / 6.0, L = bg->L, two_eps = 2.0 * bg->eps;
   const long nn = (long) n;
-  int status = HOLENT_SUCCESS;
+  long nshort = 0, nbad = 0;
 
-#pragma omp parallel for schedule(static) if (nn > 20000)
+  /* One fused pass: check, count short intervals and evaluate.  Invalid
+     entries are only counted here and located afterwards, so the loop
+     has no early exit and parallelises.  */
+#pragma omp parallel for schedule(static) reduction(+ : nshort, nbad) if (nn > 20000)
   for (long i = 0; i < nn; i++)
     {
-      double d, cp, s;
+      const double li = l[i];
+      double s = 0.0;
       unsigned char b = 0;
-      if (!bg->circle)
-        {
-          (void) holent_geo_arc_length (bg, l[i], &d);
-          s = c6 * d;
-        }
-      else if (l[i] >= bg->L)
-        {
-          s = bg->S_BH;  /* whole circle: only the horizon (or nothing) */
-          b = 1;
-        }
+      if (!length_ok (bg, li))
+        nbad++;
       else
         {
-          /* Both arcs lie in (0, L): arc_length cannot fail here.  */
-          (void) holent_geo_arc_length (bg, l[i], &d);
-          (void) holent_geo_arc_length (bg, bg->L - l[i], &cp);
-          d *= c6;
-          cp = c6 * cp + bg->S_BH;
-          s = d;
-          if (cp < d)
+          nshort += li <= two_eps;
+          if (!bg->circle)
+            s = c6 * holent_geo_len_unchecked (bg, li);
+          else if (li >= L)
             {
-              s = cp;
+              s = bg->S_BH;  /* whole circle: only the horizon, or nothing */
               b = 1;
+            }
+          else
+            {
+              /* both arcs lie in (0, L), which every circle bulk accepts */
+              const double d = c6 * holent_geo_len_unchecked (bg, li);
+              const double cp = c6 * holent_geo_len_unchecked (bg, L - li)
+                                + bg->S_BH;
+              s = d;
+              if (cp < d)
+                {
+                  s = cp;
+                  b = 1;
+                }
             }
         }
       S[i] = s;
       if (branch)
         branch[i] = b;
     }
-  return status;
+
+  if (nbad > 0)
+    {
+      for (size_t i = 0; i < n; i++)
+        if (!length_ok (bg, l[i]))
+          {
+            if (bad)
+              *bad = i;
+            return isnan (l[i]) ? HOLENT_EINVAL : HOLENT_EDOM;
+          }
+    }
+  if (n_short)
+    *n_short = (size_t) nshort;
+  return HOLENT_SUCCESS;
 }
