@@ -119,6 +119,17 @@ endfunction
 %! assert (size (S), [2 0]);
 %! assert (islogical (b));
 
+%!demo
+%! ## Entanglement plateau: S(l) on a BTZ circle against the complement rule.
+%! bg = ads3_background ("thermal", "circle", "beta", 1, "c", 6, "cutoff", 1e-3);
+%! L = bg.circumference;
+%! l = linspace (0.01, L, 400);
+%! [S, b] = interval_entropy (bg, l);
+%! plot (l / L, S, "-", l(b) / L, S(b), "r.");
+%! xlabel ("l / L");  ylabel ("S(l)");
+%! legend ("RT entropy", "complement + horizon", "location", "southeast");
+%! title (sprintf ("BTZ, beta = %g, c = %g: plateau near l = L", bg.beta, bg.c));
+
 %!warning <twice the cutoff> interval_entropy (ads3_background ("vacuum", "line", "cutoff", 1e-3), 1e-3);
 %!error <Invalid call> interval_entropy (ads3_background ("vacuum", "line"))
 %!error <positive length> interval_entropy (ads3_background ("vacuum", "line"), [1 -1])
