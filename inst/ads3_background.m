@@ -70,11 +70,14 @@
 ## @code{S_BH} (horizon entropy, (pi c/6) L (1/beta_L + 1/beta_R); 0 without
 ## a horizon, Inf on a line), @code{entropy_density} (horizon entropy per unit
 ## boundary length) and @code{r_plus}, @code{r_minus} (horizon radii, in units
-## of ell, for the circle rescaled to circumference 2 pi; 0 without a horizon).
+## of ell, for the circle rescaled to circumference 2 pi; 0 without a horizon),
+## @code{M}, @code{J} (energy on the circle, (2 pi/L)(L0 + Lbar0 - c/12), and
+## angular momentum L0 - Lbar0, as in @code{btz_thermodynamics}; on a line 0
+## for the vacuum and Inf (extensive) for a thermal state).
 ##
 ## Conventions are in @file{doc/conventions.md} of the package.
 ##
-## @seealso{geodesic_length, interval_entropy}
+## @seealso{geodesic_length, interval_entropy, btz_thermodynamics, hawking_page}
 ## @end deftypefn
 
 function bg = ads3_background (state, boundary, varargin)
@@ -156,11 +159,14 @@ function bg = ads3_background (state, boundary, varargin)
                "beta", Inf, "T", 0, "beta_L", Inf, "beta_R", Inf, "T_L", 0,
                "T_R", 0, "Omega", 0, "alpha", 1, "h", 0, "saddle", "",
                "horizon", false, "pure", true, "S_BH", 0,
-               "entropy_density", 0, "r_plus", 0, "r_minus", 0);
+               "entropy_density", 0, "r_plus", 0, "r_minus", 0, "M", 0, "J", 0);
 
   switch (state)
     case "vacuum"
       bg.bulk = ifelse (circle, "global_ads", "poincare");
+      if (circle)
+        bg.M = -pi * c / (6 * L);   # Casimir energy, -1/(8G) for L = 2 pi ell
+      endif
       scales = L;
 
     case {"thermal", "rotating"}
@@ -185,11 +191,9 @@ function bg = ads3_background (state, boundary, varargin)
         endif
         if (strcmp (sad, "dominant"))
           ## Hawking-Page: BTZ dominates when beta_L beta_R < L^2.
-          if (bl * br < L^2)
-            sad = "btz";
-          else
-            sad = "thermal_ads";
-          endif
+          [~, hp] = hawking_page ("circumference", L, "beta_L", bl,
+                                  "beta_R", br, "c", c, "ell", ell);
+          sad = hp.saddle;
         endif
         bg.saddle = sad;
         if (strcmp (sad, "btz"))
@@ -206,6 +210,21 @@ function bg = ads3_background (state, boundary, varargin)
         bg.r_plus = Lr / 2 * (1 / bl + 1 / br);
         bg.r_minus = Lr / 2 * (1 / bl - 1 / br);
       endif
+      ## Energy and angular momentum (btz_thermodynamics conventions).
+      if (! circle)
+        bg.M = Inf;
+        bg.J = Inf * sign (bg.Omega);
+        if (bg.Omega == 0)
+          bg.J = 0;
+        endif
+      elseif (bg.horizon)
+        th = btz_thermodynamics ("beta_L", bl, "beta_R", br,
+                                 "circumference", L, "c", c, "ell", ell);
+        bg.M = th.M;
+        bg.J = th.J;
+      else
+        bg.M = -pi * c / (6 * L);
+      endif
 
     case "heavy"
       if (isfield (o, "alpha") && isfield (o, "h"))
@@ -221,6 +240,7 @@ function bg = ads3_background (state, boundary, varargin)
       bg.alpha = alpha;
       bg.h = c / 24 * (1 - alpha^2);
       bg.bulk = "conical_defect";
+      bg.M = (2 * pi / L) * (2 * bg.h - c / 12);   # L0 + Lbar0 - c/12
       scales = L;
   endswitch
 

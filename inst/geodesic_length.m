@@ -92,6 +92,13 @@ endfunction
 %!test
 %! assert (size (geodesic_length (bgl, zeros (0, 3), 1)), [0 3]);
 
+%!test
+%! ## alpha = 1 is the vacuum: both classes are the same geodesic.
+%! h1 = ads3_background ("heavy", "circle", "alpha", 1);
+%! v = ads3_background ("vacuum", "circle");
+%! assert (geodesic_length (h1, 0, 5, "class", "positive"), geodesic_length (v, 0, 5), 1e-12);
+%! assert (geodesic_length (h1, 0, 5, "class", "negative"), geodesic_length (v, 0, 5), 1e-12);
+
 %!error <Invalid call> geodesic_length (bgl, 1)
 %!error <coincide> geodesic_length (bgl, 1, [2 1])
 %!error <coincide> geodesic_length (bgc, 1, 1 + 2 * pi)

@@ -87,7 +87,8 @@ endfunction
 %! ## Entanglement plateau on the BTZ circle: S(l) - S(L - l) = S_BH once the
 %! ## complement wins (Araki-Lieb saturation; Hubeny, Maxfield, Rangamani and
 %! ## Tonni 2013, JHEP 08 (2013) 092; reference from memory).  The plateau
-%! ## starts at L - l = beta log(2)/(2 pi) for eps -> 0 (derived in doc/).
+%! ## starts where L - l = (beta/(2 pi)) log(2/(1 + exp(-2 pi L/beta))), for any
+%! ## cutoff (derived in doc/ads3_geodesics.md); here L >> beta.
 %! bg = ads3_background ("thermal", "circle", "beta", 0.5, "c", 3, "cutoff", 1e-6);
 %! L = 2 * pi;
 %! l = [linspace(0.1, L - 0.1, 41), L - [0.05 0.02 0.005]];
@@ -96,7 +97,7 @@ endfunction
 %! assert (S, min (Sgeo (l), Sgeo (L - l) + bg.S_BH), 1e-10);
 %! assert (b, Sgeo (L - l) + bg.S_BH < Sgeo (l));
 %! assert (any (b) && ! all (b));
-%! assert (b, L - l < 0.5 * log (2) / (2 * pi));
+%! assert (b, L - l < 0.5 / (2 * pi) * log (2 / (1 + exp (-2 * pi * L / 0.5))));
 %! assert (interval_entropy (bg, L), bg.S_BH, 1e-12);
 
 %!test

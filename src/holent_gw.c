@@ -14,21 +14,20 @@ void
 holent_gw_nargs (const char *fn, int nlhs, int maxout, int nrhs, int minin,
                  int maxin)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   if (nrhs < minin || nrhs > maxin)
-    mexErrMsgIdAndTxt ("holent:nargs", "%s: expected %d to %d inputs, got %d",
-                       fn, minin, maxin, nrhs);
+    mexErrMsgIdAndTxt ("holent:nargs", "expected %d to %d inputs, got %d", minin, maxin, nrhs);
   if (nlhs > maxout)
-    mexErrMsgIdAndTxt ("holent:nargs", "%s: at most %d outputs, %d requested",
-                       fn, maxout, nlhs);
+    mexErrMsgIdAndTxt ("holent:nargs", "at most %d outputs, %d requested", maxout, nlhs);
 }
 
 const double *
 holent_gw_real (const mxArray *a, const char *fn, const char *name,
                 size_t *n)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   if (a == NULL || !mxIsDouble (a) || mxIsComplex (a) || mxIsSparse (a))
-    mexErrMsgIdAndTxt ("holent:type",
-                       "%s: %s must be a real, full, double array", fn, name);
+    mexErrMsgIdAndTxt ("holent:type", "%s must be a real, full, double array", name);
   *n = mxGetNumberOfElements (a);
   return mxGetPr (a);
 }
@@ -36,12 +35,13 @@ holent_gw_real (const mxArray *a, const char *fn, const char *name,
 double
 holent_gw_scalar (const mxArray *a, const char *fn, const char *name)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   size_t n;
   const double *p = holent_gw_real (a, fn, name, &n);
   if (n != 1)
-    mexErrMsgIdAndTxt ("holent:type", "%s: %s must be a scalar", fn, name);
+    mexErrMsgIdAndTxt ("holent:type", "%s must be a scalar", name);
   if (isnan (p[0]))
-    mexErrMsgIdAndTxt ("holent:nan", "%s: %s must not be NaN", fn, name);
+    mexErrMsgIdAndTxt ("holent:nan", "%s must not be NaN", name);
   return p[0];
 }
 
@@ -49,21 +49,21 @@ void
 holent_gw_string (const mxArray *a, const char *fn, const char *name,
                   char *buf, size_t bufsz)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   if (a == NULL || !mxIsChar (a) || mxGetM (a) > 1
       || mxGetN (a) + 1 > bufsz
       || mxGetString (a, buf, (mwSize) bufsz) != 0)
-    mexErrMsgIdAndTxt ("holent:type", "%s: %s must be a short string",
-                       fn, name);
+    mexErrMsgIdAndTxt ("holent:type", "%s must be a short string", name);
 }
 
 static const mxArray *
 bg_field (const mxArray *s, const char *fn, const char *field)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   const mxArray *f = mxGetField (s, 0, field);
   if (f == NULL)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "%s: BG is missing field '%s': make it with "
-                       "ads3_background", fn, field);
+    mexErrMsgIdAndTxt ("holent:background", "BG is missing field '%s': make it with "
+                       "ads3_background", field);
   return f;
 }
 
@@ -85,20 +85,19 @@ static const struct
 void
 holent_gw_bg (const mxArray *s, const char *fn, holent_geo_bg *bg)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   char name[32];
   size_t k, nb = sizeof bulk_names / sizeof bulk_names[0];
   int st;
   if (s == NULL || !mxIsStruct (s) || mxGetNumberOfElements (s) != 1)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "%s: BG must be a scalar struct from ads3_background",
-                       fn);
+    mexErrMsgIdAndTxt ("holent:background", "BG must be a scalar struct from ads3_background");
   holent_gw_string (bg_field (s, fn, "bulk"), fn, "BG.bulk", name,
                     sizeof name);
   for (k = 0; k < nb; k++)
     if (strcmp (name, bulk_names[k].name) == 0)
       break;
   if (k == nb)
-    mexErrMsgIdAndTxt ("holent:background", "%s: unknown BG.bulk '%s'", fn,
+    mexErrMsgIdAndTxt ("holent:background", "unknown BG.bulk '%s'",
                        name);
   st = holent_geo_bg_init (
       bg, bulk_names[k].bulk,
@@ -110,14 +109,14 @@ holent_gw_bg (const mxArray *s, const char *fn, holent_geo_bg *bg)
       holent_gw_scalar (bg_field (s, fn, "alpha"), fn, "BG.alpha"),
       holent_gw_scalar (bg_field (s, fn, "c"), fn, "BG.c"));
   if (st)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "%s: BG has inconsistent parameters (%s)", fn,
+    mexErrMsgIdAndTxt ("holent:background", "BG has inconsistent parameters (%s)",
                        holent_strerror (st));
 }
 
 void
 holent_gw_fail (int status, const char *fn, const char *name, size_t index)
 {
+  (void) fn;  /* Octave prefixes messages with the gateway name */
   const char *id;
   switch (status)
     {
@@ -133,8 +132,8 @@ holent_gw_fail (int status, const char *fn, const char *name, size_t index)
     default:               id = "holent:internal"; break;
     }
   if (index == (size_t) -1)
-    mexErrMsgIdAndTxt (id, "%s: %s: %s", fn, name, holent_strerror (status));
-  mexErrMsgIdAndTxt (id, "%s: %s(%zu): %s", fn, name, index + 1,
+    mexErrMsgIdAndTxt (id, "%s: %s", name, holent_strerror (status));
+  mexErrMsgIdAndTxt (id, "%s(%zu): %s", name, index + 1,
                      holent_strerror (status));
 }
 

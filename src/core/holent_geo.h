@@ -124,7 +124,7 @@ holent_geo_len_defect_ (const holent_geo_bg *bg, double l)
      exists; the infimum over curves in the class is the path through
      the apex, length 2 log(L/(pi alpha eps)).  */
   double ph = bg->kL * l;
-  if (ph >= M_PI_2)
+  if (ph >= M_PI_2 && bg->alpha < 1.0)  /* alpha = 1: no defect, no cap */
     return bg->pref;
   return bg->pref + 2.0 * log (sin (ph));
 }

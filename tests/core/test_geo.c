@@ -73,6 +73,12 @@ test_lengths (void)
   HT_STATUS (holent_geo_arc_length (&bg, 6.0, &len), HOLENT_SUCCESS);
   HT_CLOSE (len, 2 * log (2 / (0.8 * eps)), 1e-14);
 
+  /* alpha = 1 is the vacuum: no cap beyond half the circle */
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_CONICAL_DEFECT, 2 * M_PI, eps, 0, 0, 1.0, 1), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_arc_length (&bg, 5.0, &len), HOLENT_SUCCESS);
+  HT_CLOSE (len, 2 * log (2 / eps * sin (2.5)), 1e-14);
+  HT_STATUS (holent_geo_arc_length (&bg, 2 * M_PI, &len), HOLENT_EDOM);
+
   /* vector form and its bad index */
   double arcs[4] = { 1, 2, -1, 3 }, out[4];
   HT_STATUS (holent_geo_arc_lengths (&bg, 4, arcs, out, &bad), HOLENT_EDOM);

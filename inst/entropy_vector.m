@@ -1,0 +1,326 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+
+## -*- texinfo -*-
+## @deftypefn  {} {@var{Svec} =} entropy_vector (@var{bg}, @var{parties})
+## @deftypefnx {} {[@var{Svec}, @var{masks}] =} entropy_vector (@var{bg}, @var{parties}, @qcode{"purifier"}, @var{tf})
+## Holographic entropy vector of N disjoint boundary regions: the RT
+## entropies of all 2^N - 1 unions of them.
+##
+## @var{bg} is a background from @code{ads3_background}; @var{parties} a
+## cell array of N regions (1 <= N <= 16), each an n x 2 matrix of
+## intervals @code{[start, end]} as for @code{rt_entropy}.  Parties must be
+## disjoint from each other (touching is allowed; overlapping raises
+## @code{holent:overlap} naming the two parties).
+##
+## @var{Svec} is a column of 2^N - 1 entropies: @code{Svec(k)} is the
+## entropy of the union of the parties whose bits are set in k (bit 0 =
+## party 1), computed by @code{rt_entropy} with the same minimisation over
+## every RT candidate.  @var{masks} is the (2^N - 1) x N logical matrix
+## with @code{masks(k, j)} true when party j is in subset k, i.e.
+## @code{bitget (k, j)}.
+##
+## Option @qcode{"purifier"} (default false): when true a party N + 1, the
+## purifier O, is appended so that the N + 1 parties are in a pure state,
+## using S(X u O) = S(P \ X) for every subset X of the N parties P (and
+## S(O) = S(P)); N <= 15 then.  For a pure state (@code{bg.pure}: the
+## vacuum, the conical defect) O is the boundary complement of the parties.
+## For a state with a horizon (planar, static or rotating BTZ) the thermal
+## state is mixed and its purifier is not a boundary region: O is then the
+## boundary complement together with the second asymptotic boundary of the
+## two-sided black hole (the thermofield double), whose RT surfaces are
+## those of @code{rt_entropy} with the horizon.  For thermal AdS (mixed,
+## no horizon) the purifier is refused (@code{holent:mixed}).
+##
+## The cost is 2^N - 1 calls of the RT minimiser on unions of up to all
+## the intervals.  See @file{doc/entropy_inequalities.md} for the ordering.
+##
+## @seealso{entropy_inequalities, rt_entropy, mutual_information}
+## @end deftypefn
+
+function [Svec, masks] = entropy_vector (bg, parties, varargin)
+  fn = "entropy_vector";
+  if (nargin < 2)
+    print_usage ();
+  endif
+  __holent_check_bg__ (fn, bg);
+  if (! iscell (parties) || isempty (parties))
+    error ("holent:type", "%s: PARTIES must be a non-empty cell array of regions (n x 2 matrices)", fn);
+  endif
+  o = __holent_opts__ (fn, {"purifier"}, varargin);
+  purifier = false;
+  if (isfield (o, "purifier"))
+    p = o.purifier;
+    if (! ((islogical (p) || isnumeric (p)) && isscalar (p) && isreal (p) && ! isnan (p)))
+      error ("holent:option", "%s: 'purifier' must be true or false", fn);
+    endif
+    purifier = logical (p);
+  endif
+  N = numel (parties);
+  Nmax = 16 - purifier;
+  if (N > Nmax)
+    error ("holent:toobig", "%s: at most %d parties%s, got %d", fn, Nmax,
+           ifelse_ (purifier, " besides the purifier", ""), N);
+  endif
+  if (purifier && ! bg.pure && ! bg.horizon)
+    error ("holent:mixed",
+           ["%s: BG (%s) is a mixed state without a horizon: its purifier is " ...
+            "not a boundary region and has no RT surface here; the purifier " ...
+            "is available for pure states and, as the thermofield double, " ...
+            "for backgrounds with a horizon"], fn, bg.bulk);
+  endif
+  parties = parties(:).';
+  for j = 1:N
+    a = parties{j};
+    if (! isnumeric (a) || islogical (a) || ! isreal (a))
+      error ("holent:type", "%s: party %d must be a real n x 2 matrix of intervals", fn, j);
+    endif
+    if (isempty (a) || ndims (a) != 2 || columns (a) != 2)
+      error ("holent:type", "%s: party %d must be a non-empty n x 2 matrix of intervals, got %s",
+             fn, j, sprintf ("%dx", size (a))(1:end-1));
+    endif
+    parties{j} = full (double (a));
+  endfor
+
+  ## Each party alone first: an error inside one party names it.
+  try
+    S1 = rt_entropy (bg, parties);
+  catch err
+    for j = 1:N
+      try
+        rt_entropy (bg, parties{j});
+      catch e2
+        error (e2.identifier, "%s: party %d: %s", fn, j, e2.message);
+      end_try_catch
+    endfor
+    rethrow (err);
+  end_try_catch
+  ## Then the whole union: an overlap names the first two parties that meet.
+  try
+    Sall = rt_entropy (bg, vertcat (parties{:}));
+  catch err
+    if (strcmp (err.identifier, "holent:overlap"))
+      for i = 1:N
+        for j = i+1:N
+          try
+            rt_entropy (bg, [parties{i}; parties{j}]);
+          catch e2
+            if (strcmp (e2.identifier, "holent:overlap"))
+              error ("holent:overlap", "%s: parties %d and %d overlap", fn, i, j);
+            endif
+          end_try_catch
+        endfor
+      endfor
+    endif
+    rethrow (err);
+  end_try_catch
+
+  ## Unions: subset 2^(j-1) + r (r < 2^(j-1)) is subset r plus party j.
+  M = 2^N - 1;
+  U = cell (M, 1);
+  for j = 1:N
+    h = 2^(j-1);
+    U{h} = parties{j};
+    if (j > 1)
+      pj = parties{j};
+      U(h+1:2*h-1) = cellfun (@(u) [u; pj], U(1:h-1), "uniformoutput", false);
+    endif
+  endfor
+  single = (2 .^ (0:N-1))';
+  multi = true (M, 1);
+  multi(single) = false;
+  multi(M) = false;
+  Svec = zeros (M, 1);
+  Svec(single) = S1(:);
+  Svec(M) = Sall;
+  ## In blocks, to bound the memory held by one call.
+  idx = find (multi);
+  blk = 4096;
+  for b = 1:blk:numel (idx)
+    sel = idx(b:min (b + blk - 1, numel (idx)));
+    Svec(sel) = reshape (rt_entropy (bg, U(sel)), [], 1);
+  endfor
+
+  if (purifier)
+    ## S(X u O) = S(P \ X) (purity of the global state), S(O) = S(P).
+    comp = M - (0:M)';           # P \ X for X = 0 .. M
+    S0 = [0; Svec];              # S0(k + 1) = S(subset k), S(empty) = 0
+    Svec = [Svec; S0(comp + 1)];
+    N += 1;
+    M = 2^N - 1;
+  endif
+  if (nargout > 1)
+    masks = logical (mod (floor ((1:M)' ./ 2.^(0:N-1)), 2));
+  endif
+endfunction
+
+function r = ifelse_ (c, a, b)
+  if (c)
+    r = a;
+  else
+    r = b;
+  endif
+endfunction
+
+%!function S = two_intervals (bg, a, b)
+%! ## Two disjoint intervals a = [a1 a2], b = [b1 b2] on a line with a < b:
+%! ## the smaller of the disconnected and the connected surface (Headrick
+%! ## 2010, Phys. Rev. D 82, 126010), from the single-interval formula.
+%! S = min (interval_entropy (bg, diff (a)) + interval_entropy (bg, diff (b)),
+%!          interval_entropy (bg, b(2) - a(1)) + interval_entropy (bg, b(1) - a(2)));
+%!endfunction
+
+%!function r = ifelse_test (c, a, b)
+%! if (c), r = a; else, r = b; endif
+%!endfunction
+
+%!function A = random_parties (N, L, circle)
+%! ## N disjoint parties of 1 to 3 intervals each: 2m + 1 sorted random
+%! ## points of [0, L) (the last one only keeps a gap before the first), the
+%! ## consecutive pairs are the intervals, dealt to the parties at random;
+%! ## on a circle everything is rotated at random, so one may wrap.
+%! nint = randi (3, 1, N);
+%! m = sum (nint);
+%! do
+%!   x = sort (rand (1, 2 * m + 1)) * L;
+%! until (all (diff (x) > 2e-3 * L))
+%! I = [x(1:2:2*m)', x(2:2:2*m)'];
+%! if (circle)
+%!   len = I(:,2) - I(:,1);
+%!   I(:,1) = mod (I(:,1) + rand () * L, L);
+%!   I(:,2) = I(:,1) + len;
+%! endif
+%! owner = repelem (1:N, nint);
+%! owner = owner(randperm (m));
+%! A = arrayfun (@(j) I(owner == j, :), 1:N, "uniformoutput", false);
+%!endfunction
+
+%!test
+%! ## Ordering and masks; one- and two-interval entries against the
+%! ## single-interval formula (Calabrese and Cardy 2004) and the two-interval
+%! ## phases (Headrick 2010).
+%! bg = ads3_background ("vacuum", "line", "c", 3, "cutoff", 1e-6);
+%! P = {[0 1], [1.2 2], [5 7]};
+%! [S, masks] = entropy_vector (bg, P);
+%! assert (size (S), [7 1]);
+%! assert (masks, logical ([1 0 0; 0 1 0; 1 1 0; 0 0 1; 1 0 1; 0 1 1; 1 1 1]));
+%! assert (S([1 2 4]), interval_entropy (bg, [1; 0.8; 2]), 1e-12);
+%! assert (S(3), two_intervals (bg, P{1}, P{2}), 1e-12);
+%! assert (S(5), two_intervals (bg, P{1}, P{3}), 1e-12);
+%! assert (S(6), two_intervals (bg, P{2}, P{3}), 1e-12);
+%! ## the connected phase wins for A1A2 (cross-ratio above 1/2), not for A1A3
+%! assert (S(3) < S(1) + S(2));
+%! assert (S(5), S(1) + S(4), 1e-12);
+%! assert (S(7), rt_entropy (bg, vertcat (P{:})), 1e-12);
+
+%!test
+%! ## The purifier of a pure state is the boundary complement: S(X u O)
+%! ## computed by purity equals rt_entropy of the actual region X u P^c.
+%! bg = ads3_background ("vacuum", "circle", "circumference", 10);
+%! P = {[1 2], [3 4.5; 8 9], [5 6]};
+%! [S, masks] = entropy_vector (bg, P, "purifier", true);
+%! assert (size (S), [15 1]);
+%! assert (size (masks), [15 4]);
+%! O = [2 3; 4.5 5; 6 8; 9 11];               # the complement (wraps at 10)
+%! for k = 1:15
+%!   R = vertcat (P{masks(k, 1:3)});
+%!   if (masks(k, 4))
+%!     R = [R; O];
+%!   endif
+%!   assert (S(k), rt_entropy (bg, R), 1e-10);
+%! endfor
+%! assert (S(15), 0, 1e-10);
+%! rep = entropy_inequalities (S);
+%! assert (rep.holds);
+%! ## a pure state saturates Araki-Lieb: S(X O) + S(O) = S(X) for X = P
+%! assert (rep.al.worst_value, 0, 1e-10);
+
+%!test
+%! ## With a horizon: the purifier is the complement plus the second boundary
+%! ## of the two-sided black hole.  S(O) = S(P), S(P u O) = 0, and the whole
+%! ## circle as one party gives S_BH both for P and for O (TFD purity).
+%! bg = ads3_background ("thermal", "circle", "beta", 1);
+%! S = entropy_vector (bg, {[0 2*pi]}, "purifier", true);
+%! assert (S, [bg.S_BH; bg.S_BH; 0], 1e-9 * bg.S_BH);
+%! P = {[0 1], [2 3.5], [4 5]};
+%! S = entropy_vector (bg, P, "purifier", true);
+%! assert (S(8), S(7), 1e-12);
+%! assert (S(15), 0);
+%! assert (S(9), S(6), 1e-12);        # S(A1 O) = S(A2 A3)
+%! assert (entropy_inequalities (S).holds);
+
+%!test
+%! ## Holographic entropy vectors of random region sets satisfy every family:
+%! ## SSA (Headrick and Takayanagi 2007, Phys. Rev. D 76, 106013), MMI (Hayden,
+%! ## Headrick and Maloney 2011, arXiv:1107.2940) and the cyclic family (Bao,
+%! ## Nezami, Ooguri, Stoica, Sully and Walter 2015, JHEP 09 (2015) 130), all
+%! ## instances for N <= 5, in every background; with the purifier where one
+%! ## exists.
+%! rand ("state", 2026);  randn ("state", 2026);
+%! bgs = {ads3_background("vacuum", "line"), ...
+%!        ads3_background("vacuum", "circle"), ...
+%!        ads3_background("thermal", "line", "beta", 0.7), ...
+%!        ads3_background("thermal", "circle", "beta", 1.3), ...
+%!        ads3_background("thermal", "circle", "beta", 9), ...
+%!        ads3_background("rotating", "circle", "beta_L", 0.6, "beta_R", 2.1), ...
+%!        ads3_background("rotating", "line", "beta_L", 0.5, "beta_R", 1.5), ...
+%!        ads3_background("heavy", "circle", "alpha", 0.4)};
+%! assert (strcmp (bgs{5}.bulk, "thermal_ads"));
+%! for b = 1:numel (bgs)
+%!   bg = bgs{b};
+%!   circle = isfinite (bg.circumference);
+%!   L = ifelse_test (circle, bg.circumference, 6);
+%!   for trial = 1:8
+%!     N = 3 + mod (trial, 3);                 # 4, 5, 3, 4, ...
+%!     P = random_parties (N, L, circle);
+%!     S = entropy_vector (bg, P);
+%!     rep = entropy_inequalities (S);
+%!     assert (rep.holds, "%s, trial %d: %d violated", bg.bulk, trial,
+%!             rep.sa.violated + rep.al.violated + rep.ssa.violated
+%!             + rep.wm.violated + rep.mmi.violated + rep.cyclic.violated);
+%!     if (bg.pure || bg.horizon)
+%!       rep = entropy_inequalities (entropy_vector (bg, P(1:min (N, 4)), "purifier", true));
+%!       assert (rep.holds, "%s, purified, trial %d", bg.bulk, trial);
+%!     endif
+%!   endfor
+%! endfor
+
+%!test
+%! ## Five equal arcs tiling the global AdS3 circle (a pure state): the
+%! ## five-region cyclic inequality (Bao et al 2015) in the cyclic order of
+%! ## the arcs is saturated, S(3 arcs) = S(2 arcs) by purity.
+%! bg = ads3_background ("vacuum", "circle");
+%! a = 2 * pi / 5;
+%! P = arrayfun (@(j) [j-1, j] * a, 1:5, "uniformoutput", false);
+%! S = entropy_vector (bg, P);
+%! assert (S(end), 0, 1e-12);
+%! rep = entropy_inequalities (S);
+%! assert (rep.holds);
+%! assert (rep.cyclic.by_size(2).m, 5);
+%! assert (rep.cyclic.by_size(2).worst_value, 0, 1e-10);
+%! assert (rep.cyclic.by_size(2).worst_regions, {1, 2, 3, 4, 5});
+
+%!test
+%! ## N = 10 single intervals on a line: the documented subset, all holding
+%! rand ("state", 4);
+%! x = sort (rand (1, 20)) * 10;
+%! P = num2cell (reshape (x, 2, 10)', 2)';
+%! S = entropy_vector (ads3_background ("thermal", "line", "beta", 2), P);
+%! assert (numel (S), 1023);
+%! rep = entropy_inequalities (S);
+%! assert (rep.holds);
+
+%!error <Invalid call> entropy_vector (ads3_background ("vacuum", "line"))
+%!error <background struct> entropy_vector (1, {[0 1]})
+%!error <non-empty cell> entropy_vector (ads3_background ("vacuum", "line"), [0 1])
+%!error <non-empty cell> entropy_vector (ads3_background ("vacuum", "line"), {})
+%!error <party 2 must be a non-empty n x 2> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [2 3 4]})
+%!error <party 2 must be a non-empty n x 2> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], zeros(0, 2)})
+%!error <party 1 must be a real> entropy_vector (ads3_background ("vacuum", "line"), {"ab"})
+%!error <party 1 must be a real> entropy_vector (ads3_background ("vacuum", "line"), {[0 1i]})
+%!error <parties 1 and 3 overlap> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [2 3], [0.5 1.5]})
+%!error <party 2:> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [3 2]})
+%!error <at most 16 parties> entropy_vector (ads3_background ("vacuum", "line"), num2cell ([(0:16)' (0:16)' + 0.5], 2))
+%!error <at most 15 parties besides> entropy_vector (ads3_background ("vacuum", "line"), num2cell ([(0:15)' (0:15)' + 0.5], 2), "purifier", true)
+%!error <mixed state without a horizon> entropy_vector (ads3_background ("thermal", "circle", "beta", 9), {[0 1]}, "purifier", true)
+%!error <true or false> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purifier", "yes")
+%!error <unknown option> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purify", true)

@@ -1,0 +1,13 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
+## -*- texinfo -*-
+## @deftypefn {} {} __holent_check_hd__ (@var{fn}, @var{bg})
+## Raise @code{holent:background} unless @var{bg} is a background struct
+## made by @code{ads_background}.
+## @end deftypefn
+function __holent_check_hd__ (fn, bg)
+  req = {"dimension", "kind", "ell", "G", "cutoff", "zh", "z", "f", "horizon"};
+  if (! isstruct (bg) || ! isscalar (bg) || ! all (isfield (bg, req)))
+    error ("holent:background",
+           "%s: BG must be a background struct made by ads_background", fn);
+  endif
+endfunction

@@ -1,0 +1,70 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+
+## -*- texinfo -*-
+## @deftypefn {} {@var{I3} =} tripartite_information (@var{bg}, @var{A}, @var{B}, @var{C})
+## Tripartite information
+## @example
+## I3(A:B:C) = S(A) + S(B) + S(C) - S(AB) - S(AC) - S(BC) + S(ABC)
+##           = I(A:B) + I(A:C) - I(A:BC)
+## @end example
+## of three mutually disjoint regions (n x 2 matrices of [start, end] rows,
+## conventions of @code{rt_entropy}, or cell arrays of them, broadcast as
+## in @code{mutual_information}).  Holographic states obey monogamy of
+## mutual information, I3 <= 0 (Hayden, Headrick and Maloney 2011,
+## arXiv:1107.2940).
+##
+## Cutoff: the interval counts cancel in the alternating sum, so I3 does
+## not depend on the cutoff when the parties are at positive distance from
+## each other; each contact point between two parties adds a term that
+## cancels in I3 as well (it enters S(XY), S(XYZ) and, with the opposite
+## sign, S(X) + S(Y) and S(XZ), S(YZ)), so I3 stays finite then too.
+##
+## @seealso{mutual_information, conditional_entropy, rt_entropy}
+## @end deftypefn
+
+function I3 = tripartite_information (bg, A, B, C)
+  fn = "tripartite_information";
+  if (nargin != 4)
+    print_usage ();
+  endif
+  __holent_check_bg__ (fn, bg);
+  [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, {"A", "B", "C"}, {A, B, C});
+  cat2 = @(x, y) cellfun (@(a, b) [a; b], x, y, "uniformoutput", false);
+  AB = cat2 (P{1}, P{2});
+  AC = cat2 (P{1}, P{3});
+  BC = cat2 (P{2}, P{3});
+  ABC = cat2 (AB, P{3});
+  [S, ns] = __holent_rt_call__ ("entropy", fn, "a union of the parties", bg,
+                                   [AB(:); AC(:); BC(:); ABC(:)]);
+  n = prod (sz);
+  S = reshape (S, n, 4);
+  I3 = Sp{1} + Sp{2} + Sp{3} + reshape (- S(:,1) - S(:,2) - S(:,3) + S(:,4), sz);
+  if (nshort + ns > 0)
+    warning ("holent:cutoff", "%s: some interval or gap is not longer than twice the cutoff %g",
+             fn, bg.cutoff);
+  endif
+endfunction
+
+%!test
+%! ## I3 = I(A:B) + I(A:C) - I(A:BC), and I3 <= 0 (MMI, Hayden, Headrick and
+%! ## Maloney 2011, arXiv:1107.2940).
+%! bg = ads3_background ("vacuum", "line");
+%! A = [0 1]; B = [1.2 2]; C = [2.3 3.5];
+%! I3 = tripartite_information (bg, A, B, C);
+%! ref = mutual_information (bg, A, B) + mutual_information (bg, A, C) ...
+%!       - mutual_information (bg, A, [B; C]);
+%! assert (I3, ref, 1e-10);
+%! assert (I3 <= 1e-12);
+%! assert (I3 < -0.01);
+
+%!test
+%! ## cutoff independent, also for touching parties
+%! v = [];
+%! for cut = [1e-5 1e-9]
+%!   bg = ads3_background ("thermal", "circle", "beta", 1.3, "cutoff", cut);
+%!   v(end+1) = tripartite_information (bg, [0 1], [1 2; 4 5], [2.5 3.5]);
+%! endfor
+%! assert (v(1), v(2), 1e-8);
+
+%!error <Invalid call> tripartite_information (ads3_background ("vacuum", "line"), [0 1], [2 3])
+%!error <A\(1,:\) and C\(1,:\) overlap> tripartite_information (ads3_background ("vacuum", "line"), [0 1], [2 3], [0.5 1.5])

@@ -1,0 +1,383 @@
+## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+
+## -*- texinfo -*-
+## @deftypefn  {} {@var{E} =} wedge_cross_section (@var{bg}, @var{A}, @var{B})
+## @deftypefnx {} {[@var{E}, @var{info}] =} wedge_cross_section (@var{bg}, @var{A}, @var{B})
+## @deftypefnx {} {[@dots{}] =} wedge_cross_section (@dots{}, "reflected", @var{tf})
+## Entanglement wedge cross section E_W of two disjoint boundary intervals
+## @var{A} and @var{B} in background @var{bg} (from @code{ads3_background}),
+## in entropy units: (length of the minimal cross section)/(4G) =
+## (c/6) (length/ell).
+##
+## @var{A} and @var{B} are rows @code{[start, end]}, or k x 2 matrices of k
+## pairs (a single row is repeated to match the other); @var{E} is k x 1.
+## On a line start < end; on a circle of circumference L an interval runs
+## from start to end in the positive direction, coordinates modulo L, and
+## must be shorter than L.  Overlapping intervals raise
+## @code{holent:overlap}; intervals that touch raise
+## @code{holent:coincident} (E_W of adjacent intervals diverges with the
+## cutoff and is not returned).
+##
+## @var{E} is zero when the entanglement wedge of AB is disconnected.  The
+## phase is decided by @code{rt_entropy}: the wedge is connected when the
+## minimal surface of A u B pairs endpoints of A with endpoints of B.  In
+## the connected phase, with the chord function g of the background,
+## @example
+## z = g(l_A) g(l_B) / (g(d_1) g(d_2)),
+## E_W = (c/6) log (1 + 2z + 2 sqrt (z (z + 1)))
+## @end example
+## (Takayanagi and Umemoto 2017), d_1, d_2 the two gaps (on a line d_2 is
+## the span l_A + d_1 + l_B); g(y) = y on the vacuum line,
+## (L/pi) sin (pi y/L) on the circle (global AdS, thermal AdS),
+## (beta/pi) sinh (pi y/beta) on the thermal line.  In the rotating state on
+## a line each chiral half contributes half a cross section:
+## @example
+## E_W = (c/12) [log (1 + 2z_L + 2 sqrt (z_L (z_L + 1))) + (same for z_R)]
+## @end example
+## with z_L, z_R built from g at beta_L and beta_R.  Derivation in
+## @file{doc/wedge_cross_section.md}.
+##
+## Option @qcode{"reflected"}, true: return the reflected entropy
+## S_R = 2 E_W (Dutta and Faulkner 2019) instead of E_W.
+##
+## @var{info} is a k x 1 struct array with fields
+## @table @code
+## @item phase
+## @qcode{"connected"} or @qcode{"disconnected"}.
+## @item E_W, S_R
+## the cross section and the reflected entropy (whatever @qcode{"reflected"}).
+## @item E_connected
+## the cross section of the connected wedge, whether or not it dominates
+## (so E_W is E_connected or 0).
+## @item cross_ratio
+## z; in the rotating state the pair [z_L, z_R].
+## @item geodesics
+## 2 x 2: the endpoints of the two RT geodesics of the connected surface,
+## row 1 from the end of A to the start of B, row 2 from the end of B to the
+## start of A (modulo L on a circle).
+## @item points
+## 2 x 3: the bulk points (t, x, r) where the minimal cross section meets
+## the geodesic of row 1 and of row 2 (NaN in the disconnected phase).
+## @item coordinates
+## the bulk coordinates of @code{points}, in words.
+## @end table
+## The coordinates (t, x, r) are those of
+## @example
+## ds^2 = -f dt^2 + dr^2/f + r^2 (dx - (r_+ r_-/r^2) dt)^2,
+## f = (r^2 - r_+^2)(r^2 - r_-^2)/r^2
+## @end example
+## with x the boundary coordinate: Poincare AdS has r_+ = r_- = 0 and
+## r = 1/z (z the Poincare radial coordinate); global and thermal AdS have
+## r_+^2 = -(2 pi/L)^2, r_- = 0, so r = (2 pi/L) sinh (rho) and the angle is
+## 2 pi x/L; planar BTZ r_+ = 2 pi/beta, r_- = 0; planar rotating BTZ
+## r_+- = pi (1/beta_L +- 1/beta_R).  t = 0 except in the rotating state,
+## where the RT geodesics leave the t = 0 slice.
+##
+## Not implemented (error @code{holent:unsupported}): the BTZ black hole and
+## the rotating BTZ black hole on a circle, where the wedge may contain the
+## horizon and the cross section may end on it, and the conical defect.
+##
+## A warning @code{holent:cutoff} is issued when an interval or a gap is not
+## longer than twice the cutoff, where the closed forms lose their meaning.
+##
+## @seealso{rt_entropy, interval_entropy, ads3_background}
+## @end deftypefn
+
+function [E, info] = wedge_cross_section (bg, A, B, varargin)
+  fn = "wedge_cross_section";
+  if (nargin < 3)
+    print_usage ();
+  endif
+  __holent_check_bg__ (fn, bg);
+  o = __holent_opts__ (fn, {"reflected"}, varargin);
+  reflected = false;
+  if (isfield (o, "reflected"))
+    v = o.reflected;
+    if (! ((islogical (v) || isnumeric (v)) && isscalar (v) && isreal (v)
+           && (v == 0 || v == 1)))
+      error ("holent:option", "%s: 'reflected' must be true or false", fn);
+    endif
+    reflected = logical (v);
+  endif
+  supported = {"poincare", "global_ads", "thermal_ads", "planar_btz", ...
+               "planar_rotating_btz"};
+  if (! any (strcmp (bg.bulk, supported)))
+    error ("holent:unsupported",
+           "%s: not implemented for the '%s' bulk (supported: %s); see doc/wedge_cross_section.md",
+           fn, bg.bulk, strjoin (supported, ", "));
+  endif
+  A = pairs_arg (fn, "A", A);
+  B = pairs_arg (fn, "B", B);
+  if (rows (A) != rows (B))
+    if (rows (A) == 1)
+      A = repmat (A, rows (B), 1);
+    elseif (rows (B) == 1)
+      B = repmat (B, rows (A), 1);
+    else
+      error ("holent:size", "%s: A (%d rows) and B (%d rows) must have as many rows, or one",
+             fn, rows (A), rows (B));
+    endif
+  endif
+  k = rows (A);
+
+  [Ec, ~, zL, zR, P, G, shortest, st] = __holent_ewcs__ (bg, A, B);
+  i = find (st, 1);
+  if (! isempty (i))
+    fail (fn, bg, A, B, i, st(i), k);
+  endif
+  if (any (shortest <= 2 * bg.cutoff))
+    warning ("holent:cutoff",
+             "%s: %d pair(s) with an interval or a gap not longer than twice the cutoff %g",
+             fn, sum (shortest <= 2 * bg.cutoff), bg.cutoff);
+  endif
+
+  conn = connected_by_rt (bg, A, B);
+  EW = Ec .* conn;
+  if (reflected)
+    E = 2 * EW;
+  else
+    E = EW;
+  endif
+
+  if (nargout > 1)
+    rot = strcmp (bg.bulk, "planar_rotating_btz");
+    words = coordinates (bg);
+    info = repmat (struct ("phase", "", "E_W", 0, "S_R", 0, "E_connected", 0,
+                           "cross_ratio", 0, "geodesics", zeros (2),
+                           "points", zeros (2, 3), "coordinates", words), k, 1);
+    for j = 1:k
+      info(j).phase = ifelse_ (conn(j), "connected", "disconnected");
+      info(j).E_W = EW(j);
+      info(j).S_R = 2 * EW(j);
+      info(j).E_connected = Ec(j);
+      info(j).cross_ratio = ifelse_ (rot, [zL(j), zR(j)], zL(j));
+      info(j).geodesics = reshape (G(j,:), 2, 2).';
+      if (conn(j))
+        info(j).points = reshape (P(j,:), 3, 2).';
+      else
+        info(j).points = NaN (2, 3);
+      endif
+    endfor
+  endif
+endfunction
+
+function x = pairs_arg (fn, name, x)
+  x = __holent_array__ (fn, name, x);
+  if (ndims (x) != 2 || columns (x) != 2)
+    error ("holent:size", "%s: %s must be a row [start, end] or a k x 2 matrix of them, got %s",
+           fn, name, mat2str (size (x)));
+  endif
+endfunction
+
+## The phase from rt_entropy: connected when some geodesic of the minimal
+## surface of A u B joins an endpoint of A to an endpoint of B.
+function conn = connected_by_rt (bg, A, B)
+  k = rows (A);
+  conn = false (k, 1);
+  if (k == 0)
+    return;
+  endif
+  regions = arrayfun (@(j) [A(j,:); B(j,:)], (1:k).', "uniformoutput", false);
+  ## the cutoff warning of rt_entropy would name rt_entropy: ours is above
+  w = warning ("off", "holent:cutoff");
+  unwind_protect
+    [~, conf] = rt_entropy (bg, regions);
+  unwind_protect_cleanup
+    warning (w);
+  end_unwind_protect
+  circ = isfinite (bg.circumference);
+  L = bg.circumference;
+  for j = 1:k
+    ends = [A(j,:), B(j,:)];
+    pc = conf(j).pair_coords;
+    if (circ)
+      ends = mod (ends, L);
+    endif
+    side = zeros (size (pc));
+    for m = 1:numel (pc)
+      d = abs (pc(m) - ends);
+      if (circ)
+        d = min (d, L - d);
+      endif
+      [~, q] = min (d);
+      side(m) = q > 2;       # 0: an endpoint of A, 1: of B
+    endfor
+    conn(j) = any (side(:,1) != side(:,2));
+  endfor
+endfunction
+
+function fail (fn, bg, A, B, i, st, k)
+  if (k > 1)
+    at = sprintf ("(%d,:)", i);
+  else
+    at = "";
+  endif
+  circ = isfinite (bg.circumference);
+  ## which of the two intervals is at fault (the core reports the pair)
+  len = @(r) r(2) - r(1);
+  bad = "A";
+  if (st == 5 || st == 2)           # HOLENT_EEMPTY, HOLENT_EDOM
+    la = len (A(i,:));
+    if (circ)
+      okA = abs (la) > 0 && la < bg.circumference && mod (la, bg.circumference) > 0;
+    else
+      okA = la > 0;
+    endif
+    if (okA)
+      bad = "B";
+    endif
+  endif
+  switch (st)
+    case 2
+      if (circ)
+        error ("holent:domain", "%s: %s%s must be shorter than the circle (L = %g)",
+               fn, bad, at, bg.circumference);
+      else
+        error ("holent:domain", "%s: %s%s must have start < end", fn, bad, at);
+      endif
+    case 5
+      error ("holent:empty", "%s: %s%s has zero length", fn, bad, at);
+    case 4
+      error ("holent:overlap", "%s: A%s and B%s overlap", fn, at, at);
+    case 9
+      error ("holent:coincident",
+             "%s: A%s and B%s touch: E_W of adjacent intervals diverges with the cutoff",
+             fn, at, at);
+    otherwise
+      error ("holent:internal", "%s: unexpected core status %d for pair %d", fn, st, i);
+  endswitch
+endfunction
+
+function s = coordinates (bg)
+  switch (bg.bulk)
+    case "poincare"
+      s = "(t, x, r), r = 1/z: ds^2 = (dz^2 - dt^2 + dx^2)/z^2";
+    case {"global_ads", "thermal_ads"}
+      s = ["(t, x, r), r = (2 pi/L) sinh(rho), angle 2 pi x/L: ds^2 = ", ...
+           "-(r^2 + (2 pi/L)^2) dt^2 + dr^2/(r^2 + (2 pi/L)^2) + r^2 dx^2"];
+    case "planar_btz"
+      s = ["(t, x, r): ds^2 = -(r^2 - r_+^2) dt^2 + dr^2/(r^2 - r_+^2) + r^2 dx^2,", ...
+           " r_+ = 2 pi/beta"];
+    otherwise
+      s = ["(t, x, r): ds^2 = -f dt^2 + dr^2/f + r^2 (dx - (r_+ r_-/r^2) dt)^2,", ...
+           " f = (r^2 - r_+^2)(r^2 - r_-^2)/r^2, r_+- = pi (1/beta_L +- 1/beta_R)"];
+  endswitch
+endfunction
+
+function r = ifelse_ (c, a, b)
+  if (c)
+    r = a;
+  else
+    r = b;
+  endif
+endfunction
+
+%!test
+%! ## Takayanagi and Umemoto 2017 (arXiv:1708.09393, Nature Phys. 14, 573
+%! ## (2018)): two intervals in the Poincare vacuum,
+%! ## E_W = (c/6) log(1 + 2z + 2 sqrt(z(z+1))),
+%! ## z = (a2-a1)(b2-b1)/((b1-a2)(b2-a1)), connected for z > 1.
+%! bg = ads3_background ("vacuum", "line", "c", 12);
+%! A = [0 1; -3 -0.5; 0 2];  B = [1.2 2; 0.5 3; 5 6];
+%! z = (A(:,2) - A(:,1)) .* (B(:,2) - B(:,1)) ./ ((B(:,1) - A(:,2)) .* (B(:,2) - A(:,1)));
+%! ref = 2 * log (1 + 2*z + 2*sqrt (z .* (z + 1))) .* (z > 1);
+%! [E, info] = wedge_cross_section (bg, A, B);
+%! assert (E, ref, 1e-12);
+%! assert ({info.phase}, {"connected", "connected", "disconnected"});
+%! assert ([info.cross_ratio], z.', 1e-14);
+%! ## symmetric pair: the cross section is x = 0 from z = 1/2 to z = 3,
+%! ## of length log 6 (by hand)
+%! assert (info(2).E_W, 2 * log (6), 1e-12);
+%! assert (info(2).points, [0 0 2; 0 0 1/3], 1e-12);
+%! assert (info(2).geodesics, [-0.5 0.5; 3 -3]);
+%! assert (all (isnan (info(3).points(:))));
+%! assert (info(3).E_connected > 0);
+
+%!test
+%! ## Reflected entropy S_R = 2 E_W (Dutta and Faulkner 2019, arXiv:1905.00577).
+%! bg = ads3_background ("thermal", "line", "beta", 2, "c", 6);
+%! [E, info] = wedge_cross_section (bg, [0 3], [3.2 5]);
+%! SR = wedge_cross_section (bg, [0 3], [3.2 5], "reflected", true);
+%! assert (SR, 2 * E, 1e-14);
+%! assert (info.S_R, SR, 1e-14);
+%! assert (E > 0);
+
+%!test
+%! ## Thermal line: cross-ratio of w = exp(2 pi x/beta) equals the sinh form.
+%! bg = ads3_background ("thermal", "line", "beta", 1.5);
+%! [~, info] = wedge_cross_section (bg, [0.3 1.1], [1.25 2.9]);
+%! w = exp (2 * pi * [0.3 1.1 1.25 2.9] / 1.5);
+%! z = (w(2) - w(1)) * (w(4) - w(3)) / ((w(3) - w(2)) * (w(4) - w(1)));
+%! assert (info.cross_ratio, z, 1e-10);
+
+%!test
+%! ## Rotating line: [z_L, z_R]; the points leave t = 0; B before A works.
+%! bg = ads3_background ("rotating", "line", "beta_L", 0.8, "beta_R", 1.6);
+%! [E, info] = wedge_cross_section (bg, [0 2], [2.05 3]);
+%! [E2, info2] = wedge_cross_section (bg, [2.05 3], [0 2]);
+%! assert (E2, E, 1e-13);
+%! assert (info2.points, flipud (info.points), 1e-10);
+%! assert (numel (info.cross_ratio), 2);
+%! assert (any (abs (info.points(:,1)) > 1e-3));
+%! assert (E, 1/6 * sum (asinh (sqrt (info.cross_ratio))), 1e-13);
+
+%!test
+%! ## Circle: wrapping intervals, A and B written either way modulo L.
+%! bg = ads3_background ("vacuum", "circle", "circumference", 10);
+%! E1 = wedge_cross_section (bg, [9 12], [2.5 8]);
+%! E2 = wedge_cross_section (bg, [-1 2], [2.5 -2]);
+%! assert (E1, E2, 1e-12);
+%! s = @(y) sin (pi * y / 10);
+%! z = s(3) * s(5.5) / (s(0.5) * s(1));
+%! assert (E1, (1/6) * log (1 + 2*z + 2*sqrt (z*(z+1))), 1e-12);
+
+%!test
+%! bg = ads3_background ("vacuum", "line");
+%! [E, info] = wedge_cross_section (bg, zeros (0, 2), zeros (0, 2));
+%! assert (size (E), [0 1]);
+%! assert (size (info), [0 1]);
+%! E = wedge_cross_section (bg, [0 1], [1.1 2; 3 4; 1.01 9]);
+%! assert (size (E), [3 1]);
+
+%!warning <twice the cutoff> wedge_cross_section (ads3_background ("vacuum", "line", "cutoff", 1e-3), [0 1], [1.001 2]);
+%!error <Invalid call> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1])
+%!error <not implemented for the 'btz'> wedge_cross_section (ads3_background ("thermal", "circle", "beta", 1), [0 1], [2 3])
+%!error <not implemented for the 'rotating_btz'> wedge_cross_section (ads3_background ("rotating", "circle", "beta_L", 1, "beta_R", 2), [0 1], [2 3])
+%!error <not implemented for the 'conical_defect'> wedge_cross_section (ads3_background ("heavy", "circle", "alpha", 0.5), [0 1], [2 3])
+%!error <A and B overlap> wedge_cross_section (ads3_background ("vacuum", "line"), [0 2], [1 3])
+%!error <A\(2,:\) and B\(2,:\) overlap> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1; 0 2], [2 3; 1 3])
+%!error <touch> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [1 3])
+%!error <touch> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [3 2*pi])
+%!error <B must have start < end> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 2])
+%!error <A has zero length> wedge_cross_section (ads3_background ("vacuum", "line"), [1 1], [3 4])
+%!error <shorter than the circle> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [2 2 + 2*pi])
+%!error <overlap> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [2 0.5])
+%!error <k x 2> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1 2], [3 4])
+%!error <as many rows> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1; 2 3], [4 5; 6 7; 8 9])
+%!error <NaN> wedge_cross_section (ads3_background ("vacuum", "line"), [0 NaN], [3 4])
+%!error <complex> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1i], [3 4])
+%!error <'reflected' must be> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 4], "reflected", "yes")
+%!error <unknown option> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 4], "mirror", 1)
+%!error <background struct> wedge_cross_section (1, [0 1], [3 4])
+
+%!demo
+%! ## The minimal cross section between the two RT geodesics of a connected
+%! ## wedge in Poincare AdS3 (plotted in the (x, z) half-plane, z = 1/r).
+%! bg = ads3_background ("vacuum", "line");
+%! A = [-2 -0.4];  B = [0.1 1.5];
+%! [E, info] = wedge_cross_section (bg, A, B);
+%! th = linspace (0, pi, 200);
+%! clf; hold on;
+%! for g = 1:2
+%!   e = info.geodesics(g,:);
+%!   plot (mean (e) + abs (diff (e)) / 2 * cos (th), abs (diff (e)) / 2 * sin (th), "b");
+%! endfor
+%! ## the cross section is an arc of the geodesic through the two points
+%! p = info.points;  x = p(:,2);  z = 1 ./ p(:,3);
+%! xc = (x(2)^2 + z(2)^2 - x(1)^2 - z(1)^2) / (2 * (x(2) - x(1)));
+%! R = hypot (x(1) - xc, z(1));
+%! a = atan2 (z, x - xc);  t = linspace (a(1), a(2), 50);
+%! plot (xc + R * cos (t), R * sin (t), "r", "linewidth", 2);
+%! plot ([A; B].', zeros (2), "k", "linewidth", 4);
+%! axis equal; xlabel ("x"); ylabel ("z");
+%! title (sprintf ("E_W = %.3f (c = 1)", E));

@@ -1,0 +1,58 @@
+/* holent_region.h: region sets (unions of boundary intervals), sorted and
+ * normalised in one place for everything that works on regions.
+ *
+ * A region is given as n rows [start, end].  On a line start < end.  On a
+ * circle of circumference L the interval runs from start to end in the
+ * positive direction, coordinates modulo L, so it may wrap through 0; a
+ * row with end - start = L is the whole circle.  Touching intervals are
+ * merged, overlapping ones are an error naming two offending rows, empty
+ * or zero-length intervals are rejected.  See doc/rt_regions.md.
+ * GPL-3.0-or-later.  */
+#ifndef HOLENT_REGION_H
+#define HOLENT_REGION_H
+
+#include <stddef.h>
+#include "holent.h"
+
+/* Largest number of input rows a region workspace accepts.  */
+#define HOLENT_REGION_NMAX ((size_t) 1 << 26)
+
+typedef struct
+{
+  /* Results of holent_region_set (owned by the struct).  */
+  int circle;       /* 1: on a circle of circumference L                  */
+  double L;         /* circumference (0 on a line)                         */
+  int whole;        /* 1: the region is the whole circle (n == 0 then)     */
+  size_t n;         /* intervals after merging                             */
+  double *start;    /* n starts, ascending; in [0, L) on a circle          */
+  double *len;      /* n lengths, > 0 (< L on a circle)                    */
+  size_t *row;      /* n: the first input row (0-based) of each interval   */
+  double *pts;      /* 2n endpoints ascending (in [0, L) on a circle)      */
+  int start0;       /* 1 if pts[0] starts an interval; 0 if pts[0] ends
+                       the interval that wraps through 0 (circle only)     */
+  double tol;       /* the touching tolerance used                         */
+  size_t bad[2];    /* offending input rows (0-based) on failure, or
+                       (size_t) -1                                         */
+  size_t nmax;      /* capacity in input rows                              */
+  void *scratch;    /* sorting scratch                                     */
+} holent_region;
+
+/* A region able to hold up to nmax input rows; NULL if nmax is 0 or above
+   HOLENT_REGION_NMAX, or on allocation failure.  */
+holent_region *holent_region_alloc (size_t nmax);
+void holent_region_free (holent_region *r);
+
+/* Normalise the n rows (a[i], b[i]) on a line (circle = 0) or a circle of
+ * circumference L.  Returns
+ *   HOLENT_EINVAL   NULL pointers, NaN or Inf coordinates (bad[0] = row)
+ *   HOLENT_ETOOBIG  n above the capacity
+ *   HOLENT_EDOM     L not finite positive (circle); on a line end < start;
+ *                   on a circle end - start > L (bad[0] = row)
+ *   HOLENT_EEMPTY   n == 0, or a zero-length row (bad[0] = row)
+ *   HOLENT_EOVERLAP two rows overlap: bad[0] < bad[1] are two of them.
+ * Coordinates closer than tol = 16 DBL_EPSILON max(L, |coordinates|)
+ * count as equal (touching, zero length, whole circle).  */
+int holent_region_set (holent_region *r, int circle, double L, size_t n,
+                       const double *a, const double *b);
+
+#endif /* HOLENT_REGION_H */

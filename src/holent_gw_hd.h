@@ -1,0 +1,14 @@
+/* holent_gw_hd.h: unpacking of ads_background structs (AdS_{d+1}) for the
+ * gateways.  GPL-3.0-or-later.  */
+#ifndef HOLENT_GW_HD_H
+#define HOLENT_GW_HD_H
+
+#include "mex.h"
+#include "core/holent_hd.h"
+
+/* Fill bg from a struct made by ads_background; raises holent:background
+   on a malformed struct.  A tabulated background owns a spline: release
+   it with holent_hd_bg_free before raising any later error.  */
+void holent_gw_hd_bg (const mxArray *s, const char *fn, holent_hd_bg *bg);
+
+#endif

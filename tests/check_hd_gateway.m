@@ -1,0 +1,35 @@
+## Cross-checks of the __holent_hd__ gateway: bad input must raise an
+## error, never crash Octave (common practice for MEX gateways).
+
+%!shared bg, bt
+%! bg = ads_background (4, "black_brane", "zh", 1);
+%! z = linspace (0, 1.2, 200)';
+%! bt = ads_background (4, "tabulated", "z", z, "f", 1 - z.^4);
+
+%!error <OP must be> __holent_hd__ (1, bg, 1, 1)
+%!error <unknown OP> __holent_hd__ ("area", bg, 1, 1)
+%!error <expected 3 to 4 inputs> __holent_hd__ ("strip", bg)
+%!error <wrong number of inputs> __holent_hd__ ("ball", bg, 1, 1)
+%!error <real, full, double> __holent_hd__ ("strip", bg, 1i, 1)
+%!error <real, full, double> __holent_hd__ ("strip", bg, sparse (1), 1)
+%!error <real, full, double> __holent_hd__ ("strip", bg, int8 (1), 1)
+%!error <real, full, double> __holent_hd__ ("ball", bg, true)
+%!error <LPERP must be a scalar> __holent_hd__ ("strip", bg, 1, [1 2])
+%!error <scalar struct> __holent_hd__ ("strip", [bg bg], 1, 1)
+%!error <missing field 'kind'> __holent_hd__ ("strip", rmfield (bg, "kind"), 1, 1)
+%!error <unknown BG.kind> __holent_hd__ ("strip", setfield (bg, "kind", "foam"), 1, 1)
+%!error <BG.dimension must be an integer> __holent_hd__ ("strip", setfield (bg, "dimension", 1e6), 1, 1)
+%!error <inconsistent parameters> __holent_hd__ ("strip", setfield (bg, "zh", -1), 1, 1)
+%!error <differ in length> __holent_hd__ ("strip", setfield (bt, "f", bt.f(1:end-1)), 1, 1)
+%!error <inconsistent parameters> __holent_hd__ ("strip", setfield (bt, "z", flipud (bt.z)), 1, 1)
+%!error <L\(2\)> __holent_hd__ ("strip", bg, [1 -1], 1)
+%!error <beyond the largest radius> __holent_hd__ ("ball", bt, 1e3)
+%!error <tabulated needs> __holent_hd__ ("tabulated", 4, [0 1 2 3 4])
+
+%!test
+%! ## empty input, and outputs of the input's shape
+%! [S, fin] = __holent_hd__ ("strip", bg, zeros (3, 0), 1);
+%! assert (size (S), [3 0]);
+%! [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, [0.1; 0.2]);
+%! assert (size (zs), [2 1]);
+%! assert (reach > 0.2);

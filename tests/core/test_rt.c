@@ -1,0 +1,399 @@
+/* Unit tests of holent_rt: the dynamic programme against an exhaustive
+ * enumeration written here (every non-crossing pairing, every face, with
+ * the regulated lengths in closed form, not via holent_geo), the candidate
+ * counts against the Catalan and central binomial numbers, and every
+ * error path.  */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_rng.h>
+#include <gsl/gsl_sf_gamma.h>
+#include "holent_ctest.h"
+#include "holent_rt.h"
+
+#define NP 14   /* up to 7 intervals */
+
+typedef struct
+{
+  int bulk;     /* holent_bulk */
+  double L, eps, bl, br, alpha, c, SBH;
+  int circle, horizon;
+} model;
+
+/* Regulated lengths, written out again (Ryu and Takayanagi 2006, PRL 96,
+   181602; Hubeny, Rangamani and Takayanagi 2007, JHEP 07, 062 for the
+   rotating case; the defect form with the apex cap, doc/conventions.md). */
+static double
+len_of (const model *m, double l)
+{
+  switch (m->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+      return 2 * log (l / m->eps);
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+      return 2 * log (m->L / (M_PI * m->eps) * sin (M_PI * l / m->L));
+    case HOLENT_BULK_CONICAL_DEFECT:
+      {
+        double ph = M_PI * m->alpha * l / m->L;
+        return 2 * log (m->L / (M_PI * m->alpha * m->eps)
+                        * sin (ph < M_PI / 2 ? ph : M_PI / 2));
+      }
+    default:
+      return log (m->bl * m->br / (M_PI * M_PI * m->eps * m->eps)
+                  * sinh (M_PI * l / m->bl) * sinh (M_PI * l / m->br));
+    }
+}
+
+/* Exhaustive search state.  */
+typedef struct
+{
+  const model *m;
+  const double *p;   /* sorted endpoints */
+  int N, start0;
+  int partner[NP];
+  double best, second;  /* best value, best value of another config */
+  int best_partner[NP], best_hor;
+  unsigned best_face;
+  long count;
+} brute;
+
+static void
+consider (brute *b, double v, int hor, unsigned face)
+{
+  b->count++;
+  if (v < b->best - 1e-12 * fabs (v))
+    {
+      if (b->best < b->second)
+        b->second = b->best;
+      b->best = v;
+      memcpy (b->best_partner, b->partner, sizeof b->partner);
+      b->best_hor = hor;
+      b->best_face = face;
+    }
+  else if (v < b->second)
+    b->second = v;
+}
+
+/* All faces of the finished pairing.  */
+static void
+evaluate (brute *b)
+{
+  const model *m = b->m;
+  int N = b->N, nc = 0, ca[NP], cb[NP];
+  for (int i = 0; i < N; i++)
+    if (b->partner[i] > i)
+      {
+        ca[nc] = i;
+        cb[nc] = b->partner[i];
+        nc++;
+      }
+  if (!m->circle || m->bulk == HOLENT_BULK_GLOBAL_ADS
+      || m->bulk == HOLENT_BULK_THERMAL_ADS)
+    {
+      double v = 0;
+      for (int k = 0; k < nc; k++)
+        v += len_of (m, b->p[cb[k]] - b->p[ca[k]]);
+      consider (b, m->c / 6 * v, 0, 0);
+      return;
+    }
+  /* Faces: segments (q_g, q_g+1) with the same set of enclosing chords.  */
+  unsigned seen[NP + 1];
+  int nseen = 0;
+  for (int g = 0; g < N; g++)
+    {
+      unsigned mask = 0;
+      for (int k = 0; k < nc; k++)
+        if (ca[k] <= g && g < cb[k])
+          mask |= 1u << k;
+      int dup = 0;
+      for (int f = 0; f < nseen; f++)
+        dup |= seen[f] == mask;
+      if (dup)
+        continue;
+      seen[nseen++] = mask;
+      double v = 0;
+      for (int k = 0; k < nc; k++)
+        {
+          double inner = b->p[cb[k]] - b->p[ca[k]];
+          v += len_of (m, (mask >> k) & 1 ? m->L - inner : inner);
+        }
+      int in_a = ((g % 2) == 0) == (b->start0 != 0);
+      int hor = m->horizon && in_a;
+      consider (b, m->c / 6 * v + (hor ? m->SBH : 0), hor, mask);
+    }
+}
+
+/* Pair the first unpaired point with every admissible partner.  */
+static void
+enumerate (brute *b, int lo, int hi)
+{
+  /* pair points lo..hi-1 among themselves, then continue after */
+  (void) hi;
+  int i = 0;
+  while (i < b->N && b->partner[i] >= 0)
+    i++;
+  if (i == b->N)
+    {
+      evaluate (b);
+      return;
+    }
+  (void) lo;
+  for (int j = i + 1; j < b->N; j += 2)
+    {
+      if (b->partner[j] >= 0)
+        continue;
+      /* non-crossing: every point strictly between i and j must be paired
+         inside (i, j) or still free, and the free ones even in number */
+      int ok = 1, nfree = 0;
+      for (int k = i + 1; k < j && ok; k++)
+        {
+          if (b->partner[k] < 0)
+            nfree++;
+          else if (b->partner[k] < i || b->partner[k] > j)
+            ok = 0;
+        }
+      if (!ok || nfree % 2)
+        continue;
+      b->partner[i] = j;
+      b->partner[j] = i;
+      enumerate (b, 0, 0);
+      b->partner[i] = b->partner[j] = -1;
+    }
+}
+
+static void
+test_against_enumeration (void)
+{
+  gsl_rng *rng = gsl_rng_alloc (gsl_rng_mt19937);
+  const int bulks[] = { HOLENT_BULK_POINCARE, HOLENT_BULK_PLANAR_BTZ,
+                        HOLENT_BULK_GLOBAL_ADS, HOLENT_BULK_THERMAL_ADS,
+                        HOLENT_BULK_BTZ, HOLENT_BULK_ROTATING_BTZ,
+                        HOLENT_BULK_CONICAL_DEFECT };
+  holent_region *r = holent_region_alloc (7);
+  holent_rt_workspace *w = holent_rt_alloc (7);
+  int nconf = 0;
+  for (size_t ib = 0; ib < sizeof bulks / sizeof bulks[0]; ib++)
+    for (int trial = 0; trial < 40; trial++)
+      {
+        model m = { bulks[ib], 2 * M_PI, 1e-4, 0.6, 0.6, 0.55, 2.0, 0, 0, 0 };
+        if (m.bulk == HOLENT_BULK_ROTATING_BTZ)
+          m.br = 1.7;
+        if (m.bulk == HOLENT_BULK_PLANAR_BTZ)
+          m.bulk = HOLENT_BULK_ROTATING_BTZ, m.circle = 0;  /* see below */
+        holent_geo_bg bg;
+        int line = bulks[ib] == HOLENT_BULK_POINCARE
+                   || bulks[ib] == HOLENT_BULK_PLANAR_BTZ;
+        HT_STATUS (holent_geo_bg_init (&bg, bulks[ib], m.L, m.eps, m.bl,
+                                       m.br, m.alpha, m.c),
+                   HOLENT_SUCCESS);
+        m.circle = !line;
+        m.horizon = bg.horizon && m.circle;
+        m.SBH = bg.S_BH;
+        if (bulks[ib] == HOLENT_BULK_PLANAR_BTZ)
+          m.bulk = HOLENT_BULK_BTZ;  /* same closed form, bl = br */
+        int n = 1 + (int) gsl_rng_uniform_int (rng, 7);
+        double p[NP], a[7], bb[7];
+        /* 2n sorted random points, then pair them as intervals */
+        for (int k = 0; k < 2 * n; k++)
+          p[k] = (line ? 5.0 : m.L) * gsl_rng_uniform (rng);
+        for (int k = 1; k < 2 * n; k++)  /* insertion sort */
+          for (int j = k; j > 0 && p[j] < p[j - 1]; j--)
+            {
+              double t = p[j];
+              p[j] = p[j - 1];
+              p[j - 1] = t;
+            }
+        int start0 = line || gsl_rng_uniform (rng) < 0.5;
+        for (int k = 0; k < n; k++)
+          {
+            if (start0)
+              {
+                a[k] = p[2 * k];
+                bb[k] = p[2 * k + 1];
+              }
+            else
+              {
+                a[k] = p[2 * k + 1];
+                bb[k] = k + 1 < n ? p[2 * k + 2] : p[0] + m.L;
+              }
+          }
+        HT_STATUS (holent_region_set (r, m.circle, m.L, n, a, bb),
+                   HOLENT_SUCCESS);
+        brute b = { &m, p, 2 * n, start0, { 0 }, INFINITY, INFINITY,
+                    { 0 }, 0, 0, 0 };
+        for (int k = 0; k < NP; k++)
+          b.partner[k] = -1;
+        enumerate (&b, 0, 2 * n);
+
+        holent_rt_result res;
+        size_t pairs[14];
+        double arcs[7];
+        HT_STATUS (holent_rt_entropy (w, &bg, r, &res, pairs, arcs),
+                   HOLENT_SUCCESS);
+        HT_CLOSE (res.S, b.best, 1e-10);
+        HT_CHECK ((double) b.count == res.candidates,
+                  "bulk %d n %d: %ld candidates enumerated, %g counted",
+                  bulks[ib], n, b.count, res.candidates);
+        if (b.second - b.best > 1e-8 * fmax (1, fabs (b.best)))
+          {
+            nconf++;
+            HT_CHECK (res.horizon == b.best_hor, "horizon");
+            for (int k = 0; k < n; k++)
+              {
+                int i = (int) pairs[2 * k], j = (int) pairs[2 * k + 1];
+                HT_CHECK (b.best_partner[i] == j,
+                          "bulk %d n %d pair %d-%d", bulks[ib], n, i, j);
+                double inner = p[j] - p[i];
+                double want = inner;
+                if (m.circle && (m.bulk == HOLENT_BULK_GLOBAL_ADS
+                                 || m.bulk == HOLENT_BULK_THERMAL_ADS))
+                  want = fmin (inner, m.L - inner);
+                else if (m.circle)
+                  {
+                    /* chord index in the enumeration's order */
+                    int kk = 0;
+                    for (int q = 0; q < i; q++)
+                      kk += b.best_partner[q] > q;
+                    if ((b.best_face >> kk) & 1)
+                      want = m.L - inner;
+                  }
+                HT_CLOSE (arcs[k], want, 1e-12);
+              }
+          }
+      }
+  HT_CHECK (nconf > 200, "configurations compared: %d", nconf);
+  holent_region_free (r);
+  holent_rt_free (w);
+  gsl_rng_free (rng);
+}
+
+static void
+test_counts (void)
+{
+  holent_geo_bg line, btz;
+  double cnt, lc;
+  holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
+  holent_geo_bg_init (&btz, HOLENT_BULK_BTZ, 1, 1e-3, 1, 1, 1, 1);
+  for (unsigned n = 1; n <= 60; n++)
+    {
+      /* Catalan(n) = binom(2n, n)/(n + 1) via GSL's lnchoose */
+      double lb = gsl_sf_lnchoose (2 * n, n);
+      HT_STATUS (holent_rt_count (&line, n, &cnt, &lc), HOLENT_SUCCESS);
+      HT_CLOSE (lc, lb - log (n + 1.0), 1e-12);
+      HT_CLOSE (cnt, exp (lb - log (n + 1.0)), 1e-11);
+      HT_STATUS (holent_rt_count (&btz, n, &cnt, &lc), HOLENT_SUCCESS);
+      HT_CLOSE (lc, lb, 1e-12);
+    }
+  holent_rt_count (&line, 20, &cnt, &lc);
+  HT_CHECK (cnt == 6564120420.0, "Catalan(20) = %.17g", cnt);
+  holent_rt_count (&btz, 30, &cnt, &lc);
+  HT_CHECK (cnt == 118264581564861424.0, "binom(60,30) = %.17g", cnt);
+  holent_rt_count (&btz, 600, &cnt, &lc);
+  HT_CHECK (isinf (cnt) && isfinite (lc), "overflow to Inf");
+  HT_CLOSE (lc, gsl_sf_lnchoose (1200, 600), 1e-12);
+  holent_rt_count (&btz, 0, &cnt, &lc);
+  HT_CHECK (cnt == 1 && lc == 0, "whole circle: one candidate");
+  HT_STATUS (holent_rt_count (NULL, 1, &cnt, &lc), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_count (&btz, 1, NULL, &lc), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_count (&btz, 1, &cnt, NULL), HOLENT_EINVAL);
+}
+
+static void
+test_errors (void)
+{
+  holent_geo_bg line, circ;
+  holent_rt_result res;
+  HT_CHECK (holent_rt_alloc (0) == NULL, "alloc(0)");
+  HT_CHECK (holent_rt_alloc (HOLENT_RT_NMAX + 1) == NULL, "alloc too big");
+  holent_rt_free (NULL);
+  holent_rt_workspace *w = holent_rt_alloc (2);
+  holent_region *r = holent_region_alloc (3);
+  holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
+  holent_geo_bg_init (&circ, HOLENT_BULK_BTZ, 5, 1e-3, 1, 1, 1, 1);
+  double a[3] = { 0, 2, 4 }, b[3] = { 1, 3, 4.5 };
+
+  HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_EEMPTY);
+  HT_STATUS (holent_region_set (r, 0, 0, 3, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (NULL, &line, r, &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, NULL, r, &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, &line, NULL, &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, &line, r, NULL, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_region_set (r, 1, 6, 2, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_EINVAL);
+
+  /* a hand-made region with coincident endpoints: no geodesic */
+  holent_region bad = *r;
+  double pts[4] = { 0, 1, 1, 2 };
+  bad.circle = 0;
+  bad.L = 0;
+  bad.n = 2;
+  bad.whole = 0;
+  bad.pts = pts;
+  HT_STATUS (holent_rt_entropy (w, &line, &bad, &res, NULL, NULL), HOLENT_EDOM);
+  /* whole circle: S_BH, horizon, nothing paired */
+  a[0] = 1;
+  b[0] = 6;
+  HT_STATUS (holent_region_set (r, 1, 5, 1, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_SUCCESS);
+  HT_CLOSE (res.S, circ.S_BH, 1e-14);
+  HT_CHECK (res.horizon && res.m == 0 && res.candidates == 1, "whole");
+  /* short segments are counted */
+  a[0] = 0; b[0] = 1; a[1] = 1.0015; b[1] = 2;
+  HT_STATUS (holent_region_set (r, 0, 0, 2, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_SUCCESS);
+  HT_CHECK (res.n_short == 1, "n_short = %zu", res.n_short);
+  holent_region_free (r);
+  holent_rt_free (w);
+}
+
+static void
+test_large (void)
+{
+  /* n = 300 on a BTZ circle: the horizon face must be found for the
+     complement of a thin region too (S(A) - S(A^c) = S_BH on the
+     plateau, Araki-Lieb saturation).  */
+  const size_t n = 300;
+  const double L = 2 * M_PI;
+  holent_geo_bg bg;
+  holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, L, 1e-6, 0.3, 0.3, 1, 1);
+  holent_region *r = holent_region_alloc (n), *rc = holent_region_alloc (n);
+  holent_rt_workspace *w = holent_rt_alloc (n);
+  double *a = malloc (n * sizeof *a), *b = malloc (n * sizeof *b);
+  double *ac = malloc (n * sizeof *a), *bc = malloc (n * sizeof *b);
+  for (size_t k = 0; k < n; k++)
+    {
+      a[k] = L * k / n;
+      b[k] = a[k] + 0.97 * L / n;
+      ac[k] = b[k];
+      bc[k] = L * (k + 1) / n;
+    }
+  holent_rt_result res, resc;
+  HT_STATUS (holent_region_set (r, 1, L, n, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_region_set (rc, 1, L, n, ac, bc), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (w, &bg, r, &res, NULL, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_entropy (w, &bg, rc, &resc, NULL, NULL), HOLENT_SUCCESS);
+  HT_CHECK (res.horizon && !resc.horizon, "plateau");
+  HT_CLOSE (res.S - resc.S, bg.S_BH, 1e-9);
+  free (a);
+  free (b);
+  free (ac);
+  free (bc);
+  holent_region_free (r);
+  holent_region_free (rc);
+  holent_rt_free (w);
+}
+
+int
+main (void)
+{
+  test_against_enumeration ();
+  test_counts ();
+  test_errors ();
+  test_large ();
+  return HT_DONE ();
+}
