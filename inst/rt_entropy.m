@@ -17,8 +17,8 @@
 ## @code{[a, a + L]} is the whole circle, which gives S_BH (zero for a pure
 ## state).  Rows may come in any order; intervals that touch are merged;
 ## overlapping rows raise @code{holent:overlap} naming them; zero-length rows
-## raise @code{holent:empty}.  Coordinates closer than 16 eps times the
-## largest coordinate (or L) count as equal.
+## raise @code{holent:empty}.  Coordinates closer than 16 times the machine
+## epsilon times the largest coordinate (or L) count as equal.
 ##
 ## Candidates: the non-crossing pairings of the 2n sorted endpoints, one
 ## geodesic per pair.  In a background with a horizon on a circle (BTZ,
