@@ -4,61 +4,119 @@
 ## @deftypefn {} {} holent_demo ()
 ## Run the built-in demonstration scenario and print its tables.
 ##
-## The scenario (invented for the demonstration): a CFT with c = 24 on a
-## circle of circumference 2 pi, cutoff 1e-4, heated from below to above
-## the Hawking-Page temperature T = 1/(2 pi); for each state the
-## single-interval entropies across the circle, with the entanglement
-## plateau of the BTZ black hole.
+## The scenario is invented for the demonstration: a CFT with c = 24 on a
+## circle of circumference 2 pi (cutoff 1e-4) is heated from below to above
+## the Hawking-Page temperature 1/(2 pi).  For each state the demo prints the
+## bulk dual and its thermodynamics, the single-interval entropies with the
+## entanglement plateau, a three-interval region and which RT configuration
+## dominates, the mutual information and wedge cross section of two
+## intervals across their transition, and the holographic entropy
+## inequalities on a four-party configuration.
 ## @end deftypefn
+
 function holent_demo ()
   c = 24;  L = 2 * pi;  eps = 1e-4;
-  printf ("holent demo: c = %g, circle of circumference %.4g, cutoff %g\n\n", c, L, eps);
-  states = {
-    "vacuum",  {};
-    "heavy",   {"h", 0.5};
-    "thermal", {"T", 0.1};
-    "thermal", {"T", 0.5};
-    "rotating", {"T", 0.5, "Omega", 0.6}};
-  printf ("%-10s %-22s %-14s %10s %10s\n", "state", "parameters", "bulk", "S_BH", "alpha");
+  printf ("holent demo: c = %g, circle of circumference %.4g, cutoff %g\n", c, L, eps);
+  printf ("Hawking-Page temperature (Omega = 0): T_hp = %.4f\n\n",
+          hawking_page ("circumference", L, "c", c));
+
+  ## 1. States and their duals.
+  states = {"vacuum",   {}; ...
+            "heavy",    {"h", 0.5}; ...
+            "thermal",  {"T", 0.1}; ...
+            "thermal",  {"T", 0.5}; ...
+            "rotating", {"T", 0.5, "Omega", 0.6}};
   bgs = cell (rows (states), 1);
+  printf ("1. States and bulk duals\n");
+  printf ("   %-9s %-18s %-14s %10s %10s %10s\n", "state", "parameters", "bulk",
+          "M", "J", "S_BH");
   for k = 1:rows (states)
-    bgs{k} = ads3_background (states{k,1}, "circle", "c", c, "cutoff", eps, states{k,2}{:});
-    p = states{k,2};
-    ps = "";
-    for j = 1:2:numel (p)
-      ps = [ps sprintf("%s=%g ", p{j}, p{j+1})];
-    endfor
-    printf ("%-10s %-22s %-14s %10.4f %10.4f\n", states{k,1}, ps, bgs{k}.bulk,
-            bgs{k}.S_BH, bgs{k}.alpha);
+    bgs{k} = ads3_background (states{k,1}, "circle", "c", c, "cutoff", eps,
+                              states{k,2}{:});
+    printf ("   %-9s %-18s %-14s %10.4f %10.4f %10.4f\n", states{k,1},
+            params_str (states{k,2}), bgs{k}.bulk, bgs{k}.M, bgs{k}.J, bgs{k}.S_BH);
   endfor
 
-  l = L * [0.05 0.25 0.5 0.75 0.9 0.95 1.0];
-  printf ("\nSingle-interval RT entropy S(l) (* = complement + horizon wins)\n");
-  printf ("%-24s", "l / L");
-  printf ("%9.2f ", l / L);
-  printf ("\n");
+  ## 2. BTZ thermodynamics across the transition.
+  T = [0.1 0.15 0.2 0.3 0.5];
+  th = btz_thermodynamics ("T", T, "Omega", zeros (size (T)), "c", c,
+                           "circumference", L);
+  printf ("\n2. BTZ thermodynamics (Omega = 0) and the dominant saddle\n");
+  printf ("   %8s %10s %10s %10s %12s %12s  %s\n", "T", "M", "S", "C_J", "F_btz",
+          "F_thermalAdS", "saddle");
+  for k = 1:numel (T)
+    printf ("   %8.3f %10.4f %10.4f %10.4f %12.4f %12.4f  %s\n", T(k), th.M(k),
+            th.S(k), th.C_J(k), th.F(k), th.F_thermal_ads(k), th.saddle{k});
+  endfor
+
+  ## 3. Single intervals and the plateau.
+  l = L * [0.05 0.25 0.5 0.75 0.95 0.999];
+  printf ("\n3. Single-interval RT entropy S(l)  (* = surface round the complement,\n   plus the horizon where there is one: the entanglement plateau of BTZ)\n");
+  printf ("   %-24s", "l / L");  printf ("%10.3f", l / L);  printf ("\n");
   for k = 1:numel (bgs)
     [S, br] = interval_entropy (bgs{k}, l);
-    printf ("%-24s", sprintf ("%s %s", states{k,1}, bgs{k}.bulk));
+    printf ("   %-24s", sprintf ("%s (%s)", states{k,1}, bgs{k}.bulk));
     for j = 1:numel (l)
-      printf ("%8.3f%s ", S(j), ifelse_ (br(j), "*", " "));
+      printf ("%9.3f%s", S(j), merge (br(j), "*", " "));
     endfor
     printf ("\n");
   endfor
 
-  bg = bgs{4};
-  printf ("\nGeodesic lengths in %s between x1 = 0 and x2, both homotopy classes\n", bg.bulk);
-  x2 = [0.5 1 2 3 4];
-  printf ("%-12s", "x2");  printf ("%10.3f", x2);  printf ("\n");
-  printf ("%-12s", "positive");  printf ("%10.3f", geodesic_length (bg, 0, x2, "class", "positive"));  printf ("\n");
-  printf ("%-12s", "negative");  printf ("%10.3f", geodesic_length (bg, 0, x2, "class", "negative"));  printf ("\n");
+  ## 4. A three-interval region: the minimising configuration.
+  A = [0.3 1.2; 1.5 2.9; 3.1 5.6];
+  printf ("\n4. Region A = [0.3,1.2] u [1.5,2.9] u [3.1,5.6]: dominant RT surface\n");
+  printf ("   %-24s %10s  %-8s %s\n", "state", "S(A)", "horizon", "geodesics (boundary points)");
+  for k = 1:numel (bgs)
+    [S, conf] = rt_entropy (bgs{k}, A);
+    g = "";
+    for j = 1:rows (conf.pair_coords)
+      g = [g sprintf("(%.1f,%.1f) ", conf.pair_coords(j,1), conf.pair_coords(j,2))];
+    endfor
+    printf ("   %-24s %10.3f  %-8s %s\n", sprintf ("%s (%s)", states{k,1}, bgs{k}.bulk),
+            S, merge (conf.horizon, "yes", "no"), g);
+  endfor
+
+  ## 5. Two intervals on the thermal line: I(A:B) and E_W across the transition.
+  bl = ads3_background ("thermal", "line", "T", 0.5, "c", c, "cutoff", eps);
+  d = [0.05 0.1 0.2 0.3 0.4 0.6 1.0];
+  printf ("\n5. Thermal line (T = 0.5): A = [0, 1], B = [1 + d, 2 + d]\n");
+  printf ("   %8s %12s %12s %12s  %s\n", "d", "I(A:B)", "E_W", "S_R = 2E_W", "wedge");
+  for k = 1:numel (d)
+    B = [1 + d(k), 2 + d(k)];
+    I = mutual_information (bl, [0 1], B);
+    [E, info] = wedge_cross_section (bl, [0 1], B);
+    printf ("   %8.2f %12.4f %12.4f %12.4f  %s\n", d(k), I, E, 2 * E, info.phase);
+  endfor
+
+  ## 6. Entropy inequalities on four adjacent arcs of the BTZ circle.
+  P = {[0 1], [1.2 2.5], [2.7 3.3], [3.6 5.5]};
+  Svec = entropy_vector (bgs{4}, P);
+  rep = entropy_inequalities (Svec);
+  printf ("\n6. Holographic entropy inequalities, 4 arcs on the BTZ circle (T = 0.5)\n");
+  fams = {"sa", "al", "ssa", "wm", "mmi", "cyclic"};
+  names = {"subadditivity", "Araki-Lieb", "strong subadditivity", ...
+           "weak monotonicity", "monogamy of MI", "cyclic"};
+  printf ("   %-22s %10s %6s %14s\n", "family", "instances", "holds", "min(lhs-rhs)");
+  for k = 1:numel (fams)
+    if (isfield (rep, fams{k}))
+      r = rep.(fams{k});
+      printf ("   %-22s %10d %6s %14.4g\n", names{k}, r.count,
+              merge (r.holds, "yes", "NO"), r.worst_value);
+    endif
+  endfor
 endfunction
 
-function r = ifelse_ (c, a, b)
-  if (c) r = a; else r = b; endif
+function s = params_str (p)
+  s = "";
+  for j = 1:2:numel (p)
+    s = [s sprintf("%s=%g ", p{j}, p{j+1})];
+  endfor
 endfunction
 
 %!test
 %! s = evalc ("holent_demo ()");
 %! assert (! isempty (strfind (s, "btz")));
 %! assert (! isempty (strfind (s, "thermal_ads")));
+%! assert (! isempty (strfind (s, "connected")));
+%! assert (isempty (strfind (s, " NO ")));
+%!error <called with too many inputs> holent_demo (1)

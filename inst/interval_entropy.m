@@ -18,8 +18,9 @@
 ## whole circle) gives S_BH.  Without a horizon (global AdS, thermal AdS,
 ## conical defect) S(l) = S(L - l).
 ##
-## @var{branch} is a logical array, true where the complementary surface
-## (with the horizon, when there is one) wins; ties count as false.
+## @var{branch} is a logical array, true where the surface runs round the
+## complement: with a horizon, where the complementary geodesic plus the
+## horizon wins (ties count as false); without one, where l > L/2.
 ##
 ## A warning @code{holent:cutoff} is issued when some l is not longer than
 ## twice the cutoff, where the regulated formula has no meaning.

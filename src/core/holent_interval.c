@@ -50,12 +50,13 @@ holent_interval_entropy (const holent_geo_bg *bg, size_t n, const double *l,
               const double d = c6 * holent_geo_len_unchecked (bg, li);
               const double cp = c6 * holent_geo_len_unchecked (bg, L - li)
                                 + bg->S_BH;
-              s = d;
-              if (cp < d)
-                {
-                  s = cp;
-                  b = 1;
-                }
+              /* Without a horizon both sides give the same surface up to
+                 rounding when l = L/2; name the branch by geometry then.  */
+              if (bg->horizon)
+                b = cp < d;
+              else
+                b = li > L - li;
+              s = b ? cp : d;
             }
         }
       S[i] = s;

@@ -12,7 +12,8 @@
  *           l = L (the whole circle) gives S_BH.
  * branch[i] (may be NULL) is 0 when the geodesic over the interval itself
  * wins and 1 when the complementary geodesic (plus the horizon, if any)
- * wins; ties go to 0.  *n_short (may be NULL) counts lengths not longer
+ * wins; with a horizon ties go to 0, without one branch = (l > L/2), the
+ * side on which the (equal or shorter) geodesic runs.  *n_short (may be NULL) counts lengths not longer
  * than twice the cutoff, where the regulated formula is meaningless.  */
 int holent_interval_entropy (const holent_geo_bg *bg, size_t n,
                              const double *l, double *S,
