@@ -119,28 +119,7 @@ function bg = ads3_background (state, boundary, varargin)
   endif
 
   ## Central charge, Newton constant, AdS radius (Brown-Henneaux).
-  ell = 1;
-  if (isfield (o, "ell"))
-    ell = __holent_scalar__ (fn, "ell", o.ell, "positive");
-  endif
-  if (isfield (o, "G"))
-    G = __holent_scalar__ (fn, "G", o.G, "positive");
-    c = 3 * ell / (2 * G);
-    if (isfield (o, "c"))
-      cc = __holent_scalar__ (fn, "c", o.c, "positive");
-      if (abs (cc - c) > 1e-12 * c)
-        error ("holent:inconsistent",
-               "%s: c = %g disagrees with 3 ell/(2G) = %g (Brown-Henneaux)",
-               fn, cc, c);
-      endif
-    endif
-  else
-    c = 1;
-    if (isfield (o, "c"))
-      c = __holent_scalar__ (fn, "c", o.c, "positive");
-    endif
-    G = 3 * ell / (2 * c);
-  endif
+  [c, G, ell] = __holent_central_charge__ (fn, o);
 
   cutoff = 1e-6;
   if (isfield (o, "cutoff"))
@@ -163,7 +142,7 @@ function bg = ads3_background (state, boundary, varargin)
 
   switch (state)
     case "vacuum"
-      bg.bulk = ifelse (circle, "global_ads", "poincare");
+      bg.bulk = merge (circle, "global_ads", "poincare");
       if (circle)
         bg.M = -pi * c / (6 * L);   # Casimir energy, -1/(8G) for L = 2 pi ell
       endif
@@ -182,7 +161,7 @@ function bg = ads3_background (state, boundary, varargin)
       scales = [L, bl, br];
       rot = strcmp (state, "rotating");
       if (! circle)
-        bg.bulk = ifelse (rot, "planar_rotating_btz", "planar_btz");
+        bg.bulk = merge (rot, "planar_rotating_btz", "planar_btz");
         bg.saddle = "btz";
       else
         sad = "dominant";
@@ -197,7 +176,7 @@ function bg = ads3_background (state, boundary, varargin)
         endif
         bg.saddle = sad;
         if (strcmp (sad, "btz"))
-          bg.bulk = ifelse (rot, "rotating_btz", "btz");
+          bg.bulk = merge (rot, "rotating_btz", "btz");
         else
           bg.bulk = "thermal_ads";
         endif
@@ -205,8 +184,8 @@ function bg = ads3_background (state, boundary, varargin)
       if (! strcmp (bg.bulk, "thermal_ads"))
         bg.horizon = true;
         bg.entropy_density = pi * c / 6 * (1 / bl + 1 / br);
-        bg.S_BH = ifelse (circle, bg.entropy_density * L, Inf);
-        Lr = ifelse (circle, L, 2 * pi);
+        bg.S_BH = merge (circle, bg.entropy_density * L, Inf);
+        Lr = merge (circle, L, 2 * pi);
         bg.r_plus = Lr / 2 * (1 / bl + 1 / br);
         bg.r_minus = Lr / 2 * (1 / bl - 1 / br);
       endif
@@ -302,13 +281,6 @@ function [bl, br] = temperatures (fn, state, o)
   endif
 endfunction
 
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
 
 %!test
 %! bg = ads3_background ("vacuum", "line");

@@ -139,7 +139,7 @@ endfunction
 %!   assert (! isempty (strfind (err.message, "ball_entropy: R(1) = ")));
 %! end_try_catch
 
-%!warning <twice the cutoff> ball_entropy (ads_background (4, "vacuum", "cutoff", 1e-2), 0.015)
+%!warning <twice the cutoff> ball_entropy (ads_background (4, "vacuum", "cutoff", 1e-2), 0.015);
 %!error <Invalid call> ball_entropy (ads_background (4, "vacuum"))
 %!error <positive radius> ball_entropy (ads_background (4, "vacuum"), -1)
 %!error <NaN> ball_entropy (ads_background (4, "vacuum"), [1 NaN])

@@ -91,10 +91,10 @@ function th = btz_thermodynamics (varargin)
   k = touched;
   [na, nb] = deal (pairs{k, 1:2});
   if (! isfield (o, na) || ! isfield (o, nb))
-    given = ifelse (isfield (o, na), na, nb);
-    other = ifelse (isfield (o, na), nb, na);
+    given = merge (isfield (o, na), na, nb);
+    other = merge (isfield (o, na), nb, na);
     error ("holent:option", "%s: '%s' needs its partner '%s'%s", fn, given,
-           other, ifelse (strcmp (other, "Omega"), " (Omega = 0: no rotation)", ""));
+           other, merge (strcmp (other, "Omega"), " (Omega = 0: no rotation)", ""));
   endif
 
   [c, G, ell] = __holent_central_charge__ (fn, o);
@@ -121,7 +121,7 @@ function th = btz_thermodynamics (varargin)
   ## Scalars and arrays of the full size go to the core as they are.
   a = expand (a, sz);  b = expand (b, sz);  Lx = expand (L, sz);
 
-  t = thermo_core ("state", pairs{k, 3}, a, b, Lx, c, ell);
+  t = __holent_call__ ("__holent_thermo__", "state", pairs{k, 3}, a, b, Lx, c, ell);
 
   th = struct ();
   for f = {"r_plus", "r_minus", "M", "J", "T", "Omega", "Omega_J", "T_L", ...
@@ -134,7 +134,7 @@ function th = btz_thermodynamics (varargin)
     endif
   endfor
   if (prod (sz) == 1)
-    th.saddle = ifelse (t.btz_dominates, "btz", "thermal_ads");
+    th.saddle = merge (t.btz_dominates, "btz", "thermal_ads");
   else
     sad = repmat ({"thermal_ads"}, sz);
     sad(t.btz_dominates) = {"btz"};
@@ -186,22 +186,6 @@ function x = beta_array (fn, name, x)
   endif
 endfunction
 
-## The gateway, with its own name taken off the messages it raises.
-function varargout = thermo_core (varargin)
-  try
-    [varargout{1:max (1, nargout)}] = __holent_thermo__ (varargin{:});
-  catch err
-    error (err.identifier, "%s", regexprep (err.message, '^__holent_thermo__: ', ''));
-  end_try_catch
-endfunction
-
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
 
 %!test
 %! ## Banados, Teitelboim and Zanelli 1992 (PRL 69, 1849), ell = 1:

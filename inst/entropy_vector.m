@@ -59,7 +59,7 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   Nmax = 16 - purifier;
   if (N > Nmax)
     error ("holent:toobig", "%s: at most %d parties%s, got %d", fn, Nmax,
-           ifelse_ (purifier, " besides the purifier", ""), N);
+           merge (purifier, " besides the purifier", ""), N);
   endif
   if (purifier && ! bg.pure && ! bg.horizon)
     error ("holent:mixed",
@@ -153,13 +153,6 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   endif
 endfunction
 
-function r = ifelse_ (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
 
 %!function S = two_intervals (bg, a, b)
 %! ## Two disjoint intervals a = [a1 a2], b = [b1 b2] on a line with a < b:
@@ -169,9 +162,6 @@ endfunction
 %!          interval_entropy (bg, b(2) - a(1)) + interval_entropy (bg, b(1) - a(2)));
 %!endfunction
 
-%!function r = ifelse_test (c, a, b)
-%! if (c), r = a; else, r = b; endif
-%!endfunction
 
 %!function A = random_parties (N, L, circle)
 %! ## N disjoint parties of 1 to 3 intervals each: 2m + 1 sorted random
@@ -268,7 +258,7 @@ endfunction
 %! for b = 1:numel (bgs)
 %!   bg = bgs{b};
 %!   circle = isfinite (bg.circumference);
-%!   L = ifelse_test (circle, bg.circumference, 6);
+%!   L = merge (circle, bg.circumference, 6);
 %!   for trial = 1:8
 %!     N = 3 + mod (trial, 3);                 # 4, 5, 3, 4, ...
 %!     P = random_parties (N, L, circle);

@@ -97,7 +97,7 @@ function [T_hp, info] = hawking_page (varargin)
       bl = bl + z;  br = br + z;
       Om = (br - bl) ./ (br + bl);
     else
-      z = zeros (size (Om + L + ifelse (isempty (T), 0, T)));
+      z = zeros (size (Om + L + merge (isempty (T), 0, T)));
       Om = Om + z;
     endif
   catch
@@ -105,13 +105,13 @@ function [T_hp, info] = hawking_page (varargin)
   end_try_catch
   L = L + z;
 
-  T_hp = thermo_core ("hawking_page", Om, L);
+  T_hp = __holent_call__ ("__holent_thermo__", "hawking_page", Om, L);
   if (nargout < 2)
     return;
   endif
 
   if (lr)
-    th = thermo_core ("state", "beta_LR", bl, br, L, c, ell, fn);
+    th = __holent_call__ ("__holent_thermo__", "state", "beta_LR", bl, br, L, c, ell, fn);
     Tc = th.T;
   else
     if (isempty (T))
@@ -119,7 +119,7 @@ function [T_hp, info] = hawking_page (varargin)
     else
       Tc = T + z;
     endif
-    th = thermo_core ("state", "T_Omega", Tc, Om, L, c, ell, fn);
+    th = __holent_call__ ("__holent_thermo__", "state", "T_Omega", Tc, Om, L, c, ell, fn);
   endif
   if (! lr && isempty (T))
     sad = repmat ({"transition"}, size (z));
@@ -136,22 +136,6 @@ function [T_hp, info] = hawking_page (varargin)
   info.saddle = sad;
 endfunction
 
-## The gateway, with its own name taken off the messages it raises.
-function varargout = thermo_core (varargin)
-  try
-    [varargout{1:max (1, nargout)}] = __holent_thermo__ (varargin{:});
-  catch err
-    error (err.identifier, "%s", regexprep (err.message, '^__holent_thermo__: ', ''));
-  end_try_catch
-endfunction
-
-function r = ifelse (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
 
 %!test
 %! ## Non-rotating: T_hp = 1/L (Hawking and Page 1983, Commun. Math. Phys.

@@ -29,7 +29,7 @@ function I = mutual_information (bg, A, B)
   __holent_check_bg__ (fn, bg);
   [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, {"A", "B"}, {A, B});
   AB = cellfun (@(a, b) [a; b], P{1}, P{2}, "uniformoutput", false);
-  [SAB, ns] = __holent_rt_call__ ("entropy", fn, "the union of A and B", bg, AB);
+  [SAB, ns] = __holent_call__ ("__holent_rt__", "entropy", fn, "the union of A and B", bg, AB);
   I = Sp{1} + Sp{2} - SAB;
   if (nshort + ns > 0)
     warning ("holent:cutoff", "%s: some interval or gap is not longer than twice the cutoff %g",

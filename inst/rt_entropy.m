@@ -93,9 +93,9 @@ function [S, conf] = rt_entropy (bg, A)
     A = to_double (fn, A);
   endif
   if (nargout > 1)
-    [S, nshort, conf] = __holent_rt_call__ ("entropy", fn, "A", bg, A);
+    [S, nshort, conf] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg, A);
   else
-    [S, nshort] = __holent_rt_call__ ("entropy", fn, "A", bg, A);
+    [S, nshort] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg, A);
   endif
   if (nshort > 0)
     warning ("holent:cutoff",

@@ -176,6 +176,36 @@ endfunction
 %! end_try_catch
 
 %!test
+%! ## A tabulated f with a near-horizon (f dips to 0.02 at z = 1): the width
+%! ## is not monotonic in z*, several extremal surfaces share a width, and RT
+%! ## takes the least area (an entanglement phase transition).  Every branch
+%! ## is found here independently: widths on a grid of z* by integral,
+%! ## fzero at each sign change, the area above the cutoff by integral.
+%! d = 4;  z = linspace (0, 4, 2000)';  f = 1 - 1.96 * z.^4 ./ (1 + z.^8);
+%! eps = 0.02;
+%! bg = ads_background (d, "tabulated", "z", z, "f", f, "cutoff", eps);
+%! pp = spline (z, f);  F = @(x) ppval (pp, x);
+%! q = @(x, t) sqrt (F (x * (1 - t.^2)) .* (1 - (1 - t.^2).^(2*d-2)));
+%! wid = @(x) 2 * x * integral (@(t) 2 * t .* (1 - t.^2).^(d-1) ./ q (x, t), 0, 1, "RelTol", 1e-10);
+%! area = @(x) x^(2-d) * integral (@(t) 2 * t .* (1 - t.^2).^(1-d) ./ q (x, t), 0, sqrt (1 - eps / x), "RelTol", 1e-10) / 2;
+%! zg = [linspace(0.5, 0.9, 5), linspace(0.95, 1.15, 12), linspace(1.3, 3.99, 12)];
+%! wg = arrayfun (wid, zg);
+%! for l = [2 3.2 3.8]
+%!   k = find (diff (sign (wg - l)));
+%!   Sb = zeros (size (k));
+%!   for j = 1:numel (k)
+%!     Sb(j) = area (fzero (@(x) wid (x) - l, zg(k(j) + [0 1])));
+%!   endfor
+%!   S = strip_entropy (bg, l);
+%!   assert (S, min (Sb), 1e-7 * S);
+%!   if (l == 3.2)
+%!     assert (numel (k), 3);   # three extremal surfaces
+%!   endif
+%! endfor
+%! [~, info] = strip_entropy (bg, 3.9);
+%! assert (info.reach >= max (wg) - 1e-6 && info.reach < max (wg) + 0.05);
+
+%!test
 %! [S, info] = strip_entropy (ads_background (4, "vacuum"), zeros (0, 3));
 %! assert (size (S), [0 3]);
 
@@ -189,7 +219,7 @@ endfunction
 %! xlabel ("l / z_h");  ylabel ("\Delta S");
 %! legend ("strip: S - S_{vacuum}", "s l", "location", "northwest");
 
-%!warning <within twice the cutoff> strip_entropy (ads_background (3, "vacuum", "cutoff", 1e-2), 0.02)
+%!warning <within twice the cutoff> strip_entropy (ads_background (3, "vacuum", "cutoff", 1e-2), 0.02);
 %!error <Invalid call> strip_entropy (ads_background (4, "vacuum"))
 %!error <positive width> strip_entropy (ads_background (4, "vacuum"), [1 0])
 %!error <NaN> strip_entropy (ads_background (4, "vacuum"), NaN)

@@ -34,7 +34,7 @@ function I3 = tripartite_information (bg, A, B, C)
   AC = cat2 (P{1}, P{3});
   BC = cat2 (P{2}, P{3});
   ABC = cat2 (AB, P{3});
-  [S, ns] = __holent_rt_call__ ("entropy", fn, "a union of the parties", bg,
+  [S, ns] = __holent_call__ ("__holent_rt__", "entropy", fn, "a union of the parties", bg,
                                    [AB(:); AC(:); BC(:); ABC(:)]);
   n = prod (sz);
   S = reshape (S, n, 4);

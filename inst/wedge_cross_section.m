@@ -146,11 +146,11 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
                            "cross_ratio", 0, "geodesics", zeros (2),
                            "points", zeros (2, 3), "coordinates", words), k, 1);
     for j = 1:k
-      info(j).phase = ifelse_ (conn(j), "connected", "disconnected");
+      info(j).phase = merge (conn(j), "connected", "disconnected");
       info(j).E_W = EW(j);
       info(j).S_R = 2 * EW(j);
       info(j).E_connected = Ec(j);
-      info(j).cross_ratio = ifelse_ (rot, [zL(j), zR(j)], zL(j));
+      info(j).cross_ratio = merge (rot, [zL(j), zR(j)], zL(j));
       info(j).geodesics = reshape (G(j,:), 2, 2).';
       if (conn(j))
         info(j).points = reshape (P(j,:), 3, 2).';
@@ -264,13 +264,6 @@ function s = coordinates (bg)
   endswitch
 endfunction
 
-function r = ifelse_ (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
 
 %!test
 %! ## Takayanagi and Umemoto 2017 (arXiv:1708.09393, Nature Phys. 14, 573

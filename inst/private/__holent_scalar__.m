@@ -33,8 +33,8 @@ function x = __holent_scalar__ (fn, name, x, range)
     endswitch
   else
     [lo, hi, kind] = deal (range{:});
-    okl = ifelse_ (kind(1) == "(", x > lo, x >= lo);
-    okh = ifelse_ (kind(2) == ")", x < hi, x <= hi);
+    okl = merge (kind(1) == "(", x > lo, x >= lo);
+    okh = merge (kind(2) == ")", x < hi, x <= hi);
     if (! (okl && okh))
       error ("holent:domain", "%s: %s must lie in %s%g, %g%s, got %g",
              fn, name, kind(1), lo, hi, kind(2), x);
@@ -42,10 +42,3 @@ function x = __holent_scalar__ (fn, name, x, range)
   endif
 endfunction
 
-function r = ifelse_ (c, a, b)
-  if (c)
-    r = a;
-  else
-    r = b;
-  endif
-endfunction
