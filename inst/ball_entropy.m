@@ -17,7 +17,8 @@
 ## term of the hemisphere: powers (R/eps)^(d-2-2k) and, for even d, the
 ## universal c log(R/eps); limit eps -> 0), @code{delta} (S minus the vacuum
 ## ball of the same radius, cutoff-independent), @code{z_star} (depth of
-## the tip), @code{divergence} (the subtracted terms) and @code{reach}
+## the tip), @code{divergence} (S - finite: the subtracted terms up to O(eps^2))
+## and @code{reach}
 ## (largest radius: the tip within 1e-7 zh of a horizon, or at z_max).
 ##
 ## @seealso{ads_background, strip_entropy}
@@ -45,7 +46,7 @@ function [S, info] = ball_entropy (bg, R)
              fn, nnz (R(:) <= 2 * bg.cutoff), bg.cutoff);
   endif
   info = struct ("finite", fin, "delta", del, "z_star", zs,
-                 "divergence", S - del - fin, "reach", reach);
+                 "divergence", S - fin, "reach", reach);
 endfunction
 
 %!function A = hemi (d, R, eps)
@@ -77,6 +78,7 @@ endfunction
 %! [S, info] = ball_entropy (bg, 1);
 %! assert (S, pi * (0.5e10 - 0.5 * log (2e5) - 0.25), -1e-14);
 %! assert (info.finite, pi * (-0.5 * log (2) - 0.25), 1e-14);
+%! assert (info.divergence, pi * (0.5e10 - 0.5 * log (1e5)), -1e-14);
 
 %!test
 %! ## First law of entanglement (Blanco, Casini, Hung and Myers 2013, JHEP 08

@@ -27,9 +27,10 @@
 ## @item divergence
 ## the subtracted term;
 ## @item reach
-## the widest strip the background admits (Inf for the vacuum; for a
-## tabulated f, the strip whose turning point reaches z_max, or within 1e-7
-## zh of its horizon).
+## the widest strip the background admits (Inf for the vacuum; for the
+## brane, the turning point within 1e-250 zh of the horizon, hundreds of zh;
+## for a tabulated f, the turning point at z_max, or within 1e-30 zh of its
+## horizon, some tens of zh).
 ## @end table
 ## Wider strips raise @code{holent:reach}.  If the width of the extremal
 ## surfaces is not monotonic in z* (possible for a tabulated f), the one of
@@ -110,6 +111,21 @@ endfunction
 %!         sqrt (f (zs * (1 - t.^2)) .* (1 - (1 - t.^2).^(2*d-2))), 0, sqrt (1 - u0),
 %!         "RelTol", 1e-13, "AbsTol", 0) * zs^(2-d);
 %!   assert (S(k), 2 * A / 4, 1e-9 * S(k));
+%! endfor
+
+%!test
+%! ## First law for the strip (derived in doc/higher_dimensional.md from the
+%! ## first-order change of the area, as in Blanco, Casini, Hung and Myers
+%! ## 2013, JHEP 08 (2013) 060): for f = 1 - m z^d,
+%! ## delta S = ell^(d-1) Lp^(d-2) m z*^2 B(1/(d-1), 3/2)/(2 (d-1) 4G) + O(m^2).
+%! ## delta is computed without cancellation down to tiny widths.
+%! for d = [3 4 7 12]
+%!   bg = ads_background (d, "black_brane", "zh", 2, "G", 0.4, "ell", 1.1);
+%!   l = [1e-6 1e-3 0.02];
+%!   [~, info] = strip_entropy (bg, l, "length", 1.5);
+%!   zs = l / (2 * sqrt (pi) * gamma (d / (2*d - 2)) / gamma (1 / (2*d - 2)));
+%!   fl = 1.1^(d-1) * 1.5^(d-2) * bg.m * zs.^2 * beta (1 / (d-1), 1.5) / (2 * (d-1) * 1.6);
+%!   assert (info.delta, fl, 1e-12 * fl + 2 * (zs / 2).^d .* fl);
 %! endfor
 
 %!test

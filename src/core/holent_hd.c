@@ -15,7 +15,8 @@
 #define QAG_EPSABS 1e-15
 #define ROOT_ITMAX 200
 #define ROOT_EPSABS 1e-13
-#define TABLE_STEP 0.5
+#define TABLE_STEP 0.5      /* analytic f: l(y) is monotonic            */
+#define TABLE_STEP_TAB 0.1  /* tabulated f: look for narrow extrema too */
 #define ODE_T0 (-12.0)   /* log tan(phi) at the start next to the tip   */
 #define ODE_T1 16.0      /* log tan(phi) where the boundary is reached   */
 
@@ -295,10 +296,40 @@ holent_hd_bg_tabulated (holent_hd_bg *bg, int d, size_t n, const double *z,
       double fh, fph;
       holent_hd_f (bg, zh, &fh, &fph);
       bg->fp_h = fph;
+      /* Re-expand z^d g(z) about zh on the spline piece left of zh: near
+         the horizon f = 1 - z^d g would lose digits to cancellation.  */
+      {
+        size_t k = 1;
+        while (k < n - 1 && z[k] < zh)
+          k++;
+        double xl = z[k - 1], xr = z[k], a1 = xl + 0.25 * (xr - xl);
+        double a2 = xl + 0.75 * (xr - xl), gc[4], b = 1, g2a, g2b, g1;
+        gc[0] = g_eval (bg, zh, &g1);
+        gc[1] = g1;
+        if (gsl_spline_eval_deriv2_e (bg->g, zh, NULL, &gc[2])
+            || gsl_spline_eval_deriv2_e (bg->g, a1, NULL, &g2a)
+            || gsl_spline_eval_deriv2_e (bg->g, a2, NULL, &g2b))
+          {
+            holent_hd_bg_free (bg);
+            return HOLENT_EDOM;
+          }
+        gc[2] *= 0.5;
+        gc[3] = (g2b - g2a) / (a2 - a1) / 6;
+        for (int q = 0; q < HOLENT_HD_DMAX + 4; q++)
+          bg->hc[q] = 0;
+        for (int j = 0; j <= d; j++)  /* b = binom(d, j) */
+          {
+            for (int q = 0; q < 4; q++)
+              bg->hc[j + q] += b * gsl_pow_int (zh, d - j) * gc[q];
+            b = b * (d - j) / (j + 1);
+          }
+        bg->hw = fmin (zh - xl, 0.05 * zh);
+      }
     }
   bg->Z = isfinite (bg->zh) ? bg->zh : bg->zmax;
-  /* Near a tabulated horizon f = 1 - z^d g loses digits: stop at 1e-7.  */
-  bg->wmin = isfinite (bg->zh) ? 1e-7 * bg->zh : 1e-15 * bg->zmax;
+  /* Next to a tabulated horizon the re-expansion keeps f accurate; the
+     turning points stop at 1e-30 zh (the table stays short).  */
+  bg->wmin = isfinite (bg->zh) ? 1e-30 * bg->zh : 1e-15 * bg->zmax;
   return HOLENT_SUCCESS;
 }
 
@@ -370,6 +401,13 @@ fval (const holent_hd_bg *bg, double z, double wz)
         s = 1 + x * s;
       return (wz / bg->zh) * s;
     }
+  if (bg->kind == HOLENT_HD_TABULATED && wz > 0 && wz <= bg->hw)
+    {
+      double s = 0;  /* -sum_{n >= 1} hc[n] (-wz)^n by Horner */
+      for (int k = bg->d + 3; k >= 1; k--)
+        s = bg->hc[k] - wz * s;
+      return wz * s;
+    }
   return 1 - omf (bg, z);
 }
 
@@ -386,13 +424,14 @@ holent_hd_workspace_alloc (void)
     return NULL;
   w->iw = gsl_integration_workspace_alloc (QAG_LIMIT);
   w->root = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
+  w->min = gsl_min_fminimizer_alloc (gsl_min_fminimizer_brent);
   w->step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 3);
   w->ctrl = gsl_odeiv2_control_y_new (1e-15, 1e-12);
   w->evol = gsl_odeiv2_evolve_alloc (3);
   w->cap = 256;
   w->ty = malloc (w->cap * sizeof *w->ty);
   w->tv = malloc (w->cap * sizeof *w->tv);
-  if (!w->iw || !w->root || !w->step || !w->ctrl || !w->evol || !w->ty
+  if (!w->iw || !w->root || !w->min || !w->step || !w->ctrl || !w->evol || !w->ty
       || !w->tv)
     {
       holent_hd_workspace_free (w);
@@ -410,6 +449,8 @@ holent_hd_workspace_free (holent_hd_workspace *w)
     gsl_integration_workspace_free (w->iw);
   if (w->root)
     gsl_root_fsolver_free (w->root);
+  if (w->min)
+    gsl_min_fminimizer_free (w->min);
   if (w->step)
     gsl_odeiv2_step_free (w->step);
   if (w->ctrl)
@@ -544,6 +585,7 @@ typedef struct
   const holent_hd_bg *bg;
   double zs, w, a, sa;
   int pw;
+  int excess;  /* weigh by 1 - sqrt(f): the integrand minus the vacuum's */
 } spar;
 
 /* The turning-point end in the variable v = 1 - u = a sinh^2(tau): the
@@ -565,7 +607,26 @@ tau_integrand (double tau, void *p)
   double f = fval (bg, q->zs * u, q->w + q->zs * v);
   if (!(f > 0))
     return NAN;
-  return 2 * q->sa * ch / sqrt (f * qv) * gsl_pow_int (u, q->pw);
+  double r = 2 * q->sa * ch / sqrt (f * qv) * gsl_pow_int (u, q->pw);
+  if (q->excess)  /* 1/sqrt(f) - 1 = (1 - f)/(sqrt f (1 + sqrt f)) */
+    r *= omf (bg, q->zs * u) / (1 + sqrt (f));
+  return r;
+}
+
+/* u^(1-d) (1/sqrt(f) - 1)/sqrt(1 - u^(2d-2)) on [0, 1/2]: the excess of the
+   area integrand over the vacuum's at the same z*.  */
+static double
+u_excess (double u, void *p)
+{
+  const spar *q = p;
+  const holent_hd_bg *bg = q->bg;
+  int d = bg->d;
+  double z = q->zs * u, f = 1 - omf (bg, z), sf = sqrt (f);
+  double up = gsl_pow_int (u, d - 1);
+  if (!(f > 0))
+    return NAN;
+  return gsl_pow_int (q->zs, d) * u * mcoef (bg, z)
+         / (sqrt (1 - up * up) * sf * (1 + sf));
 }
 
 /* u^(1-d) (1/sqrt(f (1 - u^(2d-2))) - 1) with no cancellation near u = 0.  */
@@ -598,8 +659,10 @@ qag (holent_hd_workspace *w, double (*fn) (double, void *), spar *p,
   int st = gsl_integration_qag (&F, a, b, QAG_EPSABS, QAG_EPSREL, QAG_LIMIT,
                                 GSL_INTEG_GAUSS21, w->iw, out, &err);
   /* Roundoff in f (tabulated, next to a horizon) can stop QAG short of
-     1e-12; accept what it reached if that is still 1e-9.  */
-  if (st == GSL_EROUND && err <= 1e-9 * fabs (*out) + QAG_EPSABS)
+     1e-12 (roundoff detected, or the subdivision limit reached); accept
+     what it reached if its error estimate is still within 1e-9.  */
+  if ((st == GSL_EROUND || st == GSL_EMAXITER)
+      && err <= 1e-9 * fabs (*out) + QAG_EPSABS)
     st = GSL_SUCCESS;
   if (st || !isfinite (*out))
     return HOLENT_ENOCONV;
@@ -613,6 +676,7 @@ strip_setup (const holent_hd_bg *bg, double zs, double w, spar *p)
   p->bg = bg;
   p->zs = zs;
   p->w = w;
+  p->excess = 0;
   if (zs > bg->zmax)
     return HOLENT_EDOM;
   if (holent_hd_f (bg, zs, &f, &fp))
@@ -644,38 +708,47 @@ strip_width (const holent_hd_bg *bg, holent_hd_workspace *ws, double zs,
 }
 
 /* Area integrals J (finite: eps -> 0; cut: at the cutoff) with
-   A = 2 ell^(d-1) Lperp^(d-2) zs^(2-d) J.  */
+   A = 2 ell^(d-1) Lperp^(d-2) zs^(2-d) J, written as the vacuum's J plus
+   the excess dJ of the integrand at the same z* (no cancellation), and
+   *ddel = zs^(d-2) (A_fin - A_fin,vac(same width)) / (2 ell^(d-1) Lperp^(d-2)),
+   using the width's excess dK: l = 2 zs (K_vac + dK).  */
 static int
 strip_area (const holent_hd_bg *bg, holent_hd_workspace *ws, double zs,
-            double w, double *jfin, double *jcut)
+            double w, double *jfin, double *jcut, double *ddel)
 {
   spar p;
   int d = bg->d, st = strip_setup (bg, zs, w, &p);
-  double jt, i0, i1, del = bg->eps / zs, c2 = gsl_pow_int (2.0, d - 2);
+  double jt, ju, i0 = 0, dK = 0, del = bg->eps / zs;
+  double jv = holent_hd_strip_vacuum_j (d), kv = 0.5 * holent_hd_strip_ratio (d);
   if (st)
     return st;
+  p.excess = 1;
   p.pw = 1 - d;
   if ((st = qag (ws, tau_integrand, &p, 0, asinh (sqrt (0.5 / p.a)), &jt)))
     return st;
-  double dl = fmin (del, 0.5);
-  if ((st = qag (ws, u_integrand, &p, 0, dl, &i0)))
+  if ((st = qag (ws, u_excess, &p, 0, 0.5, &ju)))
     return st;
-  if ((st = qag (ws, u_integrand, &p, dl, 0.5, &i1)))
+  p.pw = d - 1;
+  if ((st = qag (ws, tau_integrand, &p, 0, asinh (sqrt (1 / p.a)), &dK)))
     return st;
-  *jfin = jt + i0 + i1 - c2 / (d - 2);
-  if (jcut)
+  p.excess = 0;
+  double dJ = jt + ju;
+  *jfin = jv + dJ;
+  *ddel = dJ - jv * expm1 ((2 - d) * log1p (dK / kv));
+  if (del < 0.5)
     {
-      if (del < 0.5)
-        *jcut = jt + i1 + (pow (del, 2 - d) - c2) / (d - 2);
-      else if (del < 1)
-        {
-          p.pw = 1 - d;
-          st = qag (ws, tau_integrand, &p, 0, asinh (sqrt ((1 - del) / p.a)),
-                    jcut);
-        }
-      else
-        *jcut = 0;
+      if ((st = qag (ws, u_integrand, &p, 0, del, &i0)))
+        return st;
+      *jcut = *jfin + pow (del, 2 - d) / (d - 2) - i0;
     }
+  else if (del < 1)
+    {
+      p.pw = 1 - d;
+      st = qag (ws, tau_integrand, &p, 0, asinh (sqrt ((1 - del) / p.a)),
+                jcut);
+    }
+  else
+    *jcut = 0;
   return st;
 }
 
@@ -713,6 +786,19 @@ size_at (double y, void *vp)
       return NAN;
     }
   return v - p->target;
+}
+
+typedef struct
+{
+  rpar *p;
+  double sign;
+} mpar;
+
+static double
+signed_size (double y, void *vp)
+{
+  const mpar *m = vp;
+  return m->sign * size_at (y, m->p);
 }
 
 /* Root of size(y) = target inside [lo, hi] by Brent's method.  */
@@ -769,7 +855,7 @@ build_table (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
   double mx = -INFINITY;
   int full = bg->kind == HOLENT_HD_TABULATED;
   *mono = 1;
-  for (double y = ylo;; y += TABLE_STEP)
+  for (double y = ylo;; y += full ? TABLE_STEP_TAB : TABLE_STEP)
     {
       if (y > yhi)
         y = yhi;
@@ -778,7 +864,8 @@ build_table (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
         return p.status;
       if ((st = table_push (ws, n, y, v)))
         return st;
-      if (n > 0 && !(v > ws->tv[n - 1]))
+      /* a dip below the previous entry beyond roundoff */
+      if (n > 0 && !(v > ws->tv[n - 1] - 1e-9 * fabs (v)))
         *mono = 0;
       n++;
       mx = fmax (mx, v);
@@ -786,6 +873,41 @@ build_table (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
         break;
     }
   *nt = n;
+  /* Not monotonic: move each table extremum onto the true local extremum
+     of size(y) (GSL's Brent minimiser), so that size(y) is monotonic
+     between neighbouring entries and every extremal surface is bracketed.  */
+  for (size_t j = 1; !*mono && j + 1 < n; j++)
+    {
+      double a = ws->tv[j] - ws->tv[j - 1], b = ws->tv[j + 1] - ws->tv[j];
+      double tiny = 1e-9 * fabs (ws->tv[j]);
+      if (!(a * b < 0) || fabs (a) < tiny || fabs (b) < tiny)
+        continue;
+      mpar mp = { &p, a > 0 ? -1.0 : 1.0 };
+      gsl_function F = { signed_size, &mp };
+      gsl_min_fminimizer *m = ws->min;
+      st = gsl_min_fminimizer_set_with_values (
+          m, &F, ws->ty[j], mp.sign * ws->tv[j], ws->ty[j - 1],
+          mp.sign * ws->tv[j - 1], ws->ty[j + 1], mp.sign * ws->tv[j + 1]);
+      for (int it = 0; st == GSL_SUCCESS && it < ROOT_ITMAX; it++)
+        {
+          if ((st = gsl_min_fminimizer_iterate (m)))
+            break;
+          st = gsl_min_test_interval (gsl_min_fminimizer_x_lower (m),
+                                      gsl_min_fminimizer_x_upper (m),
+                                      ROOT_EPSABS, 0);
+          if (st == GSL_SUCCESS)
+            break;
+          if (st == GSL_CONTINUE)
+            st = GSL_SUCCESS;
+        }
+      if (p.status)
+        return p.status;
+      if (st)
+        continue;  /* keep the grid value: brackets stay valid */
+      ws->ty[j] = gsl_min_fminimizer_x_minimum (m);
+      ws->tv[j] = mp.sign * gsl_min_fminimizer_f_minimum (m);
+      mx = fmax (mx, ws->tv[j]);
+    }
   /* stopped short of the last admissible turning point: the largest
      reachable size is the size there (one more evaluation) */
   if (ws->ty[n - 1] < yhi)
@@ -833,6 +955,7 @@ solve_one (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
   rpar p = { bg, ws, s, ball, 0 };
   size_t j0 = 0, j1 = nt - 1;
   int found = 0, st;
+  double best_extra = 0;
   if (mono)
     {
       size_t lo = 0, hi = nt - 1;
@@ -867,6 +990,7 @@ solve_one (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
         return st;
       if (fin < *best_fin)
         {
+          best_extra = ws->extra;
           *best_fin = fin;
           *best_cut = cut;
           *best_y = y;
@@ -874,6 +998,7 @@ solve_one (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
         }
       found = 1;
     }
+  ws->extra = best_extra;
   return found ? HOLENT_SUCCESS : HOLENT_ENOCONV;
 }
 
@@ -884,13 +1009,14 @@ strip_eval (const holent_hd_bg *bg, holent_hd_workspace *ws, double y,
   double zs, w;
   root_point (bg, y, &zs, &w);
   *zs_out = zs;
-  int st = strip_area (bg, ws, zs, w, fin, cut);
+  int st = strip_area (bg, ws, zs, w, fin, cut, &ws->extra);
   if (st)
     return st;
   /* per unit 2 ell^(d-1) Lperp^(d-2)/(4G) */
   double sc = pow (zs, 2 - bg->d);
   *fin *= sc;
   *cut *= sc;
+  ws->extra *= sc;
   return HOLENT_SUCCESS;
 }
 
@@ -936,10 +1062,11 @@ holent_hd_strip (const holent_hd_bg *bg, holent_hd_workspace *ws,
       if (bg->kind == HOLENT_HD_VACUUM)
         {
           zs = l[i] / ratio;
-          if ((st = strip_area (bg, ws, zs, 0, &jf, &jc)))
+          if ((st = strip_area (bg, ws, zs, 0, &jf, &jc, &ws->extra)))
             return st;
           jf = jv * pow (zs, 2 - d);
           jc *= pow (zs, 2 - d);
+          ws->extra = 0;
         }
       else if ((st = solve_one (bg, ws, 0, nt, mono, l[i], strip_eval, &y,
                                 &jf, &jc, &zs)))
@@ -952,8 +1079,7 @@ holent_hd_strip (const holent_hd_bg *bg, holent_hd_workspace *ws,
       if (fin)
         fin[i] = pref * jf;
       if (delta)
-        delta[i] = bg->kind == HOLENT_HD_VACUUM
-                       ? 0 : pref * (jf - jv * pow (ratio / l[i], d - 2));
+        delta[i] = pref * ws->extra;
       if (zstar)
         zstar[i] = zs;
     }
@@ -1044,7 +1170,9 @@ ball_eval (const holent_hd_bg *bg, holent_hd_workspace *ws, double y,
   root_point (bg, y, &zs, &w);
   *zt = zs;
   *cut = 0;
-  return ball_shoot (bg, ws, zs, &R, fin);
+  int st = ball_shoot (bg, ws, zs, &R, fin);
+  ws->extra = *fin;
+  return st;
 }
 
 int

@@ -11,6 +11,7 @@
 #include <gsl/gsl_spline.h>
 #include <gsl/gsl_integration.h>
 #include <gsl/gsl_roots.h>
+#include <gsl/gsl_min.h>
 #include <gsl/gsl_odeiv2.h>
 #include "holent.h"
 
@@ -35,6 +36,10 @@ typedef struct
   double m;       /* f = 1 - m z^d + ... near the boundary               */
   double fp_h;    /* f'(zh) (0 without a horizon)                        */
   gsl_spline *g;  /* tabulated: g(z) = (1 - f(z))/z^d                    */
+  /* tabulated with a horizon: f(zh - w) = -sum_n hc[n] (-w)^n, the exact
+     re-expansion of the interpolant about zh, used for 0 < w <= hw */
+  double hc[HOLENT_HD_DMAX + 4];
+  double hw;
 } holent_hd_bg;
 
 /* Analytic backgrounds (vacuum: zh ignored).  bg->g is NULL.  */
@@ -57,11 +62,13 @@ typedef struct
 {
   gsl_integration_workspace *iw;
   gsl_root_fsolver *root;
+  gsl_min_fminimizer *min;  /* extrema of a non-monotonic size(y)     */
   gsl_odeiv2_step *step;
   gsl_odeiv2_control *ctrl;
   gsl_odeiv2_evolve *evol;
   size_t cap;              /* table capacity                            */
   double *ty, *tv;         /* table: root variable, width or radius     */
+  double extra;            /* scratch: excess over the vacuum at a root */
 } holent_hd_workspace;
 
 holent_hd_workspace *holent_hd_workspace_alloc (void);

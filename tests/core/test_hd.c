@@ -203,6 +203,15 @@ test_strip (void)
       HT_CHECK (i == 0 || zs[i] > zs[i - 1], "z* monotonic");
     }
 
+  /* first law for strips (doc/): delta = m z*^2 B(1/3, 3/2)/6/4 for d = 4,
+     ell = G = Lperp = 1, zh = 1; relative corrections O(z*^4) */
+  {
+    double ls[2] = { 1e-6, 1e-3 }, Ss[2], ds[2], zz[2];
+    HT_STATUS (holent_hd_strip (&bg, w, 1, 2, ls, Ss, NULL, ds, zz, &bad, NULL), HOLENT_SUCCESS);
+    for (int i = 0; i < 2; i++)
+      HT_CLOSE (ds[i] / (zz[i] * zz[i] * gsl_sf_beta (1.0 / 3, 1.5) / 24), 1.0, 1e-9);
+  }
+
   /* vacuum through the numerical path: a tabulated f = 1 */
   {
     enum { N = 50 };
@@ -270,7 +279,39 @@ test_strip (void)
         HT_CLOSE (zt[i], zs[i], 1e-8);
         HT_CLOSE (dt[i], del[i], 1e-8);
       }
-    HT_CHECK (reach > 5 && reach < 8, "reach %g", reach);
+    HT_CHECK (reach > 20 && reach < 40, "reach %g", reach);  /* w >= 1e-30 zh */
+    {
+      /* wide strips: the re-expanded interpolant near zh keeps delta */
+      double lw[2] = { 10, 20 }, Sw[2], dw[2], db[2];
+      HT_STATUS (holent_hd_strip (&bt, w, 1, 2, lw, Sw, NULL, dw, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_STATUS (holent_hd_strip (&bg, w, 1, 2, lw, Sw, NULL, db, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_CLOSE (dw[0], db[0], 1e-9);
+      HT_CLOSE (dw[1], db[1], 1e-9);
+    }
+    holent_hd_bg_free (&bt);
+  }
+  /* a near-horizon (f dips to 0.02 at z = 1): l(z*) rises to a narrow
+     peak, falls and rises again; RT jumps between branches, and the peak
+     (found by the minimiser) is the widest reachable strip */
+  {
+    enum { N = 2000 };
+    holent_hd_bg bt;
+    static double zz[N], ff[N];
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 4.0 * i / (N - 1);
+        ff[i] = 1 - 1.96 * gsl_pow_int (zz[i], 4) / (1 + gsl_pow_int (zz[i], 8));
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_CHECK (isinf (bt.zh), "no horizon");
+    double lj[2] = { 3.0, 3.2 }, Sj[2], fj[2], zj[2];
+    HT_STATUS (holent_hd_strip (&bt, w, 1, 2, lj, Sj, fj, NULL, zj, &bad, &reach), HOLENT_SUCCESS);
+    HT_CHECK (zj[0] < 1 && zj[1] > 3, "branches: z* %g %g", zj[0], zj[1]);
+    HT_CHECK (reach > 3.9 && reach < 3.95, "reach %g", reach);
+    double lr[2] = { reach * (1 - 1e-7), reach * (1 + 1e-7) };
+    HT_STATUS (holent_hd_strip (&bt, w, 1, 1, lr, Sj, NULL, NULL, zj, &bad, NULL), HOLENT_SUCCESS);
+    HT_CHECK (fabs (zj[0] - 1.04) < 0.02, "z* at the peak %g", zj[0]);
+    HT_STATUS (holent_hd_strip (&bt, w, 1, 1, lr + 1, Sj, NULL, NULL, NULL, &bad, NULL), HOLENT_EDOM);
     holent_hd_bg_free (&bt);
   }
   holent_hd_workspace_free (w);
