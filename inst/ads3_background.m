@@ -170,8 +170,12 @@ function bg = ads3_background (state, boundary, varargin)
         endif
         if (strcmp (sad, "dominant"))
           ## Hawking-Page: BTZ dominates when beta_L beta_R < L^2.
-          [~, hp] = hawking_page ("circumference", L, "beta_L", bl,
-                                  "beta_R", br, "c", c, "ell", ell);
+          try
+            [~, hp] = hawking_page ("circumference", L, "beta_L", bl,
+                                    "beta_R", br, "c", c, "ell", ell);
+          catch err
+            state_error (fn, o, err);
+          end_try_catch
           sad = hp.saddle;
         endif
         bg.saddle = sad;
@@ -188,6 +192,11 @@ function bg = ads3_background (state, boundary, varargin)
         Lr = merge (circle, L, 2 * pi);
         bg.r_plus = Lr / 2 * (1 / bl + 1 / br);
         bg.r_minus = Lr / 2 * (1 / bl - 1 / br);
+        if (! isfinite (bg.entropy_density) || ! (bg.S_BH > 0)
+            || (circle && ! isfinite (bg.S_BH)))
+          state_error (fn, o, struct ("identifier", "holent:domain", "message",
+                                      "the horizon entropy is out of double precision range"));
+        endif
       endif
       ## Energy and angular momentum (btz_thermodynamics conventions).
       if (! circle)
@@ -197,8 +206,12 @@ function bg = ads3_background (state, boundary, varargin)
           bg.J = 0;
         endif
       elseif (bg.horizon)
-        th = btz_thermodynamics ("beta_L", bl, "beta_R", br,
-                                 "circumference", L, "c", c, "ell", ell);
+        try
+          th = btz_thermodynamics ("beta_L", bl, "beta_R", br,
+                                   "circumference", L, "c", c, "ell", ell);
+        catch err
+          state_error (fn, o, err);
+        end_try_catch
         bg.M = th.M;
         bg.J = th.J;
       else
@@ -228,6 +241,21 @@ function bg = ads3_background (state, boundary, varargin)
              "%s: cutoff %g is not small against the smallest scale %g of the state",
              fn, cutoff, min (scales));
   endif
+endfunction
+
+## Re-raise ERR (from hawking_page or btz_thermodynamics, or made here)
+## under FN's name, listing the numeric options that set the state.
+function state_error (fn, o, err)
+  msg = regexprep (err.message, '^\w+: ', '');
+  given = fieldnames (o);
+  txt = {};
+  for k = 1:numel (given)
+    v = o.(given{k});
+    if (isnumeric (v) && isscalar (v))
+      txt{end+1} = sprintf ("%s = %g", given{k}, v);
+    endif
+  endfor
+  error (err.identifier, "%s: %s: %s", fn, strjoin (txt, ", "), msg);
 endfunction
 
 function w = check_word (fn, name, w, choices)
@@ -361,3 +389,5 @@ endfunction
 %!error <finite> ads3_background ("thermal", "line", "beta", Inf)
 %!error <circle only> ads3_background ("thermal", "line", "beta", 1, "saddle", "btz")
 %!error <name/value pairs> ads3_background ("vacuum", "line", "c")
+%!error <ads3_background: beta = 1e-308: .* overflows> ads3_background ("thermal", "circle", "beta", 1e-308)
+%!error <ads3_background: .*out of double precision> ads3_background ("thermal", "line", "beta", 1e-308)

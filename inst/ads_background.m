@@ -118,7 +118,9 @@ function bg = ads_background (d, kind, varargin)
                  "%s: f - 1 must vanish like z^%d at the boundary (sample %s, z = %g)",
                  fn, d, k{1}, z(str2double (k{1})));
         endif
-        rethrow (err);
+        ## name the public function instead of the gateway
+        error (err.identifier, "%s: %s", fn,
+               regexprep (err.message, '^(__holent_hd__: )+', ''));
       end_try_catch
       bg.z = z;  bg.f = f;  bg.z_max = z(end);  bg.zh = zh;  bg.m = m;
   endswitch
@@ -127,6 +129,16 @@ function bg = ads_background (d, kind, varargin)
     bg.horizon = true;
     bg.T = abs (fph) / (4 * pi);
     bg.entropy_density = ell^(d-1) / (4 * G * bg.zh^(d-1));
+  endif
+  if (! all (isfinite ([bg.m, bg.energy_density, bg.entropy_density, bg.T])))
+    txt = cellfun (@(f) sprintf ("%s = %g", f, o.(f)),
+                   intersect (fieldnames (o), {"ell", "G", "zh", "T"}),
+                   "uniformoutput", false);
+    error ("holent:domain",
+           "%s: %s: the energy or entropy density of this background is out of double precision range",
+           fn, strjoin ([{sprintf("D = %d", d)}, txt(:)'], ", "));
+  endif
+  if (bg.horizon)
     if (cutoff > 1e-2 * bg.zh)
       warning ("holent:cutoff", "%s: cutoff %g is not small against zh = %g", fn, cutoff, bg.zh);
     endif
@@ -182,3 +194,4 @@ endfunction
 %!error <vanish like z\^4> ads_background (4, "tabulated", "z", linspace (0, 1, 50), "f", 1 - linspace (0, 1, 50).^3)
 %!error <positive> ads_background (4, "black_brane", "zh", -1)
 %!error <NaN> ads_background (4, "tabulated", "z", [0 1 2 NaN 4], "f", ones (1, 5))
+%!error <zh = 1e-308: .*out of double precision> ads_background (4, "black_brane", "zh", 1e-308)

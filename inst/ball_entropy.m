@@ -41,6 +41,12 @@ function [S, info] = ball_entropy (bg, R)
     ## name the public function instead of the gateway
     error (err.identifier, "%s: %s", fn, regexprep (err.message, '^(__holent_hd__: )+', ''));
   end_try_catch
+  k = find (! (isfinite (S(:)) & isfinite (fin(:)) & isfinite (del(:))), 1);
+  if (! isempty (k))
+    error ("holent:domain",
+           "%s: R(%d) = %g gives an entropy out of double precision range (cutoff %g): the radius must keep it finite",
+           fn, k, R(k), bg.cutoff);
+  endif
   if (any (R(:) <= 2 * bg.cutoff))
     warning ("holent:cutoff", "%s: %d ball(s) not wider than twice the cutoff %g",
              fn, nnz (R(:) <= 2 * bg.cutoff), bg.cutoff);
@@ -147,3 +153,5 @@ endfunction
 %!error <NaN> ball_entropy (ads_background (4, "vacuum"), [1 NaN])
 %!error <numeric array> ball_entropy (ads_background (4, "vacuum"), "a")
 %!error <background struct> ball_entropy (struct ("a", 1), 1)
+%!error <R\(1\) = 1e\+308 gives an entropy out of double precision> ball_entropy (ads_background (4, "vacuum"), 1e308)
+%!error <BG.zh must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)

@@ -51,3 +51,4 @@ endfunction
 
 %!error <Invalid call> conditional_entropy (ads3_background ("vacuum", "line"), [0 1])
 %!error <overlap> conditional_entropy (ads3_background ("vacuum", "line"), [0 1], [0.5 2])
+%!error <B is an empty cell> conditional_entropy (ads3_background ("vacuum", "line"), [0 1], {})

@@ -107,10 +107,11 @@ function rep = entropy_inequalities (Svec, varargin)
   complete = N <= 5;
   if (isfield (o, "complete"))
     c = o.complete;
-    if (! ((islogical (c) || isnumeric (c)) && isscalar (c) && isreal (c) && ! isnan (c)))
+    if (! ((islogical (c) || isnumeric (c)) && isscalar (c) && isreal (c)
+           && (c == 0 || c == 1)))
       error ("holent:option", "%s: 'complete' must be true or false", fn);
     endif
-    complete = logical (c);
+    complete = logical (full (c));
   endif
 
   r.N = N;
@@ -522,3 +523,4 @@ endfunction
 %!error <names> entropy_inequalities ([1 1 1], "names", {"A", ""})
 %!error <true or false> entropy_inequalities ([1 1 1], "complete", "yes")
 %!error <exceeds> entropy_inequalities (ones (2^16 - 1, 1), "complete", true)
+%!error <'complete' must be true or false> entropy_inequalities ([1 1 1], "complete", 2)

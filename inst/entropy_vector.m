@@ -50,10 +50,11 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   purifier = false;
   if (isfield (o, "purifier"))
     p = o.purifier;
-    if (! ((islogical (p) || isnumeric (p)) && isscalar (p) && isreal (p) && ! isnan (p)))
+    if (! ((islogical (p) || isnumeric (p)) && isscalar (p) && isreal (p)
+           && (p == 0 || p == 1)))
       error ("holent:option", "%s: 'purifier' must be true or false", fn);
     endif
-    purifier = logical (p);
+    purifier = logical (full (p));
   endif
   N = numel (parties);
   Nmax = 16 - purifier;
@@ -72,11 +73,12 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   for j = 1:N
     a = parties{j};
     if (! isnumeric (a) || islogical (a) || ! isreal (a))
-      error ("holent:type", "%s: party %d must be a real n x 2 matrix of intervals", fn, j);
+      error ("holent:type", "%s: party %d must be a real n x 2 matrix of intervals (PARTIES{%d}), got %s",
+             fn, j, j, class (a));
     endif
     if (isempty (a) || ndims (a) != 2 || columns (a) != 2)
-      error ("holent:type", "%s: party %d must be a non-empty n x 2 matrix of intervals, got %s",
-             fn, j, sprintf ("%dx", size (a))(1:end-1));
+      error ("holent:type", "%s: party %d must be a non-empty n x 2 matrix of intervals (PARTIES{%d}), got %s",
+             fn, j, j, sprintf ("%dx", size (a))(1:end-1));
     endif
     parties{j} = full (double (a));
   endfor
@@ -89,7 +91,10 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
       try
         rt_entropy (bg, parties{j});
       catch e2
-        error (e2.identifier, "%s: party %d: %s", fn, j, e2.message);
+        ## rt_entropy's message, about its argument A: name the party
+        msg = regexprep (e2.message, '^rt_entropy: ', '');
+        msg = regexprep (msg, '(?<!\w)A(?!\w)', sprintf ("PARTIES{%d}", j));
+        error (e2.identifier, "%s: party %d: %s", fn, j, msg);
       end_try_catch
     endfor
     rethrow (err);
@@ -314,3 +319,5 @@ endfunction
 %!error <mixed state without a horizon> entropy_vector (ads3_background ("thermal", "circle", "beta", 9), {[0 1]}, "purifier", true)
 %!error <true or false> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purifier", "yes")
 %!error <unknown option> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purify", true)
+%!error <true or false> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purifier", 2)
+%!error <party 2: PARTIES\{2\}\(1,2\) must be a number> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [0 NaN]})

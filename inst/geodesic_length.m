@@ -56,6 +56,12 @@ function len = geodesic_length (bg, x1, x2, varargin)
     x1 = x1 + z;
     x2 = x2 + z;
   endif
+  k = find (isinf (x2(:) - x1(:)), 1);
+  if (! isempty (k))
+    error ("holent:domain",
+           "%s: X2(%d) - X1(%d) overflows double precision: the points must be closer",
+           fn, k, k);
+  endif
   if (strcmp (bg.boundary, "line"))
     k = find (x1(:) == x2(:), 1);
   else
@@ -67,7 +73,13 @@ function len = geodesic_length (bg, x1, x2, varargin)
            "%s: X1(%d) and X2(%d) coincide: no geodesic joins a point to itself",
            fn, k, k);
   endif
-  len = __holent_geodesic__ (bg, x1, x2, cls);
+  try
+    len = __holent_geodesic__ (bg, x1, x2, cls);
+  catch err
+    ## name the public function instead of the gateway
+    error (err.identifier, "%s: %s", fn,
+           regexprep (err.message, '^__holent_geodesic__: ', ''));
+  end_try_catch
 endfunction
 
 %!shared bgl, bgc
@@ -111,3 +123,5 @@ endfunction
 %!error <background struct> geodesic_length (struct (), 1, 2)
 %!error <'class' must be> geodesic_length (bgc, 1, 2, "class", "long")
 %!error <unknown option> geodesic_length (bgc, 1, 2, "klass", "shorter")
+%!error <geodesic_length: BG.bulk must be a short string> geodesic_length (setfield (bgl, "bulk", 7), 1, 2)
+%!error <geodesic_length: X2\(1\) - X1\(1\) overflows> geodesic_length (bgl, -1e308, 1e308)

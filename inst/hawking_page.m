@@ -83,6 +83,10 @@ function [T_hp, info] = hawking_page (varargin)
   T = [];
   if (has ("T"))
     T = __holent_array__ (fn, "T", o.T);
+    k = find (! (T(:) > 0), 1);
+    if (! isempty (k))
+      error ("holent:domain", "%s: T(%d) = %g must be positive", fn, k, T(k));
+    endif
   elseif (has ("beta"))
     beta = __holent_array__ (fn, "beta", o.beta);
     if (any (! (beta(:) > 0)))
@@ -177,3 +181,4 @@ endfunction
 %!error <compatible sizes> hawking_page ("Omega", [0 0.1], "circumference", [1 2 3])
 %!error <NaN> hawking_page ("Omega", NaN)
 %!error <unknown option> hawking_page ("M", 1)
+%!error <^hawking_page: T\(2\) = 0 must be positive> hawking_page ("T", [1 0])

@@ -50,7 +50,9 @@ function [S, branch] = interval_entropy (bg, l)
     endif
   catch err
     explain_bad_length (fn, bg, l);
-    rethrow (err);
+    ## name the public function instead of the gateway
+    error (err.identifier, "%s: %s", fn,
+           regexprep (err.message, '^__holent_interval__: ', ''));
   end_try_catch
   if (nshort > 0)
     warning ("holent:cutoff",
@@ -139,3 +141,4 @@ endfunction
 %!error <NaN> interval_entropy (ads3_background ("vacuum", "circle"), NaN)
 %!error <complex> interval_entropy (ads3_background ("vacuum", "circle"), 1+1i)
 %!error <background struct> interval_entropy (1, 1)
+%!error <BG.circumference must be Inf on a line> interval_entropy (setfield (ads3_background ("vacuum", "line"), "circumference", 3), 1)

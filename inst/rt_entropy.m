@@ -54,8 +54,8 @@
 ## how many candidates the minimum was taken over: Catalan(n) =
 ## binom(2n,n)/(n+1) pairings on a line and in global or thermal AdS;
 ## binom(2n,n) (each pairing with its n+1 faces) with a horizon or a
-## defect; 1 for the whole circle.  Exact below 2^53, rounded above, Inf
-## beyond realmax (from n = 515 with faces, n = 520 without);
+## defect (alpha < 1); 1 for the whole circle.  Exact below 2^53, rounded
+## above, Inf beyond realmax (from n = 515 with faces, n = 520 without);
 ## @code{log_candidates} is its natural logarithm, always finite.
 ## @item endpoints
 ## the 2n endpoints, ascending (in [0, L) on a circle).
@@ -210,3 +210,4 @@ endfunction
 %! bg = ads3_background ("vacuum", "line");
 %! assert (rt_entropy (bg, int8 ([0 2])), rt_entropy (bg, [0 2]));
 %! assert (rt_entropy (bg, {single([0 2])}), rt_entropy (bg, [0 2]));
+%!error <BG.boundary must be> rt_entropy (setfield (ads3_background ("vacuum", "line"), "boundary", 3), [0 1])

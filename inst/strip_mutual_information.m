@@ -79,8 +79,21 @@ endfunction
 
 function g = gain_ (bg, a, b, c, Lp)
   warning ("off", "holent:cutoff", "local");  # finite parts only
-  [~, i] = strip_entropy (bg, [a(:); c(:); b(:); a(:) + b(:) + c(:)], "length", Lp);
   n = numel (a);
+  try
+    [~, i] = strip_entropy (bg, [a(:); c(:); b(:); a(:) + b(:) + c(:)], "length", Lp);
+  catch err
+    ## name this function, and the argument behind strip_entropy's L(k)
+    msg = regexprep (err.message, '^strip_entropy: ', '');
+    k = regexp (msg, '^L\((\d+)\)', "tokens", "once");
+    if (! isempty (k))
+      k = str2double (k{1});
+      nm = {"L1", "L2", "S", "L1 + S + L2"}{ceil (k / n)};
+      msg = sprintf ("%s(%d)%s", nm, k - n * (ceil (k / n) - 1),
+                     regexprep (msg, '^L\(\d+\)', ''));
+    endif
+    error (err.identifier, "strip_mutual_information: %s", msg);
+  end_try_catch
   F = reshape (i.finite, n, 4);
   g = reshape (F(:,1) + F(:,2) - F(:,3) - F(:,4), size (a));
 endfunction
@@ -127,3 +140,4 @@ endfunction
 %!error <Invalid call> strip_mutual_information (ads_background (4, "vacuum"), 1, 1)
 %!error <common size> strip_mutual_information (ads_background (4, "vacuum"), [1 2], [1 2 3], 1)
 %!error <must be positive> strip_mutual_information (ads_background (4, "vacuum"), 1, 0, 1)
+%!error <strip_mutual_information: L2\(2\) = 1000 is beyond> strip_mutual_information (ads_background (4, "black_brane", "zh", 1), 0.5, 0.1, [0.5 1e3])

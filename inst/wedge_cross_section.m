@@ -374,3 +374,4 @@ endfunction
 %! plot ([A; B].', zeros (2), "k", "linewidth", 4);
 %! axis equal; xlabel ("x"); ylabel ("z");
 %! title (sprintf ("E_W = %.3f (c = 1)", E));
+%!error <BG.horizon must be true or false> wedge_cross_section (setfield (ads3_background ("vacuum", "line"), "horizon", "yes"), [0 1], [2 3])

@@ -2,7 +2,10 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {} __holent_check_hd__ (@var{fn}, @var{bg})
 ## Raise @code{holent:background} unless @var{bg} is a background struct
-## made by @code{ads_background}.
+## made by @code{ads_background}: a scalar struct with the fields the
+## wrappers and the gateway read, each of the right type and range
+## (checked by the compiled @code{__holent_bgcheck__}).  The message names
+## @var{fn} and the field.
 ## @end deftypefn
 function __holent_check_hd__ (fn, bg)
   req = {"dimension", "kind", "ell", "G", "cutoff", "zh", "z", "f", "horizon"};
@@ -10,4 +13,10 @@ function __holent_check_hd__ (fn, bg)
     error ("holent:background",
            "%s: BG must be a background struct made by ads_background", fn);
   endif
+  try
+    __holent_bgcheck__ (bg, "hd");
+  catch err
+    error (err.identifier, "%s: %s", fn,
+           regexprep (err.message, '^(__holent_bgcheck__: )+', ''));
+  end_try_catch
 endfunction

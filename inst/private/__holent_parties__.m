@@ -22,6 +22,10 @@ function [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args)
     a = args{i};
     iscl(i) = iscell (a);
     if (iscell (a))
+      if (isempty (a))
+        error ("holent:empty", "%s: %s is an empty cell array: give a region or a non-empty cell of regions",
+               fn, names{i});
+      endif
       P{i} = a;
     elseif (isnumeric (a) && ! islogical (a))
       P{i} = {a};

@@ -86,7 +86,8 @@ kind_of (const holent_geo_bg *bg)
     case HOLENT_BULK_ROTATING_BTZ:
       return KIND_HORIZON;
     case HOLENT_BULK_CONICAL_DEFECT:
-      return KIND_DEFECT;
+      /* alpha = 1 is global AdS: no defect, both arcs one geodesic */
+      return bg->alpha < 1.0 ? KIND_DEFECT : KIND_LINEAR;
     default:
       return KIND_LINEAR;
     }

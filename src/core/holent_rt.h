@@ -14,7 +14,8 @@
  *     candidate whose horizon face lies outside X.  A pairing of 2n points
  *     has n + 1 faces: binom(2n, n) candidates.
  *   circle with a conical defect:  a pairing and the face holding the
- *     defect, nothing added; binom(2n, n) candidates.
+ *     defect, nothing added; binom(2n, n) candidates (alpha = 1 is global
+ *     AdS: Catalan(n)).
  *   the whole circle:  S_BH (0 without a horizon); one candidate.
  *
  * Cost: O(N^3) time with N = 2n (about N^3/24 additions on a line and in
