@@ -19,6 +19,9 @@
 #define TABLE_STEP_TAB 0.1  /* tabulated f: look for narrow extrema too */
 #define ODE_T0 (-12.0)   /* log tan(phi) at the start next to the tip   */
 #define ODE_T1 16.0      /* log tan(phi) where the boundary is reached   */
+#define HUG_W 1e-2       /* tips within HUG_W zh of a horizon: shot in
+                            log(zh - z) along the horizon first        */
+#define BALL_WMIN_TAB 1e-100 /* closest tip to a tabulated horizon     */
 
 /* ------------------------------------------------------------------ */
 /* Backgrounds                                                          */
@@ -769,7 +772,7 @@ typedef struct
 } rpar;
 
 static int ball_shoot (const holent_hd_bg *bg, holent_hd_workspace *ws,
-                       double z0, double *R, double *J);
+                       double z0, double w0, double *R, double *J);
 
 static double
 size_at (double y, void *vp)
@@ -778,7 +781,7 @@ size_at (double y, void *vp)
   double zs, w, v = NAN, J;
   int st;
   root_point (p->bg, y, &zs, &w);
-  st = p->ball ? ball_shoot (p->bg, p->ws, zs, &v, &J)
+  st = p->ball ? ball_shoot (p->bg, p->ws, zs, w, &v, &J)
                : strip_width (p->bg, p->ws, zs, w, &v);
   if (st)
     {
@@ -855,7 +858,10 @@ build_table (const holent_hd_bg *bg, holent_hd_workspace *ws, int ball,
   double mx = -INFINITY;
   int full = bg->kind == HOLENT_HD_TABULATED;
   *mono = 1;
-  for (double y = ylo;; y += full ? TABLE_STEP_TAB : TABLE_STEP)
+  /* balls of a tabulated f: beyond y = 20 (w < 2e-9 Z) R grows linearly
+     in y, so the table steps by 1 there */
+  for (double y = ylo;; y += !full ? TABLE_STEP
+                             : (ball && y > 20) ? 1.0 : TABLE_STEP_TAB)
     {
       if (y > yhi)
         y = yhi;
@@ -1130,21 +1136,14 @@ ball_rhs (double t, const double y[], double dydt[], void *p)
   return GSL_SUCCESS;
 }
 
-/* Shoot from the tip at depth z0 (series start: psi = (1 - sqrt f0) phi,
-   rho = z0 (1 + (1 - f0) phi^2/2)) to the boundary: radius R and J.  */
+/* The polar integration from t (state y = rho, psi/sc, J/sc) to the
+   boundary: radius R and J.  */
 static int
-ball_shoot (const holent_hd_bg *bg, holent_hd_workspace *ws, double z0,
-            double *R, double *J)
+ball_polar (const holent_hd_bg *bg, holent_hd_workspace *ws, double t,
+            double y[3], double sc, double *R, double *J)
 {
-  double f0, y[3], t = ODE_T0, h = 1e-2;
-  if (holent_hd_f (bg, z0, &f0, NULL) || !(f0 > 0))
-    return HOLENT_EDOM;
-  double ph = atan (exp (ODE_T0));
-  double o0 = omf (bg, z0);  /* 1 - f0 with all its digits */
-  bpar bp = { bg, fabs (o0) > 1e-300 ? fabs (o0) : 1 };
-  y[0] = z0 * (1 + 0.5 * o0 * ph * ph);
-  y[1] = o0 / (1 + sqrt (f0)) * ph / bp.sc;
-  y[2] = 0;
+  double h = 1e-2;
+  bpar bp = { bg, sc };
   gsl_odeiv2_system sys = { ball_rhs, NULL, 3, &bp };
   gsl_odeiv2_step_reset (ws->step);
   gsl_odeiv2_evolve_reset (ws->evol);
@@ -1158,8 +1157,91 @@ ball_shoot (const holent_hd_bg *bg, holent_hd_workspace *ws, double z0,
         return HOLENT_ENOCONV;
     }
   *R = y[0];
-  *J = y[2] * bp.sc;
+  *J = y[2] * sc;
   return HOLENT_SUCCESS;
+}
+
+/* Along the horizon: state (lambda = log(u/u0), chi = -sin(theta)/sqrt(u),
+   J) against r, u = zh - z.  f/u is evaluated from u itself, and chi stays
+   O(1) where the profile linearises (u grows like exp(2 k r)), so tips
+   exponentially close to the horizon keep every digit.  */
+typedef struct
+{
+  const holent_hd_bg *bg;
+  double u0;
+} hpar;
+
+static int
+hug_rhs (double r, const double y[], double dydt[], void *p)
+{
+  const hpar *hp = p;
+  const holent_hd_bg *bg = hp->bg;
+  int d = bg->d;
+  double u = hp->u0 * exp (y[0]), z = bg->zh - u, chi = y[1];
+  if (!(u > 0) || !(z > 0) || !(r > 0))
+    return GSL_EBADFUNC;
+  double fu = fval (bg, z, u) / u, c2 = 1 - chi * chi * u;
+  if (!(fu > 0) || !(c2 > 0))
+    return GSL_EBADFUNC;
+  double q = sqrt (fu), ct = sqrt (c2), rho = hypot (r, z);
+  double W = gsl_pow_int (r, d - 2) * gsl_pow_int (z, 1 - d);
+  dydt[0] = chi * q / ct;
+  dydt[1] = -(d - 2) * chi / r + (d - 1) * ct * q / z - 0.5 * chi * chi * q / ct;
+  /* area element minus the hemisphere's sin^(d-2) cos^(1-d) dphi */
+  dydt[2] = W * (1 - (z * ct + r * chi * u * q) / rho) / ct;
+  return GSL_SUCCESS;
+}
+
+static int
+ball_hug (const holent_hd_bg *bg, holent_hd_workspace *ws, double z0,
+          double w0, double *R, double *J)
+{
+  double zh = bg->zh, r = 1e-6 * zh, h = 1e-6 * zh, rend = 1e6 * zh;
+  double fu0 = fval (bg, z0, w0) / w0;
+  if (!(fu0 > 0))
+    return HOLENT_EDOM;
+  hpar hp = { bg, w0 };
+  /* series at the tip: theta = -sqrt(f0) r/z0, u = u0 + f0 r^2/(2 z0) */
+  double y[3] = { 0.5 * fu0 * r * r / z0, sqrt (fu0) * r / z0, 0 };
+  gsl_odeiv2_system sys = { hug_rhs, NULL, 3, &hp };
+  gsl_odeiv2_step_reset (ws->step);
+  gsl_odeiv2_evolve_reset (ws->evol);
+  for (int k = 0; w0 * exp (y[0]) < HUG_W * zh; k++)
+    {
+      if (k > 100000 || !(r < rend))
+        return HOLENT_ENOCONV;
+      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
+                                        &r, rend, &h, y);
+      if (st)
+        return HOLENT_ENOCONV;
+    }
+  /* hand over to the polar variables (u >= HUG_W zh: z has its digits) */
+  double u = w0 * exp (y[0]), z = zh - u;
+  double th = -asin (y[1] * sqrt (u)), p[3];
+  p[0] = hypot (r, z);
+  p[1] = th + atan2 (r, z);
+  p[2] = y[2];
+  return ball_polar (bg, ws, log (r / z), p, 1.0, R, J);
+}
+
+/* Shoot from the tip at depth z0 = Z - w0 (series start: psi = (1 - sqrt f0) phi,
+   rho = z0 (1 + (1 - f0) phi^2/2)) to the boundary: radius R and J.  */
+static int
+ball_shoot (const holent_hd_bg *bg, holent_hd_workspace *ws, double z0,
+            double w0, double *R, double *J)
+{
+  double f0, y[3];
+  if (isfinite (bg->zh) && w0 > 0 && w0 < HUG_W * bg->zh)
+    return ball_hug (bg, ws, z0, w0, R, J);  /* z0 may round to zh */
+  if (holent_hd_f (bg, z0, &f0, NULL) || !(f0 > 0))
+    return HOLENT_EDOM;
+  double ph = atan (exp (ODE_T0));
+  double o0 = omf (bg, z0);  /* 1 - f0 with all its digits */
+  double sc = fabs (o0) > 1e-300 ? fabs (o0) : 1;
+  y[0] = z0 * (1 + 0.5 * o0 * ph * ph);
+  y[1] = o0 / (1 + sqrt (f0)) * ph / sc;
+  y[2] = 0;
+  return ball_polar (bg, ws, ODE_T0, y, sc, R, J);
 }
 
 static int
@@ -1170,7 +1252,7 @@ ball_eval (const holent_hd_bg *bg, holent_hd_workspace *ws, double y,
   root_point (bg, y, &zs, &w);
   *zt = zs;
   *cut = 0;
-  int st = ball_shoot (bg, ws, zs, &R, fin);
+  int st = ball_shoot (bg, ws, zs, w, &R, fin);
   ws->extra = *fin;
   return st;
 }
@@ -1194,9 +1276,10 @@ holent_hd_ball (const holent_hd_bg *bg, holent_hd_workspace *ws, size_t n,
   double cd = holent_hd_ball_vacuum_c (d);
   if (bg->kind != HOLENT_HD_VACUUM)
     {
-      /* f = 1 - x^d loses digits next to the horizon: stop at 1e-7.  */
-      double wmin = isfinite (bg->zh) ? fmax (bg->wmin, 1e-7 * bg->Z)
-                                      : bg->wmin;
+      /* tips next to a horizon are shot in log(zh - z): the brane goes
+         to its 1e-250 zh, a tabulated horizon to 1e-100 zh */
+      double wmin = bg->kind == HOLENT_HD_TABULATED && isfinite (bg->zh)
+                        ? BALL_WMIN_TAB * bg->Z : bg->wmin;
       st = build_table (bg, ws, 1, rmin, rmax, 1.0, wmin, &nt, &rch, &mono);
       if (st)
         return st;

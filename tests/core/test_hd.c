@@ -33,6 +33,23 @@ a_int (double u, void *p)
   return w_int (u, p) / gsl_pow_int (u, 2 * q->d - 2);
 }
 
+/* the wall of a wide strip or ball of the brane (zh = 1):
+   u^(1-d) (sqrt((1 - u^(2d-2))/f(u)) - 1), f = 1 - u^d: the ratio
+   a/b = (1 - u^(2d-2))/(1 - u^d) as geometric sums (no 0/0 at u = 1) and
+   a - b = u^d (1 + ... + u^(d-3)) (no cancellation at u = 0) */
+static double
+wall_int (double u, void *p)
+{
+  int d = *(int *) p;
+  double c = 0, b = 0;  /* c = u^(1-d) (a - b) = u + ... + u^(d-2) */
+  for (int k = 0; k < d; k++)
+    b += gsl_pow_int (u, k);
+  for (int j = 1; j <= d - 2; j++)
+    c += gsl_pow_int (u, j);
+  double q = sqrt (1 + gsl_pow_int (u, d - 1) * c / b);
+  return c / (b * (q + 1));
+}
+
 static double
 hemi_int (double y, void *p)
 {
@@ -342,6 +359,36 @@ test_ball (void)
   HT_CHECK (reach > 1.2, "reach %g", reach);
   double big = 10 * reach;
   HT_STATUS (holent_hd_ball (&bg, w, 1, &big, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EDOM);
+
+  /* wide balls of the brane (tips exponentially close to the horizon):
+     delta = s Omega R^(d-1)/(d-1) + sigma Omega R^(d-2) + O(R^(d-3)), sigma
+     the strip's wall term (doc/higher_dimensional.md), by GSL QAGS; the
+     O(1/R) and O(1/R^2) terms removed by Richardson at R = 20, 30, 40 */
+  for (int d = 3; d <= 6; d++)
+    {
+      holent_hd_bg bb;
+      HT_STATUS (holent_hd_bg_init (&bb, d, HOLENT_HD_BRANE, 1, 1, 0.25, 1e-3), HOLENT_SUCCESS);
+      double Rb[3] = { 20, 30, 40 }, Sb[3], db[3], zb[3], y[3], rb;
+      HT_STATUS (holent_hd_ball (&bb, w, 3, Rb, Sb, NULL, db, zb, &bad, &rb), HOLENT_SUCCESS);
+      HT_CHECK (rb > 75, "d = %d: reach %g", d, rb);
+      HT_CHECK (zb[0] <= 1 && 1 - zb[0] < 1e-20, "tip next to the horizon");
+      gsl_integration_workspace *iw = gsl_integration_workspace_alloc (500);
+      gsl_function F = { wall_int, &d };
+      double sig, e;
+      HT_STATUS (gsl_integration_qags (&F, 0, 1, 0, 1e-12, 500, iw, &sig, &e), 0);
+      sig -= 1.0 / (d - 2);
+      gsl_integration_workspace_free (iw);
+      double om = 2 * pow (M_PI, 0.5 * (d - 1)) / gsl_sf_gamma (0.5 * (d - 1));
+      for (int i = 0; i < 3; i++)
+        y[i] = (db[i] - om * pow (Rb[i], d - 1) / (d - 1)) / (om * pow (Rb[i], d - 2));
+      /* quadratic in 1/R through the three points, at 1/R = 0 */
+      double x0 = 1 / Rb[0], x1 = 1 / Rb[1], x2 = 1 / Rb[2];
+      double est = y[0] * x1 * x2 / ((x0 - x1) * (x0 - x2))
+                   + y[1] * x0 * x2 / ((x1 - x0) * (x1 - x2))
+                   + y[2] * x0 * x1 / ((x2 - x0) * (x2 - x1));
+      HT_CHECK (fabs (est - sig) < 2e-3 * fabs (sig) + 2e-4, "d = %d: wall %.8g, Richardson %.8g", d, sig, est);
+      HT_CHECK (fabs (y[2] - sig) < 0.03, "d = %d: wall %.8g at R = 40: %.8g", d, sig, y[2]);
+    }
 
   /* vacuum hemisphere at the cutoff against GSL quadrature, for eps/R
      below and above 1/2, and zero beyond R */
