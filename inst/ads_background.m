@@ -118,9 +118,7 @@ function bg = ads_background (d, kind, varargin)
                  "%s: f - 1 must vanish like z^%d at the boundary (sample %s, z = %g)",
                  fn, d, k{1}, z(str2double (k{1})));
         endif
-        ## name the public function instead of the gateway
-        error (err.identifier, "%s: %s", fn,
-               regexprep (err.message, '^(__holent_hd__: )+', ''));
+        __holent_rethrow__ (err, "__holent_hd__", fn);
       end_try_catch
       bg.z = z;  bg.f = f;  bg.z_max = z(end);  bg.zh = zh;  bg.m = m;
   endswitch

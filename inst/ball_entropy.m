@@ -43,8 +43,7 @@ function [S, info] = ball_entropy (bg, R)
   try
     [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, R);
   catch err
-    ## name the public function instead of the gateway
-    error (err.identifier, "%s: %s", fn, regexprep (err.message, '^(__holent_hd__: )+', ''));
+    __holent_rethrow__ (err, "__holent_hd__", fn);
   end_try_catch
   k = find (! (isfinite (S(:)) & isfinite (fin(:)) & isfinite (del(:))), 1);
   if (! isempty (k))

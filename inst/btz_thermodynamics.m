@@ -99,8 +99,8 @@ function th = btz_thermodynamics (varargin)
 
   [c, G, ell] = __holent_central_charge__ (fn, o);
   if (k == 4)
-    a = beta_array (fn, na, o.(na));
-    b = beta_array (fn, nb, o.(nb));
+    a = __holent_array__ (fn, na, o.(na), "allow_inf");
+    b = __holent_array__ (fn, nb, o.(nb), "allow_inf");
   else
     a = __holent_array__ (fn, na, o.(na));
     b = __holent_array__ (fn, nb, o.(nb));
@@ -170,22 +170,6 @@ function x = expand (x, sz)
     x = x + zeros (sz);
   endif
 endfunction
-
-## Inverse temperatures: real, no NaN; Inf allowed (a zero-temperature sector).
-function x = beta_array (fn, name, x)
-  if (! isnumeric (x) || islogical (x))
-    error ("holent:type", "%s: %s must be a numeric array, got %s", fn, name, class (x));
-  endif
-  if (! isreal (x))
-    error ("holent:type", "%s: %s must be real, not complex", fn, name);
-  endif
-  x = double (full (x));
-  if (any (isnan (x(:))))
-    error ("holent:nan", "%s: %s must not contain NaN (element %d)", fn, name,
-           find (isnan (x(:)), 1));
-  endif
-endfunction
-
 
 %!test
 %! ## Banados, Teitelboim and Zanelli 1992 (PRL 69, 1849), ell = 1:

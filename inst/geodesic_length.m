@@ -76,9 +76,7 @@ function len = geodesic_length (bg, x1, x2, varargin)
   try
     len = __holent_geodesic__ (bg, x1, x2, cls);
   catch err
-    ## name the public function instead of the gateway
-    error (err.identifier, "%s: %s", fn,
-           regexprep (err.message, '^__holent_geodesic__: ', ''));
+    __holent_rethrow__ (err, "__holent_geodesic__", fn);
   end_try_catch
 endfunction
 

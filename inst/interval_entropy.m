@@ -50,9 +50,7 @@ function [S, branch] = interval_entropy (bg, l)
     endif
   catch err
     explain_bad_length (fn, bg, l);
-    ## name the public function instead of the gateway
-    error (err.identifier, "%s: %s", fn,
-           regexprep (err.message, '^__holent_interval__: ', ''));
+    __holent_rethrow__ (err, "__holent_interval__", fn);
   end_try_catch
   if (nshort > 0)
     warning ("holent:cutoff",

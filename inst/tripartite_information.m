@@ -27,22 +27,9 @@ function I3 = tripartite_information (bg, A, B, C)
   if (nargin != 4)
     print_usage ();
   endif
-  __holent_check_bg__ (fn, bg);
-  [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, {"A", "B", "C"}, {A, B, C});
-  cat2 = @(x, y) cellfun (@(a, b) [a; b], x, y, "uniformoutput", false);
-  AB = cat2 (P{1}, P{2});
-  AC = cat2 (P{1}, P{3});
-  BC = cat2 (P{2}, P{3});
-  ABC = cat2 (AB, P{3});
-  [S, ns] = __holent_call__ ("__holent_rt__", "entropy", fn, "a union of the parties", bg,
-                                   [AB(:); AC(:); BC(:); ABC(:)]);
-  n = prod (sz);
-  S = reshape (S, n, 4);
-  I3 = Sp{1} + Sp{2} + Sp{3} + reshape (- S(:,1) - S(:,2) - S(:,3) + S(:,4), sz);
-  if (nshort + ns > 0)
-    warning ("holent:cutoff", "%s: some interval or gap is not longer than twice the cutoff %g",
-             fn, bg.cutoff);
-  endif
+  [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B", "C"}, {A, B, C},
+                                {[1 2], [1 3], [2 3], [1 2 3]});
+  I3 = Sp{1} + Sp{2} + Sp{3} - Su{1} - Su{2} - Su{3} + Su{4};
 endfunction
 
 %!test

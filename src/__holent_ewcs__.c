@@ -20,7 +20,7 @@ pairs_arg (const mxArray *a, const char *name, size_t *k)
   size_t n;
   const double *p = holent_gw_real (a, FN, name, &n);
   if (mxGetNumberOfDimensions (a) != 2 || mxGetN (a) != 2)
-    mexErrMsgIdAndTxt ("holent:size", "%s: %s must be a k x 2 matrix", FN,
+    mexErrMsgIdAndTxt ("holent:size", "%s must be a k x 2 matrix",
                        name);
   *k = mxGetM (a);
   return p;
@@ -37,8 +37,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   const double *A = pairs_arg (prhs[1], "A", &k);
   const double *B = pairs_arg (prhs[2], "B", &kb);
   if (k != kb)
-    mexErrMsgIdAndTxt ("holent:size", "%s: A and B must have as many rows",
-                       FN);
+    mexErrMsgIdAndTxt ("holent:size", "A and B must have as many rows");
   static const size_t cols[8] = { 1, 1, 1, 1, 6, 4, 1, 1 };
   /* Octave's plhs holds max(nlhs, 1) slots: build all eight outputs
      here and hand over only those asked for.  */

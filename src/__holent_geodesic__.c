@@ -17,10 +17,10 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   const double *x1 = holent_gw_real (prhs[1], FN, "X1", &n1);
   const double *x2 = holent_gw_real (prhs[2], FN, "X2", &n2);
   if (n1 != n2)
-    mexErrMsgIdAndTxt ("holent:size", "%s: X1 and X2 must have one size", FN);
+    mexErrMsgIdAndTxt ("holent:size", "X1 and X2 must have one size");
   double cls = holent_gw_scalar (prhs[3], FN, "CLASS");
   if (cls != 0.0 && cls != 1.0 && cls != 2.0)
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: CLASS must be 0, 1 or 2", FN);
+    mexErrMsgIdAndTxt ("holent:invalid", "CLASS must be 0, 1 or 2");
   plhs[0] = holent_gw_like (prhs[1]);
   int st = holent_geo_point_lengths (&bg, n1, x1, x2, (holent_geo_class) cls,
                                      mxGetPr (plhs[0]), &bad);

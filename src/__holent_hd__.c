@@ -19,8 +19,8 @@ fail (int st, holent_hd_bg *bg, holent_hd_workspace *w, const char *what,
   if (st == HOLENT_EDOM && bad != (size_t) -1 && isfinite (x[bad])
       && x[bad] > 0)
     mexErrMsgIdAndTxt ("holent:reach",
-                       "%s: %s(%zu) = %g is beyond the largest %s reachable "
-                       "in this background (%g)", FN, name, bad + 1, x[bad],
+                       "%s(%zu) = %g is beyond the largest %s reachable "
+                       "in this background (%g)", name, bad + 1, x[bad],
                        what, reach);
   holent_gw_fail (st, FN, name, bad);
 }
@@ -34,7 +34,7 @@ tabulated (int nlhs, mxArray *plhs[], const mxArray *prhs[])
   const double *z = holent_gw_real (prhs[2], FN, "Z", &nz);
   const double *f = holent_gw_real (prhs[3], FN, "F", &nf);
   if (dd != floor (dd) || nz != nf)
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: bad D, Z or F", FN);
+    mexErrMsgIdAndTxt ("holent:invalid", "bad D, Z or F");
   int st = holent_hd_bg_tabulated (&bg, (int) dd, nz, z, f, 1, 1, 1, &bad);
   if (st)
     holent_gw_fail (st, FN, "F", bad);
@@ -62,15 +62,14 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   if (strcmp (op, "tabulated") == 0)
     {
       if (nrhs != 4)
-        mexErrMsgIdAndTxt ("holent:nargs", "%s: tabulated needs D, Z, F", FN);
+        mexErrMsgIdAndTxt ("holent:nargs", "tabulated needs D, Z, F");
       tabulated (nlhs, plhs, prhs);
       return;
     }
   if (!strip && strcmp (op, "ball") != 0)
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: unknown OP '%s'", FN, op);
+    mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);
   if (nrhs != (strip ? 4 : 3))
-    mexErrMsgIdAndTxt ("holent:nargs", "%s: wrong number of inputs for %s",
-                       FN, op);
+    mexErrMsgIdAndTxt ("holent:nargs", "wrong number of inputs for %s", op);
   const double *x = holent_gw_real (prhs[2], FN, strip ? "L" : "R", &n);
   if (strip)
     Lperp = holent_gw_scalar (prhs[3], FN, "LPERP");

@@ -30,25 +30,23 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     if (strcmp (fam, names[f]) == 0)
       break;
   if (f == sizeof names / sizeof names[0])
-    mexErrMsgIdAndTxt ("holent:option", "%s: unknown FAMILY '%s'", FN, fam);
+    mexErrMsgIdAndTxt ("holent:option", "unknown FAMILY '%s'", fam);
   m = holent_gw_scalar (prhs[2], FN, "M");
   complete = holent_gw_scalar (prhs[3], FN, "COMPLETE");
   tol = holent_gw_scalar (prhs[4], FN, "TOL");
   if (!(m >= 0 && m <= HOLENT_INEQ_NMAX && m == floor (m)))
-    mexErrMsgIdAndTxt ("holent:domain", "%s: M must be an integer in [0, %d]",
-                       FN, HOLENT_INEQ_NMAX);
+    mexErrMsgIdAndTxt ("holent:domain", "M must be an integer in [0, %d]", HOLENT_INEQ_NMAX);
   if ((st = holent_ineq_nparties (len, &n)))
     mexErrMsgIdAndTxt (st == HOLENT_ETOOBIG ? "holent:toobig" : "holent:domain",
                        "%s: S must have 2^N - 1 entries with 1 <= N <= %d, "
                        "got %zu", FN, HOLENT_INEQ_NMAX, len);
   if (!(tol >= 0) || isinf (tol))
     mexErrMsgIdAndTxt ("holent:domain",
-                       "%s: TOL must be finite and nonnegative", FN);
+                       "TOL must be finite and nonnegative");
   if (f == HOLENT_INEQ_CYCLIC
       && (m < 3 || fmod (m, 2) == 0 || m > n))
     mexErrMsgIdAndTxt ("holent:domain",
-                       "%s: M must be odd with 3 <= M <= N = %u, got %g",
-                       FN, n, m);
+                       "M must be odd with 3 <= M <= N = %u, got %g", n, m);
   st = holent_ineq_eval (n, s, (holent_ineq_family) f, (unsigned) m,
                          complete != 0, tol, &res);
   if (st == HOLENT_EINVAL)
@@ -59,8 +57,8 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   if (st == HOLENT_ETOOBIG)
     mexErrMsgIdAndTxt ("holent:toobig",
-                       "%s: complete enumeration of %s for N = %u exceeds "
-                       "%.0f cases", FN, fam, n, HOLENT_INEQ_BUDGET);
+                       "complete enumeration of %s for N = %u exceeds "
+                       "%.0f cases", fam, n, HOLENT_INEQ_BUDGET);
   if (st)
     holent_gw_fail (st, FN, "S", (size_t) -1);
   plhs[0] = mxCreateDoubleScalar (res.count);

@@ -399,10 +399,10 @@ do_check (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     mexErrMsgIdAndTxt (g.id, "%s", g.msg);
   size_t n = mxGetM (a);
   if (n > HOLENT_REGION_NMAX)
-    mexErrMsgIdAndTxt ("holent:toobig", "%s: A has too many rows", GW);
+    mexErrMsgIdAndTxt ("holent:toobig", "A has too many rows");
   g.reg = holent_region_alloc (n);
   if (g.reg == NULL)
-    mexErrMsgIdAndTxt ("holent:nomem", "%s: out of memory", GW);
+    mexErrMsgIdAndTxt ("holent:nomem", "out of memory");
   const double *p = mxGetPr (a);
   int st = holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
   double r1 = g.reg->bad[0] == (size_t) -1 ? 0.0 : (double) g.reg->bad[0] + 1;
@@ -421,12 +421,12 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   char mode[16];
   holent_gw_init ();
   if (nrhs < 1)
-    mexErrMsgIdAndTxt ("holent:nargs", "%s: MODE missing", GW);
+    mexErrMsgIdAndTxt ("holent:nargs", "MODE missing");
   holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
   if (strcmp (mode, "entropy") == 0)
     do_entropy (nlhs, plhs, nrhs, prhs);
   else if (strcmp (mode, "check") == 0)
     do_check (nlhs, plhs, nrhs, prhs);
   else
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: unknown MODE '%s'", GW, mode);
+    mexErrMsgIdAndTxt ("holent:invalid", "unknown MODE '%s'", mode);
 }

@@ -141,7 +141,7 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     if (strcmp (pname, pairs[k].name) == 0)
       break;
   if (k == np)
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: unknown PAIR '%s'", FN, pname);
+    mexErrMsgIdAndTxt ("holent:invalid", "unknown PAIR '%s'", pname);
   const double *a = holent_gw_real (prhs[2], FN, pairs[k].a, &na);
   const double *b = holent_gw_real (prhs[3], FN, pairs[k].b, &nb);
   const double *L = holent_gw_real (prhs[4], FN, "circumference", &nL);
@@ -152,8 +152,8 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   if (na == 0 || nb == 0 || nL == 0)
     n = 0;
   if ((na != n && na != 1) || (nb != n && nb != 1) || (nL != n && nL != 1))
-    mexErrMsgIdAndTxt ("holent:size", "%s: %s, %s and circumference must "
-                       "have one size or be scalars", FN, pairs[k].a,
+    mexErrMsgIdAndTxt ("holent:size", "%s, %s and circumference must "
+                       "have one size or be scalars", pairs[k].a,
                        pairs[k].b);
   const mxArray *shape = na == n ? prhs[2] : nb == n ? prhs[3] : prhs[4];
   size_t step[3] = { na == n ? 1 : 0, nb == n ? 1 : 0, nL == n ? 1 : 0 };
@@ -210,8 +210,8 @@ do_hawking_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   const double *Om = holent_gw_real (prhs[1], FN, "Omega", &nO);
   const double *L = holent_gw_real (prhs[2], FN, "circumference", &nL);
   if (nO != nL)
-    mexErrMsgIdAndTxt ("holent:size", "%s: Omega and circumference must "
-                       "have one size", FN);
+    mexErrMsgIdAndTxt ("holent:size", "Omega and circumference must "
+                       "have one size");
   plhs[0] = holent_gw_like (prhs[1]);
   int st = holent_thermo_hawking_page (nO, Om, L, mxGetPr (plhs[0]), &bad,
                                        &why);
@@ -243,12 +243,12 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   char mode[16];
   holent_gw_init ();
   if (nrhs < 1)
-    mexErrMsgIdAndTxt ("holent:nargs", "%s: expected a MODE", FN);
+    mexErrMsgIdAndTxt ("holent:nargs", "expected a MODE");
   holent_gw_string (prhs[0], FN, "MODE", mode, sizeof mode);
   if (strcmp (mode, "state") == 0)
     do_state (nlhs, plhs, nrhs, prhs);
   else if (strcmp (mode, "hawking_page") == 0)
     do_hawking_page (nlhs, plhs, nrhs, prhs);
   else
-    mexErrMsgIdAndTxt ("holent:invalid", "%s: unknown MODE '%s'", FN, mode);
+    mexErrMsgIdAndTxt ("holent:invalid", "unknown MODE '%s'", mode);
 }

@@ -1,11 +1,14 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
 ## -*- texinfo -*-
-## @deftypefn {} {@var{x} =} __holent_array__ (@var{fn}, @var{name}, @var{x})
+## @deftypefn  {} {@var{x} =} __holent_array__ (@var{fn}, @var{name}, @var{x})
+## @deftypefnx {} {@var{x} =} __holent_array__ (@var{fn}, @var{name}, @var{x}, "allow_inf")
 ## Check that @var{x} is a real, full, non-logical numeric array with no NaN
-## or Inf, and return it as double.  Empty arrays pass.
+## or Inf, and return it as double.  Empty arrays pass.  With
+## @qcode{"allow_inf"}, +-Inf passes (the inverse temperature of a
+## zero-temperature sector, say).
 ## Errors: @code{holent:type}, @code{holent:nan}, @code{holent:domain}.
 ## @end deftypefn
-function x = __holent_array__ (fn, name, x)
+function x = __holent_array__ (fn, name, x, allow)
   if (! isnumeric (x) || islogical (x))
     error ("holent:type", "%s: %s must be a numeric array, got %s", fn, name, class (x));
   endif
@@ -20,7 +23,7 @@ function x = __holent_array__ (fn, name, x)
     error ("holent:nan", "%s: %s must not contain NaN (element %d)", fn, name,
            find (isnan (x(:)), 1));
   endif
-  if (any (isinf (x(:))))
+  if (nargin < 4 && any (isinf (x(:))))
     error ("holent:domain", "%s: %s must be finite (element %d is Inf)", fn, name,
            find (isinf (x(:)), 1));
   endif

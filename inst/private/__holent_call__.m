@@ -2,15 +2,13 @@
 ## -*- texinfo -*-
 ## @deftypefn {} {[@dots{}] =} __holent_call__ (@var{gateway}, @dots{})
 ## Call the compiled gateway named @var{gateway} with the remaining
-## arguments.  Octave puts the gateway's name in front of the messages of
-## the errors it raises; this takes it off, so that messages start with the
-## public function's name, and keeps the identifier.
+## arguments; an error it raises is re-raised by @code{__holent_rethrow__}
+## without the gateway's name, identifier kept.
 ## @end deftypefn
 function varargout = __holent_call__ (gateway, varargin)
   try
     [varargout{1:max (nargout, 1)}] = feval (gateway, varargin{:});
   catch err
-    msg = regexprep (err.message, ['^' gateway ': '], '');
-    error (err.identifier, "%s", msg);
+    __holent_rethrow__ (err, gateway);
   end_try_catch
 endfunction

@@ -17,7 +17,6 @@ function __holent_check_bg__ (fn, bg)
   try
     __holent_bgcheck__ (bg);
   catch err
-    error (err.identifier, "%s: %s", fn,
-           regexprep (err.message, '^(__holent_bgcheck__: )+', ''));
+    __holent_rethrow__ (err, "__holent_bgcheck__", fn);
   end_try_catch
 endfunction
