@@ -11,11 +11,13 @@
 static const char FN[] = "__holent_hd__";
 
 static void
-fail (int st, holent_hd_bg *bg, holent_hd_workspace *w, const char *what,
-      const char *name, const double *x, size_t bad, double reach)
+fail (int st, holent_hd_bg *bg, holent_strip_workspace *sw,
+      holent_ball_workspace *bw, const char *what, const char *name,
+      const double *x, size_t bad, double reach)
 {
   holent_hd_bg_free (bg);
-  holent_hd_workspace_free (w);
+  holent_strip_workspace_free (sw);
+  holent_ball_workspace_free (bw);
   if (st == HOLENT_EDOM && bad != (size_t) -1 && isfinite (x[bad])
       && x[bad] > 0)
     mexErrMsgIdAndTxt ("holent:reach",
@@ -75,20 +77,21 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     Lperp = holent_gw_scalar (prhs[3], FN, "LPERP");
   /* all Octave-side checks done: from here free before raising */
   holent_gw_hd_bg (prhs[1], FN, &bg);
-  holent_hd_workspace *w = holent_hd_workspace_alloc ();
-  if (w == NULL)
-    fail (HOLENT_ENOMEM, &bg, w, "", "workspace", x, bad, reach);
+  holent_strip_workspace *sw = strip ? holent_strip_workspace_alloc () : NULL;
+  holent_ball_workspace *bw = strip ? NULL : holent_ball_workspace_alloc ();
+  if (sw == NULL && bw == NULL)
+    fail (HOLENT_ENOMEM, &bg, sw, bw, "", "workspace", x, bad, reach);
   mxArray *out[5];
   for (int k = 0; k < 4; k++)
     out[k] = holent_gw_like (prhs[2]);
   double *S = mxGetPr (out[0]), *fin = mxGetPr (out[1]);
   double *del = mxGetPr (out[2]), *zs = mxGetPr (out[3]);
-  int st = strip ? holent_hd_strip (&bg, w, Lperp, n, x, S, fin, del, zs,
-                                    &bad, &reach)
-                 : holent_hd_ball (&bg, w, n, x, S, fin, del, zs, &bad,
-                                   &reach);
+  int st = strip ? holent_strip_entropy (&bg, sw, Lperp, n, x, S, fin, del,
+                                         zs, &bad, &reach)
+                 : holent_ball_entropy (&bg, bw, n, x, S, fin, del, zs, &bad,
+                                        &reach);
   if (st)
-    fail (st, &bg, w, strip ? "width" : "radius", strip ? "L" : "R", x, bad,
+    fail (st, &bg, sw, bw, strip ? "width" : "radius", strip ? "L" : "R", x, bad,
           reach);
   out[4] = mxCreateDoubleScalar (reach);
   for (int k = 0; k < 5; k++)
@@ -97,5 +100,6 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     else
       mxDestroyArray (out[k]);
   holent_hd_bg_free (&bg);
-  holent_hd_workspace_free (w);
+  holent_strip_workspace_free (sw);
+  holent_ball_workspace_free (bw);
 }

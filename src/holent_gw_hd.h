@@ -4,7 +4,9 @@
 #define HOLENT_GW_HD_H
 
 #include "mex.h"
-#include "core/holent_hd.h"
+#include "core/holent_hd_bg.h"
+#include "core/holent_strip.h"
+#include "core/holent_ball.h"
 
 /* Fill bg from a struct made by ads_background; raises holent:background
    on a malformed struct.  A tabulated background owns a spline: release

@@ -1,0 +1,33 @@
+/* holent_strip.h: Ryu-Takayanagi surfaces of strips in planar
+ * AdS_{d+1} backgrounds (holent_hd_bg.h): turning point by inversion of
+ * the width (holent_hd_size.h), area by quadrature with the
+ * turning-point singularity removed by a substitution.
+ * Derivations: doc/higher_dimensional.md.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#ifndef HOLENT_STRIP_H
+#define HOLENT_STRIP_H
+
+#include <stddef.h>
+#include "holent_hd_bg.h"
+
+typedef struct holent_strip_workspace holent_strip_workspace;
+
+holent_strip_workspace *holent_strip_workspace_alloc (void);
+void holent_strip_workspace_free (holent_strip_workspace *w);
+
+/* Strips of widths l[i] (transverse size Lperp): S at the cutoff,
+ * fin = S - 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G) in the limit
+ * eps -> 0, delta = fin - (vacuum fin of the same width), zstar.  Any
+ * output but S may be NULL.  EDOM with *bad = i when l[i] <= 0 or beyond
+ * the widest reachable strip (*reach, may be NULL, gets that width).  */
+int holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *w,
+                          double Lperp, size_t n, const double *l, double *S,
+                          double *fin, double *delta, double *zstar,
+                          size_t *bad, double *reach);
+
+/* Vacuum closed forms: width/zstar of the strip, and its finite part per
+ * unit 2 ell^(d-1) Lperp^(d-2)/(4G) times zstar^(d-2).  */
+double holent_strip_ratio (int d);
+double holent_strip_vacuum_j (int d);
+
+#endif /* HOLENT_STRIP_H */

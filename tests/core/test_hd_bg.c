@@ -1,0 +1,117 @@
+/* Unit tests of holent_hd_bg: every error path of the constructors and
+ * of f, and the evaluators of f against direct formulas.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#include <math.h>
+#include <stdlib.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_integration.h>
+#include <gsl/gsl_sf_gamma.h>
+#include "holent_ctest.h"
+#include "holent_hd_bg.h"
+
+static void
+test_init_errors (void)
+{
+  holent_hd_bg bg;
+  double z[6] = { 0, 0.2, 0.4, 0.6, 0.8, 1.0 }, f[6];
+  size_t bad = 99;
+  HT_STATUS (holent_hd_bg_init (NULL, 4, HOLENT_HD_VACUUM, 1, 1, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&bg, 2, HOLENT_HD_VACUUM, 1, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_init (&bg, HOLENT_HD_DMAX + 1, HOLENT_HD_VACUUM, 1, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_VACUUM, 1, NAN, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_VACUUM, 1, 1, -1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_VACUUM, 1, 1, 1, INFINITY), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, NAN, 1, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 0, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_TABULATED, 1, 1, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&bg, 4, (holent_hd_kind) 77, 1, 1, 1, 1e-3), HOLENT_EINVAL);
+
+  for (int i = 0; i < 6; i++)
+    f[i] = 1 - gsl_pow_int (z[i] / 0.9, 4);
+  HT_STATUS (holent_hd_bg_tabulated (NULL, 4, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, NULL, f, 1, 1, 1e-3, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 2, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 1, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 4, z, f, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  z[3] = NAN;
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EINVAL);
+  HT_CHECK (bad == 3, "bad = %zu", bad);
+  z[3] = 0.3;  /* not increasing */
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 3, "bad = %zu", bad);
+  z[3] = 0.6;
+  z[0] = 0.01;
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 0, "bad = %zu", bad);
+  z[0] = 0;
+  f[0] = 1.5;
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  f[0] = 1;
+
+  /* f - 1 = O(z^3) only, for d = 4: refused */
+  {
+    enum { N = 60 };
+    double zz[N], ff[N];
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 1.5 * i / (N - 1);
+        ff[i] = 1 - gsl_pow_int (zz[i], 3);
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bg, 4, N, zz, ff, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+    HT_CHECK (bad >= 1 && bad < N, "bad = %zu", bad);
+    /* ... accepted for d = 3, horizon at the sample z = 1 exactly */
+    HT_STATUS (holent_hd_bg_tabulated (&bg, 3, N, zz, ff, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_CLOSE (bg.zh, 1.0, 1e-12);
+    HT_CLOSE (bg.fp_h, -3.0, 1e-5);
+    HT_CLOSE (bg.m, 1.0, 1e-7);
+    double fv, fpv;
+    HT_STATUS (holent_hd_bg_f (&bg, 0.5, &fv, &fpv), HOLENT_SUCCESS);
+    HT_CLOSE (fv, 1 - 0.125, 1e-6);
+    HT_STATUS (holent_hd_bg_f (&bg, 1.6, &fv, &fpv), HOLENT_EDOM);
+    HT_STATUS (holent_hd_bg_f (&bg, -0.1, &fv, &fpv), HOLENT_EDOM);
+    HT_STATUS (holent_hd_bg_f (&bg, NAN, &fv, &fpv), HOLENT_EINVAL);
+    HT_STATUS (holent_hd_bg_f (NULL, 0.1, &fv, &fpv), HOLENT_EINVAL);
+    holent_hd_bg_free (&bg);
+    holent_hd_bg_free (&bg);  /* twice is harmless */
+    holent_hd_bg_free (NULL);
+  }
+}
+
+static void
+test_evaluators (void)
+{
+  /* the brane's f next to its horizon from zh - z (common practice:
+     1 - x^d = (1 - x)(1 + ... + x^(d-1)) against long double) */
+  holent_hd_bg bg;
+  HT_STATUS (holent_hd_bg_init (&bg, 5, HOLENT_HD_BRANE, 2, 1, 1, 1e-3), HOLENT_SUCCESS);
+  HT_CHECK (bg.tab == NULL, "analytic: no interpolant");
+  HT_CLOSE (bg.m, 1.0 / 32, 1e-15);
+  HT_CLOSE (bg.fp_h, -2.5, 1e-15);
+  double w = 1e-9, z = 2 - w;
+  long double x = (long double) z / 2;
+  long double fl = 1 - x * x * x * x * x;
+  HT_CLOSE (holent_hd_bg_fval (&bg, z, w) / (double) fl, 1.0, 1e-6);
+  HT_CLOSE (holent_hd_bg_fval (&bg, z, w) / (2.5 * w), 1.0, 1e-8);  /* -f'(zh) w */
+  HT_CLOSE (holent_hd_bg_omf (&bg, 1e-3), pow (5e-4, 5), 1e-15);
+  HT_CLOSE (holent_hd_bg_mcoef (&bg, 0.7), 1.0 / 32, 1e-15);
+  double f, fp;
+  HT_STATUS (holent_hd_bg_f (&bg, 1.0, &f, &fp), HOLENT_SUCCESS);
+  HT_CLOSE (f, 1 - 1.0 / 32, 1e-15);
+  HT_CLOSE (fp, -5.0 / 32, 1e-15);
+  HT_STATUS (holent_hd_bg_f (&bg, 1.0, &f, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_hd_bg_f (&bg, 1.0, NULL, NULL), HOLENT_EINVAL);
+  holent_hd_bg_free (&bg);  /* analytic: nothing to release */
+  HT_STATUS (holent_hd_bg_init (&bg, 3, HOLENT_HD_VACUUM, 0, 1, 1, 1e-3), HOLENT_SUCCESS);
+  HT_CHECK (isinf (bg.zh) && bg.m == 0, "vacuum");
+  HT_CLOSE (holent_hd_bg_fval (&bg, 5, 0), 1.0, 0);
+}
+
+int
+main (void)
+{
+  gsl_set_error_handler_off ();
+  test_init_errors ();
+  test_evaluators ();
+  return HT_DONE ();
+}

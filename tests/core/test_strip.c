@@ -1,0 +1,227 @@
+/* Unit tests of holent_strip: every error path, the closed forms
+ * against GSL's QAWS on the untransformed integrands, and the physics
+ * checks written in doc/higher_dimensional.md.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#include <math.h>
+#include <stdlib.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_integration.h>
+#include <gsl/gsl_sf_gamma.h>
+#include "holent_ctest.h"
+#include "holent_strip.h"
+
+/* width integrand without the (1 - u)^(-1/2) weight, for QAWS:
+   u^(d-1) / sqrt(f(zs u) (1 - u^(2d-2))/(1 - u)), brane zh = 1 */
+typedef struct { int d; double zs; } wp;
+
+static double
+w_int (double u, void *p)
+{
+  const wp *q = p;
+  double f = 1 - gsl_pow_int (q->zs * u, q->d);
+  double ratio = 0;
+  for (int k = 0; k < 2 * q->d - 2; k++)
+    ratio += gsl_pow_int (u, k);
+  return gsl_pow_int (u, q->d - 1) / sqrt (f * ratio);
+}
+
+static double
+a_int (double u, void *p)
+{
+  const wp *q = p;
+  return w_int (u, p) / gsl_pow_int (u, 2 * q->d - 2);
+}
+
+static void
+test_closed_forms (void)
+{
+  /* l/z* = 2 sqrt(pi) G(d/(2d-2))/G(1/(2d-2)) against GSL's QAWS on the
+     width integral with its (1-u)^(-1/2) weight (vacuum: zs -> 0).  */
+  gsl_integration_workspace *iw = gsl_integration_workspace_alloc (500);
+  gsl_integration_qaws_table *t = gsl_integration_qaws_table_alloc (0, -0.5, 0, 0);
+  for (int d = 3; d <= 8; d++)
+    {
+      wp p = { d, 0.0 };
+      gsl_function F = { w_int, &p };
+      double r, e;
+      HT_STATUS (gsl_integration_qaws (&F, 0, 1, t, 0, 1e-13, 500, iw, &r, &e), 0);
+      HT_CLOSE (holent_strip_ratio (d), 2 * r, 1e-12);
+    }
+  gsl_integration_qaws_table_free (t);
+  gsl_integration_workspace_free (iw);
+}
+
+static void
+test_strip (void)
+{
+  holent_hd_bg bg;
+  holent_strip_workspace *w = holent_strip_workspace_alloc ();
+  size_t bad = 99;
+  double reach;
+  HT_CHECK (w != NULL, "workspace");
+  holent_strip_workspace_free (NULL);
+
+  /* errors */
+  double l[4] = { 0.2, 1.0, 2.0, 3.0 }, S[4], fin[4], del[4], zs[4];
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-4), HOLENT_SUCCESS);
+  HT_STATUS (holent_strip_entropy (NULL, w, 1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EINVAL);
+  HT_STATUS (holent_strip_entropy (&bg, NULL, 1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EINVAL);
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 4, NULL, S, fin, del, zs, &bad, &reach), HOLENT_EINVAL);
+  HT_STATUS (holent_strip_entropy (&bg, w, NAN, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EINVAL);
+  HT_STATUS (holent_strip_entropy (&bg, w, -1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EDOM);
+  l[2] = -2;
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EDOM);
+  HT_CHECK (bad == 2, "bad = %zu", bad);
+  l[2] = NAN;
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_EINVAL);
+  l[2] = 2;
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 0, l, S, fin, del, zs, &bad, &reach), HOLENT_SUCCESS);
+
+  /* brane, d = 4: the width against GSL QAWS of the original integrand,
+     and Hamilton-Jacobi dS/dl = ell^(d-1) Lp^(d-2)/(4 G zs^(d-1)).  */
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 4, l, S, fin, del, zs, &bad, &reach), HOLENT_SUCCESS);
+  {
+    gsl_integration_workspace *iw = gsl_integration_workspace_alloc (500);
+    gsl_integration_qaws_table *t = gsl_integration_qaws_table_alloc (0, -0.5, 0, 0);
+    for (int i = 0; i < 3; i++)  /* z* not too close to zh for plain QAWS */
+      {
+        wp p = { 4, zs[i] };
+        gsl_function F = { w_int, &p };
+        double r, e;
+        HT_STATUS (gsl_integration_qaws (&F, 0, 1, t, 0, 1e-12, 500, iw, &r, &e), 0);
+        HT_CLOSE (2 * zs[i] * r, l[i], 1e-10);
+      }
+    gsl_integration_qaws_table_free (t);
+    gsl_integration_workspace_free (iw);
+  }
+  for (int i = 0; i < 4; i++)
+    {
+      double h = 1e-4, lp[2] = { l[i] + h, l[i] - h }, Sp[2], fp[2];
+      HT_STATUS (holent_strip_entropy (&bg, w, 1, 2, lp, Sp, fp, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_CLOSE ((fp[0] - fp[1]) / (2 * h) / (1 / (4 * gsl_pow_int (zs[i], 3))), 1.0, 1e-6);
+      HT_CHECK (i == 0 || zs[i] > zs[i - 1], "z* monotonic");
+    }
+
+  /* first law for strips (doc/): delta = m z*^2 B(1/3, 3/2)/6/4 for d = 4,
+     ell = G = Lperp = 1, zh = 1; relative corrections O(z*^4) */
+  {
+    double ls[2] = { 1e-6, 1e-3 }, Ss[2], ds[2], zz[2];
+    HT_STATUS (holent_strip_entropy (&bg, w, 1, 2, ls, Ss, NULL, ds, zz, &bad, NULL), HOLENT_SUCCESS);
+    for (int i = 0; i < 2; i++)
+      HT_CLOSE (ds[i] / (zz[i] * zz[i] * gsl_sf_beta (1.0 / 3, 1.5) / 24), 1.0, 1e-9);
+  }
+
+  /* vacuum through the numerical path: a tabulated f = 1 */
+  {
+    enum { N = 50 };
+    holent_hd_bg bt, bv;
+    double zz[N], ff[N];
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 3.0 * i / (N - 1);
+        ff[i] = 1;
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 5, N, zz, ff, 1.3, 0.7, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_STATUS (holent_hd_bg_init (&bv, 5, HOLENT_HD_VACUUM, 0, 1.3, 0.7, 1e-3), HOLENT_SUCCESS);
+    double lv[3] = { 0.1, 1, 1.8 }, St[3], ft[3], dt[3], zt[3], Sv[3], fv[3], dv[3], zv[3];
+    HT_STATUS (holent_strip_entropy (&bt, w, 2, 3, lv, St, ft, dt, zt, &bad, &reach), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_entropy (&bv, w, 2, 3, lv, Sv, fv, dv, zv, &bad, NULL), HOLENT_SUCCESS);
+    for (int i = 0; i < 3; i++)
+      {
+        HT_CLOSE (zt[i], zv[i], 1e-12);
+        HT_CLOSE (ft[i], fv[i], 1e-11);
+        HT_CLOSE (St[i], Sv[i], 1e-13);
+        HT_CHECK (fabs (dt[i]) < 1e-11 && dv[i] == 0, "delta %g %g", dt[i], dv[i]);
+      }
+    /* the widest strip turns at z_max = 3 */
+    HT_CLOSE (reach, 3 * holent_strip_ratio (5), 1e-9);
+    double lb = 1.01 * reach;
+    HT_STATUS (holent_strip_entropy (&bt, w, 2, 1, &lb, St, NULL, NULL, NULL, &bad, &reach), HOLENT_EDOM);
+    HT_CHECK (bad == 0, "bad = %zu", bad);
+
+    /* cutoff comparable to z*: S = 0 beyond it, the tau form between */
+    double lc[2] = { 1.5 * bv.eps * holent_strip_ratio (5),
+                     0.5 * bv.eps * holent_strip_ratio (5) };
+    HT_STATUS (holent_strip_entropy (&bv, w, 1, 2, lc, Sv, fv, NULL, zv, &bad, NULL), HOLENT_SUCCESS);
+    HT_CHECK (Sv[0] > 0 && Sv[1] == 0, "S %g %g", Sv[0], Sv[1]);
+    {
+      /* independent: QAWS of u^(1-d)/sqrt((1 - u^(2d-2))/(1 - u)) on
+         [eps/z*, 1] with the weight (1 - u)^(-1/2) */
+      gsl_integration_workspace *iw = gsl_integration_workspace_alloc (500);
+      gsl_integration_qaws_table *t = gsl_integration_qaws_table_alloc (0, -0.5, 0, 0);
+      wp p = { 5, 0.0 };
+      gsl_function F = { a_int, &p };
+      double r, e;
+      HT_STATUS (gsl_integration_qaws (&F, bv.eps / zv[0], 1, t, 0, 1e-13, 500, iw, &r, &e), 0);
+      HT_CLOSE (Sv[0], 2 * pow (1.3, 4) / (4 * 0.7) * pow (zv[0], -3) * r, 1e-11);
+      gsl_integration_qaws_table_free (t);
+      gsl_integration_workspace_free (iw);
+    }
+    holent_hd_bg_free (&bt);
+  }
+
+  /* tabulated brane: the same entropies to the spline's accuracy */
+  {
+    enum { N = 900 };
+    holent_hd_bg bt;
+    double zz[N], ff[N];
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 1.3 * i / (N - 1);
+        ff[i] = 1 - gsl_pow_int (zz[i], 4);
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 1, 1, 1e-4, &bad), HOLENT_SUCCESS);
+    double St[4], ft[4], dt[4], zt[4];
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 4, l, St, ft, dt, zt, &bad, &reach), HOLENT_SUCCESS);
+    for (int i = 0; i < 4; i++)
+      {
+        HT_CLOSE (zt[i], zs[i], 1e-8);
+        HT_CLOSE (dt[i], del[i], 1e-8);
+      }
+    HT_CHECK (reach > 20 && reach < 40, "reach %g", reach);  /* w >= 1e-30 zh */
+    {
+      /* wide strips: the re-expanded interpolant near zh keeps delta */
+      double lw[2] = { 10, 20 }, Sw[2], dw[2], db[2];
+      HT_STATUS (holent_strip_entropy (&bt, w, 1, 2, lw, Sw, NULL, dw, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_STATUS (holent_strip_entropy (&bg, w, 1, 2, lw, Sw, NULL, db, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_CLOSE (dw[0], db[0], 1e-9);
+      HT_CLOSE (dw[1], db[1], 1e-9);
+    }
+    holent_hd_bg_free (&bt);
+  }
+  /* a near-horizon (f dips to 0.02 at z = 1): l(z*) rises to a narrow
+     peak, falls and rises again; RT jumps between branches, and the peak
+     (found by the minimiser) is the widest reachable strip */
+  {
+    enum { N = 2000 };
+    holent_hd_bg bt;
+    static double zz[N], ff[N];
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 4.0 * i / (N - 1);
+        ff[i] = 1 - 1.96 * gsl_pow_int (zz[i], 4) / (1 + gsl_pow_int (zz[i], 8));
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_CHECK (isinf (bt.zh), "no horizon");
+    double lj[2] = { 3.0, 3.2 }, Sj[2], fj[2], zj[2];
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 2, lj, Sj, fj, NULL, zj, &bad, &reach), HOLENT_SUCCESS);
+    HT_CHECK (zj[0] < 1 && zj[1] > 3, "branches: z* %g %g", zj[0], zj[1]);
+    HT_CHECK (reach > 3.9 && reach < 3.95, "reach %g", reach);
+    double lr[2] = { reach * (1 - 1e-7), reach * (1 + 1e-7) };
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 1, lr, Sj, NULL, NULL, zj, &bad, NULL), HOLENT_SUCCESS);
+    HT_CHECK (fabs (zj[0] - 1.04) < 0.02, "z* at the peak %g", zj[0]);
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 1, lr + 1, Sj, NULL, NULL, NULL, &bad, NULL), HOLENT_EDOM);
+    holent_hd_bg_free (&bt);
+  }
+  holent_strip_workspace_free (w);
+}
+
+int
+main (void)
+{
+  gsl_set_error_handler_off ();
+  test_closed_forms ();
+  test_strip ();
+  return HT_DONE ();
+}
