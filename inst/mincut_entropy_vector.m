@@ -47,7 +47,7 @@ function [S, cuts] = mincut_entropy_vector (edges, weights, labels, varargin)
            fn, sprintf ("%dx", size (edges))(1:end-1));
   endif
   if (! (isvector (weights) || isempty (weights)) || numel (weights) != rows (edges))
-    error ("holent:size", "%s: WEIGHTS must have one entry per edge (%d), got %d",
+    error ("holent:size", "%s: WEIGHTS must have one entry per row of EDGES (%d), got %d",
            fn, rows (edges), numel (weights));
   endif
   if (any (weights(:) < 0))
@@ -65,7 +65,7 @@ function [S, cuts] = mincut_entropy_vector (edges, weights, labels, varargin)
   V = numel (labels);
   bad = find (edges != round (edges) | edges < 1 | edges > V, 1);
   if (! isempty (bad))
-    error ("holent:domain", "%s: EDGES must hold vertex indices 1 .. %d (one per label); EDGES(%d) = %g",
+    error ("holent:domain", "%s: EDGES must hold vertex indices 1 .. %d (the number of LABELS); EDGES(%d) = %g",
            fn, V, bad, edges(bad));
   endif
   o = __holent_opts__ (fn, {"parties"}, varargin);
@@ -157,7 +157,7 @@ endfunction
 %!error <integers> mincut_entropy_vector ([1 2], 1, [1 1.5])
 %!error <integers> mincut_entropy_vector ([1 2], 1, [1 -1])
 %!error <nonnegative> mincut_entropy_vector ([1 2], -1, [1 2])
-%!error <one entry per edge> mincut_entropy_vector ([1 2; 2 3], 1, [1 2 0])
+%!error <one entry per row of EDGES> mincut_entropy_vector ([1 2; 2 3], 1, [1 2 0])
 %!error <E x 2> mincut_entropy_vector ([1 2 3], 1, [1 2 0])
 %!error <vertex indices 1 .. 2> mincut_entropy_vector ([1 3], 1, [1 2])
 %!error <party 2 has no boundary vertex> mincut_entropy_vector ([1 2], 1, [1 3], "parties", 2)

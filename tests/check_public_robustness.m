@@ -124,6 +124,12 @@
 %!      f = [nonnum, bad, infs, {"neg", "zero", "huge", "tiny", "int8", ...
 %!           "uint64", "int8neg", "single", "sparse", "sparsevec", ...
 %!           "hugevec", "nd3", "col3", "vec", "e00", "e20"}];
+%!    case "edges"        # the 2 x 2 edge list of the valid call: nothing else fits
+%!      f = labels;
+%!    case "weights2"     # two nonnegative finite weights
+%!      f = setdiff (labels, {"rev", "singlevec"});
+%!    case "labels3"      # three integer labels 0 .. N+1 using parties 1, 2
+%!      f = setdiff (labels, {"sparsevec"});
 %!    case "svec"         # an entropy vector of 2^N - 1 entries
 %!      f = [nonnum, bad, infs, {"e00", "e02", "e20", "nd3", "col3", "hugevec"}];
 %!    otherwise
@@ -192,7 +198,9 @@
 %!   "ball_entropy", {bh, [0.5 1]}, {"bghd:BG", "lens:R"};
 %!   "ball_entropy", {bv, 0.5}, {"bghd:BG", "lens:R"};
 %!   "strip_mutual_information", {bh, 0.5, 0.1, 0.5, "length", 2}, ...
-%!     {"bghd:BG", "lens:L1", "lens:S", "lens:L2", "optname:", "pos:length"}};
+%!     {"bghd:BG", "lens:L1", "lens:S", "lens:L2", "optname:", "pos:length"};
+%!   "mincut_entropy_vector", {[1 2; 2 3], [1 2], [1 0 2], "parties", 2}, ...
+%!     {"edges:EDGES", "weights2:WEIGHTS", "labels3:LABELS", "optname:", "dim:parties"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)
@@ -361,7 +369,8 @@
 %!        "__holent_thermo__", {"hawking_page", 0.2, 2*pi}, 2;
 %!        "__holent_hd__", {"strip", bh, [0.5 1], 1}, 2;
 %!        "__holent_hd__", {"ball", bh, 0.5}, 2;
-%!        "__holent_hd__", {"tabulated", 4, z, 1 - z.^4}, 2};
+%!        "__holent_hd__", {"tabulated", 4, z, 1 - z.^4}, 2;
+%!        "__holent_cone__", {"mincut", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2};
 %!   bad = {};
 %!   for r = 1:rows (G)
 %!     [gw, args, p0] = G{r,:};
