@@ -1,6 +1,8 @@
 /* RT minimisation over region sets (gateway of holent_region, holent_rt).
  *
- *   [S, NSHORT, CONF] = __holent_rt__ ("entropy", FN, NAME, BG, A)
+ *   [S, NSHORT, CONF] = __holent_rt__ ("entropy", FN, NAME, BG, A, METHOD)
+ *       METHOD (optional) "auto" (default), "dp" (the cubic DP, at most
+ *       HOLENT_RT_NMAX intervals; the tests' oracle) or "fast".
  *       A an n x 2 real double matrix or a cell array of them; S has the
  *       size of the cell (1 x 1 for a matrix), NSHORT counts boundary
  *       segments not longer than twice the cutoff, CONF (built only when
@@ -215,10 +217,23 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   char fn[64], name[32], nm[64];
   holent_geo_bg bg;
   gw_state g = { 0 };
-  holent_gw_nargs (GW, nlhs, 3, nrhs, 5, 5);
+  holent_gw_nargs (GW, nlhs, 3, nrhs, 5, 6);
   holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
   holent_gw_string (prhs[2], GW, "NAME", name, sizeof name);
   holent_gw_bg (prhs[3], fn, &bg);
+  holent_rt_method method = HOLENT_RT_AUTO;
+  if (nrhs > 5)
+    {
+      char ms[8];
+      holent_gw_string (prhs[5], GW, "METHOD", ms, sizeof ms);
+      if (strcmp (ms, "dp") == 0)
+        method = HOLENT_RT_DP;
+      else if (strcmp (ms, "fast") == 0)
+        method = HOLENT_RT_FAST;
+      else if (strcmp (ms, "auto") != 0)
+        mexErrMsgIdAndTxt ("holent:invalid",
+                           "METHOD must be \"auto\", \"dp\" or \"fast\"");
+    }
 
   const mxArray *A = prhs[4];
   int is_cell = mxIsCell (A);
@@ -272,25 +287,28 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       const double *p = mxGetPr (a);
       size_t n = mxGetM (a);
       int st = holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
-      if (st || g.reg->n > HOLENT_RT_NMAX)
+      int big = method == HOLENT_RT_DP && g.reg->n > HOLENT_RT_NMAX;
+      if (st || big)
         region_name (nm, sizeof nm, name, is_cell, k);
       if (st)
         {
           region_fail (&g, st, fn, nm, bg.circle);
           gw_raise (&g);
         }
-      if (g.reg->n > HOLENT_RT_NMAX)
+      if (big)
         {
           snprintf (g.id, sizeof g.id, "holent:toobig");
           snprintf (g.msg, sizeof g.msg,
-                    "%s: %s has %zu intervals; at most %zu are supported",
+                    "%s: %s has %zu intervals; the DP takes at most %zu",
                     fn, nm, g.reg->n, (size_t) HOLENT_RT_NMAX);
           gw_raise (&g);
         }
       if (g.reg->n > wsn)
         wsn = g.reg->n;
     }
-  g.ws = holent_rt_alloc (wsn);
+  holent_rt_workspace *(*ws_alloc) (size_t)
+    = method == HOLENT_RT_DP ? holent_rt_alloc_dp : holent_rt_alloc;
+  g.ws = ws_alloc (wsn);
   g.pairs = mxMalloc (2 * wsn * sizeof *g.pairs);
   g.arcs = mxMalloc (wsn * sizeof *g.arcs);
   if (g.ws == NULL)
@@ -320,7 +338,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 #pragma omp parallel reduction(+ : nshort)
       {
         holent_region *r = holent_region_alloc (maxrows);
-        holent_rt_workspace *w = holent_rt_alloc (wsn);
+        holent_rt_workspace *w = ws_alloc (wsn);
         int ok = r != NULL && w != NULL;
 #pragma omp for schedule(dynamic, 32)
         for (long k = 0; k < nc; k++)
@@ -330,7 +348,8 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
                                              g.ptr[k], g.ptr[k] + g.rows[k])
                         : HOLENT_ENOMEM;
             if (!st)
-              st = holent_rt_entropy (w, &bg, r, &res, NULL, NULL);
+              st = holent_rt_entropy_method (w, &bg, r, method, &res, NULL,
+                                             NULL);
             if (st)
               {
 #pragma omp critical (holent_rt_gw_fail)
@@ -367,8 +386,9 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       /* Succeeded above: same input, same result.  */
       (void) holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
       holent_rt_result res;
-      int st = holent_rt_entropy (g.ws, &bg, g.reg, &res,
-                              conf ? g.pairs : NULL, conf ? g.arcs : NULL);
+      int st = holent_rt_entropy_method (g.ws, &bg, g.reg, method, &res,
+                                         conf ? g.pairs : NULL,
+                                         conf ? g.arcs : NULL);
       if (st)
         {
           region_name (nm, sizeof nm, name, is_cell, k);

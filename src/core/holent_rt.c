@@ -1,6 +1,8 @@
-/* holent_rt.c: exact RT minimisation over region sets by dynamic
- * programming over arcs of the sorted endpoints (doc/rt_regions.md).
+/* holent_rt.c: RT minimisation over region sets (doc/rt_regions.md):
+ * the interval DP below and the O(N^2) sweep further down
+ * (doc/rt_fast.md).
  *
+ * DP
  * Tables, for the N = 2n endpoints q[0..N-1] and K = n, over P unrolled
  * points (P = N on a line; P = 2N, two turns with q[i+N] = q[i] + L, on a
  * circle with a horizon or a defect):
@@ -18,40 +20,128 @@
 #include <math.h>
 #include <stdint.h>
 #include <stdlib.h>
+#ifdef _OPENMP
+#include <omp.h>
+#endif
 #include "holent_rt.h"
+#include "holent_vmath.h"
+
+/* State of one sweep (doc/rt_fast.md), arrays indexed by unrolled point:
+   T[s] the best run from s to the current right end, A[s] the cost of
+   the pair (s, P[s]) with everything inside it; arc and cost hold one
+   column.  The log records every change of partner (start, new right
+   end) so that the minimiser can be unwound.  */
+typedef struct
+{
+  double *T, *A, *arc, *cost;
+  size_t *P;
+  size_t *lg_e, *lg_next, *head;  /* log: right end, previous record */
+  size_t lg_n, lg_cap;
+  int logging, overflow;
+} sweep_state;
 
 struct holent_rt_workspace
 {
   size_t nmax;
-  double *T, *W;
+  int dp;
+  double *T, *W;          /* DP tables (NULL without them)            */
   size_t *stack, *pidx, *slot;
   double *parc;
+  double *y, *full;       /* unrolled points, best run per start      */
+  sweep_state sw[2];      /* one per thread of the circle sweep       */
 };
 
-holent_rt_workspace *
-holent_rt_alloc (size_t nmax)
+#define RT_NONE ((size_t) -1)
+
+static int
+sweep_alloc (sweep_state *s, size_t P, size_t N)
 {
-  if (nmax == 0 || nmax > HOLENT_RT_NMAX)
+  s->T = malloc ((P + 2) * sizeof *s->T);
+  s->A = malloc ((P + 2) * sizeof *s->A);
+  s->P = malloc ((P + 2) * sizeof *s->P);
+  s->head = malloc ((P + 2) * sizeof *s->head);
+  s->arc = malloc (N * sizeof *s->arc);
+  s->cost = malloc (N * sizeof *s->cost);
+  /* A few records per point in practice (doc/rt_fast.md); beyond that
+     the unwinding sweeps again over sub-runs instead.  */
+  s->lg_cap = 8 * N + 64;
+  s->lg_e = malloc (s->lg_cap * sizeof *s->lg_e);
+  s->lg_next = malloc (s->lg_cap * sizeof *s->lg_next);
+  return s->T && s->A && s->P && s->head && s->arc && s->cost && s->lg_e
+         && s->lg_next;
+}
+
+static void
+sweep_free (sweep_state *s)
+{
+  free (s->T);
+  free (s->A);
+  free (s->P);
+  free (s->head);
+  free (s->arc);
+  free (s->cost);
+  free (s->lg_e);
+  free (s->lg_next);
+}
+
+static holent_rt_workspace *
+rt_alloc (size_t nmax, int dp)
+{
+  if (nmax == 0 || (dp && nmax > HOLENT_RT_NMAX)
+      || nmax > ((size_t) -1) / 64)
     return NULL;
   holent_rt_workspace *w = calloc (1, sizeof *w);
   if (w == NULL)
     return NULL;
-  /* Rows for two turns of the circle (2N + 1) of n + 1 run lengths.  */
-  size_t N = 2 * nmax, cells = (2 * N + 1) * (nmax + 1);
-  w->T = malloc (cells * sizeof *w->T);
-  w->W = malloc (N * nmax * sizeof *w->W);
+  size_t N = 2 * nmax;
+  int ok = 1;
+  if (dp)
+    {
+      /* Rows for two turns of the circle (2N + 1) of n + 1 run lengths.  */
+      size_t cells = (2 * N + 1) * (nmax + 1);
+      w->T = malloc (cells * sizeof *w->T);
+      w->W = malloc (N * nmax * sizeof *w->W);
+      ok = w->T && w->W;
+    }
   w->stack = malloc (2 * (nmax + 2) * sizeof *w->stack);
   w->pidx = malloc (N * sizeof *w->pidx);
   w->slot = malloc (N * sizeof *w->slot);
   w->parc = malloc (nmax * sizeof *w->parc);
-  if (!w->T || !w->W || !w->stack || !w->pidx || !w->slot
-      || !w->parc)
+  w->y = malloc (2 * N * sizeof *w->y);
+  w->full = malloc ((2 * N + 1) * sizeof *w->full);
+  ok = ok && w->stack && w->pidx && w->slot && w->parc && w->y && w->full
+       && sweep_alloc (&w->sw[0], 2 * N, N) && sweep_alloc (&w->sw[1], 2 * N, N);
+  if (!ok)
     {
       holent_rt_free (w);
       return NULL;
     }
   w->nmax = nmax;
+  w->dp = dp;
   return w;
+}
+
+int
+holent_rt_set_log_capacity (holent_rt_workspace *w, size_t records)
+{
+  if (w == NULL || records == 0)
+    return HOLENT_EINVAL;
+  for (int i = 0; i < 2; i++)
+    if (records < w->sw[i].lg_cap)
+      w->sw[i].lg_cap = records;
+  return HOLENT_SUCCESS;
+}
+
+holent_rt_workspace *
+holent_rt_alloc (size_t nmax)
+{
+  return rt_alloc (nmax, 0);
+}
+
+holent_rt_workspace *
+holent_rt_alloc_dp (size_t nmax)
+{
+  return rt_alloc (nmax, 1);
 }
 
 void
@@ -65,6 +155,10 @@ holent_rt_free (holent_rt_workspace *w)
   free (w->pidx);
   free (w->slot);
   free (w->parc);
+  free (w->y);
+  free (w->full);
+  sweep_free (&w->sw[0]);
+  sweep_free (&w->sw[1]);
   free (w);
 }
 
@@ -149,55 +243,40 @@ row_scatter (double *restrict best, const double *restrict row, double b,
     }
 }
 
+/* Arc from unrolled point s to e (s < e, e - s < N), taken from the
+   first turn: (q[b] + L) - (q[a] + L) would lose the digits of short
+   arcs to the rounding of L.  */
+static inline double
+uarc (const double *y, size_t N, size_t s, size_t e)
+{
+  return s >= N ? y[e - N] - y[s - N] : y[e] - y[s];
+}
+
 typedef struct
 {
   size_t N, K, K1, P;  /* endpoints, pairs, row stride, unrolled points */
   int circle;
-  double L;
-  const double *q;
+  const double *y;     /* unrolled points (circle: q + L on turn two)  */
   double *T, *W;
 } dp;
 
-/* Point i of the unrolled sequence (circle: two turns, q + L on the
-   second) and the arc between unrolled points i < j.  */
-static inline double
-arc_fwd (const dp *d, size_t i, size_t j)
-{
-  double qi = d->q[i % d->N] + (i >= d->N ? d->L : 0.0);
-  double qj = d->q[j % d->N] + (j >= d->N ? d->L : 0.0);
-  return qj - qi;
-}
-
 /* W[s][t]: the geodesic over the arc from point s to point s + 2t + 1;
-   on a circle rows s >= N repeat rows s - N.  */
-static int
+   on a circle rows s >= N repeat rows s - N.  The points were checked
+   (strictly increasing within one turn), so every arc is valid.  */
+static void
 fill_weights (dp *d, const holent_geo_bg *bg)
 {
   const long N = (long) d->N;
   const size_t K = d->K;
-  int status = HOLENT_SUCCESS;
 #pragma omp parallel for schedule(dynamic, 16) if (N > 200)
   for (long s = 0; s < N; s++)
     {
       double *w = d->W + (size_t) s * K;
-      for (size_t t = 0; t < K; t++)
-        {
-          size_t j = (size_t) s + 2 * t + 1;
-          if (!d->circle && j >= d->N)
-            break;
-          double len;
-          int st = holent_geo_arc_length (bg, arc_fwd (d, (size_t) s, j),
-                                          &len);
-          if (st)
-            {
-#pragma omp critical (holent_rt_status)
-              status = st;
-              len = INFINITY;
-            }
-          w[t] = len;
-        }
+      size_t m = d->circle ? K : ((size_t) (N - s)) / 2;
+      for (size_t t = 0; t < m; t++)
+        w[t] = d->y[s + 2 * t + 1] - d->y[s];
+      holent_vmath_arc_lengths (bg, m, w, w);
     }
-  return status;
 }
 
 /* Most pairs in a run starting at unrolled point s.  */
@@ -283,7 +362,7 @@ backtrack (const dp *d, size_t s0, size_t m0, size_t *stack, size_t *pi,
       size_t t = run_argmin (d, s, m, d->T[s * K1 + m]);
       pi[k] = s;
       pj[k] = s + 2 * t + 1;
-      arc[k] = arc_fwd (d, s, s + 2 * t + 1);
+      arc[k] = uarc (d->y, d->N, s, s + 2 * t + 1);
       k++;
       /* Only runs with pairs in them: at most n on the stack.  */
       if (t > 0)
@@ -299,18 +378,216 @@ backtrack (const dp *d, size_t s0, size_t m0, size_t *stack, size_t *pi,
     }
 }
 
+/* ---- The sweep (doc/rt_fast.md).  Runs [s, e] of unrolled points
+ * with a <= s < e <= b and at most cap points.  After column e, T[s]
+ * holds the best run [s, e] for every start s of the other parity; its
+ * candidates are the partner kept from column e - 2 and the new point e:
+ *   T[s] = min(A[s] + T[P[s] + 1], c(y[e] - y[s]) + T[s + 1]),
+ * in the order of the DP's sums, so both give the same numbers.  full
+ * (if non-NULL) receives T[s] for each run of exactly cap points.  */
+static void
+sweep_run (sweep_state *st, const holent_geo_bg *bg, const double *y,
+           size_t N, size_t a, size_t b, size_t cap, double *full)
+{
+  double *restrict T = st->T, *restrict A = st->A;
+  size_t *restrict P = st->P;
+  st->lg_n = 0;
+  st->overflow = 0;
+  for (size_t e = a + 1; e <= b; e++)
+    {
+      T[e] = 0.0;  /* the empty run [e, e - 1] */
+      size_t lo = e + 1 >= a + cap ? e + 1 - cap : a;
+      if ((e - 1 - lo) & 1)
+        lo++;
+      size_t J = (e - 1 - lo) / 2 + 1;  /* starts e - 1, e - 3, ..., lo */
+      for (size_t j = 0; j < J; j++)
+        st->arc[j] = uarc (y, N, e - 1 - 2 * j, e);
+      holent_vmath_arc_lengths (bg, J, st->arc, st->cost);
+      const double *c = st->cost;
+      for (size_t j = 0; j < J; j++)
+        {
+          size_t s = e - 1 - 2 * j;
+          double vnew = c[j] + T[s + 1];
+          if (j > 0)
+            {
+              double vold = A[s] + T[P[s] + 1];
+              if (!(vnew < vold))  /* ties keep the earlier partner */
+                {
+                  T[s] = vold;
+                  continue;
+                }
+            }
+          T[s] = A[s] = vnew;
+          P[s] = e;
+          if (st->logging)
+            {
+              if (j == 0)
+                st->head[s] = RT_NONE;
+              if (st->lg_n < st->lg_cap)
+                {
+                  st->lg_e[st->lg_n] = e;
+                  st->lg_next[st->lg_n] = st->head[s];
+                  st->head[s] = st->lg_n++;
+                }
+              else
+                st->overflow = 1;
+            }
+        }
+      if (full && e + 1 >= a + cap)
+        full[e + 1 - cap] = T[e + 1 - cap];
+    }
+}
+
+/* Record the pair (s, p) and push the run inside it, if any.  */
+static inline void
+emit_pair (const double *y, size_t N, size_t s, size_t p, size_t *pi,
+           size_t *pj, double *arc, size_t *k, size_t *stack, size_t *top)
+{
+  pi[*k] = s;
+  pj[*k] = p;
+  arc[(*k)++] = uarc (y, N, s, p);
+  if (p > s + 1)
+    {
+      stack[(*top)++] = s + 1;
+      stack[(*top)++] = p - 1;
+    }
+}
+
+/* Unwind the best run [s0, s0 + N - 1] into pairs of unrolled indices
+ * (pi, pj) with their arcs.  Runs still to resolve sit on a stack; the
+ * log of the last sweep resolves any run inside it, and when the log
+ * overflowed the final partners give the top chain of the swept run and
+ * its inner runs are swept again, each smaller than the last.  */
+static void
+sweep_unwind (holent_rt_workspace *w, const holent_geo_bg *bg, size_t s0,
+              size_t N, int swept, size_t *pi, size_t *pj, double *arc)
+{
+  sweep_state *st = &w->sw[0];
+  const double *y = w->y;
+  size_t *stack = w->stack, top = 0, k = 0;
+  size_t la = s0, lb = s0 + N - 1;
+  int have_log = swept && !st->overflow;
+  stack[top++] = s0;
+  stack[top++] = s0 + N - 1;
+  while (top > 0)
+    {
+      size_t e = stack[--top], s = stack[--top];
+      if (!(have_log && la <= s && e <= lb))
+        {
+          st->logging = 1;
+          sweep_run (st, bg, y, N, s, e, e - s + 1, NULL);
+          la = s;
+          lb = e;
+          have_log = !st->overflow;
+          if (!have_log)
+            {
+              /* the top chain from the final partners */
+              for (size_t x = s; x < e; x = st->P[x] + 1)
+                emit_pair (y, N, x, st->P[x], pi, pj, arc, &k, stack, &top);
+              continue;
+            }
+        }
+      size_t r = st->head[s];
+      while (st->lg_e[r] > e)
+        r = st->lg_next[r];
+      size_t p = st->lg_e[r];
+      emit_pair (y, N, s, p, pi, pj, arc, &k, stack, &top);
+      if (e > p)
+        {
+          stack[top++] = p + 1;
+          stack[top++] = e;
+        }
+    }
+}
+
+/* Best run of every start on the circle: full[s] for s = 1..N, runs of
+ * N points over two turns.  Two threads when there are two: one takes
+ * the starts up to N/2, the other the rest (each sweeps 2/3 of the
+ * single sweep's steps).  */
+static void
+sweep_circle (holent_rt_workspace *w, const holent_geo_bg *bg, size_t N)
+{
+  int two = 0;
+#ifdef _OPENMP
+  two = N >= 2000 && !omp_in_parallel () && omp_get_max_threads () > 1;
+#endif
+  w->sw[0].logging = w->sw[1].logging = 0;
+  if (!two)
+    {
+      sweep_run (&w->sw[0], bg, w->y, N, 1, 2 * N - 1, N, w->full);
+      return;
+    }
+  size_t h = N / 2;
+#pragma omp parallel sections num_threads(2)
+  {
+#pragma omp section
+    sweep_run (&w->sw[0], bg, w->y, N, 1, h + N - 1, N, w->full);
+#pragma omp section
+    sweep_run (&w->sw[1], bg, w->y, N, h + 1, 2 * N - 1, N, w->full);
+  }
+}
+
+/* Every static AdS3 length is a concave function of the arc it spans
+   (doc/rt_fast.md): 2 log l, log sinh, log sin (capped for the defect)
+   and sums of them.  A cost that is not (boosted or time-dependent
+   endpoints) must take the DP.  */
+static int
+cost_is_concave (const holent_geo_bg *bg)
+{
+  switch (bg->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_PLANAR_BTZ:
+    case HOLENT_BULK_BTZ:
+    case HOLENT_BULK_THERMAL_ADS:
+    case HOLENT_BULK_ROTATING_BTZ:
+    case HOLENT_BULK_PLANAR_ROTATING_BTZ:
+    case HOLENT_BULK_CONICAL_DEFECT:
+      return 1;
+    default:
+      return 0;
+    }
+}
+
+/* Sorted endpoints strictly increasing within one turn: then every arc
+   the minimisers use lies in (0, L) (or is positive on a line).  */
+static int
+check_points (const holent_region *r)
+{
+  const size_t N = 2 * r->n;
+  for (size_t i = 0; i < N; i++)
+    if (isnan (r->pts[i]))
+      return HOLENT_EINVAL;
+  for (size_t i = 0; i < N; i++)
+    if (!isfinite (r->pts[i]) || (i > 0 && !(r->pts[i] > r->pts[i - 1])))
+      return HOLENT_EDOM;
+  if (r->circle && !(r->pts[N - 1] - r->pts[0] < r->L))
+    return HOLENT_EDOM;
+  return HOLENT_SUCCESS;
+}
+
 int
-holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
-                   const holent_region *r, holent_rt_result *res,
-                   size_t *pairs, double *arcs)
+holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
+                          const holent_region *r, holent_rt_method method,
+                          holent_rt_result *res, size_t *pairs, double *arcs)
 {
   if (w == NULL || bg == NULL || r == NULL || res == NULL)
+    return HOLENT_EINVAL;
+  if (method != HOLENT_RT_AUTO && method != HOLENT_RT_DP
+      && method != HOLENT_RT_FAST)
     return HOLENT_EINVAL;
   if ((r->circle != 0) != (bg->circle != 0) || (bg->circle && r->L != bg->L))
     return HOLENT_EINVAL;
   if (r->n == 0 && !r->whole)
     return HOLENT_EEMPTY;
-  if (r->n > w->nmax)
+  if (r->n > w->nmax || (method == HOLENT_RT_DP && !w->dp))
+    return HOLENT_ETOOBIG;
+  int fast = method == HOLENT_RT_FAST
+             || (method == HOLENT_RT_AUTO && cost_is_concave (bg));
+  if (fast && !cost_is_concave (bg))
+    return HOLENT_EUNSUP;
+  if (!fast && !w->dp)
     return HOLENT_ETOOBIG;
 
   const size_t n = r->n, N = 2 * n;
@@ -327,6 +604,9 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
       res->horizon = bg->horizon != 0;
       return HOLENT_SUCCESS;
     }
+  int st = check_points (r);
+  if (st)
+    return st;
   for (size_t i = 0; i + 1 < N; i++)
     res->n_short += r->pts[i + 1] - r->pts[i] <= 2.0 * bg->eps;
   if (r->circle)
@@ -337,17 +617,37 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
      side: one unrolling (cut before q[0]) holds every pairing.  With
      them, two turns of the circle hold every run of up to N points.  */
   int two_turns = kind != KIND_LINEAR;
-  dp d = { N, n, n + 1, two_turns ? 2 * N : N, two_turns, r->L, r->pts,
-           w->T, w->W };
-  int st = fill_weights (&d, bg);
-  if (st)
-    return st;
-  fill_tables (&d);
+  size_t P = two_turns ? 2 * N : N;
+  for (size_t i = 0; i < P; i++)
+    w->y[i] = i < N ? r->pts[i] : r->pts[i - N] + r->L;
+  dp d = { N, n, n + 1, P, two_turns, w->y, w->T, w->W };
+  int want_conf = pairs != NULL || arcs != NULL;
+  if (fast)
+    {
+      if (two_turns)
+        sweep_circle (w, bg, N);
+      else
+        {
+          w->sw[0].logging = want_conf;
+          sweep_run (&w->sw[0], bg, w->y, N, 0, N - 1, N, NULL);
+          w->full[0] = w->sw[0].T[0];
+        }
+    }
+  else
+    {
+      fill_weights (&d, bg);
+      fill_tables (&d);
+      if (two_turns)
+        for (size_t s = 1; s <= N; s++)
+          w->full[s] = d.T[s * d.K1 + n];
+      else
+        w->full[0] = d.T[n];
+    }
 
   size_t s0 = 0;
   double best;
   if (kind == KIND_LINEAR)
-    best = d.T[n];
+    best = w->full[0];
   else
     {
       /* Segment g (from q[g] to q[g+1]) lies in A iff g has the parity
@@ -359,7 +659,7 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
       size_t g_out = 0, g_in = 0;
       for (size_t g = 0; g < N; g++)
         {
-          double v = d.T[(g + 1) * d.K1 + n];
+          double v = w->full[g + 1];
           int in_a = ((g & 1) == 0) == (r->start0 != 0);
           if (kind == KIND_HORIZON && in_a)
             {
@@ -385,12 +685,15 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
     }
   res->length = best;
   res->S = c6 * best + (res->horizon ? bg->S_BH : 0.0);
-  if (pairs == NULL && arcs == NULL)
+  if (!want_conf)
     return HOLENT_SUCCESS;
 
   size_t *pi = w->pidx, *pj = w->pidx + n, *slot = w->slot;
   double *arc = w->parc;
-  backtrack (&d, s0, n, w->stack, pi, pj, arc);
+  if (fast)
+    sweep_unwind (w, bg, s0, N, !two_turns, pi, pj, arc);
+  else
+    backtrack (&d, s0, n, w->stack, pi, pj, arc);
   for (size_t a = 0; a < N; a++)
     slot[a] = 0;
   for (size_t k = 0; k < n; k++)
@@ -423,4 +726,13 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
         out++;
       }
   return HOLENT_SUCCESS;
+}
+
+int
+holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
+                   const holent_region *r, holent_rt_result *res,
+                   size_t *pairs, double *arcs)
+{
+  return holent_rt_entropy_method (w, bg, r, HOLENT_RT_AUTO, res, pairs,
+                                   arcs);
 }

@@ -1,6 +1,5 @@
 /* holent_rt.h: Ryu-Takayanagi entropy of a region made of many boundary
- * intervals, minimised exactly over every RT candidate by dynamic
- * programming over arcs of the sorted endpoints.
+ * intervals, minimised over every RT candidate without enumerating them.
  *
  * Candidates (doc/rt_regions.md):
  *   line (Poincare, planar BTZ):  the non-crossing pairings of the 2n
@@ -18,10 +17,18 @@
  *     AdS: Catalan(n)).
  *   the whole circle:  S_BH (0 without a horizon); one candidate.
  *
- * Cost: O(N^3) time with N = 2n (about N^3/24 additions on a line and in
- * global or thermal AdS, N^3/6 over two turns of the circle with a horizon
- * or a defect), O(N^2) memory in a caller-owned workspace (about 12 N^2
- * bytes).  GPL-3.0-or-later.  */
+ * Two minimisers over the same candidates (doc/rt_fast.md):
+ *   fast (the default for every static AdS3 bulk, whose geodesic length is
+ *     a concave function of the boundary arc it spans):  a sweep over the
+ *     right end of every run that keeps, for each left end, one partner;
+ *     O(N^2) time (N^2/4 steps on a line, 3N^2/4 on a circle with a
+ *     horizon or a defect), O(N) memory, no cap on n.  It rests on a
+ *     property verified against the DP on every test region, not proven.
+ *   dp (exact; the general path and the oracle of the tests):  the
+ *     interval dynamic programme, O(N^3) time (N^3/24 additions on a line and in
+ *     global or thermal AdS, N^3/6 with a horizon or a defect), O(N^2)
+ *     memory (about 12 N^2 bytes), n <= HOLENT_RT_NMAX.
+ * N = 2n.  GPL-3.0-or-later.  */
 #ifndef HOLENT_RT_H
 #define HOLENT_RT_H
 
@@ -30,16 +37,33 @@
 #include "holent_geo.h"
 #include "holent_region.h"
 
-/* Largest number of intervals (after merging) the minimiser accepts:
-   the workspace then holds about 12 N^2 bytes, N = 2n (800 MB).  */
+/* Largest number of intervals (after merging) the cubic DP accepts: its
+   tables then hold about 12 N^2 bytes, N = 2n (800 MB).  The fast path
+   has no such cap.  */
 #define HOLENT_RT_NMAX ((size_t) 4096)
 
 typedef struct holent_rt_workspace holent_rt_workspace;
 
-/* Workspace for regions of up to nmax intervals; NULL when nmax is 0 or
-   above HOLENT_RT_NMAX, or on allocation failure.  */
+typedef enum
+{
+  HOLENT_RT_AUTO = 0,  /* fast when the length is concave in the arc     */
+  HOLENT_RT_DP = 1,    /* the cubic DP (needs holent_rt_alloc_dp)        */
+  HOLENT_RT_FAST = 2   /* the sweep (HOLENT_EUNSUP for other costs)      */
+} holent_rt_method;
+
+/* Workspace for regions of up to nmax intervals, O(nmax) bytes, fast path
+   only; NULL when nmax is 0 or on allocation failure.  */
 holent_rt_workspace *holent_rt_alloc (size_t nmax);
+/* The same plus the tables of the cubic DP; NULL also when nmax exceeds
+   HOLENT_RT_NMAX.  */
+holent_rt_workspace *holent_rt_alloc_dp (size_t nmax);
 void holent_rt_free (holent_rt_workspace *w);
+
+/* Lower (never raise) the number of partner changes the fast path logs
+   for unwinding its minimiser (8 N + 64 by default, a few per point are
+   used in practice); past it, the unwinding sweeps sub-runs again.  For
+   tests of that path.  */
+int holent_rt_set_log_capacity (holent_rt_workspace *w, size_t records);
 
 typedef struct
 {
@@ -63,12 +87,24 @@ typedef struct
  * or defect face; in global and thermal AdS, where both arcs give the
  * same geodesic, the shorter one).  Ties go to the candidate without the
  * horizon, then to the first cut in the sorted order.
- * Returns HOLENT_EINVAL for NULL pointers or a region that does not
- * belong to bg (line/circle, circumference), HOLENT_EEMPTY for a region
- * that was never set successfully, HOLENT_ETOOBIG when r->n exceeds the
- * workspace, and the status of holent_geo_arc_length when a geodesic
- * length cannot be had (only for regions not made by holent_region_set,
- * e.g. coincident endpoints).  */
+ * Both methods give the same minimum (the sums are formed in the same
+ * order from the same lengths) and, without ties, the same minimiser.
+ * Returns HOLENT_EINVAL for NULL pointers, an unknown method or a region
+ * that does not belong to bg (line/circle, circumference), HOLENT_EEMPTY
+ * for a region that was never set successfully, HOLENT_ETOOBIG when r->n
+ * exceeds the workspace (or the DP was asked of a workspace without its
+ * tables), HOLENT_EUNSUP for the fast method on a cost it does not
+ * cover, and HOLENT_EDOM (HOLENT_EINVAL for NaN) when the endpoints are
+ * not strictly increasing within one turn (only for regions not made by
+ * holent_region_set, e.g. coincident endpoints).  */
+int holent_rt_entropy_method (holent_rt_workspace *w,
+                              const holent_geo_bg *bg,
+                              const holent_region *r,
+                              holent_rt_method method,
+                              holent_rt_result *res, size_t *pairs,
+                              double *arcs);
+
+/* holent_rt_entropy_method with HOLENT_RT_AUTO.  */
 int holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
                        const holent_region *r, holent_rt_result *res,
                        size_t *pairs, double *arcs);

@@ -1,8 +1,10 @@
-/* Unit tests of holent_rt: the dynamic programme against an exhaustive
- * enumeration written here (every non-crossing pairing, every face, with
- * the regulated lengths in closed form, not via holent_geo), the candidate
- * counts against the Catalan and central binomial numbers, and every
- * error path.  */
+/* Unit tests of holent_rt: both minimisers (the dynamic programme and the
+ * fast sweep) against an exhaustive enumeration written here (every
+ * non-crossing pairing, every face, with the regulated lengths in closed
+ * form, not via holent_geo); the sweep against the DP on random regions
+ * in every bulk (same minimum and minimiser), also with its unwinding log
+ * cut short; the candidate counts against the Catalan and central
+ * binomial numbers; and every error path.  */
 #include <math.h>
 #include <stdlib.h>
 #include <string.h>
@@ -172,8 +174,9 @@ test_against_enumeration (void)
                         HOLENT_BULK_BTZ, HOLENT_BULK_ROTATING_BTZ,
                         HOLENT_BULK_CONICAL_DEFECT };
   holent_region *r = holent_region_alloc (7);
-  holent_rt_workspace *w = holent_rt_alloc (7);
+  holent_rt_workspace *w = holent_rt_alloc_dp (7);
   int nconf = 0;
+  for (int method = HOLENT_RT_DP; method <= HOLENT_RT_FAST; method++)
   for (size_t ib = 0; ib < sizeof bulks / sizeof bulks[0]; ib++)
     for (int trial = 0; trial < 40; trial++)
       {
@@ -230,7 +233,8 @@ test_against_enumeration (void)
         holent_rt_result res;
         size_t pairs[14];
         double arcs[7];
-        HT_STATUS (holent_rt_entropy (w, &bg, r, &res, pairs, arcs),
+        HT_STATUS (holent_rt_entropy_method (w, &bg, r, method, &res, pairs,
+                                             arcs),
                    HOLENT_SUCCESS);
         HT_CLOSE (res.S, b.best, 1e-10);
         HT_CHECK ((double) b.count == res.candidates,
@@ -263,7 +267,7 @@ test_against_enumeration (void)
               }
           }
       }
-  HT_CHECK (nconf > 200, "configurations compared: %d", nconf);
+  HT_CHECK (nconf > 400, "configurations compared: %d", nconf);
   holent_region_free (r);
   holent_rt_free (w);
   gsl_rng_free (rng);
@@ -306,9 +310,12 @@ test_errors (void)
   holent_geo_bg line, circ;
   holent_rt_result res;
   HT_CHECK (holent_rt_alloc (0) == NULL, "alloc(0)");
-  HT_CHECK (holent_rt_alloc (HOLENT_RT_NMAX + 1) == NULL, "alloc too big");
+  HT_CHECK (holent_rt_alloc_dp (0) == NULL, "alloc_dp(0)");
+  HT_CHECK (holent_rt_alloc_dp (HOLENT_RT_NMAX + 1) == NULL, "DP too big");
+  HT_CHECK (holent_rt_alloc ((size_t) -1 / 2) == NULL, "fast too big");
   holent_rt_free (NULL);
-  holent_rt_workspace *w = holent_rt_alloc (2);
+  holent_rt_workspace *w = holent_rt_alloc_dp (2);
+  holent_rt_workspace *wf = holent_rt_alloc (3);
   holent_region *r = holent_region_alloc (3);
   holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
   holent_geo_bg_init (&circ, HOLENT_BULK_BTZ, 5, 1e-3, 1, 1, 1, 1);
@@ -322,6 +329,15 @@ test_errors (void)
   HT_STATUS (holent_rt_entropy (w, &line, r, NULL, NULL, NULL), HOLENT_EINVAL);
   HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_EINVAL);
   HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_rt_entropy_method (wf, &line, r, HOLENT_RT_DP, &res,
+                                       NULL, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_rt_entropy_method (wf, &line, r, (holent_rt_method) 7,
+                                       &res, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_entropy_method (wf, &line, r, HOLENT_RT_FAST, &res,
+                                       NULL, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_rt_set_log_capacity (wf, 0), HOLENT_EINVAL);
+  HT_STATUS (holent_rt_set_log_capacity (NULL, 5), HOLENT_EINVAL);
+  holent_rt_free (wf);
   HT_STATUS (holent_region_set (r, 1, 6, 2, a, b), HOLENT_SUCCESS);
   HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_EINVAL);
   HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_EINVAL);
@@ -335,6 +351,18 @@ test_errors (void)
   bad.whole = 0;
   bad.pts = pts;
   HT_STATUS (holent_rt_entropy (w, &line, &bad, &res, NULL, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_rt_entropy_method (w, &line, &bad, HOLENT_RT_DP, &res,
+                                       NULL, NULL), HOLENT_EDOM);
+  pts[2] = NAN;
+  HT_STATUS (holent_rt_entropy (w, &line, &bad, &res, NULL, NULL),
+             HOLENT_EINVAL);
+  /* on a circle the endpoints must lie within one turn */
+  double cpts[4] = { 0, 1, 2, 5.5 };
+  bad.circle = 1;
+  bad.L = 5;
+  bad.pts = cpts;
+  HT_STATUS (holent_rt_entropy (w, &circ, &bad, &res, NULL, NULL),
+             HOLENT_EDOM);
   /* whole circle: S_BH, horizon, nothing paired */
   a[0] = 1;
   b[0] = 6;
@@ -349,6 +377,96 @@ test_errors (void)
   HT_CHECK (res.n_short == 1, "n_short = %zu", res.n_short);
   holent_region_free (r);
   holent_rt_free (w);
+}
+
+/* The sweep against the DP on random regions of every bulk: the same
+ * minimum (1e-12 relative) and the same minimiser (pairs, arcs, horizon);
+ * a third of the time with the sweep's log cut short so that its
+ * unwinding sweeps sub-runs again.  */
+static void
+test_oracle (void)
+{
+  gsl_rng *rng = gsl_rng_alloc (gsl_rng_mt19937);
+  gsl_rng_set (rng, 11);
+  const size_t nmax = 90;
+  holent_region *r = holent_region_alloc (nmax);
+  holent_rt_workspace *w = holent_rt_alloc_dp (nmax);
+  holent_rt_workspace *ws = holent_rt_alloc (nmax);
+  size_t *p1 = malloc (2 * nmax * sizeof *p1), *p2 = malloc (2 * nmax * sizeof *p2);
+  double *a1 = malloc (nmax * sizeof *a1), *a2 = malloc (nmax * sizeof *a2);
+  double *x = malloc (2 * nmax * sizeof *x), *a = malloc (nmax * sizeof *a),
+         *b = malloc (nmax * sizeof *b);
+  int compared = 0;
+  for (int trial = 0; trial < 320; trial++)
+    {
+      holent_bulk bulk = (holent_bulk) (trial % 8);
+      holent_geo_bg bg;
+      double L = 0.5 + 10 * gsl_rng_uniform (rng);
+      HT_STATUS (holent_geo_bg_init (&bg, bulk, L,
+                                     1e-6 + 1e-3 * gsl_rng_uniform (rng),
+                                     0.2 + 2 * gsl_rng_uniform (rng),
+                                     0.2 + 2 * gsl_rng_uniform (rng),
+                                     0.05 + 0.95 * gsl_rng_uniform (rng),
+                                     1 + gsl_rng_uniform (rng)),
+                 HOLENT_SUCCESS);
+      size_t n = 1 + gsl_rng_uniform_int (rng, trial < 300 ? 30 : nmax);
+      /* gaps of three kinds: uniform, log-uniform over 6 decades, mixed */
+      int style = trial / 8 % 3;
+      double acc = 0;
+      for (size_t i = 0; i < 2 * n; i++)
+        {
+          double u = gsl_rng_uniform_pos (rng);
+          acc += style == 0 ? u : style == 1 ? exp (14 * u - 7)
+                 : (gsl_rng_uniform (rng) < 0.5 ? 0.01 * u : u);
+          x[i] = acc;
+        }
+      double span = bg.circle ? L : 1 + 30 * gsl_rng_uniform (rng);
+      double tot = acc * (1 + 0.5 * gsl_rng_uniform_pos (rng));
+      double off = bg.circle ? L * gsl_rng_uniform (rng) : -3;
+      int shift = bg.circle && gsl_rng_uniform (rng) < 0.5;
+      for (size_t k = 0; k < n; k++)
+        {
+          size_t i = 2 * k + shift;
+          a[k] = off + span * x[i] / tot;
+          b[k] = off + (i + 1 < 2 * n ? span * x[i + 1] / tot
+                                       : span * x[0] / tot + L);
+        }
+      HT_STATUS (holent_region_set (r, bg.circle, L, n, a, b),
+                 HOLENT_SUCCESS);
+      holent_rt_result r1, r2, r3;
+      HT_STATUS (holent_rt_entropy_method (w, &bg, r, HOLENT_RT_DP, &r1, p1,
+                                           a1), HOLENT_SUCCESS);
+      holent_rt_workspace *wf = trial % 2 ? w : ws;
+      HT_STATUS (holent_rt_set_log_capacity (ws, trial % 3 ? 8 * nmax : 3),
+                 HOLENT_SUCCESS);
+      HT_STATUS (holent_rt_entropy_method (wf, &bg, r, HOLENT_RT_FAST, &r2,
+                                           p2, a2), HOLENT_SUCCESS);
+      HT_STATUS (holent_rt_entropy (wf, &bg, r, &r3, NULL, NULL),
+                 HOLENT_SUCCESS);
+      HT_CLOSE (r2.S, r1.S, 1e-12 * fmax (1, fabs (r1.S)));
+      HT_CHECK (r3.S == r2.S, "auto = fast");
+      /* random data: no ties, so the minimisers must agree */
+      int same = r1.horizon == r2.horizon;
+      for (size_t k = 0; k < 2 * r->n; k++)
+        same = same && p1[k] == p2[k];
+      for (size_t k = 0; k < r->n; k++)
+        same = same && fabs (a1[k] - a2[k]) <= 1e-13 * L;
+      HT_CHECK (same, "trial %d bulk %d n %zu: minimisers differ", trial,
+                (int) bulk, r->n);
+      compared++;
+    }
+  HT_CHECK (compared > 300, "compared %d", compared);
+  free (p1);
+  free (p2);
+  free (a1);
+  free (a2);
+  free (x);
+  free (a);
+  free (b);
+  holent_region_free (r);
+  holent_rt_free (w);
+  holent_rt_free (ws);
+  gsl_rng_free (rng);
 }
 
 static void
@@ -394,6 +512,7 @@ main (void)
   test_against_enumeration ();
   test_counts ();
   test_errors ();
+  test_oracle ();
   test_large ();
   return HT_DONE ();
 }

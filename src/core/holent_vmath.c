@@ -1,0 +1,101 @@
+/* holent_vmath.c: vectorised regulated lengths (holent_vmath.h).
+ * SPDX-License-Identifier: GPL-3.0-or-later */
+#include <math.h>
+#include <gsl/gsl_math.h>
+#include "holent_vmath.h"
+
+/* glibc's libmvec has vector forms of log, sin and expm1; declaring them
+   simd lets GCC call them from the loops below without -ffast-math (the
+   declarations glibc itself makes need __FAST_MATH__).  Sanitizer builds
+   (the C unit tests) keep the scalar libm.  */
+#if defined(__GNUC__) && !defined(__clang__) && defined(__x86_64__) \
+    && defined(__GLIBC__) && !defined(__SANITIZE_ADDRESS__)          \
+    && !defined(HOLENT_NO_MVEC)
+__attribute__ ((simd ("notinbranch"))) double log (double);
+__attribute__ ((simd ("notinbranch"))) double sin (double);
+__attribute__ ((simd ("notinbranch"))) double expm1 (double);
+#if defined(__ELF__)
+#define VM_CLONES __attribute__ ((target_clones ("avx2", "default")))
+#endif
+#endif
+#ifndef VM_CLONES
+#define VM_CLONES
+#endif
+
+/* log sinh x, x > 0: no overflow, no branch, accurate near 0.  */
+static inline double
+lnsinh (double x)
+{
+  return x - M_LN2 + log (-expm1 (-2.0 * x));
+}
+
+VM_CLONES static void
+len_poincare (double pref, size_t n, const double *arc, double *len)
+{
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    len[i] = pref + 2.0 * log (arc[i]);
+}
+
+/* Global and thermal AdS (cap = Inf) and the defect (cap = pi/2: beyond
+   it the path through the apex, sin = 1, len = pref).  */
+VM_CLONES static void
+len_sine (double pref, double k, double cap, size_t n, const double *arc,
+          double *len)
+{
+  /* Two passes: GCC does not if-convert the clamp in a loop that also
+     calls the vector sin and log.  */
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    {
+      double ph = k * arc[i];
+      len[i] = ph < cap ? ph : cap;
+    }
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    len[i] = pref + 2.0 * log (sin (len[i]));
+}
+
+VM_CLONES static void
+len_btz (double pref, double kL, double kR, size_t n, const double *arc,
+         double *len)
+{
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    len[i] = pref + (lnsinh (kL * arc[i]) + lnsinh (kR * arc[i]));
+}
+
+/* beta_L = beta_R: one log sinh (g + g = 2 g exactly).  */
+VM_CLONES static void
+len_btz1 (double pref, double k, size_t n, const double *arc, double *len)
+{
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    len[i] = pref + 2.0 * lnsinh (k * arc[i]);
+}
+
+void
+holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
+                          const double *arc, double *len)
+{
+  switch (bg->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+      len_poincare (bg->pref, n, arc, len);
+      break;
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+      len_sine (bg->pref, bg->kL, 4.0, n, arc, len);  /* ph < pi: no cap */
+      break;
+    case HOLENT_BULK_CONICAL_DEFECT:
+      len_sine (bg->pref, bg->kL, bg->alpha < 1.0 ? M_PI_2 : 4.0, n,
+                arc, len);
+      break;
+    default:
+      if (bg->kL == bg->kR)
+        len_btz1 (bg->pref, bg->kL, n, arc, len);
+      else
+        len_btz (bg->pref, bg->kL, bg->kR, n, arc, len);
+      break;
+    }
+}

@@ -1,0 +1,18 @@
+/* holent_vmath.h: regulated geodesic lengths for many arcs at once, one
+ * loop per bulk family with no per-element branch, so the compiler can
+ * call the vector forms of log, sin and expm1 (glibc's libmvec on x86_64;
+ * the scalar libm elsewhere).  SPDX-License-Identifier: GPL-3.0-or-later */
+#ifndef HOLENT_VMATH_H
+#define HOLENT_VMATH_H
+
+#include <stddef.h>
+#include "holent_geo.h"
+
+/* len[i] = regulated length of the geodesic over the arc arc[i], for arcs
+   that holent_geo_arc_length accepts (not checked here).  Agrees with
+   holent_geo_len_unchecked to a few ulps (log sinh x is evaluated as
+   x - log 2 + log(-expm1(-2x)) throughout).  len may alias arc.  */
+void holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
+                               const double *arc, double *len);
+
+#endif /* HOLENT_VMATH_H */
