@@ -129,6 +129,7 @@ holent_gw_fail (int status, const char *fn, const char *name, size_t index)
     case HOLENT_EUNSUP:    id = "holent:unsupported"; break;
     case HOLENT_ETOOBIG:   id = "holent:toobig"; break;
     case HOLENT_ECOINCIDE: id = "holent:coincident"; break;
+    case HOLENT_ETIMELIKE: id = "holent:timelike"; break;
     default:               id = "holent:internal"; break;
     }
   if (index == (size_t) -1)

@@ -21,7 +21,10 @@ enum holent_status
   HOLENT_ENOCONV = 6,   /* iteration (root finder, quadrature) failed     */
   HOLENT_EUNSUP = 7,    /* not implemented for this background            */
   HOLENT_ETOOBIG = 8,   /* problem size beyond what the core accepts      */
-  HOLENT_ECOINCIDE = 9  /* two boundary points coincide                   */
+  HOLENT_ECOINCIDE = 9, /* two boundary points coincide                   */
+  /* Time-dependent states (issue 12); numbered apart from the codes the
+     error-protocol work adds, so both can be merged.  */
+  HOLENT_ETIMELIKE = 30 /* boundary points timelike or null separated     */
 };
 
 /* Short English description of a status code; never NULL.  */

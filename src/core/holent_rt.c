@@ -258,16 +258,19 @@ typedef struct
   int circle;
   const double *y;     /* unrolled points (circle: q + L on turn two)  */
   double *T, *W;
+  holent_rt_cost cost;  /* caller's lengths (NULL: the arc lengths of bg) */
+  void *ctx;
 } dp;
 
 /* W[s][t]: the geodesic over the arc from point s to point s + 2t + 1;
    on a circle rows s >= N repeat rows s - N.  The points were checked
    (strictly increasing within one turn), so every arc is valid.  */
-static void
+static int
 fill_weights (dp *d, const holent_geo_bg *bg)
 {
   const long N = (long) d->N;
   const size_t K = d->K;
+  int status = HOLENT_SUCCESS;
 #pragma omp parallel for schedule(dynamic, 16) if (N > 200)
   for (long s = 0; s < N; s++)
     {
@@ -275,8 +278,24 @@ fill_weights (dp *d, const holent_geo_bg *bg)
       size_t m = d->circle ? K : ((size_t) (N - s)) / 2;
       for (size_t t = 0; t < m; t++)
         w[t] = d->y[s + 2 * t + 1] - d->y[s];
-      holent_vmath_arc_lengths (bg, m, w, w);
+      if (d->cost == NULL)
+        {
+          holent_vmath_arc_lengths (bg, m, w, w);
+          continue;
+        }
+      for (size_t t = 0; t < m; t++)
+        {
+          size_t j = ((size_t) s + 2 * t + 1) % d->N;
+          int st = d->cost (d->ctx, (size_t) s, j, w[t], &w[t]);
+          if (st)
+            {
+#pragma omp critical (holent_rt_cost_status)
+              status = st;
+              w[t] = INFINITY;
+            }
+        }
     }
+  return status;
 }
 
 /* Most pairs in a run starting at unrolled point s.  */
@@ -567,10 +586,12 @@ check_points (const holent_region *r)
   return HOLENT_SUCCESS;
 }
 
-int
-holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
-                          const holent_region *r, holent_rt_method method,
-                          holent_rt_result *res, size_t *pairs, double *arcs)
+/* Both public entry points; cost != NULL forces the DP.  */
+static int
+rt_minimise (holent_rt_workspace *w, const holent_geo_bg *bg,
+             const holent_region *r, holent_rt_method method,
+             holent_rt_cost cost, void *ctx, holent_rt_result *res,
+             size_t *pairs, double *arcs)
 {
   if (w == NULL || bg == NULL || r == NULL || res == NULL)
     return HOLENT_EINVAL;
@@ -583,6 +604,8 @@ holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
     return HOLENT_EEMPTY;
   if (r->n > w->nmax || (method == HOLENT_RT_DP && !w->dp))
     return HOLENT_ETOOBIG;
+  if (cost != NULL && method != HOLENT_RT_DP)
+    return HOLENT_EUNSUP;
   int fast = method == HOLENT_RT_FAST
              || (method == HOLENT_RT_AUTO && cost_is_concave (bg));
   if (fast && !cost_is_concave (bg))
@@ -620,7 +643,7 @@ holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
   size_t P = two_turns ? 2 * N : N;
   for (size_t i = 0; i < P; i++)
     w->y[i] = i < N ? r->pts[i] : r->pts[i - N] + r->L;
-  dp d = { N, n, n + 1, P, two_turns, w->y, w->T, w->W };
+  dp d = { N, n, n + 1, P, two_turns, w->y, w->T, w->W, cost, ctx };
   int want_conf = pairs != NULL || arcs != NULL;
   if (fast)
     {
@@ -635,7 +658,9 @@ holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
     }
   else
     {
-      fill_weights (&d, bg);
+      st = fill_weights (&d, bg);
+      if (st)
+        return st;
       fill_tables (&d);
       if (two_turns)
         for (size_t s = 1; s <= N; s++)
@@ -726,6 +751,25 @@ holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
         out++;
       }
   return HOLENT_SUCCESS;
+}
+
+int
+holent_rt_entropy_method (holent_rt_workspace *w, const holent_geo_bg *bg,
+                          const holent_region *r, holent_rt_method method,
+                          holent_rt_result *res, size_t *pairs, double *arcs)
+{
+  return rt_minimise (w, bg, r, method, NULL, NULL, res, pairs, arcs);
+}
+
+int
+holent_rt_entropy_cost (holent_rt_workspace *w, const holent_geo_bg *bg,
+                        const holent_region *r, holent_rt_cost cost,
+                        void *ctx, holent_rt_result *res, size_t *pairs,
+                        double *arcs)
+{
+  if (cost == NULL)
+    return HOLENT_EINVAL;
+  return rt_minimise (w, bg, r, HOLENT_RT_DP, cost, ctx, res, pairs, arcs);
 }
 
 int

@@ -109,6 +109,23 @@ int holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
                        const holent_region *r, holent_rt_result *res,
                        size_t *pairs, double *arcs);
 
+/* Geodesic lengths supplied by the caller (time-dependent states, issue
+ * 12): *len for the geodesic from sorted endpoint i to sorted endpoint j
+ * (0 <= i, j < 2 r->n) over the boundary arc of length arc that runs from
+ * i to j in the positive sense (on a circle it may pass through 0).  A
+ * nonzero return is passed on as the status.  Called from several
+ * threads at once: no shared mutable state.  */
+typedef int (*holent_rt_cost) (void *ctx, size_t i, size_t j, double arc,
+                               double *len);
+
+/* holent_rt_entropy with the lengths of cost, by the cubic DP (the
+   workspace must come from holent_rt_alloc_dp); the candidates, S_BH and
+   the result are as there.  HOLENT_EINVAL for cost == NULL.  */
+int holent_rt_entropy_cost (holent_rt_workspace *w, const holent_geo_bg *bg,
+                            const holent_region *r, holent_rt_cost cost,
+                            void *ctx, holent_rt_result *res, size_t *pairs,
+                            double *arcs);
+
 /* The number of candidates for n intervals in bg (see above), and its
    logarithm; n = 0 stands for the whole circle.  */
 int holent_rt_count (const holent_geo_bg *bg, size_t n, double *count,
