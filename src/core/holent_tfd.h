@@ -1,0 +1,115 @@
+/* holent_tfd.h: the thermofield double (eternal two-sided BTZ), its
+ * geodesics through the Einstein-Rosen bridge, the Shenker-Stanford shock
+ * wave, and the exact minimisation over two-sided regions.
+ * Derivations: doc/tfd_shock.md.
+ *
+ * Conventions: both sides' boundary times run forward (the state evolves
+ * with H_L + H_R, Hartman and Maldacena 2013, JHEP 05 (2013) 014); the
+ * side coordinates x are the same Killing coordinate on both sides.  The
+ * shock is the limit of a null shell sent in from the LEFT boundary long
+ * ago, a shift alpha >= 0 of the Kruskal coordinate across the horizon
+ * u = 0 (Shenker and Stanford 2014, JHEP 03 (2014) 067).
+ *
+ * The two-sided length (beta = inverse temperature, T = tL + tR,
+ * dx = xR - xL, reduced to [-L/2, L/2] on a circle: the shortest winding):
+ *   len = 2 log( (beta/(pi eps)) [ sqrt(cosh(pi(T + dx)/beta)
+ *               cosh(pi(T - dx)/beta)) + (alpha/2) e^{pi (tL - tR)/beta} ] ).
+ *
+ * Copyright (C) 2026 The holent developers.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#ifndef HOLENT_TFD_H
+#define HOLENT_TFD_H
+
+#include <stddef.h>
+#include "holent.h"
+#include "holent_geo.h"
+#include "holent_region.h"
+#include "holent_rt.h"
+
+typedef struct
+{
+  holent_geo_bg side;  /* one exterior: planar BTZ (line) or BTZ (circle) */
+  double beta;         /* inverse temperature                             */
+  double alpha;        /* shock shift, 0 without a shock                  */
+} holent_tfd_bg;
+
+/* Fill *b: circle (1) of circumference L or line (0), cutoff eps, inverse
+   temperature beta, central charge c, shock shift alpha >= 0.
+   HOLENT_EINVAL for NaN, HOLENT_EDOM for values out of range.  */
+int holent_tfd_init (holent_tfd_bg *b, int circle, double L, double eps,
+                     double beta, double c, double alpha);
+
+/* Shock shift alpha = (E/(4M)) exp(2 pi tw/beta) of a shell of energy E
+ * (>= 0) sent in at left time -tw, with M the energy of the black hole
+ * above the massless BTZ, M = pi c L/(6 beta^2) on a circle; on a line E
+ * is an energy density and M = pi c/(6 beta^2) the thermal one.  *M (if
+ * not NULL) receives M.  HOLENT_EDOM for E < 0, a non-finite tw, or an
+ * alpha that overflows.  */
+int holent_tfd_shock_alpha (int circle, double L, double beta, double c,
+                            double E, double tw, double *alpha, double *M);
+
+/* The shock time tw that gives a shift alpha for energy E (inverse of the
+   above); HOLENT_EDOM unless alpha > 0 and E > 0.  */
+int holent_tfd_shock_time (int circle, double L, double beta, double c,
+                           double E, double alpha, double *tw);
+
+/* Length of the geodesic through the bridge between the left point
+   (xL, tL) and the right point (xR, tR).  */
+int holent_tfd_cross_length (const holent_tfd_bg *b, double xL, double tL,
+                             double xR, double tR, double *len);
+
+/* Length between two points of one side (side 0 left, 1 right): the
+   covariant BTZ length (holent_hrt_length, class cls), untouched by the
+   shock.  Left times run forward, which leaves the length unchanged.  */
+int holent_tfd_side_length (const holent_tfd_bg *b, double x1, double t1,
+                            double x2, double t2, holent_geo_class cls,
+                            double *len);
+
+typedef struct holent_tfd_workspace holent_tfd_workspace;
+
+/* Workspace for two-sided regions of up to nmax intervals in all.  */
+holent_tfd_workspace *holent_tfd_workspace_alloc (size_t nmax);
+void holent_tfd_workspace_free (holent_tfd_workspace *w);
+
+/* A side of a two-sided region: n intervals [a, b] with times ta, tb
+   (n = 0: nothing on that side).  */
+typedef struct
+{
+  size_t n;
+  const double *a, *b, *ta, *tb;
+} holent_tfd_side;
+
+/* Entropy of A_L u A_R at the times given, shifted by dt on both sides:
+ * the exact minimum over the non-crossing pairings of the endpoints in the
+ * boundary order of the bridge slice (right side ascending, then left
+ * side descending), each pair joined within a side or through the
+ * bridge.  On the line that is every candidate (the horizon is not
+ * compact).  On a circle a one-sided region is the BTZ one, with the
+ * horizon as homology asks; regions on both sides of a circle give
+ * HOLENT_EUNSUP.  res->horizon flags the horizon, res->m the number of
+ * geodesics, *ncross (if not NULL) those through the bridge.  Errors:
+ * those of holent_region_set for each side (*bad_side 0 left, 1 right,
+ * *bad_row the row), HOLENT_ETIMELIKE for a causal pair on one side.  */
+int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                        const holent_tfd_side *left,
+                        const holent_tfd_side *right, double dt,
+                        holent_rt_result *res, size_t *ncross,
+                        int *bad_side, size_t *bad_row);
+
+/* The first shift dt in [0, tmax] at which the two-sided mutual
+ * information I(A_L : A_R) = S(A_L) + S(A_R) - S(A_L u A_R) vanishes
+ * (to a relative 1e-12 of beta); *dt = Inf when it is still positive at
+ * tmax, 0 when it already vanishes.  */
+int holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                        const holent_tfd_side *left,
+                        const holent_tfd_side *right, double tmax,
+                        double *dt);
+
+/* Scrambling: the smallest shock shift alpha at which I(A_L : A_R)
+ * vanishes at the given times (the shift in b is ignored); *alpha = 0
+ * when it vanishes without a shock.  */
+int holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                              const holent_tfd_side *left,
+                              const holent_tfd_side *right, double *alpha);
+
+#endif /* HOLENT_TFD_H */

@@ -1,0 +1,318 @@
+/* Unit tests of holent_tfd.  Independent checks: the bridge length
+ * extremised numerically (GSL Brent minimisers) over the crossing point
+ * on the shock, with each leg the embedding distance acosh(-X.Y) of the
+ * Kruskal embedding of BTZ; the published limits of Hartman and
+ * Maldacena 2013 (JHEP 05 (2013) 014: 2 log((beta/(pi eps)) cosh(2 pi
+ * t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
+ * log(beta/(pi eps)) + 2 log(1 + alpha/2), from memory); the shock shift
+ * from the exact matching of r across a null shell; M against the first
+ * law with the Bekenstein-Hawking entropy of holent_geo; the region
+ * minimiser against brute force.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#include <math.h>
+#include <stdlib.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_min.h>
+#include "holent_ctest.h"
+#include "holent_tfd.h"
+#include "holent_hrt.h"
+
+/* Kruskal embedding of planar BTZ (R = 2 pi/beta, ell = 1).  */
+static void
+kr_point (double R, double u, double v, double x, double X[4])
+{
+  double d = 1.0 + u * v;
+  X[0] = (1.0 - u * v) / d * cosh (R * x);
+  X[1] = (1.0 - u * v) / d * sinh (R * x);
+  X[2] = (v - u) / d;
+  X[3] = (v + u) / d;
+}
+
+static double
+kr_dist (const double X[4], const double Y[4])
+{
+  return acosh (X[0] * Y[0] - X[1] * Y[1] - X[2] * Y[2] + X[3] * Y[3]);
+}
+
+/* The cutoff point of a boundary point: side 1 right, 0 left.  */
+static void
+kr_boundary (double R, double eps, int side, double x, double t, double X[4])
+{
+  double r = 1.0 / eps + R * R * eps / 4.0;  /* FG cutoff, doc section 1 */
+  double q = sqrt ((r - R) / (r + R));
+  if (side)
+    kr_point (R, -exp (-R * t) * q, exp (R * t) * q, x, X);
+  else
+    kr_point (R, exp (R * t) * q, -exp (-R * t) * q, x, X);
+}
+
+typedef struct
+{
+  double R, eps, alpha, xL, tL, xR, tR, x;
+} ex_par;
+
+/* Sum of the two legs through the shock point (u = 0, v, x); the left
+   leg sees v + alpha.  Minus it, for the minimiser that maximises.  */
+static double
+legs (double v, void *p)
+{
+  const ex_par *e = p;
+  double B[4], P[4], Q[4], C[4];
+  kr_boundary (e->R, e->eps, 1, e->xR, e->tR, B);
+  kr_point (e->R, 0.0, v, e->x, P);
+  kr_point (e->R, 0.0, v + e->alpha, e->x, Q);
+  kr_boundary (e->R, e->eps, 0, e->xL, e->tL, C);
+  return -(kr_dist (B, P) + kr_dist (Q, C));
+}
+
+static double
+minimise (double (*f) (double, void *), void *p, double lo, double hi,
+          double guess)
+{
+  gsl_function F = { f, p };
+  gsl_min_fminimizer *s = gsl_min_fminimizer_alloc (gsl_min_fminimizer_brent);
+  double m = guess;
+  if (gsl_min_fminimizer_set (s, &F, m, lo, hi) != GSL_SUCCESS)
+    {
+      gsl_min_fminimizer_free (s);
+      return NAN;
+    }
+  for (int it = 0; it < 200; it++)
+    {
+      gsl_min_fminimizer_iterate (s);
+      m = gsl_min_fminimizer_x_minimum (s);
+      if (gsl_min_test_interval (gsl_min_fminimizer_x_lower (s),
+                                 gsl_min_fminimizer_x_upper (s), 1e-13, 0)
+          == GSL_SUCCESS)
+        break;
+    }
+  double v = gsl_min_fminimizer_f_minimum (s);
+  gsl_min_fminimizer_free (s);
+  (void) m;
+  return v;
+}
+
+/* Maximise over v (a timelike direction on the null shock), for a given
+   x: the legs must stay spacelike, so v is bounded on both sides.  */
+static double
+over_v (double x, void *p)
+{
+  ex_par *e = p;
+  e->x = x;
+  /* Bracket: scan for a good interior point.  */
+  double best = INFINITY, vb = 0.0;
+  for (double v = -60; v <= 60; v += 0.01)
+    {
+      double f = legs (v, e);
+      if (isfinite (f) && f < best)
+        {
+          best = f;
+          vb = v;
+        }
+    }
+  return -minimise (legs, e, vb - 0.01, vb + 0.01, vb);
+}
+
+static double
+extremal_length (ex_par *e)
+{
+  /* Minimise the maximum over x (spacelike direction).  */
+  double best = INFINITY, xb = 0.0;
+  for (double x = -3; x <= 3; x += 0.1)
+    {
+      double f = over_v (x, e);
+      if (f < best)
+        {
+          best = f;
+          xb = x;
+        }
+    }
+  return minimise (over_v, e, xb - 0.1, xb + 0.1, xb);
+}
+
+static void
+test_cross (void)
+{
+  holent_tfd_bg b;
+  double beta = 2.0 * M_PI, eps = 1e-4, len;  /* R = 1 */
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, 0.0), HOLENT_SUCCESS);
+  /* Hartman and Maldacena 2013.  */
+  for (double t = 0; t < 3; t += 0.7)
+    {
+      HT_STATUS (holent_tfd_cross_length (&b, 0.3, t, 0.3, t, &len), HOLENT_SUCCESS);
+      HT_CLOSE (len, 2 * log (beta / (M_PI * eps) * cosh (2 * M_PI * t / beta)), 1e-13);
+    }
+  /* Shenker and Stanford 2014.  */
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, 3.0), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_cross_length (&b, 0, 0, 0, 0, &len), HOLENT_SUCCESS);
+  HT_CLOSE (len, 2 * log (beta / (M_PI * eps)) + 2 * log (1 + 1.5), 1e-13);
+  /* Numerical extremisation over the crossing point (general case).  */
+  static const double cases[][5] = {
+    /* alpha, xL, tL, xR, tR */
+    { 0.0, 0.0, 0.4, 0.7, 0.1 }, { 2.0, 0.2, 0.0, -0.5, 0.3 },
+    { 0.5, 0.0, -0.3, 1.2, 0.8 }
+  };
+  for (size_t k = 0; k < 3; k++)
+    {
+      const double *c = cases[k];
+      ex_par e = { 1.0, eps, c[0], c[1], c[2], c[3], c[4], 0.0 };
+      HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, c[0]), HOLENT_SUCCESS);
+      HT_STATUS (holent_tfd_cross_length (&b, c[1], c[2], c[3], c[4], &len), HOLENT_SUCCESS);
+      double num = extremal_length (&e);
+      HT_CHECK (fabs (len - num) < 1e-7 * len, "case %zu: %.12g vs %.12g", k, len, num);
+    }
+  /* Circle: the shortest winding.  */
+  double l2;
+  HT_STATUS (holent_tfd_init (&b, 1, 10.0, eps, 2.0, 1.0, 0.0), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_cross_length (&b, 0.5, 0.1, 9.5, 0.2, &len), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_cross_length (&b, 0.5, 0.1, -0.5, 0.2, &l2), HOLENT_SUCCESS);
+  HT_CLOSE (len, l2, 1e-12);
+  /* Errors.  */
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, -1.0), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, NAN), HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, -1.0, 1.0, 0.0), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, INFINITY), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_cross_length (&b, NAN, 0, 0, 0, &len), HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_cross_length (NULL, 0, 0, 0, 0, &len), HOLENT_EINVAL);
+}
+
+static void
+test_shift (void)
+{
+  /* Exact matching of r along a null shell u = u_w between BTZ of radii
+     R (mass M) and R' (mass M + E), each side's Kruskal u_w set by the
+     same boundary time tw: at the point where the shell meets v = 0 on
+     one side, the other side's v' is the shift.  R'^2/R^2 = (M + E)/M.  */
+  double beta = 1.7, c = 6.0, L = 3.0, R = L / beta * 1.0, M, alpha;
+  (void) R;
+  for (double tw = 2.0; tw <= 5.0; tw += 1.5)
+    {
+      double E = 1e-7;
+      HT_STATUS (holent_tfd_shock_alpha (1, L, beta, c, E, tw, &alpha, &M), HOLENT_SUCCESS);
+      /* bulk units: R = 2 pi/beta_bulk with tw in bulk time 2 pi tw/L.  */
+      double Rb = L / beta, twb = 2 * M_PI * tw / L;
+      double Rp = Rb * sqrt (1 + E / M);
+      double uw = exp (-Rp * twb);
+      double vp = (Rp - Rb) / ((Rp + Rb) * uw);
+      /* vp is the shift in the Kruskal v of the massive side, whose
+         normalisation differs from the massless side's by O(E/M).  */
+      HT_CHECK (fabs (vp - alpha) < 1e-5 * alpha, "tw %g: %g vs %g", tw, vp, alpha);
+    }
+  /* M from the first law dM = T dS_BH, S_BH from holent_geo.  */
+  holent_geo_bg g1, g2;
+  double b1 = 1.7, b2 = 1.7 + 1e-6, M1, M2, a;
+  HT_STATUS (holent_geo_bg_init (&g1, HOLENT_BULK_BTZ, L, 1e-3, b1, b1, 1, c), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_bg_init (&g2, HOLENT_BULK_BTZ, L, 1e-3, b2, b2, 1, c), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_shock_alpha (1, L, b1, c, 1, 0, &a, &M1), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_shock_alpha (1, L, b2, c, 1, 0, &a, &M2), HOLENT_SUCCESS);
+  HT_CLOSE ((M2 - M1) / (g2.S_BH - g1.S_BH), 1 / (b1 + 5e-7), 1e-6);
+  double tw;
+  HT_STATUS (holent_tfd_shock_alpha (0, 0, b1, c, 0.01, 2.5, &a, &M1), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_shock_time (0, 0, b1, c, 0.01, a, &tw), HOLENT_SUCCESS);
+  HT_CLOSE (tw, 2.5, 1e-12);
+  HT_STATUS (holent_tfd_shock_alpha (0, 0, b1, c, -1, 2.5, &a, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_shock_alpha (0, 0, b1, c, 1, INFINITY, &a, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_shock_alpha (0, 0, b1, c, 1, 1e6, &a, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_shock_alpha (1, -1, b1, c, 1, 1, &a, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_shock_time (0, 0, b1, c, 0, 1, &tw), HOLENT_EDOM);
+}
+
+/* Brute force over pairings of the bridge order (points lo..hi-1).  */
+static double
+brute (const holent_tfd_bg *b, const double *x, const double *t,
+       const int *s, size_t lo, size_t hi)
+{
+  if (lo >= hi)
+    return 0.0;
+  double best = INFINITY;
+  for (size_t j = lo + 1; j < hi; j += 2)
+    {
+      double len;
+      if (s[lo] == s[j])
+        holent_tfd_side_length (b, x[lo], t[lo], x[j], t[j], HOLENT_GEO_SHORTER, &len);
+      else if (s[lo] == 0)
+        holent_tfd_cross_length (b, x[lo], t[lo], x[j], t[j], &len);
+      else
+        holent_tfd_cross_length (b, x[j], t[j], x[lo], t[lo], &len);
+      double v = len + brute (b, x, t, s, lo + 1, j) + brute (b, x, t, s, j + 1, hi);
+      if (v < best)
+        best = v;
+    }
+  return best;
+}
+
+static void
+test_regions (void)
+{
+  holent_tfd_bg b;
+  holent_tfd_workspace *w = holent_tfd_workspace_alloc (6);
+  holent_rt_result res;
+  size_t nc, row;
+  int side;
+  double beta = 1.0, eps = 1e-3, l = 2.0;
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 3.0, 0.0), HOLENT_SUCCESS);
+  double a[1] = { 0 }, bb[1] = { l }, z[1] = { 0 };
+  holent_tfd_side A = { 1, a, bb, z, z };
+  /* Hartman-Maldacena growth and saturation of S(A_L u A_R).  */
+  for (double t = 0; t < 2; t += 0.25)
+    {
+      HT_STATUS (holent_tfd_entropy (w, &b, &A, &A, t, &res, &nc, &side, &row), HOLENT_SUCCESS);
+      double conn = 2 * log (beta / (M_PI * eps) * cosh (2 * M_PI * t / beta));
+      double disc = 2 * log (beta / (M_PI * eps) * sinh (M_PI * l / beta));
+      HT_CLOSE (res.S, 0.5 * 2 * fmin (conn, disc), 1e-12);
+      HT_CHECK (nc == (conn < disc ? 2u : 0u), "ncross %zu at t %g", nc, t);
+    }
+  /* The time at which the mutual information vanishes:
+     cosh(2 pi t/beta) = sinh(pi l/beta).  */
+  double ts;
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &A, &A, 10.0, &ts), HOLENT_SUCCESS);
+  HT_CLOSE (ts, beta / (2 * M_PI) * acosh (sinh (M_PI * l / beta)), 1e-10);
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &A, &A, 0.1, &ts), HOLENT_SUCCESS);
+  HT_CHECK (isinf (ts), "still correlated at tmax");
+  /* Scrambling: alpha* = 2 (sinh(pi l/beta) - 1) (Shenker-Stanford).  */
+  double al;
+  HT_STATUS (holent_tfd_mi_zero_alpha (w, &b, &A, &A, &al), HOLENT_SUCCESS);
+  HT_CLOSE (al, 2 * (sinh (M_PI * l / beta) - 1), 1e-10);
+  /* Brute force, three intervals with times on two sides, shocked.  */
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 3.0, 0.7), HOLENT_SUCCESS);
+  double ra[2] = { 0.0, 1.3 }, rb[2] = { 1.0, 1.9 }, rta[2] = { 0.1, 0.3 }, rtb[2] = { 0.2, 0.0 };
+  double la[1] = { 0.4 }, lb[1] = { 1.6 }, lta[1] = { -0.1 }, ltb[1] = { 0.2 };
+  holent_tfd_side R = { 2, ra, rb, rta, rtb }, Ls = { 1, la, lb, lta, ltb };
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &R, 0.3, &res, &nc, &side, &row), HOLENT_SUCCESS);
+  double x[6] = { 0.0, 1.0, 1.3, 1.9, 1.6, 0.4 };
+  double t[6] = { 0.4, 0.5, 0.6, 0.3, 0.5, 0.2 };
+  int s[6] = { 1, 1, 1, 1, 0, 0 };
+  HT_CLOSE (res.length, brute (&b, x, t, s, 0, 6), 1e-12);
+  /* One side only equals the BTZ one-sided problem.  */
+  HT_STATUS (holent_tfd_entropy (w, &b, &(holent_tfd_side) { 0, NULL, NULL, NULL, NULL }, &R, 0.0, &res, &nc, &side, &row), HOLENT_SUCCESS);
+  HT_CLOSE (res.length, brute (&b, x, t, s, 0, 4), 1e-12);
+  /* Errors.  */
+  holent_tfd_side E0 = { 0, NULL, NULL, NULL, NULL };
+  HT_STATUS (holent_tfd_entropy (w, &b, &E0, &E0, 0, &res, &nc, &side, &row), HOLENT_EEMPTY);
+  double ta2[2] = { 0.0, 0.0 }, tb2[2] = { 0.0, 2.0 };
+  holent_tfd_side Bad = { 2, ra, rb, ta2, tb2 };
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &Bad, 0, &res, &nc, &side, &row), HOLENT_ETIMELIKE);
+  HT_CHECK (side == 1, "side %d", side);
+  double ob[2] = { 1.5, 1.9 };
+  holent_tfd_side Ov = { 2, ra, ob, rta, rtb };
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ov, &R, 0, &res, &nc, &side, &row), HOLENT_EOVERLAP);
+  HT_CHECK (side == 0, "side %d", side);
+  HT_STATUS (holent_tfd_init (&b, 1, 5.0, eps, beta, 3.0, 0.0), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &R, 0, &res, &nc, &side, &row), HOLENT_EUNSUP);
+  HT_STATUS (holent_tfd_entropy (w, &b, &E0, &R, 0, &res, &nc, &side, &row), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &E0, &R, 1, &ts), HOLENT_EEMPTY);
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &Ls, &R, -1, &ts), HOLENT_EDOM);
+  holent_tfd_workspace_free (w);
+  HT_CHECK (holent_tfd_workspace_alloc (0) == NULL, "nmax 0");
+}
+
+int
+main (void)
+{
+  gsl_set_error_handler_off ();
+  test_cross ();
+  test_shift ();
+  test_regions ();
+  return HT_DONE ();
+}
