@@ -1,0 +1,198 @@
+/* holent_quench.c: thin-shell AdS3-Vaidya geodesic lengths and entropies.
+ * Derivation: doc/quench.md.
+ *
+ * Copyright (C) 2026 The holent developers.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#include <math.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_roots.h>
+#include "holent_quench.h"
+
+int
+holent_quench_init (holent_quench_bg *q, int circle, double L, double eps,
+                    double beta, double c)
+{
+  if (q == NULL)
+    return HOLENT_EINVAL;
+  int st = holent_geo_bg_init (&q->vac,
+                               circle ? HOLENT_BULK_GLOBAL_ADS
+                                      : HOLENT_BULK_POINCARE,
+                               L, eps, 1, 1, 1, c);
+  if (st)
+    return st;
+  st = holent_geo_bg_init (&q->bh,
+                           circle ? HOLENT_BULK_BTZ : HOLENT_BULK_PLANAR_BTZ,
+                           L, eps, beta, beta, 1, c);
+  if (st)
+    return st;
+  q->beta = beta;
+  return HOLENT_SUCCESS;
+}
+
+typedef struct
+{
+  double S, C, lam, R;  /* sinh, cosh of R t; pi l/beta or R Phi/2; R */
+  double gap;           /* circle: pi/2 - Phi/2 */
+} cross_par;
+
+/* Line: h(eta) - pi l/beta, increasing in eta (doc/quench.md); the
+   difference C - sqrt(1 + S^2 E^2) written without cancellation.  */
+static double
+line_eq (double eta, void *p)
+{
+  const cross_par *c = p;
+  double E = exp (-eta), SE = c->S * E, w = sqrt (1.0 + SE * SE);
+  return asinh (SE) + c->S * (1.0 - E * E) / (E * (c->C + w)) - c->lam;
+}
+
+/* Circle: G = C - cosh a - R tan(phi) sinh a, a = lam - R phi, written
+   in d = Phi/2 - phi (a = R d) and gap = pi/2 - Phi/2, so that
+   tan(phi) = 1/tan(gap + d) stays accurate near the half circle.  */
+static double
+circle_eq (double d, void *p)
+{
+  const cross_par *c = p;
+  double a = c->R * d;
+  return c->C - cosh (a) - c->R * sinh (a) / tan (c->gap + d);
+}
+
+static int
+brent (double (*f) (double, void *), void *p, double lo, double hi,
+       double *x)
+{
+  gsl_function F = { f, p };
+  gsl_root_fsolver *s = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
+  if (s == NULL)
+    return HOLENT_ENOMEM;
+  int st = gsl_root_fsolver_set (s, &F, lo, hi);
+  for (int it = 0; st == GSL_SUCCESS && it < 200; it++)
+    {
+      st = gsl_root_fsolver_iterate (s);
+      if (st)
+        break;
+      st = gsl_root_test_interval (gsl_root_fsolver_x_lower (s),
+                                   gsl_root_fsolver_x_upper (s), 1e-15,
+                                   4e-16);
+      if (st == GSL_SUCCESS)
+        break;
+      if (st == GSL_CONTINUE)
+        st = GSL_SUCCESS;
+    }
+  *x = gsl_root_fsolver_root (s);
+  gsl_root_fsolver_free (s);
+  return st == GSL_SUCCESS ? HOLENT_SUCCESS : HOLENT_ENOCONV;
+}
+
+int
+holent_quench_length (const holent_quench_bg *q, double l, double t,
+                      double *len, double *eta)
+{
+  double e = 0.0;
+  if (q == NULL || len == NULL || isnan (l) || !isfinite (t))
+    return HOLENT_EINVAL;
+  int circle = q->vac.circle;
+  double L = q->vac.L;
+  if (!(l > 0.0) || !isfinite (l) || (circle && !(l < L)))
+    return HOLENT_EDOM;
+  if (circle && l > 0.5 * L)
+    l = L - l;
+  if (t <= 0.0)
+    {
+      if (eta)
+        *eta = -1.0;
+      return holent_geo_arc_length (&q->vac, l, len);
+    }
+  if (t >= 0.5 * l)
+    {
+      if (eta)
+        *eta = 0.0;
+      return holent_geo_arc_length (&q->bh, l, len);
+    }
+  double Rt = 2.0 * M_PI * t / q->beta;
+  cross_par c = { sinh (Rt), cosh (Rt), M_PI * l / q->beta,
+                  circle ? L / q->beta : 0.0, 0.0 };
+  int st;
+  if (!circle)
+    {
+      /* Bracket: h(0) = R t < pi l/beta, and h >= 3 S/(8 C E) once
+         E <= 1/2, so E = 3 S/(8 C lam) is above the root.  */
+      double hi = fmax (M_LN2, log (8.0 * c.C * c.lam / (3.0 * c.S)));
+      st = brent (line_eq, &c, 0.0, hi, &e);
+    }
+  else
+    {
+      /* G < 0 at phi = 0 (t < l/2) and G -> C - 1 > 0 as phi -> Phi/2
+         < pi/2.  Scan for the first sign change from the top, where the
+         crossing lies near the tip.  At l = L/2 (Phi/2 = pi/2) the
+         crossing sits at phi = pi/2 exactly, where G's elimination of
+         e^-eta is 0/0; the r equation alone gives e^-eta =
+         (C - 1)/(R S) there (doc/quench.md).  */
+      double top = M_PI * l / L, E;
+      c.gap = M_PI_2 - top;
+      if (c.gap <= 1e-300)
+        E = (c.C - 1.0) / (c.R * c.S);
+      else
+        {
+          /* G(d = top) = C - cosh(lam) < 0; halve d until G > 0 (G -> C -
+             1 > 0 as d -> 0), then bracket.  */
+          double lo = top, hi = top, d;
+          int k = 0;
+          while (circle_eq (lo, &c) <= 0.0)
+            {
+              hi = lo;
+              lo *= 0.5;
+              if (++k > 2000 || lo == 0.0)
+                return HOLENT_ENOCONV;
+            }
+          st = brent (circle_eq, &c, lo, hi, &d);
+          if (st)
+            return st;
+          E = sinh (c.R * d) / (c.S * sin (c.gap + d));
+        }
+      /* Small black holes (L/beta < 1) can leave no crossing with
+         e^-eta <= 1: not covered.  */
+      if (!(E > 0.0 && E <= 1.0 + 1e-12))
+        return HOLENT_ENOCONV;
+      e = -log (fmin (E, 1.0));
+      st = HOLENT_SUCCESS;
+    }
+  if (st)
+    return st;
+  if (eta)
+    *eta = e;
+  /* 2 log((beta/(pi eps)) S cosh(eta)), cosh(eta) in log form.  */
+  double lc = e + log1p (exp (-2.0 * e)) - M_LN2;
+  *len = q->bh.pref + 2.0 * (log (c.S) + lc);
+  return HOLENT_SUCCESS;
+}
+
+typedef struct
+{
+  const holent_quench_bg *q;
+  double t;
+} q_ctx;
+
+static int
+q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
+{
+  const q_ctx *c = vctx;
+  (void) i;
+  (void) j;
+  return holent_quench_length (c->q, arc, c->t, len, NULL);
+}
+
+int
+holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
+                       const holent_region *r, double t,
+                       holent_rt_result *res, size_t *pairs, double *arcs)
+{
+  if (q == NULL || !isfinite (t))
+    return HOLENT_EINVAL;
+  q_ctx c = { q, t };
+  /* The vacuum background sets the candidates: on the circle the state
+     is pure (no horizon term) and each chord has the geodesic over its
+     shorter arc.  */
+  return holent_rt_entropy_cost (w, &q->vac, r, q_cost, &c, res, pairs,
+                                 arcs);
+}

@@ -1,0 +1,63 @@
+/* holent_quench.h: global quench in AdS3, the thin-shell Vaidya geometry:
+ * a null shell sent in from the boundary at t = 0 turns the vacuum
+ * (Poincare on a line, global AdS on a circle) into the BTZ black hole of
+ * inverse temperature beta.  Geodesic lengths by matching the vacuum and
+ * BTZ geodesics across the shell (refraction; Balasubramanian et al.
+ * 2011, PRD 84, 026010; Abajo-Arrastia, Aparicio and Lopez 2010, JHEP 11
+ * (2010) 149).  Derivation: doc/quench.md.
+ *
+ * For an interval (arc) l at boundary time t, with R t = 2 pi t/beta,
+ * S = sinh(R t), C = cosh(R t):
+ *   t <= 0:       the vacuum length;
+ *   t >= l/2:     the BTZ length (saturation);
+ *   0 < t < l/2:  len = 2 log( (beta/(pi eps)) S cosh(eta) ), eta > 0
+ *                 from the crossing point of the shell:
+ *     line:   asinh(S e^-eta) + (C - sqrt(1 + S^2 e^-2eta)) e^eta/S
+ *               = pi l/beta;
+ *     circle: the half-angle phi of the crossing solves
+ *               C - cosh(a) - (L/beta) tan(phi) sinh(a) = 0,
+ *               a = (L/beta)(pi l/L - phi),
+ *             and e^-eta = sinh(a)/(S cos(phi)).
+ * The state is pure on the circle: S(A) = S(A^c), no horizon term.
+ *
+ * Copyright (C) 2026 The holent developers.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#ifndef HOLENT_QUENCH_H
+#define HOLENT_QUENCH_H
+
+#include <stddef.h>
+#include "holent.h"
+#include "holent_geo.h"
+#include "holent_region.h"
+#include "holent_rt.h"
+
+typedef struct
+{
+  holent_geo_bg vac;   /* before the shell: Poincare or global AdS   */
+  holent_geo_bg bh;    /* after: planar BTZ or BTZ                   */
+  double beta;
+} holent_quench_bg;
+
+/* HOLENT_EINVAL for NaN, HOLENT_EDOM for values out of range.  */
+int holent_quench_init (holent_quench_bg *q, int circle, double L,
+                        double eps, double beta, double c);
+
+/* Regulated length of the geodesic over an interval (line) or arc
+ * (circle; the shorter of l and L - l is used: it gives the smaller
+ * length) of length l at boundary time t.  *eta (if not NULL) receives
+ * eta of the crossing (0 when the geodesic does not cross the shell, -1
+ * before the quench).  HOLENT_EDOM for l outside (0, Inf) (line) or
+ * (0, L) (circle), HOLENT_EINVAL for non-finite t, HOLENT_ENOCONV if the
+ * crossing equation fails (never seen).  */
+int holent_quench_length (const holent_quench_bg *q, double l, double t,
+                          double *len, double *eta);
+
+/* RT entropy of a region (holent_region_set on the boundary of q) at
+   time t: the exact minimum over the non-crossing pairings, each
+   geodesic with the quench length.  pairs/arcs as holent_rt_entropy.  */
+int holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
+                           const holent_region *r, double t,
+                           holent_rt_result *res, size_t *pairs,
+                           double *arcs);
+
+#endif /* HOLENT_QUENCH_H */
