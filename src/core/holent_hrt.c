@@ -98,24 +98,13 @@ class_length (const holent_geo_bg *bg, double a, double d, int timelike,
   return HOLENT_SUCCESS;
 }
 
-/* Largest arc of a class that has a geodesic (as holent_geo).  */
+/* 1 when the class over the arc a has a geodesic (or the defect's cap):
+   the static module's rule.  */
 static int
 class_ok (const holent_geo_bg *bg, double a)
 {
-  if (!(a > 0.0))
-    return 0;
-  if (!bg->circle)
-    return 1;
-  switch (bg->bulk)
-    {
-    case HOLENT_BULK_GLOBAL_ADS:
-    case HOLENT_BULK_THERMAL_ADS:
-      return a < bg->L;
-    case HOLENT_BULK_CONICAL_DEFECT:
-      return bg->alpha < 1.0 ? a <= bg->L : a < bg->L;
-    default:
-      return a <= bg->L;
-    }
+  double len;
+  return holent_geo_arc_length (bg, a, &len) == HOLENT_SUCCESS;
 }
 
 int
