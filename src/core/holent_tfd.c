@@ -148,7 +148,7 @@ holent_tfd_workspace_alloc (size_t nmax)
     return NULL;
   size_t N = 2 * nmax;
   w->nmax = nmax;
-  w->rt = holent_rt_alloc (nmax);
+  w->rt = holent_rt_alloc_dp (nmax);
   w->reg[0] = holent_region_alloc (nmax);
   w->reg[1] = holent_region_alloc (nmax);
   w->fake = holent_region_alloc (nmax);
