@@ -35,8 +35,9 @@
 ## every AdS3 geodesic length in the arc it spans (no cap on n; it agrees
 ## with the O(n^3) dynamic programme on every test region, see
 ## @file{doc/rt_fast.md} for what is and is not proven).  The regions of a
-## cell array are spread over OpenMP threads when @var{conf} is not
-## requested.  See @file{doc/rt_regions.md}.
+## cell array (16 or more) are spread over OpenMP threads, with or without
+## @var{conf}; a single large region on a circle with a horizon or a defect
+## uses two threads for its own sweep.  See @file{doc/rt_regions.md}.
 ##
 ## @var{conf} (a struct array of the size of the cell) describes the
 ## minimiser:
@@ -203,8 +204,8 @@ endfunction
 %!error <overflows> rt_entropy (ads3_background ("vacuum", "line"), [-1e308 1e308])
 
 %!test
-%! ## many regions are spread over threads when no configuration is asked
-%! ## for; the result is the same as the serial one
+%! ## many regions are spread over threads, with or without configurations;
+%! ## the result is the same as one region at a time (serial)
 %! rand ("seed", 5);
 %! bg = ads3_background ("rotating", "circle", "beta", 0.8, "Omega", 0.2);
 %! R = arrayfun (@(k) sort (2 * pi * rand (2 * randi (6), 1))' , 1:300, "uniformoutput", false);
@@ -213,6 +214,11 @@ endfunction
 %! [S2, conf] = rt_entropy (bg, R);
 %! assert (S1, S2);
 %! assert (size (conf), [1 300]);
+%! for k = [1 77 300]
+%!   [s, c] = rt_entropy (bg, R{k});
+%!   assert (S1(k), s);
+%!   assert (conf(k), c);
+%! endfor
 
 %!test
 %! ## an empty cell gives an empty result

@@ -30,11 +30,11 @@ static const char *conf_fields[] = {
 typedef struct
 {
   holent_region *reg;
-  holent_rt_workspace *ws;
+  holent_rt_batch *batch;
+  holent_rt_input *in;
+  holent_rt_conf *conf;
   size_t *pairs;
-  double *arcs;
-  const double **ptr;
-  size_t *rows;
+  double *dbl;
   char id[32];
   char msg[512];
 } gw_state;
@@ -43,17 +43,17 @@ static void
 gw_release (gw_state *g)
 {
   holent_region_free (g->reg);
-  holent_rt_free (g->ws);
+  holent_rt_batch_free (g->batch);
+  mxFree (g->in);
+  mxFree (g->conf);
   mxFree (g->pairs);
-  mxFree (g->arcs);
-  mxFree ((void *) g->ptr);
-  mxFree (g->rows);
-  g->ptr = NULL;
-  g->rows = NULL;
+  mxFree (g->dbl);
   g->reg = NULL;
-  g->ws = NULL;
+  g->batch = NULL;
+  g->in = NULL;
+  g->conf = NULL;
   g->pairs = NULL;
-  g->arcs = NULL;
+  g->dbl = NULL;
 }
 
 /* Free everything, then raise (mexErrMsgIdAndTxt does not return).  */
@@ -166,38 +166,38 @@ region_fail (gw_state *g, int st, const char *fn, const char *nm, int circle)
     }
 }
 
-static mxArray *
-make_conf_entry (const gw_state *g, const holent_rt_result *res,
-                 const holent_geo_bg *bg, mxArray *conf, size_t k)
+static void
+make_conf_entry (const holent_rt_conf *c, const holent_geo_bg *bg,
+                 mxArray *conf, size_t k)
 {
-  const holent_region *r = g->reg;
-  size_t m = res->m, N = 2 * r->n;
+  const holent_rt_result *res = &c->res;
+  size_t m = res->m, N = 2 * c->n;
   mxArray *pairs = mxCreateDoubleMatrix (m, 2, mxREAL);
   mxArray *coords = mxCreateDoubleMatrix (m, 2, mxREAL);
   mxArray *arcs = mxCreateDoubleMatrix (m, 1, mxREAL);
   double *pp = mxGetPr (pairs), *pc = mxGetPr (coords), *pa = mxGetPr (arcs);
   for (size_t i = 0; i < m; i++)
     {
-      pp[i] = (double) g->pairs[2 * i] + 1.0;
-      pp[i + m] = (double) g->pairs[2 * i + 1] + 1.0;
-      pc[i] = r->pts[g->pairs[2 * i]];
-      pc[i + m] = r->pts[g->pairs[2 * i + 1]];
-      pa[i] = g->arcs[i];
+      pp[i] = (double) c->pairs[2 * i] + 1.0;
+      pp[i + m] = (double) c->pairs[2 * i + 1] + 1.0;
+      pc[i] = c->pts[c->pairs[2 * i]];
+      pc[i + m] = c->pts[c->pairs[2 * i + 1]];
+      pa[i] = c->arcs[i];
     }
   mxArray *ep = mxCreateDoubleMatrix (N, 1, mxREAL);
-  memcpy (mxGetPr (ep), r->pts, N * sizeof (double));
-  mxArray *iv = mxCreateDoubleMatrix (r->whole ? 1 : r->n, 2, mxREAL);
+  memcpy (mxGetPr (ep), c->pts, N * sizeof (double));
+  mxArray *iv = mxCreateDoubleMatrix (c->whole ? 1 : c->n, 2, mxREAL);
   double *pi = mxGetPr (iv);
-  if (r->whole)
+  if (c->whole)
     {
       pi[0] = 0.0;
       pi[1] = bg->L;
     }
   else
-    for (size_t i = 0; i < r->n; i++)
+    for (size_t i = 0; i < c->n; i++)
       {
-        pi[i] = r->start[i];
-        pi[i + r->n] = r->start[i] + r->len[i];
+        pi[i] = c->start[i];
+        pi[i + c->n] = c->start[i] + c->len[i];
       }
   mxSetFieldByNumber (conf, k, 0, pairs);
   mxSetFieldByNumber (conf, k, 1, coords);
@@ -208,7 +208,6 @@ make_conf_entry (const gw_state *g, const holent_rt_result *res,
   mxSetFieldByNumber (conf, k, 6, ep);
   mxSetFieldByNumber (conf, k, 7, iv);
   mxSetFieldByNumber (conf, k, 8, mxCreateDoubleScalar (res->length));
-  return conf;
 }
 
 static void
@@ -306,12 +305,38 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       if (g.reg->n > wsn)
         wsn = g.reg->n;
     }
-  holent_rt_workspace *(*ws_alloc) (size_t)
-    = method == HOLENT_RT_DP ? holent_rt_alloc_dp : holent_rt_alloc;
-  g.ws = ws_alloc (wsn);
-  g.pairs = mxMalloc (2 * wsn * sizeof *g.pairs);
-  g.arcs = mxMalloc (wsn * sizeof *g.arcs);
-  if (g.ws == NULL)
+  /* The core spreads the regions over threads (one loop for one region
+     or many); the configurations come back in buffers sized by rows.  */
+  g.batch = holent_rt_batch_alloc (ncell, maxrows, wsn,
+                                   method == HOLENT_RT_DP);
+  g.in = mxMalloc (ncell * sizeof *g.in);
+  size_t total = 0;
+  for (size_t k = 0; k < ncell; k++)
+    {
+      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
+      g.in[k].rows = mxGetM (a);
+      g.in[k].start = mxGetPr (a);
+      g.in[k].end = mxGetPr (a) + g.in[k].rows;
+      total += g.in[k].rows;
+    }
+  if (conf)
+    {
+      g.conf = mxMalloc (ncell * sizeof *g.conf);
+      g.pairs = mxMalloc (2 * total * sizeof *g.pairs);
+      g.dbl = mxMalloc (6 * total * sizeof *g.dbl);
+      size_t off = 0;
+      for (size_t k = 0; k < ncell; k++)
+        {
+          size_t m = g.in[k].rows;
+          g.conf[k].pairs = g.pairs + 2 * off;
+          g.conf[k].arcs = g.dbl + off;
+          g.conf[k].pts = g.dbl + total + 2 * off;
+          g.conf[k].start = g.dbl + 3 * total + off;
+          g.conf[k].len = g.dbl + 4 * total + off;
+          off += m;
+        }
+    }
+  if (g.batch == NULL)
     {
       snprintf (g.id, sizeof g.id, "holent:nomem");
       snprintf (g.msg, sizeof g.msg,
@@ -319,89 +344,21 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       gw_raise (&g);
     }
   double nshort = 0.0;
-  if (conf == NULL && ncell >= 64)
+  size_t failed = 0;
+  int st = holent_rt_batch_run (g.batch, &bg, method, ncell, g.in, S,
+                                &nshort, g.conf, &failed);
+  if (st)
     {
-      /* Many regions, no configurations: spread them over threads, each
-         with its own workspace.  The mx accessors are not thread safe,
-         so the data pointers are collected first.  */
-      g.ptr = mxMalloc (ncell * sizeof *g.ptr);
-      g.rows = mxMalloc (ncell * sizeof *g.rows);
-      for (size_t k = 0; k < ncell; k++)
-        {
-          const mxArray *a = is_cell ? mxGetCell (A, k) : A;
-          g.ptr[k] = mxGetPr (a);
-          g.rows[k] = mxGetM (a);
-        }
-      long failed = -1;
-      int fail_st = HOLENT_SUCCESS;
-      const long nc = (long) ncell;
-#pragma omp parallel reduction(+ : nshort)
-      {
-        holent_region *r = holent_region_alloc (maxrows);
-        holent_rt_workspace *w = ws_alloc (wsn);
-        int ok = r != NULL && w != NULL;
-#pragma omp for schedule(dynamic, 32)
-        for (long k = 0; k < nc; k++)
-          {
-            holent_rt_result res;
-            int st = ok ? holent_region_set (r, bg.circle, bg.L, g.rows[k],
-                                             g.ptr[k], g.ptr[k] + g.rows[k])
-                        : HOLENT_ENOMEM;
-            if (!st)
-              st = holent_rt_entropy_method (w, &bg, r, method, &res, NULL,
-                                             NULL);
-            if (st)
-              {
-#pragma omp critical (holent_rt_gw_fail)
-                if (failed < 0 || k < failed)
-                  {
-                    failed = k;
-                    fail_st = st;
-                  }
-                continue;
-              }
-            S[k] = res.S;
-            nshort += (double) res.n_short;
-          }
-        holent_region_free (r);
-        holent_rt_free (w);
-      }
-      if (failed >= 0)
-        {
-          region_name (nm, sizeof nm, name, is_cell, (size_t) failed);
-          snprintf (g.id, sizeof g.id, fail_st == HOLENT_ENOMEM
-                                           ? "holent:nomem"
-                                           : "holent:internal");
-          snprintf (g.msg, sizeof g.msg, "%s: %s: minimisation failed (%s)",
-                    fn, nm, holent_strerror (fail_st));
-          gw_raise (&g);
-        }
-      ncell = 0;  /* done */
+      region_name (nm, sizeof nm, name, is_cell, failed);
+      snprintf (g.id, sizeof g.id, st == HOLENT_ENOMEM ? "holent:nomem"
+                                                       : "holent:internal");
+      snprintf (g.msg, sizeof g.msg, "%s: %s: minimisation failed (%s)", fn,
+                nm, holent_strerror (st));
+      gw_raise (&g);
     }
-  for (size_t k = 0; k < ncell; k++)
-    {
-      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
-      const double *p = mxGetPr (a);
-      size_t n = mxGetM (a);
-      /* Succeeded above: same input, same result.  */
-      (void) holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
-      holent_rt_result res;
-      int st = holent_rt_entropy_method (g.ws, &bg, g.reg, method, &res,
-                                         conf ? g.pairs : NULL,
-                                         conf ? g.arcs : NULL);
-      if (st)
-        {
-          region_name (nm, sizeof nm, name, is_cell, k);
-          snprintf (g.id, sizeof g.id, "holent:internal");
-          snprintf (g.msg, sizeof g.msg, "%s: %s: minimisation failed (%s)",
-                    fn, nm, holent_strerror (st));
-          gw_raise (&g);
-        }
-      S[k] = res.S;
-      nshort += (double) res.n_short;
-      if (conf)
-        make_conf_entry (&g, &res, &bg, conf, k);
-    }
+  if (conf)
+    for (size_t k = 0; k < ncell; k++)
+      make_conf_entry (&g.conf[k], &bg, conf, k);
   gw_release (&g);
   if (nlhs > 1)
     plhs[1] = mxCreateDoubleScalar (nshort);

@@ -61,7 +61,7 @@ sweep_alloc (sweep_state *s, size_t P, size_t N)
   s->P = malloc ((P + 2) * sizeof *s->P);
   s->head = malloc ((P + 2) * sizeof *s->head);
   s->arc = malloc (N * sizeof *s->arc);
-  s->cost = malloc (N * sizeof *s->cost);
+  s->cost = malloc (2 * N * sizeof *s->cost);  /* two columns */
   /* A few records per point in practice (doc/rt_fast.md); beyond that
      the unwinding sweeps again over sub-runs instead.  */
   s->lg_cap = 8 * N + 64;
@@ -404,56 +404,89 @@ backtrack (const dp *d, size_t s0, size_t m0, size_t *stack, size_t *pi,
  *   T[s] = min(A[s] + T[P[s] + 1], c(y[e] - y[s]) + T[s + 1]),
  * in the order of the DP's sums, so both give the same numbers.  full
  * (if non-NULL) receives T[s] for each run of exactly cap points.  */
+/* Column e at start s (the first of its column when first): the kept
+   partner against the new point e, whose length is c.  */
+static inline void
+sweep_step (sweep_state *st, size_t s, size_t e, double c, int first)
+{
+  double *restrict T = st->T;
+  double vnew = c + T[s + 1];
+  if (!first)
+    {
+      double vold = st->A[s] + T[st->P[s] + 1];
+      if (!(vnew < vold))  /* ties keep the earlier partner */
+        {
+          T[s] = vold;
+          return;
+        }
+    }
+  T[s] = st->A[s] = vnew;
+  st->P[s] = e;
+  if (st->logging)
+    {
+      if (first)
+        st->head[s] = RT_NONE;
+      if (st->lg_n < st->lg_cap)
+        {
+          st->lg_e[st->lg_n] = e;
+          st->lg_next[st->lg_n] = st->head[s];
+          st->head[s] = st->lg_n++;
+        }
+      else
+        st->overflow = 1;
+    }
+}
+
+/* The lengths of column e into c (starts e - 1, e - 3, ..., at most cap
+   points from the start a on); returns their number.  */
+static size_t
+sweep_column (sweep_state *st, const holent_geo_bg *bg, const double *y,
+              size_t N, size_t a, size_t cap, size_t e, double *c)
+{
+  size_t lo = e + 1 >= a + cap ? e + 1 - cap : a;
+  if ((e - 1 - lo) & 1)
+    lo++;
+  size_t J = (e - 1 - lo) / 2 + 1;
+  for (size_t j = 0; j < J; j++)
+    st->arc[j] = uarc (y, N, e - 1 - 2 * j, e);
+  holent_vmath_arc_lengths (bg, J, st->arc, c);
+  return J;
+}
+
 static void
 sweep_run (sweep_state *st, const holent_geo_bg *bg, const double *y,
            size_t N, size_t a, size_t b, size_t cap, double *full)
 {
-  double *restrict T = st->T, *restrict A = st->A;
-  size_t *restrict P = st->P;
+  double *T = st->T, *c0 = st->cost, *c1 = st->cost + N;
   st->lg_n = 0;
   st->overflow = 0;
-  for (size_t e = a + 1; e <= b; e++)
+  /* Columns e and e + 1 go together, step by step: their starts have
+     opposite parities (disjoint slots), and column e + 1 at start s + 1
+     needs only T[s + 2] of column e, made one step earlier.  Two
+     independent chains of loads and adds keep the core busy where one
+     would wait on the latency of each.  */
+  for (size_t e = a + 1; e <= b; e += 2)
     {
-      T[e] = 0.0;  /* the empty run [e, e - 1] */
-      size_t lo = e + 1 >= a + cap ? e + 1 - cap : a;
-      if ((e - 1 - lo) & 1)
-        lo++;
-      size_t J = (e - 1 - lo) / 2 + 1;  /* starts e - 1, e - 3, ..., lo */
-      for (size_t j = 0; j < J; j++)
-        st->arc[j] = uarc (y, N, e - 1 - 2 * j, e);
-      holent_vmath_arc_lengths (bg, J, st->arc, st->cost);
-      const double *c = st->cost;
-      for (size_t j = 0; j < J; j++)
+      int two = e + 1 <= b;
+      T[e] = 0.0;  /* the empty runs [e, e - 1] and [e + 1, e] */
+      size_t J0 = sweep_column (st, bg, y, N, a, cap, e, c0), J1 = 0;
+      if (two)
         {
-          size_t s = e - 1 - 2 * j;
-          double vnew = c[j] + T[s + 1];
-          if (j > 0)
-            {
-              double vold = A[s] + T[P[s] + 1];
-              if (!(vnew < vold))  /* ties keep the earlier partner */
-                {
-                  T[s] = vold;
-                  continue;
-                }
-            }
-          T[s] = A[s] = vnew;
-          P[s] = e;
-          if (st->logging)
-            {
-              if (j == 0)
-                st->head[s] = RT_NONE;
-              if (st->lg_n < st->lg_cap)
-                {
-                  st->lg_e[st->lg_n] = e;
-                  st->lg_next[st->lg_n] = st->head[s];
-                  st->head[s] = st->lg_n++;
-                }
-              else
-                st->overflow = 1;
-            }
+          T[e + 1] = 0.0;
+          J1 = sweep_column (st, bg, y, N, a, cap, e + 1, c1);
+        }
+      size_t Jm = J0 > J1 ? J0 : J1;
+      for (size_t j = 0; j < Jm; j++)
+        {
+          if (j < J0)
+            sweep_step (st, e - 1 - 2 * j, e, c0[j], j == 0);
+          if (j < J1)
+            sweep_step (st, e - 2 * j, e + 1, c1[j], j == 0);
         }
       if (full && e + 1 >= a + cap)
         full[e + 1 - cap] = T[e + 1 - cap];
+      if (full && two && e + 2 >= a + cap)
+        full[e + 2 - cap] = T[e + 2 - cap];
     }
 }
 
@@ -779,4 +812,150 @@ holent_rt_entropy (holent_rt_workspace *w, const holent_geo_bg *bg,
 {
   return holent_rt_entropy_method (w, bg, r, HOLENT_RT_AUTO, res, pairs,
                                    arcs);
+}
+
+/* ---- Many regions.  */
+struct holent_rt_batch
+{
+  size_t nthreads, maxrows;
+  holent_region **reg;
+  holent_rt_workspace **ws;
+};
+
+/* Regions are spread over threads from this many on.  */
+#define RT_BATCH_PAR 16
+
+holent_rt_batch *
+holent_rt_batch_alloc (size_t nreg, size_t maxrows, size_t nmax, int dp)
+{
+  if (maxrows == 0 || nmax == 0)
+    return NULL;
+  holent_rt_batch *b = calloc (1, sizeof *b);
+  if (b == NULL)
+    return NULL;
+  size_t nt = 1;
+#ifdef _OPENMP
+  if (nreg >= RT_BATCH_PAR)
+    nt = (size_t) omp_get_max_threads ();
+#else
+  (void) nreg;
+#endif
+  b->reg = calloc (nt, sizeof *b->reg);
+  b->ws = calloc (nt, sizeof *b->ws);
+  int ok = b->reg && b->ws;
+  for (size_t t = 0; ok && t < nt; t++)
+    {
+      b->reg[t] = holent_region_alloc (maxrows);
+      b->ws[t] = dp ? holent_rt_alloc_dp (nmax) : holent_rt_alloc (nmax);
+      ok = b->reg[t] && b->ws[t];
+      b->nthreads = t + 1;
+    }
+  if (!ok)
+    {
+      holent_rt_batch_free (b);
+      return NULL;
+    }
+  b->maxrows = maxrows;
+  return b;
+}
+
+void
+holent_rt_batch_free (holent_rt_batch *b)
+{
+  if (b == NULL)
+    return;
+  for (size_t t = 0; t < b->nthreads; t++)
+    {
+      holent_region_free (b->reg[t]);
+      holent_rt_free (b->ws[t]);
+    }
+  free (b->reg);
+  free (b->ws);
+  free (b);
+}
+
+/* One region: set, minimise, copy what the caller asked for.  */
+static int
+batch_one (holent_region *r, holent_rt_workspace *w, const holent_geo_bg *bg,
+           holent_rt_method method, const holent_rt_input *in, double *S,
+           size_t *n_short, holent_rt_conf *conf)
+{
+  int st = holent_region_set (r, bg->circle, bg->L, in->rows, in->start,
+                              in->end);
+  if (st)
+    return st;
+  holent_rt_result res;
+  st = holent_rt_entropy_method (w, bg, r, method, &res,
+                                 conf ? conf->pairs : NULL,
+                                 conf ? conf->arcs : NULL);
+  if (st)
+    return st;
+  *S = res.S;
+  *n_short = res.n_short;
+  if (conf)
+    {
+      conf->res = res;
+      conf->n = r->n;
+      conf->whole = r->whole;
+      for (size_t i = 0; i < 2 * r->n; i++)
+        conf->pts[i] = r->pts[i];
+      for (size_t i = 0; i < r->n; i++)
+        {
+          conf->start[i] = r->start[i];
+          conf->len[i] = r->len[i];
+        }
+    }
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
+                     holent_rt_method method, size_t nreg,
+                     const holent_rt_input *in, double *S, double *n_short,
+                     holent_rt_conf *conf, size_t *failed)
+{
+  if (b == NULL || bg == NULL || (nreg > 0 && (in == NULL || S == NULL)))
+    return HOLENT_EINVAL;
+  for (size_t k = 0; k < nreg; k++)
+    if (in[k].rows > b->maxrows)
+      {
+        if (failed)
+          *failed = k;
+        return HOLENT_ETOOBIG;
+      }
+  /* One loop, serial or parallel: each thread owns a region and a
+     workspace; the first failure in region order is reported.  A single
+     large region keeps both threads for its own sweep.  */
+  long first = -1;
+  int fail_st = HOLENT_SUCCESS;
+  double ns = 0.0;
+  const long nr = (long) nreg;
+#pragma omp parallel for schedule(dynamic, 8) reduction(+ : ns) \
+    num_threads(b->nthreads) if (nreg >= RT_BATCH_PAR && b->nthreads > 1)
+  for (long k = 0; k < nr; k++)
+    {
+      size_t t = 0;
+#ifdef _OPENMP
+      t = (size_t) omp_get_thread_num ();  /* < b->nthreads */
+#endif
+      size_t nsh = 0;
+      int st = batch_one (b->reg[t], b->ws[t], bg, method, &in[k], &S[k],
+                          &nsh, conf ? &conf[k] : NULL);
+      if (st)
+        {
+#pragma omp critical (holent_rt_batch_fail)
+          if (first < 0 || k < first)
+            {
+              first = k;
+              fail_st = st;
+            }
+          continue;
+        }
+      ns += (double) nsh;
+    }
+  if (n_short)
+    *n_short = ns;
+  if (first >= 0 && failed)
+    *failed = (size_t) first;
+  return fail_st;
 }

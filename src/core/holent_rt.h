@@ -131,4 +131,48 @@ int holent_rt_entropy_cost (holent_rt_workspace *w, const holent_geo_bg *bg,
 int holent_rt_count (const holent_geo_bg *bg, size_t n, double *count,
                      double *log_count);
 
+/* ---- Many regions, on OpenMP threads (one loop, serial or parallel).  */
+typedef struct holent_rt_batch holent_rt_batch;
+
+/* For nreg regions: per-thread regions (up to maxrows rows) and
+   workspaces (up to nmax merged intervals; with the DP's tables when dp),
+   one set unless nreg is large enough to be spread over threads; NULL on
+   bad sizes or allocation failure.  */
+holent_rt_batch *holent_rt_batch_alloc (size_t nreg, size_t maxrows,
+                                        size_t nmax, int dp);
+void holent_rt_batch_free (holent_rt_batch *b);
+
+typedef struct
+{
+  size_t rows;               /* rows of the region as given             */
+  const double *start, *end; /* rows entries each                        */
+} holent_rt_input;
+
+/* Per region, filled when configurations are asked for; the pointers are
+   the caller's, sized by the region's rows m: pairs 2m, arcs m, pts 2m,
+   start and len m each (the merged region's endpoints and intervals, as
+   in holent_region).  */
+typedef struct
+{
+  holent_rt_result res;
+  size_t *pairs;
+  double *arcs, *pts, *start, *len;
+  size_t n;    /* merged intervals */
+  int whole;
+} holent_rt_conf;
+
+/* S[k] for the regions in[0..nreg-1] of bg (and conf[k] if conf is not
+   NULL); *n_short (if non-NULL) sums res.n_short.  The regions are spread
+   over threads when there are at least 16 (a single large region keeps
+   both threads for its own sweep).  On failure returns the status
+   of the first failing region in order (holent_region_set's or
+   holent_rt_entropy_method's; HOLENT_ETOOBIG when it has more rows than
+   the batch was made for) and sets *failed (if non-NULL) to its index;
+   the other entries are then unspecified.  */
+int holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
+                         holent_rt_method method, size_t nreg,
+                         const holent_rt_input *in, double *S,
+                         double *n_short, holent_rt_conf *conf,
+                         size_t *failed);
+
 #endif /* HOLENT_RT_H */

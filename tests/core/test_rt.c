@@ -3,7 +3,8 @@
  * non-crossing pairing, every face, with the regulated lengths in closed
  * form, not via holent_geo); the sweep against the DP on random regions
  * in every bulk (same minimum and minimiser), also with its unwinding log
- * cut short; the candidate counts against the Catalan and central
+ * cut short; the batch of many regions against single calls; the
+ * candidate counts against the Catalan and central
  * binomial numbers; and every error path.  */
 #include <math.h>
 #include <stdlib.h>
@@ -469,6 +470,89 @@ test_oracle (void)
   gsl_rng_free (rng);
 }
 
+/* The batch (one loop, serial below 16 regions, threads above) gives
+ * what single calls give, configurations included, and reports the first
+ * failing region.  */
+static void
+test_batch (void)
+{
+  holent_geo_bg bg;
+  holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, 6, 1e-4, 0.8, 0.8, 1, 2);
+  gsl_rng *rng = gsl_rng_alloc (gsl_rng_mt19937);
+  enum { NR = 40, MR = 12 };
+  static double st[NR][MR], en[NR][MR], S[NR], pts[NR][2 * MR], arcs[NR][MR],
+    sta[NR][MR], len[NR][MR];
+  static size_t pairs[NR][2 * MR];
+  holent_rt_input in[NR];
+  holent_rt_conf conf[NR];
+  for (int k = 0; k < NR; k++)
+    {
+      size_t m = 2 + gsl_rng_uniform_int (rng, MR - 1);
+      for (size_t i = 0; i < m; i++)
+        {
+          st[k][i] = 6.0 * (i + 0.1 * gsl_rng_uniform (rng)) / m;
+          en[k][i] = st[k][i] + 6.0 * (0.2 + 0.5 * gsl_rng_uniform (rng)) / m;
+        }
+      in[k] = (holent_rt_input) { m, st[k], en[k] };
+      conf[k] = (holent_rt_conf) { .pairs = pairs[k], .arcs = arcs[k],
+                                   .pts = pts[k], .start = sta[k],
+                                   .len = len[k] };
+    }
+  holent_region *r = holent_region_alloc (MR);
+  holent_rt_workspace *w = holent_rt_alloc (MR);
+  for (size_t nr = 1; nr <= NR; nr += NR - 1)  /* 1 region, then 40 */
+    {
+      holent_rt_batch *b = holent_rt_batch_alloc (nr, MR, MR, 0);
+      double nshort = -1;
+      size_t failed = 99;
+      HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, nr, in, S,
+                                      &nshort, conf, &failed),
+                 HOLENT_SUCCESS);
+      HT_CHECK (nshort == 0 && failed == 99, "nshort %g", nshort);
+      for (size_t k = 0; k < nr; k++)
+        {
+          holent_rt_result res;
+          size_t p[2 * MR];
+          HT_STATUS (holent_region_set (r, 1, 6, in[k].rows, st[k], en[k]),
+                     HOLENT_SUCCESS);
+          HT_STATUS (holent_rt_entropy (w, &bg, r, &res, p, NULL),
+                     HOLENT_SUCCESS);
+          HT_CHECK (S[k] == res.S && conf[k].res.S == res.S
+                    && conf[k].n == r->n && conf[k].res.horizon == res.horizon,
+                    "region %zu", k);
+          for (size_t i = 0; i < 2 * r->n; i++)
+            HT_CHECK (conf[k].pairs[i] == p[i] && conf[k].pts[i] == r->pts[i],
+                      "region %zu entry %zu", k, i);
+        }
+      /* an overlap in region 7 (and one in 30): the first is reported */
+      double keep = en[7][0], keep30 = en[30][0];
+      en[7][0] = st[7][0] + 5.9;
+      en[30][0] = st[30][0] + 5.9;
+      if (nr == NR)
+        {
+          HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, nr, in, S,
+                                          NULL, NULL, &failed),
+                     HOLENT_EOVERLAP);
+          HT_CHECK (failed == 7, "failed = %zu", failed);
+        }
+      en[7][0] = keep;
+      en[30][0] = keep30;
+      holent_rt_batch_free (b);
+    }
+  holent_rt_batch *b = holent_rt_batch_alloc (NR, 3, 3, 0);
+  size_t failed = 0;
+  HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, NR, in, S, NULL,
+                                  NULL, &failed), HOLENT_ETOOBIG);
+  HT_STATUS (holent_rt_batch_run (NULL, &bg, HOLENT_RT_AUTO, NR, in, S, NULL,
+                                  NULL, &failed), HOLENT_EINVAL);
+  HT_CHECK (holent_rt_batch_alloc (1, 0, 3, 0) == NULL, "no rows");
+  holent_rt_batch_free (b);
+  holent_rt_batch_free (NULL);
+  holent_region_free (r);
+  holent_rt_free (w);
+  gsl_rng_free (rng);
+}
+
 static void
 test_large (void)
 {
@@ -513,6 +597,7 @@ main (void)
   test_counts ();
   test_errors ();
   test_oracle ();
+  test_batch ();
   test_large ();
   return HT_DONE ();
 }
