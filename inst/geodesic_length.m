@@ -33,9 +33,11 @@ function len = geodesic_length (bg, x1, x2, varargin)
     print_usage ();
   endif
   __holent_check_bg__ (fn, bg);
-  o = __holent_opts__ (fn, {"class"}, varargin);
   cls = 0;
-  if (isfield (o, "class"))
+  if (! isempty (varargin))
+    o = __holent_opts__ (fn, {"class"}, varargin);
+  endif
+  if (! isempty (varargin) && isfield (o, "class"))
     v = o.class;
     choices = {"shorter", "positive", "negative"};
     if (! ischar (v) || ! any (strcmpi (v, choices)))
@@ -44,8 +46,12 @@ function len = geodesic_length (bg, x1, x2, varargin)
     endif
     cls = find (strcmpi (v, choices)) - 1;
   endif
-  x1 = __holent_array__ (fn, "X1", x1);
-  x2 = __holent_array__ (fn, "X2", x2);
+  if (! (isa (x1, "double") && isreal (x1) && ! issparse (x1)
+         && isa (x2, "double") && isreal (x2) && ! issparse (x2)))
+    ## Slow path only for unusual input: full checks and conversion.
+    x1 = __holent_array__ (fn, "X1", x1);
+    x2 = __holent_array__ (fn, "X2", x2);
+  endif
   if (! size_equal (x1, x2))
     try
       z = zeros (size (x1 + x2));
@@ -56,6 +62,19 @@ function len = geodesic_length (bg, x1, x2, varargin)
     x1 = x1 + z;
     x2 = x2 + z;
   endif
+  try
+    ## NaN, Inf, overflow and coincident points are checked in the core
+    ## in one pass; a failure is explained below.
+    len = __holent_geodesic__ (bg, x1, x2, cls);
+  catch err
+    explain_bad_points (fn, bg, x1, x2);
+    __holent_rethrow__ (err, "__holent_geodesic__", fn);
+  end_try_catch
+endfunction
+
+function explain_bad_points (fn, bg, x1, x2)
+  x1 = __holent_array__ (fn, "X1", x1);
+  x2 = __holent_array__ (fn, "X2", x2);
   k = find (isinf (x2(:) - x1(:)), 1);
   if (! isempty (k))
     error ("holent:domain",
@@ -65,19 +84,13 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (strcmp (bg.boundary, "line"))
     k = find (x1(:) == x2(:), 1);
   else
-    L = bg.circumference;
-    k = find (mod (x2(:) - x1(:), L) == 0, 1);
+    k = find (mod (x2(:) - x1(:), bg.circumference) == 0, 1);
   endif
   if (! isempty (k))
     error ("holent:coincident",
            "%s: X1(%d) and X2(%d) coincide: no geodesic joins a point to itself",
            fn, k, k);
   endif
-  try
-    len = __holent_geodesic__ (bg, x1, x2, cls);
-  catch err
-    __holent_rethrow__ (err, "__holent_geodesic__", fn);
-  end_try_catch
 endfunction
 
 %!shared bgl, bgc

@@ -3,6 +3,7 @@
 #include <math.h>
 #include <gsl/gsl_math.h>
 #include "holent_geo.h"
+#include "holent_vmath.h"
 
 static int
 finite_pos (double x)
@@ -171,51 +172,6 @@ holent_geo_point_lengths (const holent_geo_bg *bg, size_t n,
                           const double *x1, const double *x2,
                           holent_geo_class cls, double *len, size_t *bad)
 {
-  if (bg == NULL || (n > 0 && (x1 == NULL || x2 == NULL || len == NULL)))
-    return HOLENT_EINVAL;
-  if (cls != HOLENT_GEO_SHORTER && cls != HOLENT_GEO_POSITIVE
-      && cls != HOLENT_GEO_NEGATIVE)
-    return HOLENT_EINVAL;
-  for (size_t i = 0; i < n; i++)
-    {
-      double d = x2[i] - x1[i], arc, l1, l2;
-      int st;
-      if (bad)
-        *bad = i;
-      if (!isfinite (x1[i]) || !isfinite (x2[i]) || !isfinite (d))
-        return HOLENT_EINVAL;
-      if (!bg->circle)
-        {
-          if (d == 0.0)
-            return HOLENT_ECOINCIDE;
-          st = holent_geo_arc_length (bg, fabs (d), &len[i]);
-          if (st)
-            return st;
-          continue;
-        }
-      arc = fmod (d, bg->L);
-      if (arc < 0.0)
-        arc += bg->L;
-      if (arc == 0.0 || arc >= bg->L)
-        return HOLENT_ECOINCIDE;
-      switch (cls)
-        {
-        case HOLENT_GEO_POSITIVE:
-          st = holent_geo_arc_length (bg, arc, &len[i]);
-          break;
-        case HOLENT_GEO_NEGATIVE:
-          st = holent_geo_arc_length (bg, bg->L - arc, &len[i]);
-          break;
-        default:
-          st = holent_geo_arc_length (bg, arc, &l1);
-          if (!st)
-            st = holent_geo_arc_length (bg, bg->L - arc, &l2);
-          if (!st)
-            len[i] = l1 < l2 ? l1 : l2;
-          break;
-        }
-      if (st)
-        return st;
-    }
-  return HOLENT_SUCCESS;
+  /* vectorised, in holent_vmath.c */
+  return holent_vmath_point_lengths (bg, n, x1, x2, cls, len, bad);
 }

@@ -99,3 +99,77 @@ holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
       break;
     }
 }
+
+/* The arc from x1 to x2 in the positive sense, or a status.  On a circle
+   fmod is exact; for |d| < L it returns d itself, so that case skips the
+   call.  */
+static inline int
+point_arc (const holent_geo_bg *bg, double a, double b, double *arc)
+{
+  double d = b - a;
+  if (!isfinite (a) || !isfinite (b) || !isfinite (d))
+    return HOLENT_EINVAL;
+  if (!bg->circle)
+    {
+      *arc = fabs (d);
+      return d == 0.0 ? HOLENT_ECOINCIDE : HOLENT_SUCCESS;
+    }
+  const double L = bg->L;
+  double r = (d > -L && d < L) ? d : fmod (d, L);
+  if (r < 0.0)
+    r += L;
+  *arc = r;
+  return r == 0.0 || r >= L ? HOLENT_ECOINCIDE : HOLENT_SUCCESS;
+}
+
+#define VM_BLOCK 512
+
+int
+holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
+                            const double *x1, const double *x2,
+                            holent_geo_class cls, double *len, size_t *bad)
+{
+  if (bg == NULL || (n > 0 && (x1 == NULL || x2 == NULL || len == NULL)))
+    return HOLENT_EINVAL;
+  if (cls != HOLENT_GEO_SHORTER && cls != HOLENT_GEO_POSITIVE
+      && cls != HOLENT_GEO_NEGATIVE)
+    return HOLENT_EINVAL;
+  /* Arcs first (into len), stopping at the first bad pair.  */
+  for (size_t i = 0; i < n; i++)
+    {
+      int st = point_arc (bg, x1[i], x2[i], &len[i]);
+      if (st)
+        {
+          if (bad)
+            *bad = i;
+          return st;
+        }
+    }
+  const int other = bg->circle && cls != HOLENT_GEO_POSITIVE;
+  const double L = bg->L;
+  const long nb = (long) ((n + VM_BLOCK - 1) / VM_BLOCK);
+#pragma omp parallel for schedule(static) if (n > 200000)
+  for (long b = 0; b < nb; b++)
+    {
+      size_t i0 = (size_t) b * VM_BLOCK;
+      size_t m = n - i0 < VM_BLOCK ? n - i0 : VM_BLOCK;
+      double *x = len + i0, c[VM_BLOCK];
+      if (!other)
+        {
+          holent_vmath_arc_lengths (bg, m, x, x);
+          continue;
+        }
+      for (size_t i = 0; i < m; i++)
+        c[i] = L - x[i];
+      if (cls == HOLENT_GEO_NEGATIVE)
+        {
+          holent_vmath_arc_lengths (bg, m, c, x);
+          continue;
+        }
+      holent_vmath_arc_lengths (bg, m, x, x);
+      holent_vmath_arc_lengths (bg, m, c, c);
+      for (size_t i = 0; i < m; i++)
+        x[i] = x[i] < c[i] ? x[i] : c[i];
+    }
+  return HOLENT_SUCCESS;
+}

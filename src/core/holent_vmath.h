@@ -15,4 +15,11 @@
 void holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
                                const double *arc, double *len);
 
+/* holent_geo_point_lengths (same arguments, statuses and results), with
+   the lengths evaluated in blocks by the kernel above.  */
+int holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
+                                const double *x1, const double *x2,
+                                holent_geo_class cls, double *len,
+                                size_t *bad);
+
 #endif /* HOLENT_VMATH_H */
