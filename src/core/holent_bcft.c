@@ -1,0 +1,780 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* holent_bcft.c: AdS3/BCFT geometry with end-of-the-world branes, the
+ * exact minimiser over non-crossing configurations with brane endings,
+ * and the two-sided Page curve.  Derivations: doc/bcft.md.  */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+#include <float.h>
+#include <gsl/gsl_math.h>
+#include "holent_bcft.h"
+#include "holent_geo.h"
+
+/* ---- geometry ---------------------------------------------------- */
+
+static void
+set_bad (int *bad, int v)
+{
+  if (bad)
+    *bad = v;
+}
+
+int
+holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
+                     double length, double eps, double beta, double T0,
+                     double T1, double c, holent_bcft_saddle saddle,
+                     int *bad)
+{
+  set_bad (bad, -1);
+  if (bg == NULL)
+    return HOLENT_EINVAL;
+  if (kind != HOLENT_BCFT_HALF_LINE && kind != HOLENT_BCFT_INTERVAL
+      && kind != HOLENT_BCFT_TFD)
+    return HOLENT_EINVAL;
+  if (saddle != HOLENT_BCFT_DOMINANT && saddle != HOLENT_BCFT_BTZ
+      && saddle != HOLENT_BCFT_THERMAL_ADS)
+    return (set_bad (bad, 6), HOLENT_EINVAL);
+  const double in[6] = { length, eps, beta, T0, T1, c };
+  for (int k = 0; k < 6; k++)
+    if (isnan (in[k]))
+      return (set_bad (bad, k), HOLENT_EINVAL);
+  if (kind != HOLENT_BCFT_INTERVAL)
+    {
+      length = INFINITY;
+      T1 = T0;
+    }
+  else if (!(length > 0.0 && isfinite (length)))
+    return (set_bad (bad, 0), HOLENT_EDOM);
+  if (!(eps > 0.0 && isfinite (eps)))
+    return (set_bad (bad, 1), HOLENT_EDOM);
+  if (!(beta > 0.0) || (kind == HOLENT_BCFT_TFD && !isfinite (beta)))
+    return (set_bad (bad, 2), HOLENT_EDOM);
+  if (!(fabs (T0) < 1.0) || (kind == HOLENT_BCFT_TFD && T0 < 0.0))
+    return (set_bad (bad, 3), HOLENT_EDOM);
+  if (!(fabs (T1) < 1.0))
+    return (set_bad (bad, 4), HOLENT_EDOM);
+  if (!(c > 0.0 && isfinite (c)))
+    return (set_bad (bad, 5), HOLENT_EDOM);
+
+  memset (bg, 0, sizeof *bg);
+  bg->kind = kind;
+  bg->length = length;
+  bg->eps = eps;
+  bg->beta = beta;
+  bg->c = c;
+  bg->T[0] = T0;
+  bg->T[1] = T1;
+  for (int k = 0; k < 2; k++)
+    {
+      bg->rho[k] = atanh (bg->T[k]);
+      bg->log_g[k] = c / 6.0 * bg->rho[k];
+    }
+  bg->zh = isfinite (beta) ? beta / (2.0 * M_PI) : INFINITY;
+  bg->z0 = INFINITY;
+  bg->beta_c = NAN;
+  bg->S_H = 0.0;
+
+  if (kind != HOLENT_BCFT_INTERVAL)
+    {
+      bg->btz = isfinite (beta);
+      bg->S_H = bg->btz ? INFINITY : 0.0;
+      return HOLENT_SUCCESS;
+    }
+
+  /* Interval: Hawking-Page with boundary entropy (doc/bcft.md):
+     pi c l/(6 beta) + log g0 + log g1 = pi c beta/(24 l).  */
+  double rs = bg->rho[0] + bg->rho[1];
+  int equal = (T0 == T1);
+  if (equal)
+    bg->beta_c = 2.0 * length / M_PI * (rs + hypot (rs, M_PI));
+  int btz;
+  if (!isfinite (beta))
+    {
+      if (saddle == HOLENT_BCFT_BTZ)
+        return (set_bad (bad, 2), HOLENT_EDOM);
+      btz = 0;
+    }
+  else if (saddle == HOLENT_BCFT_DOMINANT)
+    btz = equal ? (beta < bg->beta_c) : 1;
+  else
+    btz = (saddle == HOLENT_BCFT_BTZ);
+  if (!btz && !equal)
+    return (set_bad (bad, 4), HOLENT_EUNSUP);
+  bg->btz = btz;
+  if (btz)
+    {
+      double hl = length / bg->zh + rs;   /* horizon length between branes */
+      if (!(hl > 0.0))
+        return (set_bad (bad, 3), HOLENT_EDOM);
+      bg->S_H = c / 6.0 * hl;
+    }
+  else
+    bg->z0 = length / M_PI;
+  return HOLENT_SUCCESS;
+}
+
+static int
+in_domain (const holent_bcft_bg *bg, double x)
+{
+  if (isnan (x))
+    return HOLENT_EINVAL;
+  if (!(x > 0.0 && x < bg->length))
+    return HOLENT_EDOM;
+  return HOLENT_SUCCESS;
+}
+
+/* log cosh y without overflow.  */
+static double
+lncosh (double y)
+{
+  y = fabs (y);
+  return y + log1p (exp (-2.0 * y)) - M_LN2;
+}
+
+/* Unchecked kernels.  */
+static double
+pair_len (const holent_bcft_bg *bg, double d)
+{
+  if (bg->btz)
+    return 2.0 * (log (bg->beta / (M_PI * bg->eps))
+                  + holent_geo_lnsinh (M_PI * d / bg->beta));
+  if (bg->kind == HOLENT_BCFT_INTERVAL)   /* thermal AdS: doubled circle */
+    return 2.0 * log (2.0 * bg->length / (M_PI * bg->eps)
+                      * sin (M_PI * d / (2.0 * bg->length)));
+  return 2.0 * log (d / bg->eps);
+}
+
+static double
+brane_len (const holent_bcft_bg *bg, double x, int end, double *xb,
+           double *zb)
+{
+  double rho, d, sh;
+  if (bg->kind == HOLENT_BCFT_INTERVAL && !bg->btz)
+    {
+      /* One brane, sinh r sin(theta) = -sinh rho in the disc of the
+         slice, theta = pi x / length (doc/bcft.md).  */
+      rho = bg->rho[0];
+      double th = M_PI * x / bg->length, ch = cosh (rho);
+      sh = sinh (rho);
+      double th2 = atan2 (-sh * sin (th), cos (th) * ch);
+      if (th > M_PI_2 && th2 < 0.0)
+        th2 += 2.0 * M_PI;
+      if (xb)
+        *xb = bg->z0 * th2;
+      if (zb)
+        *zb = bg->z0 * sin (th) / ch;
+      return log (2.0 * bg->length / (M_PI * bg->eps) * sin (th)) + rho;
+    }
+  rho = bg->rho[end];
+  d = end ? bg->length - x : x;
+  sh = sinh (rho);
+  if (!bg->btz)
+    {
+      if (xb)
+        *xb = -d * bg->T[0];
+      if (zb)
+        *zb = d * sqrt (1.0 - bg->T[0] * bg->T[0]);
+      return log (2.0 * d / bg->eps) + rho;
+    }
+  double u = d / bg->zh;
+  double r = u < 350.0 ? sh / cosh (u) : 0.0;
+  double s = tanh (u) / sqrt (1.0 + r * r);
+  double off = bg->zh * asinh (-sh * s);
+  if (xb)
+    *xb = end ? bg->length - off : off;
+  if (zb)
+    *zb = bg->zh * s;
+  return log (bg->beta / (M_PI * bg->eps))
+         + holent_geo_lnsinh (2.0 * M_PI * d / bg->beta) + rho;
+}
+
+int
+holent_bcft_pair_length (const holent_bcft_bg *bg, double x1, double x2,
+                         double *len)
+{
+  if (bg == NULL || len == NULL)
+    return HOLENT_EINVAL;
+  int st = in_domain (bg, x1);
+  if (!st)
+    st = in_domain (bg, x2);
+  if (st)
+    return st;
+  if (x1 == x2)
+    return HOLENT_ECOINCIDE;
+  *len = pair_len (bg, fabs (x2 - x1));
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_bcft_brane_length (const holent_bcft_bg *bg, double x, int end,
+                          double *len, double *xb, double *zb)
+{
+  if (bg == NULL || len == NULL || (end != 0 && end != 1))
+    return HOLENT_EINVAL;
+  if (end == 1 && bg->kind != HOLENT_BCFT_INTERVAL)
+    return HOLENT_EINVAL;
+  int st = in_domain (bg, x);
+  if (st)
+    return st;
+  *len = brane_len (bg, x, end, xb, zb);
+  return HOLENT_SUCCESS;
+}
+
+/* log(cosh a + cosh b) without overflow.  */
+static double
+ln_cosh_sum (double a, double b)
+{
+  a = fabs (a);
+  b = fabs (b);
+  double M = a > b ? a : b, m = a > b ? b : a;
+  return M - M_LN2 + log1p (exp (-2.0 * M) + exp (m - M) + exp (-m - M));
+}
+
+int
+holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1, double t1,
+                           double x2, double t2, double *len)
+{
+  if (bg == NULL || len == NULL || bg->kind != HOLENT_BCFT_TFD)
+    return HOLENT_EINVAL;
+  if (isnan (t1) || isnan (t2) || !isfinite (t1) || !isfinite (t2))
+    return HOLENT_EINVAL;
+  int st = in_domain (bg, x1);
+  if (!st)
+    st = in_domain (bg, x2);
+  if (st)
+    return st;
+  /* Embedding of the eternal planar BTZ (doc/bcft.md):
+     cosh d ~ (beta/(2 pi eps))^2 (cosh(2pi dx/beta) + cosh(2pi (t1+t2)/beta)).  */
+  double k = 2.0 * M_PI / bg->beta;
+  *len = 2.0 * log (bg->beta / (M_PI * bg->eps)) - M_LN2
+         + ln_cosh_sum (k * (x1 - x2), k * (t1 + t2));
+  return HOLENT_SUCCESS;
+}
+
+/* ---- regions ------------------------------------------------------ */
+
+typedef struct
+{
+  double a, b;
+  size_t row;
+} row_t;
+
+struct holent_bcft_workspace
+{
+  size_t nmax, M;          /* rows, endpoints (2 nmax)                   */
+  row_t *rows;
+  double *start, *end, *pts;
+  double *C;               /* M x M pair lengths                          */
+  double *lc, *rc;         /* single costs: left/one brane, right/bridge  */
+  double *P;               /* (M+1)^2 full pairings of [i, j)              */
+  int *Pch;
+  double *F;               /* (M+1) x 2 prefix with parity of L singles   */
+  int *Fch;
+  double *G;               /* (M+1) x (M+1) suffix with k R singles       */
+  int *Gch;
+  double *A;               /* M+1 page costs A_k                          */
+  size_t *nbk;             /* brane endings of the A_k minimiser          */
+  size_t *pairs, *brane;
+  int *bend;
+  double *bx, *bz, *bpt;
+  /* state of the last call */
+  size_t m, n, kmax, pg_m;
+  int c0;
+  double pg_h0;
+};
+
+holent_bcft_workspace *
+holent_bcft_workspace_alloc (size_t nmax)
+{
+  if (nmax == 0 || nmax > HOLENT_BCFT_MMAX / 2)
+    return NULL;
+  holent_bcft_workspace *w = calloc (1, sizeof *w);
+  if (w == NULL)
+    return NULL;
+  size_t M = 2 * nmax, M1 = M + 1;
+  w->nmax = nmax;
+  w->M = M;
+  w->rows = malloc (nmax * sizeof *w->rows);
+  w->start = malloc (nmax * sizeof (double));
+  w->end = malloc (nmax * sizeof (double));
+  w->pts = malloc (M * sizeof (double));
+  w->C = malloc (M * M * sizeof (double));
+  w->lc = malloc (M * sizeof (double));
+  w->rc = malloc (M * sizeof (double));
+  w->P = malloc (M1 * M1 * sizeof (double));
+  w->Pch = malloc (M1 * M1 * sizeof (int));
+  w->F = malloc (M1 * 2 * sizeof (double));
+  w->Fch = malloc (M1 * 2 * sizeof (int));
+  w->G = malloc (M1 * M1 * sizeof (double));
+  w->Gch = malloc (M1 * M1 * sizeof (int));
+  w->A = malloc (M1 * sizeof (double));
+  w->nbk = malloc (M1 * sizeof (size_t));
+  w->pairs = malloc (M * sizeof (size_t));
+  w->brane = malloc (M * sizeof (size_t));
+  w->bend = malloc (M * sizeof (int));
+  w->bx = malloc (M * sizeof (double));
+  w->bz = malloc (M * sizeof (double));
+  w->bpt = malloc (M * sizeof (double));
+  if (!w->rows || !w->start || !w->end || !w->pts || !w->C || !w->lc
+      || !w->rc || !w->P || !w->Pch || !w->F || !w->Fch || !w->G || !w->Gch
+      || !w->A || !w->nbk || !w->pairs || !w->brane || !w->bend || !w->bx
+      || !w->bz || !w->bpt)
+    {
+      holent_bcft_workspace_free (w);
+      return NULL;
+    }
+  return w;
+}
+
+void
+holent_bcft_workspace_free (holent_bcft_workspace *w)
+{
+  if (w == NULL)
+    return;
+  free (w->rows); free (w->start); free (w->end); free (w->pts);
+  free (w->C); free (w->lc); free (w->rc); free (w->P); free (w->Pch);
+  free (w->F); free (w->Fch); free (w->G); free (w->Gch); free (w->A);
+  free (w->nbk); free (w->pairs); free (w->brane); free (w->bend);
+  free (w->bx); free (w->bz); free (w->bpt);
+  free (w);
+}
+
+static int
+cmp_rows (const void *p, const void *q)
+{
+  const row_t *r = p, *s = q;
+  if (r->a != s->a)
+    return r->a < s->a ? -1 : 1;
+  return r->row < s->row ? -1 : (r->row > s->row);
+}
+
+/* Check, sort and merge the rows; set the endpoints that need a surface
+   and c0 (the region starts at the BCFT's boundary).  */
+static int
+normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
+           const double *a, const double *b, int allow_inf, size_t *nshort,
+           size_t *bad)
+{
+  if (n == 0)
+    return HOLENT_EEMPTY;
+  if (n > w->nmax)
+    return HOLENT_ETOOBIG;
+  for (size_t i = 0; i < n; i++)
+    {
+      double ai = a[i], bi = b[i];
+      if (bad)
+        *bad = i;
+      if (isnan (ai) || isnan (bi) || ai == INFINITY
+          || (bi == INFINITY && !allow_inf))
+        return HOLENT_EINVAL;
+      if (ai < 0.0 || bi < ai || bi > bg->length)
+        return HOLENT_EDOM;
+      if (ai == bi)
+        return HOLENT_EEMPTY;
+      w->rows[i].a = ai;
+      w->rows[i].b = bi;
+      w->rows[i].row = i;
+    }
+  qsort (w->rows, n, sizeof *w->rows, cmp_rows);
+  size_t k = 0;
+  w->start[0] = w->rows[0].a;
+  w->end[0] = w->rows[0].b;
+  for (size_t i = 1; i < n; i++)
+    {
+      if (w->rows[i].a < w->end[k])
+        {
+          if (bad)
+            *bad = w->rows[i].row;
+          return HOLENT_EOVERLAP;
+        }
+      if (w->rows[i].a == w->end[k])   /* touching: merge */
+        w->end[k] = w->rows[i].b;
+      else
+        {
+          k++;
+          w->start[k] = w->rows[i].a;
+          w->end[k] = w->rows[i].b;
+        }
+    }
+  if (bad)
+    *bad = (size_t) -1;
+  w->n = k + 1;
+  size_t m = 0;
+  w->c0 = 0;
+  for (size_t i = 0; i < w->n; i++)
+    {
+      if (w->start[i] > 0.0)
+        w->pts[m++] = w->start[i];
+      else
+        w->c0 = 1;
+      if (w->end[i] < bg->length)
+        w->pts[m++] = w->end[i];
+    }
+  w->m = m;
+  /* segments next to the cutoff: gaps, intervals and distances to an end */
+  size_t ns = 0;
+  double prev = 0.0;
+  for (size_t i = 0; i < m; i++)
+    {
+      if (w->pts[i] - prev <= 2.0 * bg->eps)
+        ns++;
+      prev = w->pts[i];
+    }
+  if (m > 0 && isfinite (bg->length) && bg->length - prev <= 2.0 * bg->eps)
+    ns++;
+  *nshort = ns;
+  return HOLENT_SUCCESS;
+}
+
+/* ---- the dynamic programme ---------------------------------------- */
+
+#define IX(i, j) ((i) * (w->M + 1) + (j))
+
+/* Full non-crossing pairings of [i, j) in P; prefix F with L singles
+   (parity), suffix G with exactly k R singles, k <= kmax.  Singles are
+   never inside a pair (they would cross it).  */
+static void
+run_dp (holent_bcft_workspace *w, size_t kmax)
+{
+  size_t m = w->m, M = w->M;
+  const double *C = w->C;
+  for (size_t i = 0; i <= m; i++)
+    w->P[IX (i, i)] = 0.0;
+  for (size_t len = 2; len <= m; len += 2)
+    for (size_t i = 0; i + len <= m; i++)
+      {
+        size_t j = i + len;
+        double best = INFINITY;
+        int arg = -1;
+        for (size_t k = i + 1; k < j; k += 2)
+          {
+            double v = C[i * M + k] + w->P[IX (i + 1, k)] + w->P[IX (k + 1, j)];
+            if (v < best)
+              {
+                best = v;
+                arg = (int) k;
+              }
+          }
+        w->P[IX (i, j)] = best;
+        w->Pch[IX (i, j)] = arg;
+      }
+  w->F[0] = 0.0;
+  w->F[1] = INFINITY;
+  for (size_t i = 1; i <= m; i++)
+    {
+      size_t q = i - 1;
+      for (int par = 0; par < 2; par++)
+        {
+          double best = w->F[2 * (i - 1) + (par ^ 1)] + w->lc[q];
+          int arg = -1;
+          for (size_t j = (q % 2) ? 0 : 1; j < q; j += 2)  /* q - j odd */
+            {
+              double v = w->F[2 * j + par] + C[j * M + q] + w->P[IX (j + 1, q)];
+              if (v < best)
+                {
+                  best = v;
+                  arg = (int) j;
+                }
+            }
+          w->F[2 * i + par] = best;
+          w->Fch[2 * i + par] = arg;
+        }
+    }
+  for (size_t k = 0; k <= kmax; k++)
+    w->G[IX (m, k)] = k ? INFINITY : 0.0;
+  for (size_t ii = m; ii-- > 0;)
+    for (size_t k = 0; k <= kmax; k++)
+      {
+        double best = k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY;
+        int arg = -1;
+        for (size_t j = ii + 1; j < m; j += 2)
+          {
+            double v = C[ii * M + j] + w->P[IX (ii + 1, j)] + w->G[IX (j + 1, k)];
+            if (v < best)
+              {
+                best = v;
+                arg = (int) j;
+              }
+          }
+        w->G[IX (ii, k)] = best;
+        w->Gch[IX (ii, k)] = arg;
+      }
+}
+
+/* Walk the choices back: pairs and singles (end 0: L, 1: R).  */
+static void
+add_full (holent_bcft_workspace *w, size_t i, size_t j, size_t *np)
+{
+  while (i < j)
+    {
+      size_t k = (size_t) w->Pch[IX (i, j)];
+      w->pairs[2 * *np] = i;
+      w->pairs[2 * *np + 1] = k;
+      (*np)++;
+      add_full (w, i + 1, k, np);   /* depth <= m/2 */
+      i = k + 1;
+    }
+}
+
+static void
+reconstruct (holent_bcft_workspace *w, size_t isplit, int par, size_t k,
+             size_t *np, size_t *nb)
+{
+  size_t i = isplit;
+  *np = *nb = 0;
+  while (i > 0)
+    {
+      int ch = w->Fch[2 * i + par];
+      if (ch < 0)
+        {
+          w->brane[*nb] = i - 1;
+          w->bend[(*nb)++] = 0;
+          par ^= 1;
+          i--;
+        }
+      else
+        {
+          size_t j = (size_t) ch;
+          w->pairs[2 * *np] = j;
+          w->pairs[2 * *np + 1] = i - 1;
+          (*np)++;
+          add_full (w, j + 1, i - 1, np);
+          i = j;
+        }
+    }
+  i = isplit;
+  while (i < w->m)
+    {
+      int ch = w->Gch[IX (i, k)];
+      if (ch < 0)
+        {
+          w->brane[*nb] = i;
+          w->bend[(*nb)++] = 1;
+          k--;
+          i++;
+        }
+      else
+        {
+          size_t j = (size_t) ch;
+          w->pairs[2 * *np] = i;
+          w->pairs[2 * *np + 1] = j;
+          (*np)++;
+          add_full (w, i + 1, j, np);
+          i = j + 1;
+        }
+    }
+}
+
+static void
+fill_costs (holent_bcft_workspace *w, const holent_bcft_bg *bg, int right)
+{
+  size_t m = w->m, M = w->M;
+  for (size_t i = 0; i < m; i++)
+    {
+      for (size_t j = i + 1; j < m; j += 2)  /* only odd j - i is read */
+        w->C[i * M + j] = pair_len (bg, w->pts[j] - w->pts[i]);
+      w->lc[i] = brane_len (bg, w->pts[i], 0, NULL, NULL);
+      w->rc[i] = right ? brane_len (bg, w->pts[i], 1, NULL, NULL) : INFINITY;
+    }
+}
+
+int
+holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
+                     size_t n, const double *a, const double *b,
+                     holent_bcft_result *res, size_t *bad)
+{
+  if (bad)
+    *bad = (size_t) -1;
+  if (w == NULL || bg == NULL || a == NULL || b == NULL || res == NULL)
+    return HOLENT_EINVAL;
+  if (bg->kind == HOLENT_BCFT_TFD)
+    return HOLENT_EUNSUP;
+  size_t ns;
+  int st = normalise (w, bg, n, a, b, 0, &ns, bad);
+  if (st)
+    return st;
+  int right = bg->kind == HOLENT_BCFT_INTERVAL && bg->btz;
+  size_t kmax = right ? w->m : 0;
+  fill_costs (w, bg, right);
+  run_dp (w, kmax);
+  /* The face between the last L and the first R single holds the
+     horizon; it lies in the homology region when c0 ^ parity.  */
+  double hlen = bg->btz ? bg->S_H * 6.0 / bg->c : 0.0;
+  double best = INFINITY;
+  size_t bi = 0, bk = 0;
+  int bp = 0, bh = 0;
+  for (int hor = 0; hor < 2; hor++)      /* ties go to no horizon */
+    for (size_t i = 0; i <= w->m; i++)
+      for (int par = 0; par < 2; par++)
+        {
+          if ((w->c0 ^ par) != hor)
+            continue;
+          for (size_t k = 0; k <= kmax; k++)
+            {
+              double v = w->F[2 * i + par] + w->G[IX (i, k)]
+                         + (hor && hlen > 0.0 ? hlen : 0.0);
+              if (v < best)
+                {
+                  best = v;
+                  bi = i;
+                  bp = par;
+                  bk = k;
+                  bh = hor;
+                }
+            }
+        }
+  if (!(best < INFINITY))
+    return HOLENT_EDOM;   /* unbounded horizon (cannot happen for rows) */
+  size_t np, nb;
+  reconstruct (w, bi, bp, bk, &np, &nb);
+  for (size_t q = 0; q < nb; q++)
+    (void) brane_len (bg, w->pts[w->brane[q]], w->bend[q], w->bx + q,
+                      w->bz + q);
+  memset (res, 0, sizeof *res);
+  res->length = bh && hlen > 0.0 ? best - hlen : best;
+  res->horizon = bh && hlen > 0.0;
+  res->S = bg->c / 6.0 * res->length + (res->horizon ? bg->S_H : 0.0);
+  res->m = w->m;
+  res->npairs = np;
+  res->nbrane = nb;
+  res->n_short = ns;
+  res->pts = w->pts;
+  res->pairs = w->pairs;
+  res->brane = w->brane;
+  res->brane_end = w->bend;
+  res->brane_x = w->bx;
+  res->brane_z = w->bz;
+  res->start = w->start;
+  res->end = w->end;
+  res->n = w->n;
+  return HOLENT_SUCCESS;
+}
+
+/* ---- Page curve ---------------------------------------------------- */
+
+int
+holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
+                          size_t n, const double *a, const double *b,
+                          holent_bcft_page *pg, size_t *bad)
+{
+  if (bad)
+    *bad = (size_t) -1;
+  if (w == NULL || bg == NULL || a == NULL || b == NULL || pg == NULL)
+    return HOLENT_EINVAL;
+  if (bg->kind != HOLENT_BCFT_TFD)
+    return HOLENT_EUNSUP;
+  size_t ns;
+  int st = normalise (w, bg, n, a, b, 1, &ns, bad);
+  if (st)
+    return st;
+  size_t m = w->m;
+  fill_costs (w, bg, 0);
+  for (size_t i = 0; i < m; i++)   /* bridge: k h(t) is added at eval */
+    w->rc[i] = 0.0;
+  run_dp (w, m);
+  /* A_k: best one-sided configuration with k bridge geodesics; the
+     two-sided minimum is attained by a left-right symmetric one.  */
+  for (size_t k = 0; k <= m; k++)
+    {
+      double best = INFINITY;
+      size_t bi = 0;
+      int bp = 0;
+      for (size_t i = 0; i <= m; i++)
+        for (int par = 0; par < 2; par++)
+          {
+            double v = w->F[2 * i + par] + w->G[IX (i, k)];
+            if (v < best)
+              {
+                best = v;
+                bi = i;
+                bp = par;
+              }
+          }
+      w->A[k] = best;
+      w->nbk[k] = 0;
+      if (best < INFINITY)
+        {
+          size_t np, nb;
+          reconstruct (w, bi, bp, k, &np, &nb);
+          size_t cnt = 0;
+          for (size_t q = 0; q < nb; q++)
+            cnt += w->bend[q] == 0;
+          w->nbk[k] = cnt;
+          if (k == 0)
+            for (size_t q = 0; q < nb; q++)
+              {
+                w->bpt[q] = w->pts[w->brane[q]];
+                (void) brane_len (bg, w->bpt[q], 0, w->bx + q, w->bz + q);
+              }
+        }
+    }
+  w->pg_m = m;
+  w->pg_h0 = log (bg->beta / (M_PI * bg->eps));
+  memset (pg, 0, sizeof *pg);
+  pg->m = m;
+  pg->h0 = w->pg_h0;
+  pg->S_island = bg->c / 3.0 * w->A[0];
+  pg->n_island = w->nbk[0];
+  pg->island_x = w->bx;
+  pg->island_z = w->bz;
+  pg->island_pt = w->bpt;
+  pg->n_short = ns;
+  /* A_0 <= A_k + k h  for every k >= 1  iff  h >= max (A_0 - A_k)/k.  */
+  double hp = -INFINITY;
+  for (size_t k = 1; k <= m; k++)
+    if (w->A[k] < INFINITY)
+      {
+        double v = (w->A[0] - w->A[k]) / (double) k;
+        if (v > hp)
+          hp = v;
+      }
+  double y = hp - pg->h0;
+  pg->page_time = 0.0;
+  if (y > 0.0)   /* cosh(2 pi t/beta) = e^y */
+    pg->page_time = bg->beta / (2.0 * M_PI)
+                    * (y + log1p (sqrt (-expm1 (-2.0 * y))));
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_bcft_page_eval (const holent_bcft_workspace *w,
+                       const holent_bcft_bg *bg, size_t nt, const double *t,
+                       double *S, double *kbridge, double *nbrane,
+                       size_t *bad)
+{
+  if (bad)
+    *bad = (size_t) -1;
+  if (w == NULL || bg == NULL || (nt > 0 && (t == NULL || S == NULL)))
+    return HOLENT_EINVAL;
+  if (bg->kind != HOLENT_BCFT_TFD)
+    return HOLENT_EUNSUP;
+  size_t m = w->pg_m;
+  double k2 = 2.0 * M_PI / bg->beta;
+  for (size_t i = 0; i < nt; i++)
+    {
+      if (isnan (t[i]) || !isfinite (t[i]))
+        {
+          if (bad)
+            *bad = i;
+          return HOLENT_EINVAL;
+        }
+      double h = w->pg_h0 + lncosh (k2 * t[i]);
+      double best = w->A[0];
+      size_t bk = 0;
+      for (size_t k = 1; k <= m; k++)
+        {
+          double v = w->A[k] + (double) k * h;
+          if (v < best)
+            {
+              best = v;
+              bk = k;
+            }
+        }
+      S[i] = bg->c / 3.0 * best;
+      if (kbridge)
+        kbridge[i] = (double) bk;
+      if (nbrane)
+        nbrane[i] = (double) w->nbk[bk];
+    }
+  return HOLENT_SUCCESS;
+}

@@ -1,0 +1,181 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* holent_bcft.h: AdS3/BCFT with end-of-the-world (ETW) branes.
+ *
+ * A 2D BCFT on the half line x > 0 or on the interval 0 < x < length is
+ * dual to AdS3 cut off by a brane of tension T (|T| < 1, ell = 1) that is
+ * anchored on the boundary of the BCFT (Takayanagi 2011, PRL 107, 101602).
+ * RT surfaces are geodesics between boundary points or from a boundary
+ * point to a brane, which they meet orthogonally.  Derivations, brane
+ * profiles and the Page curve: doc/bcft.md.
+ *
+ * Geometries (ell = 1, regulated lengths as in holent_geo.h):
+ *   half line, zero temperature   Poincare AdS3, brane x = -z T/sqrt(1-T^2)
+ *   half line, beta               planar BTZ,  sinh(x/zh) = -(T/sqrt(1-T^2)) z/zh
+ *   interval, thermal AdS saddle  one connected brane (equal tensions)
+ *   interval, BTZ saddle          two branes, one per end, and a horizon
+ *   TFD of two half lines          eternal planar BTZ, the brane through
+ *                                  the Einstein-Rosen bridge (T >= 0)
+ * rho = arctanh T is the brane's distance from the tensionless brane and
+ * log g = (c/6) rho the boundary entropy.  */
+#ifndef HOLENT_BCFT_H
+#define HOLENT_BCFT_H
+
+#include <stddef.h>
+#include "holent.h"
+
+typedef enum
+{
+  HOLENT_BCFT_HALF_LINE = 0,
+  HOLENT_BCFT_INTERVAL = 1,
+  HOLENT_BCFT_TFD = 2           /* two half lines in the thermofield double */
+} holent_bcft_kind;
+
+typedef enum
+{
+  HOLENT_BCFT_DOMINANT = 0,     /* interval: the saddle of lower free energy */
+  HOLENT_BCFT_BTZ = 1,
+  HOLENT_BCFT_THERMAL_ADS = 2
+} holent_bcft_saddle;
+
+typedef struct
+{
+  holent_bcft_kind kind;
+  double length;     /* interval length; Inf on the half line           */
+  double eps;        /* UV cutoff (boundary length units)                */
+  double beta;       /* inverse temperature; Inf at zero temperature     */
+  double c;          /* central charge                                   */
+  double T[2];       /* tensions at x = 0 and at x = length              */
+  double rho[2];     /* arctanh T                                        */
+  double log_g[2];   /* boundary entropies (c/6) rho                     */
+  int btz;           /* 1: the bulk has a horizon (BTZ saddle)           */
+  double beta_c;     /* interval with equal tensions: BTZ dominates for
+                        beta < beta_c; NaN otherwise                     */
+  double S_H;        /* horizon entropy: interval BTZ saddle finite,
+                        half line at beta < Inf: Inf; otherwise 0        */
+  double zh;         /* horizon depth beta/(2 pi) (Inf without)          */
+  double z0;         /* thermal AdS: tip depth length/pi (Inf otherwise) */
+} holent_bcft_bg;
+
+/* Check every parameter and fill *bg.  length is ignored (Inf) on the
+ * half line and in the TFD; beta = Inf is zero temperature (not for the
+ * TFD).  Returns HOLENT_EINVAL for NULL, NaN, or an unknown kind or
+ * saddle; HOLENT_EDOM for eps, length, beta, c out of range, |T| >= 1,
+ * T < 0 in the TFD, or a forced BTZ saddle whose branes would meet
+ * (length + zh (rho0 + rho1) <= 0); HOLENT_EUNSUP for unequal tensions
+ * where only the thermal AdS saddle exists (zero temperature, forced or
+ * dominant thermal AdS) and for a TFD on an interval.  With unequal
+ * tensions and finite beta the BTZ saddle is used (the thermal AdS one
+ * would need a brane of two tensions).  bad (may be NULL) names the
+ * offending input: 0 length, 1 eps, 2 beta, 3 T0, 4 T1, 5 c, 6 saddle.  */
+int holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
+                         double length, double eps, double beta,
+                         double T0, double T1, double c,
+                         holent_bcft_saddle saddle, int *bad);
+
+/* Regulated length of the geodesic between boundary points x1 and x2 of
+ * one side (one time slice).  HOLENT_EDOM outside the BCFT's domain
+ * (x <= 0, x >= length), HOLENT_ECOINCIDE for x1 == x2.  */
+int holent_bcft_pair_length (const holent_bcft_bg *bg, double x1,
+                             double x2, double *len);
+
+/* Regulated length of the geodesic from boundary point x to the brane
+ * anchored at end (0: x = 0, 1: x = length), meeting it orthogonally,
+ * and its landing point (xb, zb) in the bulk coordinates of doc/bcft.md
+ * (may be NULL).  In the thermal AdS saddle there is one brane and end
+ * is ignored.  HOLENT_EDOM for x outside the domain, HOLENT_EINVAL for
+ * end 1 on the half line.  */
+int holent_bcft_brane_length (const holent_bcft_bg *bg, double x, int end,
+                              double *len, double *xb, double *zb);
+
+/* TFD only: regulated length of the geodesic through the Einstein-Rosen
+ * bridge from x1 on the left at time t1 to x2 on the right at time t2,
+ * both times running forward.  */
+int holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1,
+                               double t1, double x2, double t2,
+                               double *len);
+
+/* ---- Regions and the exact minimiser ------------------------------- */
+
+/* Largest number of endpoints (after merging) the minimiser accepts.  */
+#define HOLENT_BCFT_MMAX ((size_t) 2048)
+
+typedef struct holent_bcft_workspace holent_bcft_workspace;
+
+/* Workspace for regions of up to nmax input rows (nmax <= MMAX/2).  */
+holent_bcft_workspace *holent_bcft_workspace_alloc (size_t nmax);
+void holent_bcft_workspace_free (holent_bcft_workspace *w);
+
+typedef struct
+{
+  double S;          /* entropy (c/6) length (+ horizon entropy)          */
+  double length;     /* regulated length of the geodesics                 */
+  int horizon;       /* 1: the horizon is part of the surface            */
+  size_t m;          /* endpoints that need a surface (sorted in pts)     */
+  size_t npairs;     /* geodesics between two endpoints                   */
+  size_t nbrane;     /* geodesics ending on a brane                       */
+  size_t n_short;    /* intervals, gaps or distances to an end <= 2 eps   */
+  const double *pts;     /* m endpoints ascending (workspace-owned)       */
+  const size_t *pairs;   /* 2 npairs indices into pts, first < second    */
+  const size_t *brane;   /* nbrane indices into pts                       */
+  const int *brane_end;  /* nbrane: 0 brane at x = 0, 1 at x = length    */
+  const double *brane_x; /* nbrane landing points (bulk coordinates)     */
+  const double *brane_z;
+  const double *start;   /* merged intervals, ascending (workspace-owned) */
+  const double *end;
+  size_t n;              /* number of merged intervals                    */
+} holent_bcft_result;
+
+/* RT entropy of the region of n rows [a[i], b[i]] on a half-line or
+ * interval background (one side of the TFD at t = 0 is the thermal half
+ * line).  Rows: 0 <= a < b (b <= length on the interval); a row may start
+ * at 0 or end at length (adjacent to the boundary); touching rows are
+ * merged.  Candidates: every non-crossing set of geodesics in which each
+ * endpoint pairs with another or ends on a brane, with the horizon where
+ * the homology region needs it; minimised exactly (doc/bcft.md).
+ * Errors: HOLENT_EINVAL (NULL, NaN, Inf; *bad = row), HOLENT_EDOM (a row
+ * reaching past the boundary, b < a), HOLENT_EEMPTY (n == 0 or a == b),
+ * HOLENT_EOVERLAP (*bad = a row overlapping an earlier one),
+ * HOLENT_ETOOBIG (n above the workspace), HOLENT_EUNSUP (TFD; use the
+ * Page-curve functions).  The pointers of *res stay valid until the
+ * workspace is used again.  */
+int holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
+                         size_t n, const double *a, const double *b,
+                         holent_bcft_result *res, size_t *bad);
+
+/* ---- Page curve of a radiation region in the TFD -------------------- */
+
+typedef struct
+{
+  size_t m;          /* finite endpoints of the region on one side        */
+  double h0;         /* log(beta/(pi eps)): bridge cost per side at t = 0 */
+  double S_island;   /* entropy without bridge geodesics (t-independent)  */
+  double page_time;  /* first time after which S = S_island (0: always)   */
+  size_t n_island;   /* brane endings of the island configuration         */
+  const double *island_x;  /* their landing points (workspace-owned)      */
+  const double *island_z;
+  const double *island_pt; /* their boundary endpoints                    */
+  size_t n_short;
+} holent_bcft_page;
+
+/* Prepare the Page curve of R = rows [a, b] (b may be Inf) on each side
+ * of a TFD background: the exact minimum over every non-crossing
+ * configuration of geodesics within a side, through the bridge and to the
+ * brane, reduced (doc/bcft.md) to S(t) = (c/3) min_k (A_k + k h(t)),
+ * h(t) = h0 + log cosh(2 pi t/beta).  Errors as holent_bcft_entropy;
+ * HOLENT_EUNSUP unless bg is a TFD.  */
+int holent_bcft_page_prepare (holent_bcft_workspace *w,
+                              const holent_bcft_bg *bg, size_t n,
+                              const double *a, const double *b,
+                              holent_bcft_page *pg, size_t *bad);
+
+/* S[i] at the boundary times t[i] (any sign; both sides run forward);
+ * kbridge[i] (may be NULL): geodesics through the bridge per side in the
+ * minimiser (0: island phase); nbrane[i] (may be NULL): brane endings per
+ * side.  Ties go to fewer bridge geodesics.  HOLENT_EINVAL for NaN t
+ * (*bad = index).  Uses the workspace of the last prepare.  */
+int holent_bcft_page_eval (const holent_bcft_workspace *w,
+                           const holent_bcft_bg *bg, size_t nt,
+                           const double *t, double *S, double *kbridge,
+                           double *nbrane, size_t *bad);
+
+#endif /* HOLENT_BCFT_H */

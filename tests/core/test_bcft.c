@@ -1,0 +1,463 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Unit tests of holent_bcft: every error path; log g against GSL's
+ * arctanh (Takayanagi 2011, PRL 107, 101602); brane-ending lengths against
+ * a GSL Brent minimisation of the hyperbolic distance over the landing
+ * point on the brane; the dynamic programme against a brute-force
+ * enumeration of every non-crossing configuration; the Page-curve
+ * reduction against a brute force over two-sided configurations.  */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_min.h>
+#include <gsl/gsl_sys.h>
+#include "holent_ctest.h"
+#include "holent_bcft.h"
+
+static void
+test_init (void)
+{
+  holent_bcft_bg bg;
+  int bad;
+  HT_STATUS (holent_bcft_bg_init (NULL, 0, 1, 1e-3, INFINITY, 0, 0, 1, 0, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_bg_init (&bg, 7, 1, 1e-3, INFINITY, 0, 0, 1, 0, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, INFINITY, 0, 0, 1, 9, &bad), HOLENT_EINVAL);
+  HT_CHECK (bad == 6, "bad %d", bad);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, NAN, INFINITY, 0, 0, 1, 0, &bad), HOLENT_EINVAL);
+  HT_CHECK (bad == 1, "bad %d", bad);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, INFINITY, 1.0, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 3, "bad %d", bad);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, INFINITY, -1.0, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 0.0, INFINITY, 0.2, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, -1, 0.2, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, 1, 0.2, 0, -1, 0, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 5, "bad %d", bad);
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, -1, 1e-3, 1, 0.2, 0.2, 1, 0, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 0, "bad %d", bad);
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, 1, 0.2, 1.5, 1, 0, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 4, "bad %d", bad);
+  /* unequal tensions: only the BTZ saddle */
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, INFINITY, 0.2, 0.3, 1, 0, &bad), HOLENT_EUNSUP);
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, 10, 0.2, 0.3, 1, HOLENT_BCFT_THERMAL_ADS, &bad), HOLENT_EUNSUP);
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, 10, 0.2, 0.3, 1, 0, &bad), HOLENT_SUCCESS);
+  HT_CHECK (bg.btz, "unequal tensions use BTZ");
+  /* BTZ forced at zero temperature; branes that would meet */
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, INFINITY, 0.2, 0.2, 1, HOLENT_BCFT_BTZ, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1, 1e-3, 10, -0.9, -0.9, 1, HOLENT_BCFT_BTZ, &bad), HOLENT_EDOM);
+  /* TFD: finite beta, non-negative tension */
+  HT_STATUS (holent_bcft_bg_init (&bg, 2, 1, 1e-3, INFINITY, 0.2, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 2, 1, 1e-3, 1, -0.2, 0, 1, 0, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_bg_init (&bg, 2, NAN, 1e-3, 1, 0.2, 0, 1, 0, &bad), HOLENT_EINVAL);
+
+  /* log g = (c/6) arctanh T (Takayanagi 2011), GSL's gsl_atanh */
+  for (double T = -0.95; T < 0.96; T += 0.05)
+    {
+      HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, INFINITY, T, 0, 12, 0, &bad), HOLENT_SUCCESS);
+      HT_CLOSE (bg.log_g[0], 2.0 * gsl_atanh (T), 1e-14);
+    }
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-3, INFINITY, 0.0, 0, 12, 0, &bad), HOLENT_SUCCESS);
+  HT_CHECK (bg.log_g[0] == 0.0, "log g at T = 0");
+
+  /* Hawking-Page with boundary entropy: the free energies
+     -pi c l/(6 beta) - log g0 g1 and -pi c beta/(24 l) cross at beta_c */
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 3, 1e-3, 5, 0.4, 0.4, 2, 0, &bad), HOLENT_SUCCESS);
+  {
+    double bc = bg.beta_c, l = 3, c = 2;
+    HT_CLOSE (M_PI * c * l / (6 * bc) + 2 * bg.log_g[0], M_PI * c * bc / (24 * l), 1e-13);
+  }
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 3, 1e-3, INFINITY, 0, 0, 2, 0, &bad), HOLENT_SUCCESS);
+  HT_CLOSE (bg.beta_c, 6.0, 1e-14);   /* beta_c = 2 l without tension */
+}
+
+/* hyperbolic distance of the slice, by embedding (common practice) */
+typedef struct
+{
+  const holent_bcft_bg *bg;
+  double x, z;   /* boundary point at the cutoff */
+  int end;
+} dist_ctx;
+
+static double
+brane_x_of_z (const holent_bcft_bg *bg, double z, int end)
+{
+  double sh = sinh (bg->rho[end]);
+  if (!bg->btz)
+    return -z * sh;
+  double off = bg->zh * asinh (-sh * z / bg->zh);
+  return end ? bg->length - off : off;
+}
+
+static double
+slice_dist (const holent_bcft_bg *bg, double x1, double z1, double x2, double z2)
+{
+  if (!bg->btz)
+    return acosh (1 + ((x1 - x2) * (x1 - x2) + (z1 - z2) * (z1 - z2)) / (2 * z1 * z2));
+  /* planar BTZ: T0 = cosh(x/zh) zh/z, X1 = sinh(x/zh) zh/z,
+     X2 = sqrt(zh^2/z^2 - 1) (Banados, Henneaux, Teitelboim, Zanelli 1993) */
+  double zh = bg->zh;
+  double ch = (zh / z1) * (zh / z2) * cosh ((x1 - x2) / zh)
+              - sqrt (zh * zh / (z1 * z1) - 1) * sqrt (zh * zh / (z2 * z2) - 1);
+  return acosh (ch);
+}
+
+static double
+fdist (double q, void *p)
+{
+  dist_ctx *c = p;
+  /* BTZ: the landing point may sit exponentially close to the horizon */
+  double z = c->bg->btz ? c->bg->zh * tanh (q) : q;
+  return slice_dist (c->bg, c->x, c->z, brane_x_of_z (c->bg, z, c->end), z);
+}
+
+static double
+min_dist (const holent_bcft_bg *bg, double x, int end, double zmax, double zguess,
+          double *zmin)
+{
+  dist_ctx ctx = { bg, x, bg->eps, end };
+  gsl_function F = { fdist, &ctx };
+  /* a coarse scan brackets the minimum, Brent refines it */
+  (void) zguess;
+  if (bg->btz)
+    zmax = 40.0;
+  double lo0 = 1e-6 * zmax, r = pow (zmax / lo0, 1.0 / 400), zb = lo0, fb = INFINITY;
+  for (double z = lo0; z <= zmax; z *= r)
+    if (fdist (z, &ctx) < fb)
+      {
+        fb = fdist (z, &ctx);
+        zb = z;
+      }
+  double lo = zb / r, hi = zb * r > zmax ? zmax : zb * r;
+  gsl_min_fminimizer *s = gsl_min_fminimizer_alloc (gsl_min_fminimizer_brent);
+  if (gsl_min_fminimizer_set (s, &F, zb, lo, hi) != GSL_SUCCESS)
+    {
+      gsl_min_fminimizer_free (s);
+      return NAN;
+    }
+  for (int it = 0; it < 200; it++)
+    {
+      gsl_min_fminimizer_iterate (s);
+      lo = gsl_min_fminimizer_x_lower (s);
+      hi = gsl_min_fminimizer_x_upper (s);
+      if (gsl_min_test_interval (lo, hi, 1e-13, 0) == GSL_SUCCESS)
+        break;
+    }
+  *zmin = gsl_min_fminimizer_x_minimum (s);
+  if (bg->btz)
+    *zmin = bg->zh * tanh (*zmin);
+  double v = gsl_min_fminimizer_f_minimum (s);
+  gsl_min_fminimizer_free (s);
+  return v;
+}
+
+static void
+test_brane_lengths (void)
+{
+  holent_bcft_bg bg;
+  double len, xb, zb, zmin;
+  const double Ts[] = { -0.7, -0.2, 0.0, 0.3, 0.8 };
+  for (int k = 0; k < 5; k++)
+    {
+      /* zero temperature half line */
+      HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-7, INFINITY, Ts[k], 0, 1, 0, NULL), HOLENT_SUCCESS);
+      for (double x = 0.3; x < 10; x *= 3)
+        {
+          HT_STATUS (holent_bcft_brane_length (&bg, x, 0, &len, &xb, &zb), HOLENT_SUCCESS);
+          double d = min_dist (&bg, x, 0, 10 * x, x * 0.7, &zmin);
+          HT_CLOSE (len, d, 1e-9);
+          HT_CLOSE (zb, zmin, 1e-5);
+          HT_CLOSE (xb, brane_x_of_z (&bg, zb, 0), 1e-14);
+        }
+      /* finite temperature half line, planar BTZ */
+      HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-7, 2.0, Ts[k], 0, 1, 0, NULL), HOLENT_SUCCESS);
+      for (double x = 0.1; x < 3; x *= 2.5)
+        {
+          HT_STATUS (holent_bcft_brane_length (&bg, x, 0, &len, &xb, &zb), HOLENT_SUCCESS);
+          double d = min_dist (&bg, x, 0, bg.zh * (1 - 1e-12), zb * 0.9, &zmin);
+          HT_CLOSE (len, d, 1e-9);
+          HT_CLOSE (zb, zmin, 1e-5);
+        }
+      /* interval, BTZ saddle: the brane at the far end */
+      HT_STATUS (holent_bcft_bg_init (&bg, 1, 4.0, 1e-7, 1.0, 0.1, Ts[k], 1, HOLENT_BCFT_BTZ, NULL), HOLENT_SUCCESS);
+      HT_STATUS (holent_bcft_brane_length (&bg, 3.2, 1, &len, &xb, &zb), HOLENT_SUCCESS);
+      HT_CLOSE (len, min_dist (&bg, 3.2, 1, bg.zh * (1 - 1e-12), zb * 0.9, &zmin), 1e-9);
+    }
+  /* errors */
+  HT_STATUS (holent_bcft_bg_init (&bg, 0, 1, 1e-7, INFINITY, 0.3, 0, 1, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_brane_length (&bg, 0.0, 0, &len, NULL, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_brane_length (&bg, -1.0, 0, &len, NULL, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_brane_length (&bg, NAN, 0, &len, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_brane_length (&bg, 1.0, 1, &len, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_brane_length (&bg, 1.0, 0, NULL, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_pair_length (&bg, 1.0, 1.0, &len), HOLENT_ECOINCIDE);
+  HT_STATUS (holent_bcft_pair_length (&bg, 0.0, 1.0, &len), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_pair_length (&bg, 2.0, 1.0, &len), HOLENT_SUCCESS);
+  HT_CLOSE (len, 2 * log (1.0 / 1e-7), 1e-14);
+  HT_STATUS (holent_bcft_bridge_length (&bg, 1, 0, 1, 0, &len), HOLENT_EINVAL);
+}
+
+/* ---- brute force over configurations ---- */
+typedef struct
+{
+  int N;
+  double pc[16][16];   /* pair cost, i < j */
+  double lc[16], rc[16];
+  int c0;
+  double hlen;
+  int stack[16], sp, assign[16], label[16];
+  double best;
+} brute;
+
+static void
+brute_rec (brute *B, int i, double acc)
+{
+  if (i == B->N)
+    {
+      if (B->sp)
+        return;
+      int nl = 0, seenR = 0;
+      for (int k = 0; k < B->N; k++)
+        if (B->assign[k] < 0)
+          {
+            if (B->label[k] == 0)
+              {
+                if (seenR)
+                  return;
+                nl++;
+              }
+            else
+              seenR = 1;
+          }
+      if (B->c0 ^ (nl & 1))
+        acc += B->hlen;
+      if (acc < B->best)
+        B->best = acc;
+      return;
+    }
+  /* open a pair */
+  B->stack[B->sp++] = i;
+  B->assign[i] = 1;
+  brute_rec (B, i + 1, acc);
+  B->sp--;
+  /* close the innermost open pair */
+  if (B->sp)
+    {
+      int j = B->stack[--B->sp];
+      B->assign[i] = 1;
+      brute_rec (B, i + 1, acc + B->pc[j][i]);
+      B->stack[B->sp++] = j;
+    }
+  else
+    {
+      /* a single: to the left or right end */
+      B->assign[i] = -1;
+      B->label[i] = 0;
+      brute_rec (B, i + 1, acc + B->lc[i]);
+      B->label[i] = 1;
+      if (isfinite (B->rc[i]))
+        brute_rec (B, i + 1, acc + B->rc[i]);
+    }
+}
+
+static void
+test_dp_brute (void)
+{
+  holent_bcft_workspace *w = holent_bcft_workspace_alloc (6);
+  holent_bcft_bg bgs[4];
+  HT_STATUS (holent_bcft_bg_init (bgs + 0, 0, 1, 1e-3, INFINITY, -0.4, 0, 1, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_bg_init (bgs + 1, 0, 1, 1e-3, 1.5, 0.6, 0, 1, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_bg_init (bgs + 2, 1, 5, 1e-3, INFINITY, 0.3, 0.3, 1, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_bg_init (bgs + 3, 1, 5, 1e-3, 1.2, 0.5, -0.3, 1, 0, NULL), HOLENT_SUCCESS);
+  srand (12345);
+  for (int trial = 0; trial < 400; trial++)
+    {
+      const holent_bcft_bg *bg = bgs + trial % 4;
+      double L = isfinite (bg->length) ? bg->length : 6.0;
+      int n = 1 + rand () % 4;
+      double cuts[8];
+      for (int k = 0; k < 2 * n; k++)
+        cuts[k] = L * (rand () + 1.0) / (RAND_MAX + 2.0);
+      for (int i = 1; i < 2 * n; i++)   /* insertion sort */
+        for (int j = i; j > 0 && cuts[j] < cuts[j - 1]; j--)
+          {
+            double t = cuts[j]; cuts[j] = cuts[j - 1]; cuts[j - 1] = t;
+          }
+      if (trial % 5 == 0)
+        cuts[0] = 0.0;             /* adjacent to the boundary */
+      if (trial % 7 == 0 && isfinite (bg->length))
+        cuts[2 * n - 1] = L;
+      double a[4], b[4];
+      for (int k = 0; k < n; k++)
+        {
+          a[n - 1 - k] = cuts[2 * k];   /* rows out of order */
+          b[n - 1 - k] = cuts[2 * k + 1];
+        }
+      holent_bcft_result r;
+      size_t bad;
+      int st = holent_bcft_entropy (w, bg, (size_t) n, a, b, &r, &bad);
+      HT_STATUS (st, HOLENT_SUCCESS);
+      if (st)
+        continue;
+      brute B;
+      memset (&B, 0, sizeof B);
+      B.N = (int) r.m;
+      for (int i = 0; i < B.N; i++)
+        {
+          double len;
+          for (int j = i + 1; j < B.N; j++)
+            holent_bcft_pair_length (bg, r.pts[i], r.pts[j], B.pc[i] + j);
+          holent_bcft_brane_length (bg, r.pts[i], 0, &len, NULL, NULL);
+          B.lc[i] = len;
+          B.rc[i] = INFINITY;
+          if (bg->kind == HOLENT_BCFT_INTERVAL && bg->btz)
+            {
+              holent_bcft_brane_length (bg, r.pts[i], 1, &len, NULL, NULL);
+              B.rc[i] = len;
+            }
+        }
+      B.c0 = cuts[0] == 0.0;
+      B.hlen = bg->btz && bg->kind == HOLENT_BCFT_INTERVAL ? 6.0 * bg->S_H / bg->c : 0.0;
+      B.best = INFINITY;
+      brute_rec (&B, 0, 0.0);
+      double Sb = bg->c / 6.0 * B.best;
+      HT_CLOSE (r.S, Sb, 1e-12);
+      /* the reported configuration adds up to S */
+      double sum = 0, len;
+      for (size_t q = 0; q < r.npairs; q++)
+        {
+          holent_bcft_pair_length (bg, r.pts[r.pairs[2 * q]], r.pts[r.pairs[2 * q + 1]], &len);
+          sum += len;
+        }
+      for (size_t q = 0; q < r.nbrane; q++)
+        {
+          holent_bcft_brane_length (bg, r.pts[r.brane[q]], r.brane_end[q], &len, NULL, NULL);
+          sum += len;
+        }
+      HT_CLOSE (r.length, sum, 1e-12);
+      HT_CHECK (2 * r.npairs + r.nbrane == r.m, "every endpoint used once");
+    }
+  /* errors */
+  holent_bcft_result r;
+  size_t bad;
+  double a[3] = { 1, 2, 0.5 }, b[3] = { 1.5, 3, 1.2 };
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EOVERLAP);
+  HT_CHECK (bad == 0 || bad == 2, "bad %zu", bad);
+  a[2] = -0.5;
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EDOM);
+  HT_CHECK (bad == 2, "bad %zu", bad);
+  a[2] = NAN;
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  a[2] = 4; b[2] = 4;
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EEMPTY);
+  b[2] = INFINITY;
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  b[2] = 9;
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 3, a, b, &r, &bad), HOLENT_EDOM);  /* past length 5 */
+  HT_STATUS (holent_bcft_entropy (w, bgs, 0, a, b, &r, &bad), HOLENT_EEMPTY);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 7, a, b, &r, &bad), HOLENT_ETOOBIG);
+  HT_STATUS (holent_bcft_entropy (NULL, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  /* touching rows merge; the whole interval in the BTZ saddle is the horizon */
+  double a2[2] = { 0, 2 }, b2[2] = { 2, 5 };
+  HT_STATUS (holent_bcft_entropy (w, bgs + 3, 2, a2, b2, &r, &bad), HOLENT_SUCCESS);
+  HT_CHECK (r.n == 1 && r.m == 0 && r.horizon, "whole interval");
+  HT_CLOSE (r.S, bgs[3].S_H, 1e-14);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 2, a2, b2, &r, &bad), HOLENT_SUCCESS);
+  HT_CHECK (r.S == 0.0, "whole interval, pure state");
+  HT_CHECK (holent_bcft_workspace_alloc (0) == NULL, "alloc 0");
+  HT_CHECK (holent_bcft_workspace_alloc (HOLENT_BCFT_MMAX) == NULL, "alloc too big");
+  holent_bcft_workspace_free (w);
+}
+
+/* two-sided brute force: left points ascending then right descending;
+   every single ends on the brane (the wrap-around arc) */
+static void
+test_page_brute (void)
+{
+  holent_bcft_workspace *w = holent_bcft_workspace_alloc (4);
+  holent_bcft_bg bg;
+  HT_STATUS (holent_bcft_bg_init (&bg, 2, 0, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
+  holent_bcft_page pg;
+  srand (99);
+  for (int trial = 0; trial < 60; trial++)
+    {
+      int n = 1 + rand () % 2;
+      double cuts[4];
+      for (int k = 0; k < 2 * n; k++)
+        cuts[k] = 4.0 * (rand () + 1.0) / (RAND_MAX + 2.0);
+      for (int i = 1; i < 2 * n; i++)
+        for (int j = i; j > 0 && cuts[j] < cuts[j - 1]; j--)
+          {
+            double t = cuts[j]; cuts[j] = cuts[j - 1]; cuts[j - 1] = t;
+          }
+      double a[2], b[2];
+      for (int k = 0; k < n; k++)
+        {
+          a[k] = cuts[2 * k];
+          b[k] = cuts[2 * k + 1];
+        }
+      if (trial % 3 == 0)
+        b[n - 1] = INFINITY;
+      HT_STATUS (holent_bcft_page_prepare (w, &bg, (size_t) n, a, b, &pg, NULL), HOLENT_SUCCESS);
+      int m = (int) pg.m;
+      double xs[4];
+      int k = 0;
+      for (int q = 0; q < n; q++)
+        {
+          xs[k++] = a[q];
+          if (isfinite (b[q]))
+            xs[k++] = b[q];
+        }
+      const double ts[] = { 0.0, 0.3, 1.0, 2.5, -0.7 };
+      for (int it = 0; it < 5; it++)
+        {
+          brute B;
+          memset (&B, 0, sizeof B);
+          B.N = 2 * m;
+          for (int i = 0; i < B.N; i++)
+            {
+              int si = i >= m;
+              double xi = si ? xs[2 * m - 1 - i] : xs[i];
+              for (int j = i + 1; j < B.N; j++)
+                {
+                  int sj = j >= m;
+                  double xj = sj ? xs[2 * m - 1 - j] : xs[j];
+                  if (si == sj)
+                    holent_bcft_pair_length (&bg, xi, xj, B.pc[i] + j);
+                  else
+                    holent_bcft_bridge_length (&bg, xi, ts[it], xj, ts[it], B.pc[i] + j);
+                }
+              holent_bcft_brane_length (&bg, xi, 0, B.lc + i, NULL, NULL);
+              B.rc[i] = INFINITY;
+            }
+          B.best = INFINITY;
+          brute_rec (&B, 0, 0.0);
+          double S, kb, nb;
+          HT_STATUS (holent_bcft_page_eval (w, &bg, 1, ts + it, &S, &kb, &nb, NULL), HOLENT_SUCCESS);
+          HT_CLOSE (S, bg.c / 6.0 * B.best, 1e-12);
+        }
+    }
+  double a = 1.0, b = INFINITY, t = NAN, S;
+  HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a, &b, &pg, NULL), HOLENT_SUCCESS);
+  /* [b, Inf): Page time from cosh(2 pi t/beta) = e^rho sinh(2 pi b/beta) */
+  HT_CLOSE (pg.page_time, bg.beta / (2 * M_PI) * acosh (exp (bg.rho[0]) * sinh (2 * M_PI * a / bg.beta)), 1e-12);
+  HT_CHECK (pg.n_island == 1, "one island edge");
+  HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL), HOLENT_EINVAL);
+  holent_bcft_bg hl;
+  HT_STATUS (holent_bcft_bg_init (&hl, 0, 1, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_page_prepare (w, &hl, 1, &a, &b, &pg, NULL), HOLENT_EUNSUP);
+  holent_bcft_result r;
+  b = 3;
+  HT_STATUS (holent_bcft_entropy (w, &bg, 1, &a, &b, &r, NULL), HOLENT_EUNSUP);
+  holent_bcft_workspace_free (w);
+}
+
+int
+main (void)
+{
+  gsl_set_error_handler_off ();
+  test_init ();
+  test_brane_lengths ();
+  test_dp_brute ();
+  test_page_brute ();
+  return HT_DONE ();
+}
