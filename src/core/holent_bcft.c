@@ -220,6 +220,56 @@ holent_bcft_brane_length (const holent_bcft_bg *bg, double x, int end,
   return HOLENT_SUCCESS;
 }
 
+int
+holent_bcft_tension_of_log_g (double log_g, double c, double *T)
+{
+  if (T == NULL || isnan (log_g) || isnan (c))
+    return HOLENT_EINVAL;
+  if (!(c > 0.0 && isfinite (c)))
+    return HOLENT_EDOM;
+  double v = tanh (6.0 * log_g / c);
+  if (!(fabs (v) < 1.0))
+    return HOLENT_EDOM;
+  *T = v;
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z, double *x)
+{
+  if (bg == NULL || x == NULL || isnan (z) || (end != 0 && end != 1))
+    return HOLENT_EINVAL;
+  if (end == 1 && bg->kind != HOLENT_BCFT_INTERVAL)
+    return HOLENT_EINVAL;
+  if (!(z > 0.0))
+    return HOLENT_EDOM;
+  if (bg->kind == HOLENT_BCFT_INTERVAL && !bg->btz)
+    {
+      /* sinh r sin(theta) = -sinh rho with cosh r = z0/z */
+      double sh = sinh (bg->rho[0]), z0 = bg->z0;
+      if (!(z <= z0 / cosh (bg->rho[0])))
+        return HOLENT_EDOM;
+      double s = -sh * z / sqrt ((z0 - z) * (z0 + z));
+      s = s > 1.0 ? 1.0 : (s < -1.0 ? -1.0 : s);
+      double off = z0 * asin (s);
+      *x = end ? bg->length - off : off;
+      return HOLENT_SUCCESS;
+    }
+  double sh = sinh (bg->rho[end]);
+  if (!bg->btz)
+    {
+      if (!isfinite (z))
+        return HOLENT_EDOM;
+      *x = -z * sh;
+      return HOLENT_SUCCESS;
+    }
+  if (!isfinite (z) || (bg->kind != HOLENT_BCFT_TFD && z > bg->zh))
+    return HOLENT_EDOM;
+  double off = bg->zh * asinh (-sh * z / bg->zh);
+  *x = end ? bg->length - off : off;
+  return HOLENT_SUCCESS;
+}
+
 /* log(cosh a + cosh b) without overflow.  */
 static double
 ln_cosh_sum (double a, double b)
@@ -740,7 +790,7 @@ int
 holent_bcft_page_eval (const holent_bcft_workspace *w,
                        const holent_bcft_bg *bg, size_t nt, const double *t,
                        double *S, double *kbridge, double *nbrane,
-                       size_t *bad)
+                       double *S_noisland, size_t *bad)
 {
   if (bad)
     *bad = (size_t) -1;
@@ -759,7 +809,7 @@ holent_bcft_page_eval (const holent_bcft_workspace *w,
           return HOLENT_EINVAL;
         }
       double h = w->pg_h0 + lncosh (k2 * t[i]);
-      double best = w->A[0];
+      double best = INFINITY;
       size_t bk = 0;
       for (size_t k = 1; k <= m; k++)
         {
@@ -769,6 +819,13 @@ holent_bcft_page_eval (const holent_bcft_workspace *w,
               best = v;
               bk = k;
             }
+        }
+      if (S_noisland)
+        S_noisland[i] = bg->c / 3.0 * best;
+      if (w->A[0] <= best)
+        {
+          best = w->A[0];
+          bk = 0;
         }
       S[i] = bg->c / 3.0 * best;
       if (kbridge)

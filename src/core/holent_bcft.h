@@ -94,6 +94,19 @@ int holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1,
                                double t1, double x2, double t2,
                                double *len);
 
+/* Tension (ell = 1) of the brane with boundary entropy log_g:
+ * T = tanh(6 log_g / c).  HOLENT_EINVAL for NaN, HOLENT_EDOM for c <= 0
+ * or a log_g so large that |T| rounds to 1.  */
+int holent_bcft_tension_of_log_g (double log_g, double c, double *T);
+
+/* Brane profile on the time-symmetric slice: the boundary coordinate x of
+ * the brane anchored at end (0 or 1) at depth z, in the bulk coordinates of
+ * doc/bcft.md.  z in (0, zh] (BTZ; the TFD continues past the horizon,
+ * z in (0, Inf)), (0, z0/cosh rho] (thermal AdS: beyond, the brane turns
+ * over to the other end), (0, Inf) (Poincare).  HOLENT_EDOM outside.  */
+int holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z,
+                         double *x);
+
 /* ---- Regions and the exact minimiser ------------------------------- */
 
 /* Largest number of endpoints (after merging) the minimiser accepts.  */
@@ -171,11 +184,12 @@ int holent_bcft_page_prepare (holent_bcft_workspace *w,
 /* S[i] at the boundary times t[i] (any sign; both sides run forward);
  * kbridge[i] (may be NULL): geodesics through the bridge per side in the
  * minimiser (0: island phase); nbrane[i] (may be NULL): brane endings per
- * side.  Ties go to fewer bridge geodesics.  HOLENT_EINVAL for NaN t
+ * side; S_noisland[i] (may be NULL): the least entropy with at least one
+ * bridge geodesic (Inf if none exists).  Ties go to fewer bridge geodesics.  HOLENT_EINVAL for NaN t
  * (*bad = index).  Uses the workspace of the last prepare.  */
 int holent_bcft_page_eval (const holent_bcft_workspace *w,
                            const holent_bcft_bg *bg, size_t nt,
                            const double *t, double *S, double *kbridge,
-                           double *nbrane, size_t *bad);
+                           double *nbrane, double *S_noisland, size_t *bad);
 
 #endif /* HOLENT_BCFT_H */

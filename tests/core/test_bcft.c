@@ -432,7 +432,7 @@ test_page_brute (void)
           B.best = INFINITY;
           brute_rec (&B, 0, 0.0);
           double S, kb, nb;
-          HT_STATUS (holent_bcft_page_eval (w, &bg, 1, ts + it, &S, &kb, &nb, NULL), HOLENT_SUCCESS);
+          HT_STATUS (holent_bcft_page_eval (w, &bg, 1, ts + it, &S, &kb, &nb, NULL, NULL), HOLENT_SUCCESS);
           HT_CLOSE (S, bg.c / 6.0 * B.best, 1e-12);
         }
     }
@@ -441,7 +441,26 @@ test_page_brute (void)
   /* [b, Inf): Page time from cosh(2 pi t/beta) = e^rho sinh(2 pi b/beta) */
   HT_CLOSE (pg.page_time, bg.beta / (2 * M_PI) * acosh (exp (bg.rho[0]) * sinh (2 * M_PI * a / bg.beta)), 1e-12);
   HT_CHECK (pg.n_island == 1, "one island edge");
-  HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL), HOLENT_EINVAL);
+  {
+    /* the two phases agree at the Page time */
+    double Sp, Sn, kb;
+    HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &pg.page_time, &Sp, &kb, NULL, &Sn, NULL), HOLENT_SUCCESS);
+    HT_CLOSE (Sn, pg.S_island, 1e-12);
+    HT_CHECK (kb == 0, "island at the Page time");
+  }
+  /* profile: errors and the tensionless brane at x = 0 */
+  double xp;
+  HT_STATUS (holent_bcft_brane_x (&bg, 0, -1.0, &xp), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_brane_x (&bg, 1, 0.1, &xp), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_brane_x (&bg, 0, 5.0, &xp), HOLENT_SUCCESS);  /* behind the horizon */
+  HT_STATUS (holent_bcft_tension_of_log_g (0.0, 3.0, &xp), HOLENT_SUCCESS);
+  HT_CHECK (xp == 0.0, "log g = 0 is T = 0");
+  HT_STATUS (holent_bcft_tension_of_log_g (100.0, 3.0, &xp), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_tension_of_log_g (NAN, 3.0, &xp), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_tension_of_log_g (0.1, 0.0, &xp), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_tension_of_log_g (0.1, 3.0, &xp), HOLENT_SUCCESS);
+  HT_CLOSE (2 * gsl_atanh (xp) * 3.0 / 12, 0.1, 1e-14);
+  HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL, NULL), HOLENT_EINVAL);
   holent_bcft_bg hl;
   HT_STATUS (holent_bcft_bg_init (&hl, 0, 1, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
   HT_STATUS (holent_bcft_page_prepare (w, &hl, 1, &a, &b, &pg, NULL), HOLENT_EUNSUP);
