@@ -86,6 +86,10 @@ function bg = ads3_background (state, boundary, varargin)
   if (nargin < 2)
     print_usage ();
   endif
+  if (ischar (state) && any (strcmpi (state, {"bcft", "bcft_tfd"})))
+    bg = __holent_bcft_background__ (fn, lower (state), boundary, varargin{:});
+    return;
+  endif
   state = check_word (fn, "STATE", state, {"vacuum", "thermal", "rotating", "heavy"});
   boundary = check_word (fn, "BOUNDARY", boundary, {"line", "circle"});
 

@@ -28,9 +28,15 @@
 ## @seealso{ads3_background, geodesic_length}
 ## @end deftypefn
 
-function [S, branch] = interval_entropy (bg, l)
+function [S, branch] = interval_entropy (bg, l, varargin)
   fn = "interval_entropy";
-  if (nargin != 2)
+  if (nargin < 2)
+    print_usage ();
+  endif
+  if (__holent_is_bcft__ (bg))
+    [S, branch] = bcft_intervals (fn, bg, l, varargin);
+    return;
+  elseif (nargin != 2)
     print_usage ();
   endif
   __holent_check_bg__ (fn, bg);
@@ -56,6 +62,35 @@ function [S, branch] = interval_entropy (bg, l)
     warning ("holent:cutoff",
              "%s: %d interval(s) not longer than twice the cutoff %g", fn,
              nshort, bg.cutoff);
+  endif
+endfunction
+
+## Intervals [x0, x0 + l] of a BCFT: the minimiser over the connected
+## geodesic and the brane-ending ones; BRANCH is true where some geodesic
+## ends on a brane.
+function [S, branch] = bcft_intervals (fn, bg, l, args)
+  __holent_check_bg__ (fn, bg);
+  o = __holent_opts__ (fn, {"at"}, args);
+  l = __holent_array__ (fn, "L", l);
+  x0 = 0;
+  if (isfield (o, "at"))
+    x0 = __holent_array__ (fn, "at", o.at);
+  endif
+  if (! isscalar (x0) && ! isscalar (l) && ! size_equal (x0, l))
+    error ("holent:size", "%s: L and 'at' must have the same size or be scalars", fn);
+  endif
+  k = find (! (l(:) > 0), 1);
+  if (! isempty (k))
+    error ("holent:domain", "%s: L(%d) = %g must be a positive length", fn, k, l(k));
+  endif
+  [l, x0] = deal (l + 0 * x0, x0 + 0 * l);
+  A = arrayfun (@(a, b) [a, a + b], x0, l, "uniformoutput", false);
+  [S, nshort, conf] = __holent_call__ ("__holent_bcft__", "entropy", fn, "[at, at + L]", bg, A);
+  branch = arrayfun (@(c) ! isempty (c.brane.endpoint), conf);
+  if (nshort > 0)
+    warning ("holent:cutoff",
+             "%s: some interval, or its distance to the boundary, is not longer than twice the cutoff %g",
+             fn, bg.cutoff);
   endif
 endfunction
 

@@ -83,6 +83,7 @@ function [S, conf] = rt_entropy (bg, A)
     print_usage ();
   endif
   __holent_check_bg__ (fn, bg);
+  [~, gw] = __holent_is_bcft__ (bg);
   if (iscell (A))
     ok = cellfun ("isclass", A, "double");
     if (! all (ok(:)))
@@ -96,9 +97,9 @@ function [S, conf] = rt_entropy (bg, A)
     A = to_double (fn, A);
   endif
   if (nargout > 1)
-    [S, nshort, conf] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg, A);
+    [S, nshort, conf] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
   else
-    [S, nshort] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg, A);
+    [S, nshort] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
   endif
   if (nshort > 0)
     warning ("holent:cutoff",

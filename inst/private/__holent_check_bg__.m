@@ -8,6 +8,10 @@
 ## @code{__holent_bgcheck__}).  The message names @var{fn} and the field.
 ## @end deftypefn
 function __holent_check_bg__ (fn, bg)
+  if (__holent_is_bcft__ (bg))
+    __holent_call__ ("__holent_bcft__", "bgcheck", fn, bg);
+    return;
+  endif
   req = {"bulk", "boundary", "circumference", "cutoff", "beta_L", "beta_R", ...
          "alpha", "c", "S_BH", "horizon", "pure"};
   if (! isstruct (bg) || ! isscalar (bg) || ! all (isfield (bg, req)))

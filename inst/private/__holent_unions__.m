@@ -11,6 +11,7 @@
 ## the cutoff.
 ## @end deftypefn
 function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions)
+  [~, gw] = __holent_is_bcft__ (bg);
   __holent_check_bg__ (fn, bg);
   [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args);
   nu = numel (unions);
@@ -24,7 +25,7 @@ function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions)
   else
     what = "a union of the parties";
   endif
-  [S, ns] = __holent_call__ ("__holent_rt__", "entropy", fn, what, bg, U(:));
+  [S, ns] = __holent_call__ (gw, "entropy", fn, what, bg, U(:));
   S = reshape (S, [], nu);
   Su = cell (nu, 1);
   for j = 1:nu
