@@ -5,7 +5,7 @@
  *                           VALS, IS_LOG_G, C, ELL, SADDLE)
  *       check the parameters once, in the core, and return the derived
  *       ones (saddle, btz, beta_c, S_H, tension, log_g, rho, zh, z0).
- *   __holent_bcft__ ("bgcheck", FN, BG)             raise unless BG is valid
+ *   OK = __holent_bcft__ ("bgcheck", FN, BG)        raise unless BG is valid
  *   [S, NSHORT, CONF] = __holent_bcft__ ("entropy", FN, NAME, BG, A)
  *       A an n x 2 matrix or a cell of them (as __holent_rt__).
  *   [STATUS, ROW1, ROW2] = __holent_bcft__ ("check", BG, A)   disjointness
@@ -89,14 +89,17 @@ init_fail (const char *fn, int st, int bad, holent_bcft_kind kind,
     case 0:
       mexErrMsgIdAndTxt (id, "%s: 'length' must be a finite positive "
                          "interval length", fn);
+      break;
     case 1:
       mexErrMsgIdAndTxt (id, "%s: 'cutoff' must be finite and positive", fn);
+      break;
     case 2:
       if (kind == HOLENT_BCFT_TFD)
         mexErrMsgIdAndTxt (id, "%s: the two-sided geometry needs a finite "
                            "positive 'beta' (or 'T')", fn);
       mexErrMsgIdAndTxt (id, "%s: 'beta' must be positive (Inf: zero "
                          "temperature; the BTZ saddle needs it finite)", fn);
+      break;
     case 3:
       if (kind == HOLENT_BCFT_TFD)
         mexErrMsgIdAndTxt (id, "%s: '%s' must give a tension in [0, 1/ell) "
@@ -107,6 +110,7 @@ init_fail (const char *fn, int st, int bad, holent_bcft_kind kind,
                          "(and, in a forced BTZ saddle, branes that do not "
                          "meet: length + (beta/2pi)(rho0 + rho1) > 0)", fn,
                          tname);
+      break;
     case 4:
       if (st == HOLENT_EUNSUP)
         mexErrMsgIdAndTxt (id, "%s: unequal tensions at the two ends need "
@@ -115,8 +119,10 @@ init_fail (const char *fn, int st, int bad, holent_bcft_kind kind,
                            fn);
       mexErrMsgIdAndTxt (id, "%s: '%s' must give |T| < 1/ell at each end", fn,
                          tname);
+      break;
     case 5:
       mexErrMsgIdAndTxt (id, "%s: 'c' must be finite and positive", fn);
+      break;
     default:
       mexErrMsgIdAndTxt ("holent:invalid", "%s: %s", fn, holent_strerror (st));
     }
@@ -594,9 +600,10 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       char fn[64];
       holent_bcft_bg bg;
       double ell;
-      holent_gw_nargs (GW, nlhs, 0, nrhs, 3, 3);
+      holent_gw_nargs (GW, nlhs, 1, nrhs, 3, 3);
       holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
       unpack_bg (prhs[2], fn, &bg, &ell);
+      plhs[0] = mxCreateLogicalScalar (1);
     }
   else if (strcmp (mode, "entropy") == 0)
     do_entropy (nlhs, plhs, nrhs, prhs);
