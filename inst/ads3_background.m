@@ -75,9 +75,39 @@
 ## angular momentum L0 - Lbar0, as in @code{btz_thermodynamics}; on a line 0
 ## for the vacuum and Inf (extensive) for a thermal state).
 ##
+## @strong{Boundaries (BCFT) and end-of-the-world branes.}
+## @code{ads3_background ("bcft", "half_line" | "interval", @dots{})} is a 2D
+## CFT with a boundary: on the half line x > 0, or on the interval
+## 0 < x < length (option @qcode{"length"}, required there).  Its bulk is
+## AdS3 cut off by a brane of tension T, |T| < 1/ell (Takayanagi 2011, PRL
+## 107, 101602), set by @qcode{"tension"} or by the boundary entropy
+## @qcode{"log_g"}, log g = (c/6) arctanh(T ell) (default 0); on an interval
+## one value or one per end [T0, T1].  @qcode{"beta"} or @qcode{"T"} gives a
+## temperature (default zero).  The half line at zero temperature is Poincare
+## AdS3 with the brane x = -z sinh(rho), rho = arctanh(T ell); at finite
+## temperature planar BTZ with sinh(x/zh) = -sinh(rho) z/zh, zh = beta/(2 pi).
+## The interval has two saddles: thermal AdS (one brane joining the two ends;
+## equal tensions only) and BTZ (a brane per end and a horizon), the BTZ one
+## dominating for beta < beta_c = (2 length/pi)(rho0 + rho1 +
+## sqrt((rho0 + rho1)^2 + pi^2)); option @qcode{"saddle"} forces one.
+## @code{ads3_background ("bcft_tfd", "half_line", "beta", b, "tension", T)}
+## is the thermofield double of two such BCFTs (eternal planar BTZ with the
+## brane through the Einstein-Rosen bridge, 0 <= T < 1/ell), for
+## @code{page_curve}.  The struct has fields @code{state}, @code{boundary},
+## @code{bulk} (@qcode{"poincare"}, @qcode{"planar_btz"},
+## @qcode{"thermal_ads"} or @qcode{"eternal_planar_btz"}), @code{c},
+## @code{G}, @code{ell}, @code{cutoff}, @code{length}, @code{beta}, @code{T},
+## @code{tension}, @code{log_g}, @code{rho} (each 1 x 2: ends x = 0 and
+## x = length), @code{saddle}, @code{beta_c}, @code{horizon}, @code{S_H} (the
+## horizon entropy between the branes, (c/6)(length/zh + rho0 + rho1) in the
+## BTZ saddle of an interval; Inf on a thermal half line), @code{pure},
+## @code{zh}, @code{z0} (tip of the thermal AdS saddle, length/pi) and
+## @code{brane_profile} (the profile in words; @code{brane_profile} evaluates
+## it).  Derivations: @file{doc/bcft.md}.
+##
 ## Conventions are in @file{doc/conventions.md} of the package.
 ##
-## @seealso{geodesic_length, interval_entropy, btz_thermodynamics, hawking_page}
+## @seealso{geodesic_length, interval_entropy, btz_thermodynamics, hawking_page, page_curve, brane_profile}
 ## @end deftypefn
 
 function bg = ads3_background (state, boundary, varargin)
@@ -314,6 +344,13 @@ function [bl, br] = temperatures (fn, state, o)
 endfunction
 
 
+%!test
+%! bg = ads3_background ("bcft", "interval", "length", 2, "log_g", [0.1 0.2], "beta", 0.5);
+%! assert (bg.saddle, "btz");
+%! assert (bg.log_g, [0.1 0.2], 1e-15);
+%! assert (bg.S_H, (1/6) * (2 * 4 * pi + sum (bg.rho)), 1e-13);
+%!error <'length' is required> ads3_background ("bcft", "interval")
+%!error <applies to an interval> ads3_background ("bcft", "half_line", "saddle", "btz")
 %!test
 %! bg = ads3_background ("vacuum", "line");
 %! assert (bg.bulk, "poincare");

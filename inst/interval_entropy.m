@@ -3,6 +3,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{S} =} interval_entropy (@var{bg}, @var{l})
 ## @deftypefnx {} {[@var{S}, @var{branch}] =} interval_entropy (@var{bg}, @var{l})
+## @deftypefnx {} {[@dots{}] =} interval_entropy (@var{bg}, @var{l}, "at", @var{x0})
 ## Ryu-Takayanagi entropy of a single boundary interval of length @var{l}
 ## (an array; @var{S} has its size) in background @var{bg} from
 ## @code{ads3_background}.
@@ -25,7 +26,17 @@
 ## A warning @code{holent:cutoff} is issued when some l is not longer than
 ## twice the cutoff, where the regulated formula has no meaning.
 ##
-## @seealso{ads3_background, geodesic_length}
+## On a BCFT background (@code{ads3_background ("bcft", @dots{})}) the
+## interval is [x0, x0 + @var{l}] with x0 set by the option
+## @qcode{"at"} (an array of the size of @var{l}, or a scalar; default 0:
+## adjacent to the boundary).  The minimum is taken over the connected
+## geodesic, geodesics ending orthogonally on the brane(s), and the horizon
+## where the homology needs it (@code{rt_entropy}); @var{branch} is true where
+## some geodesic ends on a brane.  Calabrese and Cardy (2004): S = (c/6)
+## log(2 l/eps) + log g adjacent to the boundary of a half line at zero
+## temperature.
+##
+## @seealso{ads3_background, geodesic_length, rt_entropy}
 ## @end deftypefn
 
 function [S, branch] = interval_entropy (bg, l, varargin)
@@ -110,6 +121,17 @@ function explain_bad_length (fn, bg, l)
   endif
 endfunction
 
+%!test
+%! ## BCFT half line (Calabrese and Cardy 2004, J. Stat. Mech. P06002)
+%! bg = ads3_background ("bcft", "half_line", "tension", 0.3, "c", 6);
+%! [S, br] = interval_entropy (bg, [1 2], "at", 0);
+%! assert (S, log (2 * [1 2] / bg.cutoff) + atanh (0.3), 1e-12);
+%! assert (br, [true true]);
+%! [S, br] = interval_entropy (bg, 0.1, "at", [5 10]);
+%! assert (S, 2 * log (0.1 / bg.cutoff) * [1 1], 1e-12);
+%! assert (br, [false false]);
+%!error <same size> interval_entropy (ads3_background ("bcft", "half_line"), [1 2], "at", [1 2 3])
+%!error <positive> interval_entropy (ads3_background ("bcft", "half_line"), -1)
 %!test
 %! ## Calabrese and Cardy 2004 (J. Stat. Mech. P06002), vacuum on a circle:
 %! ## S = (c/3) log((L/(pi eps)) sin(pi l/L)).

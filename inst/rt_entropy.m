@@ -73,8 +73,25 @@
 ## A warning @code{holent:cutoff} is issued when an interval or a gap is not
 ## longer than twice the cutoff.
 ##
+## @strong{With a boundary (BCFT backgrounds).}  On
+## @code{ads3_background ("bcft", "half_line" | "interval", @dots{})} the rows
+## lie in [0, Inf) or [0, length]; a row may start at 0 or end at length
+## (adjacent to the boundary: that end needs no surface).  Every other
+## endpoint either pairs with another endpoint or ends orthogonally on a
+## brane, without crossings; in the BTZ saddle of an interval the horizon
+## joins the surface when the homology region needs it (S_H added).  The
+## minimum over all such configurations is exact (dynamic programming, O(m^3)
+## for m endpoints, at most 1024 rows; @file{doc/bcft.md}).  @var{conf} then
+## has fields @code{pairs}, @code{pair_coords}, @code{horizon},
+## @code{endpoints} (the endpoints that need a surface), @code{intervals},
+## @code{length} and @code{brane}, a struct with @code{endpoint} (indices
+## into @code{endpoints} of those ending on a brane), @code{x} (their
+## coordinates), @code{end} (0 or length: which brane) and @code{landing}
+## (k x 2, where they land, [x, z] in the bulk coordinates of
+## @file{doc/bcft.md}).
+##
 ## @seealso{interval_entropy, mutual_information, tripartite_information,
-## conditional_entropy, ads3_background}
+## conditional_entropy, ads3_background, page_curve}
 ## @end deftypefn
 
 function [S, conf] = rt_entropy (bg, A)
@@ -119,6 +136,14 @@ function a = to_double (fn, a)
   a = full (double (a));
 endfunction
 
+%!test
+%! ## BCFT: two intervals, one adjacent to the boundary
+%! bg = ads3_background ("bcft", "half_line", "tension", 0.2);
+%! [S, conf] = rt_entropy (bg, [0 1; 5 5.1]);
+%! assert (conf.brane.endpoint, 1);
+%! assert (conf.brane.landing, [-0.2, sqrt(1 - 0.04)], 1e-14);
+%! assert (conf.pairs, [2 3]);
+%! assert (S, (log (2 / bg.cutoff) + atanh (0.2) + 2 * log (0.1 / bg.cutoff)) / 6, 1e-12);
 %!test
 %! ## One interval reproduces interval_entropy (Calabrese and Cardy 2004,
 %! ## J. Stat. Mech. P06002: S = (c/3) log(l/eps) on a line).
