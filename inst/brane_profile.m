@@ -6,7 +6,7 @@
 ## @deftypefnx {} {@var{x} =} brane_profile (@var{bg}, @var{z}, @var{end})
 ## The end-of-the-world brane of a BCFT background on the time-symmetric
 ## slice: the boundary coordinate @var{x} of the brane at bulk depth
-## @var{z} (an array; @var{x} has its size), for the brane anchored at
+## @var{z} (a positive array; @var{x} has its size), for the brane anchored at
 ## x = 0 (@var{end} = 0, the default) or at x = length (@var{end} = 1, an
 ## interval in the BTZ saddle).  NaN where the brane does not reach that
 ## depth.  The bulk coordinates and the profiles (Poincare, planar BTZ,
@@ -24,7 +24,11 @@ function x = brane_profile (bg, z, e)
   if (nargin < 3)
     e = 0;
   endif
-  z = __holent_array__ (fn, "Z", z, true);
+  z = __holent_array__ (fn, "Z", z);
+  k = find (! (z(:) > 0), 1);
+  if (! isempty (k))
+    error ("holent:domain", "%s: Z(%d) = %g must be a positive depth", fn, k, z(k));
+  endif
   e = __holent_scalar__ (fn, "END", e, {0, 1, "[]"});
   x = __holent_call__ ("__holent_bcft__", "profile", fn, bg, z / bg.ell, e) * bg.ell;
 endfunction

@@ -467,6 +467,15 @@ do_check (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   unpack_bg (prhs[1], GW, &bg, &ell);
   size_t n;
   const double *p = holent_gw_real (prhs[2], GW, "A", &n);
+  if (mxGetNumberOfDimensions (prhs[2]) != 2 || (n > 0 && mxGetN (prhs[2]) != 2))
+    {
+      plhs[0] = mxCreateDoubleScalar ((double) HOLENT_EINVAL);
+      if (nlhs > 1)
+        plhs[1] = mxCreateDoubleScalar (0.0);
+      if (nlhs > 2)
+        plhs[2] = mxCreateDoubleScalar (0.0);
+      return;
+    }
   n = mxGetM (prhs[2]);
   holent_region *reg = holent_region_alloc (n ? n : 1);
   if (reg == NULL)

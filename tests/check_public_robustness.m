@@ -120,6 +120,11 @@
 %!            "nd3", "col3", "vec", "overlap", "e20"}];
 %!    case "parties"      # a non-empty cell of regions
 %!      f = setdiff (labels, {"cellcell"});
+%!    case "radiation"    # an n x 2 matrix of rows on x >= 0; an end may be Inf
+%!      f = [nonnum, bad, {"inf", "ninf"}, ...
+%!           {"neg", "zero", "huge", "tiny", "int8", "uint64", "int8neg", ...
+%!            "single", "sparse", "sparsevec", "hugevec", "e00", "e02", ...
+%!            "nd3", "col3", "vec", "overlap", "e20"}];
 %!    case "pairs"        # a k x 2 matrix of [start, end] rows
 %!      f = [nonnum, bad, infs, {"neg", "zero", "huge", "tiny", "int8", ...
 %!           "uint64", "int8neg", "single", "sparse", "sparsevec", ...
@@ -147,6 +152,9 @@
 %!  bv = ads_background (3, "vacuum");
 %!  z = linspace (0, 1.2, 40)';
 %!  Sv = entropy_vector (bc, {[0 1], [2 3], [4 4.5]});
+%!  bb = ads3_background ("bcft", "half_line", "tension", 0.3);
+%!  bi = ads3_background ("bcft", "interval", "length", 5, "tension", [0.1 0.3], "beta", 1);
+%!  bt = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.5);
 %!  T = {
 %!   "ads3_background", {"thermal", "circle", "beta", 2, "c", 12, "cutoff", 1e-4}, ...
 %!     {"word:STATE", "word:BOUNDARY", "optname:", "pos:beta", "optname:", "pos:c", "optname:", "pos:cutoff"};
@@ -199,6 +207,16 @@
 %!   "ball_entropy", {bv, 0.5}, {"bghd:BG", "lens:R"};
 %!   "strip_mutual_information", {bh, 0.5, 0.1, 0.5, "length", 2}, ...
 %!     {"bghd:BG", "lens:L1", "lens:S", "lens:L2", "optname:", "pos:length"};
+%!   "ads3_background", {"bcft", "half_line", "tension", 0.3, "beta", 1, "cutoff", 1e-4}, ...
+%!     {"", "", "", "open11:tension", "", "pos:beta", "", "pos:cutoff"};
+%!   "ads3_background", {"bcft", "interval", "length", 2, "log_g", [0.1 0.2], "T", 3}, ...
+%!     {"", "", "", "pos:length", "", "", "", "pos:T"};
+%!   "rt_entropy", {bb, [0 1; 2 3]}, {"bg3:BG", "region:A"};
+%!   "rt_entropy", {bi, {[0 1], [2 3; 4 5]}}, {"bg3:BG", "region:A"};
+%!   "interval_entropy", {bi, [0.5 1], "at", 1}, {"bg3:BG", "lens:L", "", ""};
+%!   "mutual_information", {bb, [0 1], [2 3]}, {"bg3:BG", "region:A", "region:B"};
+%!   "page_curve", {bt, [1 2; 3 Inf], [0 1]}, {"bg3:BG", "radiation:R", "reals:t"};
+%!   "brane_profile", {bb, [0.1 0.2]}, {"bg3:BG", "lens:Z"};
 %!   "mincut_entropy_vector", {[1 2; 2 3], [1 2], [1 0 2], "parties", 2}, ...
 %!     {"edges:EDGES", "weights2:WEIGHTS", "labels3:LABELS", "optname:", "dim:parties"}};
 %!endfunction
@@ -370,7 +388,12 @@
 %!        "__holent_hd__", {"strip", bh, [0.5 1], 1}, 2;
 %!        "__holent_hd__", {"ball", bh, 0.5}, 2;
 %!        "__holent_hd__", {"tabulated", 4, z, 1 - z.^4}, 2;
-%!        "__holent_cone__", {"mincut", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2};
+%!        "__holent_cone__", {"mincut", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2;
+%!        "__holent_bcft__", {"bg", "f", "bcft", "interval", 2, 1e-6, 1, [0.1 0.2], false, 1, 1, "dominant"}, 2;
+%!        "__holent_bcft__", {"entropy", "rt_entropy", "A", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
+%!        "__holent_bcft__", {"check", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
+%!        "__holent_bcft__", {"page", "f", ads3_background("bcft_tfd", "half_line", "beta", 1), [1 Inf], [0 1]}, 2;
+%!        "__holent_bcft__", {"profile", "f", ads3_background("bcft", "half_line"), [0.1 0.2], 0}, 2};
 %!   bad = {};
 %!   for r = 1:rows (G)
 %!     [gw, args, p0] = G{r,:};

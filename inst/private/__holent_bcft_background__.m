@@ -19,8 +19,8 @@ function bg = __holent_bcft_background__ (fn, state, boundary, varargin)
   endif
   k = find (strcmpi (boundary, allowed));
   if (isempty (k))
-    error ("holent:boundary", "%s: the %s state lives on a %s, not '%s'", fn,
-           state, strjoin (allowed, " or "), boundary);
+    error ("holent:boundary", "%s: BOUNDARY must be %s for the %s state, got '%s'",
+           fn, strjoin (strcat ("'", allowed, "'"), " or "), state, boundary);
   endif
   boundary = allowed{k};
   names = {"c", "G", "ell", "cutoff", "length", "beta", "T", "tension", ...
@@ -101,4 +101,4 @@ endfunction
 %! assert (bg.bulk, "poincare");
 %! assert (bg.log_g, [1 1] * atanh (0.5) / 6, 1e-15);   # c = 1 (Takayanagi 2011)
 %!error <length> __holent_bcft_background__ ("f", "bcft", "interval")
-%!error <boundary> __holent_bcft_background__ ("f", "bcft_tfd", "interval", "beta", 1)
+%!error <BOUNDARY> __holent_bcft_background__ ("f", "bcft_tfd", "interval", "beta", 1)
