@@ -565,9 +565,16 @@ do_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   mxSetField (info, 0, "island_endpoints", iep);
   mxSetField (info, 0, "n_short", mxCreateDoubleScalar ((double) pg.n_short));
   holent_bcft_workspace_free (g.ws);
+  int nout = nlhs > 1 ? nlhs : 1;   /* plhs has room for nout only */
   for (int k = 0; k < 4; k++)
-    plhs[k] = out[k];
-  plhs[4] = info;
+    if (k < nout)
+      plhs[k] = out[k];
+    else
+      mxDestroyArray (out[k]);
+  if (nout > 4)
+    plhs[4] = info;
+  else
+    mxDestroyArray (info);
 }
 
 static void
