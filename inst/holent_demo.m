@@ -11,7 +11,9 @@
 ## entanglement plateau, a three-interval region and which RT configuration
 ## dominates, the mutual information and wedge cross section of two
 ## intervals across their transition, and the holographic entropy
-## inequalities on a four-party configuration.
+## inequalities on a four-party configuration, and, for a black hole coupled
+## to a bath (a two-sided BCFT with a brane), a Page curve as a table with
+## its Page time and island.
 ## @end deftypefn
 
 function holent_demo ()
@@ -104,6 +106,21 @@ function holent_demo ()
               merge (r.holds, "yes", "NO"), r.worst_value);
     endif
   endfor
+
+  ## 7. A black hole coupled to a bath (two-sided BCFT): the Page curve.
+  bt = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.9,
+                        "c", c, "cutoff", eps);
+  R = [1.5 Inf];
+  t = [0 0.5 1 1.5 2 2.5 3 4 6];
+  [S, info] = page_curve (bt, R, t);
+  printf ("\n7. Page curve: radiation R = [1.5, Inf) on both sides of a two-sided BCFT\n");
+  printf ("   (beta = 2, brane tension T = 0.9, log g = %.3f); Page time %.4f\n",
+          bt.log_g(1), info.page_time);
+  printf ("   %8s %12s %12s  %s\n", "t", "S(R)", "no island", "phase");
+  for k = 1:numel (t)
+    printf ("   %8.2f %12.4f %12.4f  %s\n", t(k), S(k), info.S_no_island(k), info.phase{k});
+  endfor
+  printf ("   island edge on the brane at (x, z) = (%.4f, %.4f)\n", info.island(1,:));
 endfunction
 
 function s = params_str (p)
@@ -119,4 +136,5 @@ endfunction
 %! assert (! isempty (strfind (s, "thermal_ads")));
 %! assert (! isempty (strfind (s, "connected")));
 %! assert (isempty (strfind (s, " NO ")));
+%! assert (! isempty (strfind (s, "Page time")));
 %!error <called with too many inputs> holent_demo (1)
