@@ -32,6 +32,11 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (nargin != 3 && nargin != 5)
     print_usage ();
   endif
+  if (__holent_is_bcft__ (bg))
+    error ("holent:unsupported",
+           "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
+           fn);
+  endif
   __holent_check_bg__ (fn, bg);
   cls = 0;
   if (! isempty (varargin))
@@ -136,3 +141,4 @@ endfunction
 %!error <unknown option> geodesic_length (bgc, 1, 2, "klass", "shorter")
 %!error <geodesic_length: BG.bulk must be a short string> geodesic_length (setfield (bgl, "bulk", 7), 1, 2)
 %!error <geodesic_length: X2\(1\) - X1\(1\) overflows> geodesic_length (bgl, -1e308, 1e308)
+%!error <BCFT background> geodesic_length (ads3_background ("bcft", "half_line"), [0 1], [2 3])

@@ -11,8 +11,9 @@
 ## "beta", b, "tension", T)} (0 <= T < 1/ell): eternal planar BTZ with an
 ## end-of-the-world brane through the Einstein-Rosen bridge, the eternal
 ## black hole coupled to a bath in the double-holography reading.
-## @var{R} is an n x 2 matrix of intervals [start, end] on x >= 0, taken on
-## both sides (an end may be Inf); @var{t} a numeric array of times, both
+## @var{R} is an n x 2 matrix of intervals [start, end] on x > 0 (a start
+## at 0, on the boundary of the BCFT, is an error), taken on both sides (an
+## end may be Inf); @var{t} a numeric array of times, both
 ## sides running forward.  @var{S} (the size of @var{t}) is the RT entropy
 ## of R_L u R_R, minimised exactly over every non-crossing configuration of
 ## geodesics within a side, through the bridge (growing with t) and ending

@@ -88,6 +88,11 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
   if (nargin < 3)
     print_usage ();
   endif
+  if (__holent_is_bcft__ (bg))
+    error ("holent:unsupported",
+           "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
+           fn);
+  endif
   __holent_check_bg__ (fn, bg);
   o = __holent_opts__ (fn, {"reflected"}, varargin);
   reflected = false;
@@ -375,3 +380,4 @@ endfunction
 %! axis equal; xlabel ("x"); ylabel ("z");
 %! title (sprintf ("E_W = %.3f (c = 1)", E));
 %!error <BG.horizon must be true or false> wedge_cross_section (setfield (ads3_background ("vacuum", "line"), "horizon", "yes"), [0 1], [2 3])
+%!error <BCFT background> wedge_cross_section (ads3_background ("bcft", "half_line"), [0 1], [2 3])

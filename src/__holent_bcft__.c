@@ -292,7 +292,11 @@ region_fail (gw_state *g, int st, size_t bad, const char *fn, const char *nm,
     {
     case HOLENT_EDOM:
       id = "holent:domain";
-      if (bg->kind == HOLENT_BCFT_INTERVAL)
+      if (bg->kind == HOLENT_BCFT_TFD)
+        snprintf (what, sizeof what, "must lie on x > 0 (a radiation "
+                  "region may not touch the boundary x = 0 of the BCFT) "
+                  "with start < end");
+      else if (bg->kind == HOLENT_BCFT_INTERVAL)
         snprintf (what, sizeof what, "must lie in the BCFT's interval "
                   "[0, %g] with start < end", bg->length);
       else

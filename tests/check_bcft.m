@@ -241,4 +241,5 @@
 %!error <zero-length> rt_entropy (ads3_background ("bcft", "half_line"), [0 0])
 %!error <overlap> rt_entropy (ads3_background ("bcft", "half_line"), [1 3; 2 4])
 %!error <finite> rt_entropy (ads3_background ("bcft", "half_line"), [1 Inf])
+%!error <boundary x = 0> page_curve (ads3_background ("bcft_tfd", "half_line", "beta", 1), [0 2], 0)
 %!error <page_curve> rt_entropy (ads3_background ("bcft_tfd", "half_line", "beta", 1), [1 2])

@@ -417,7 +417,8 @@ normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
       if (isnan (ai) || isnan (bi) || ai == INFINITY
           || (bi == INFINITY && !allow_inf))
         return HOLENT_EINVAL;
-      if (ai < 0.0 || bi < ai || bi > bg->length)
+      /* a radiation region (allow_inf) lies on x > 0: 0 is the boundary */
+      if (ai < 0.0 || (allow_inf && ai == 0.0) || bi < ai || bi > bg->length)
         return HOLENT_EDOM;
       if (ai == bi)
         return HOLENT_EEMPTY;

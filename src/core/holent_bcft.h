@@ -175,7 +175,8 @@ typedef struct
  * configuration of geodesics within a side, through the bridge and to the
  * brane, reduced (doc/bcft.md) to S(t) = (c/3) min_k (A_k + k h(t)),
  * h(t) = h0 + log cosh(2 pi t/beta).  Errors as holent_bcft_entropy;
- * HOLENT_EUNSUP unless bg is a TFD.  */
+ * HOLENT_EUNSUP unless bg is a TFD; HOLENT_EDOM also for a row starting
+ * at 0 (a point on the boundary of the BCFT: R lies on x > 0).  */
 int holent_bcft_page_prepare (holent_bcft_workspace *w,
                               const holent_bcft_bg *bg, size_t n,
                               const double *a, const double *b,

@@ -461,6 +461,10 @@ test_page_brute (void)
   HT_STATUS (holent_bcft_tension_of_log_g (0.1, 3.0, &xp), HOLENT_SUCCESS);
   HT_CLOSE (2 * gsl_atanh (xp) * 3.0 / 12, 0.1, 1e-14);
   HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL, NULL), HOLENT_EINVAL);
+  {
+    double a0 = 0.0, b0 = 2.0;   /* a radiation region touching x = 0 */
+    HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a0, &b0, &pg, NULL), HOLENT_EDOM);
+  }
   holent_bcft_bg hl;
   HT_STATUS (holent_bcft_bg_init (&hl, 0, 1, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
   HT_STATUS (holent_bcft_page_prepare (w, &hl, 1, &a, &b, &pg, NULL), HOLENT_EUNSUP);
