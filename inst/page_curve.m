@@ -101,6 +101,6 @@ endfunction
 %!error <Invalid call> page_curve (bg, [1 2])
 %!error <two-sided> page_curve (ads3_background ("vacuum", "line"), [1 2], 0)
 %!error <two-sided> page_curve (ads3_background ("bcft", "half_line"), [1 2], 0)
-%!error <half line> page_curve (bg, [-1 2], 0)
+%!error <x > 0> page_curve (bg, [-1 2], 0)
 %!error <NaN> page_curve (bg, [1 2], NaN)
 %!error <overlap> page_curve (bg, [1 3; 2 4], 0)
