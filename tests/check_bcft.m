@@ -64,6 +64,60 @@
 %!  [zl, d] = fminbnd (f, a, b, o);
 %!endfunction
 
+%!function best = brute_bcft (x, pairc, branec, c0, rightc, hlen)
+%!  ## every non-crossing configuration: each point pairs (a stack of open
+%!  ## points) or, outside every pair, ends on the left brane (before any on
+%!  ## the right brane); the horizon face is in when c0 xor (left endings odd)
+%!  K = struct ("x", x, "pairc", pairc, "branec", branec, "c0", c0,
+%!              "rightc", rightc, "hlen", hlen);
+%!  best = brute_rec (K, 1, [], 0, 0, false);
+%!endfunction
+%!function v = brute_rec (K, i, stack, acc, nl, seenR)
+%!  if (i > numel (K.x))
+%!    v = Inf;
+%!    if (isempty (stack))
+%!      v = acc + K.hlen * xor (K.c0, mod (nl, 2));
+%!    endif
+%!    return;
+%!  endif
+%!  v = brute_rec (K, i + 1, [stack i], acc, nl, seenR);
+%!  if (! isempty (stack))
+%!    v = min (v, brute_rec (K, i + 1, stack(1:end-1), acc + K.pairc (K.x(stack(end)), K.x(i)), nl, seenR));
+%!  else
+%!    if (! seenR)
+%!      v = min (v, brute_rec (K, i + 1, stack, acc + K.branec (K.x(i)), nl + 1, false));
+%!    endif
+%!    v = min (v, brute_rec (K, i + 1, stack, acc + K.rightc (K.x(i)), nl, true));
+%!  endif
+%!endfunction
+
+## ---- many intervals: the minimiser against a brute force over configurations
+%!test
+%! eps = 1e-6; rho = atanh (0.4); L = 4; beta = 0.8;
+%! bh = ads3_background ("bcft", "half_line", "tension", 0.4, "cutoff", eps, "c", 6);
+%! bi = ads3_background ("bcft", "interval", "length", L, "tension", 0.4, "beta", beta, "cutoff", eps, "c", 6);
+%! assert (bi.saddle, "btz");
+%! ls = @(d) log (beta / (pi * eps) * sinh (pi * d / beta));
+%! rand ("seed", 7);
+%! for trial = 1:12
+%!   x = sort (L * rand (1, 6));
+%!   A = reshape (x, 2, []).';
+%!   ## half line, zero temperature [CC closed forms, checked above]
+%!   [S, cf] = rt_entropy (bh, A);
+%!   Sb = brute_bcft (x, @(a, b) 2 * log ((b - a) / eps), @(a) log (2 * a / eps) + rho,
+%!                    false, @(a) Inf, 0);
+%!   assert (S, Sb, 1e-10);
+%!   ## the configuration adds up to S
+%!   len = sum (2 * log (diff (cf.pair_coords, 1, 2) / eps)) + sum (log (2 * cf.brane.x / eps) + rho);
+%!   assert (S, len, 1e-10);
+%!   ## interval, BTZ saddle: two branes and the horizon
+%!   S = rt_entropy (bi, A);
+%!   hl = L / (beta / (2 * pi)) + 2 * rho;
+%!   br = @(d) log (beta / (pi * eps)) + log (sinh (2 * pi * d / beta)) + rho;
+%!   Sb = brute_bcft (x, @(a, b) 2 * ls (b - a), br, false, @(a) br (L - a), hl);
+%!   assert (S, Sb, 1e-10);
+%! endfor
+
 ## ---- boundary entropy [T], [FTT]
 %!test
 %! for T = [-0.9 -0.3 0 0.4 0.95]
