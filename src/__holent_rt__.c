@@ -346,7 +346,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   double nshort = 0.0;
   size_t failed = 0;
   int st = holent_rt_batch_run (g.batch, &bg, method, ncell, g.in, S,
-                                &nshort, g.conf, &failed);
+                                &nshort, g.conf, &failed, NULL);
   if (st)
     {
       region_name (nm, sizeof nm, name, is_cell, failed);

@@ -22,10 +22,22 @@ enum holent_status
   HOLENT_EUNSUP = 7,    /* not implemented for this background            */
   HOLENT_ETOOBIG = 8,   /* problem size beyond what the core accepts      */
   HOLENT_ECOINCIDE = 9, /* two boundary points coincide                   */
+  HOLENT_EINTR = 10,    /* the caller's poll callback asked to stop       */
   /* Time-dependent states (issue 12); numbered apart from the codes the
      error-protocol work adds, so both can be merged.  */
   HOLENT_ETIMELIKE = 30 /* boundary points timelike or null separated     */
 };
+
+/* Long core loops call poll->fn (poll->ctx, done, total) every
+   ~1e5 elementary operations (or every item of a batch); a nonzero
+   return makes the core free its temporaries and return HOLENT_EINTR.
+   poll == NULL or poll->fn == NULL means never interrupted.  done/total
+   feed progress displays.  */
+typedef struct
+{
+  int (*fn) (void *ctx, double done, double total);
+  void *ctx;
+} holent_poll;
 
 /* Short English description of a status code; never NULL.  */
 const char *holent_strerror (int status);

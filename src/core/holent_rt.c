@@ -38,6 +38,10 @@ typedef struct
   size_t *lg_e, *lg_next, *head;  /* log: right end, previous record */
   size_t lg_n, lg_cap;
   int logging, overflow;
+  /* interruption: the poll, steps since the last call, progress */
+  const holent_poll *poll;
+  double steps, done0, total;
+  int stopped;
 } sweep_state;
 
 struct holent_rt_workspace
@@ -49,6 +53,7 @@ struct holent_rt_workspace
   double *parc;
   double *y, *full;       /* unrolled points, best run per start      */
   sweep_state sw[2];      /* one per thread of the circle sweep       */
+  const holent_poll *poll;  /* NULL: never interrupted                */
 };
 
 #define RT_NONE ((size_t) -1)
@@ -119,6 +124,33 @@ rt_alloc (size_t nmax, int dp)
   w->nmax = nmax;
   w->dp = dp;
   return w;
+}
+
+int
+holent_rt_set_poll (holent_rt_workspace *w, const holent_poll *poll)
+{
+  if (w == NULL)
+    return HOLENT_EINVAL;
+  w->poll = poll;
+  return HOLENT_SUCCESS;
+}
+
+/* Between polls: about 1e5 elementary steps.  */
+#define RT_POLL_STEPS 1e5
+
+/* Count steps and poll every RT_POLL_STEPS; nonzero: stop.  done and
+   total are this state's steps (each thread reports its own share).  */
+static inline int
+sweep_poll (sweep_state *st, double steps)
+{
+  st->steps += steps;
+  if (st->steps < RT_POLL_STEPS || st->poll == NULL || st->poll->fn == NULL)
+    return st->stopped;
+  st->done0 += st->steps;
+  st->steps = 0.0;
+  if (st->poll->fn (st->poll->ctx, st->done0, st->total))
+    st->stopped = 1;
+  return st->stopped;
 }
 
 int
@@ -331,7 +363,7 @@ row_build (const dp *d, size_t s, size_t lo, size_t hi)
  * on a loaded machine, and the whole table of n = 1000 takes well under
  * a second.  */
 static void
-fill_tables (dp *d)
+fill_tables (dp *d, sweep_state *pl)
 {
   const size_t K1 = d->K1, P = d->P;
   for (size_t s = P + 1; s-- > 0;)
@@ -340,6 +372,8 @@ fill_tables (dp *d)
       d->T[s * K1] = 0.0;
       if (mmax > 0)
         row_build (d, s, 1, mmax + 1);
+      if (sweep_poll (pl, 0.5 * (double) mmax * (double) mmax))
+        return;
     }
 }
 
@@ -487,6 +521,8 @@ sweep_run (sweep_state *st, const holent_geo_bg *bg, const double *y,
         full[e + 1 - cap] = T[e + 1 - cap];
       if (full && two && e + 2 >= a + cap)
         full[e + 2 - cap] = T[e + 2 - cap];
+      if (sweep_poll (st, (double) (J0 + J1)))
+        return;
     }
 }
 
@@ -510,7 +546,7 @@ emit_pair (const double *y, size_t N, size_t s, size_t p, size_t *pi,
  * log of the last sweep resolves any run inside it, and when the log
  * overflowed the final partners give the top chain of the swept run and
  * its inner runs are swept again, each smaller than the last.  */
-static void
+static int
 sweep_unwind (holent_rt_workspace *w, const holent_geo_bg *bg, size_t s0,
               size_t N, int swept, size_t *pi, size_t *pj, double *arc)
 {
@@ -527,7 +563,10 @@ sweep_unwind (holent_rt_workspace *w, const holent_geo_bg *bg, size_t s0,
       if (!(have_log && la <= s && e <= lb))
         {
           st->logging = 1;
+          st->total += 0.25 * (double) (e - s + 1) * (double) (e - s + 1);
           sweep_run (st, bg, y, N, s, e, e - s + 1, NULL);
+          if (st->stopped)
+            return HOLENT_EINTR;
           la = s;
           lb = e;
           have_log = !st->overflow;
@@ -550,6 +589,7 @@ sweep_unwind (holent_rt_workspace *w, const holent_geo_bg *bg, size_t s0,
           stack[top++] = e;
         }
     }
+  return HOLENT_SUCCESS;
 }
 
 /* Best run of every start on the circle: full[s] for s = 1..N, runs of
@@ -570,6 +610,8 @@ sweep_circle (holent_rt_workspace *w, const holent_geo_bg *bg, size_t N)
       return;
     }
   size_t h = N / 2;
+  /* each thread reports its own share, N^2/2 steps */
+  w->sw[0].total = w->sw[1].total = 0.5 * (double) N * (double) N;
 #pragma omp parallel sections num_threads(2)
   {
 #pragma omp section
@@ -678,6 +720,22 @@ rt_minimise (holent_rt_workspace *w, const holent_geo_bg *bg,
     w->y[i] = i < N ? r->pts[i] : r->pts[i - N] + r->L;
   dp d = { N, n, n + 1, P, two_turns, w->y, w->T, w->W, cost, ctx };
   int want_conf = pairs != NULL || arcs != NULL;
+  /* Progress in elementary steps: the sweep's (3/4 N^2 over two turns,
+     N^2/2 for each of two threads, N^2/4 on one turn; every sweep of the
+     unwinding adds its own), or the DP's (about N^3/24 or N^3/6).  */
+  double Nd = (double) N, total;
+  if (fast)
+    total = (two_turns ? 0.75 : 0.25) * Nd * Nd;
+  else
+    total = (two_turns ? 1.0 / 6.0 : 1.0 / 24.0) * Nd * Nd * Nd;
+  for (int i = 0; i < 2; i++)
+    {
+      sweep_state *ss = &w->sw[i];
+      ss->poll = w->poll;
+      ss->steps = ss->done0 = 0.0;
+      ss->total = total;
+      ss->stopped = 0;
+    }
   if (fast)
     {
       if (two_turns)
@@ -688,13 +746,17 @@ rt_minimise (holent_rt_workspace *w, const holent_geo_bg *bg,
           sweep_run (&w->sw[0], bg, w->y, N, 0, N - 1, N, NULL);
           w->full[0] = w->sw[0].T[0];
         }
+      if (w->sw[0].stopped || w->sw[1].stopped)
+        return HOLENT_EINTR;
     }
   else
     {
       st = fill_weights (&d, bg);
       if (st)
         return st;
-      fill_tables (&d);
+      fill_tables (&d, &w->sw[0]);
+      if (w->sw[0].stopped)
+        return HOLENT_EINTR;
       if (two_turns)
         for (size_t s = 1; s <= N; s++)
           w->full[s] = d.T[s * d.K1 + n];
@@ -749,7 +811,11 @@ rt_minimise (holent_rt_workspace *w, const holent_geo_bg *bg,
   size_t *pi = w->pidx, *pj = w->pidx + n, *slot = w->slot;
   double *arc = w->parc;
   if (fast)
-    sweep_unwind (w, bg, s0, N, !two_turns, pi, pj, arc);
+    {
+      st = sweep_unwind (w, bg, s0, N, !two_turns, pi, pj, arc);
+      if (st)
+        return st;
+    }
   else
     backtrack (&d, s0, n, w->stack, pi, pj, arc);
   for (size_t a = 0; a < N; a++)
@@ -912,7 +978,8 @@ int
 holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
                      holent_rt_method method, size_t nreg,
                      const holent_rt_input *in, double *S, double *n_short,
-                     holent_rt_conf *conf, size_t *failed)
+                     holent_rt_conf *conf, size_t *failed,
+                     const holent_poll *poll)
 {
   if (b == NULL || bg == NULL || (nreg > 0 && (in == NULL || S == NULL)))
     return HOLENT_EINVAL;
@@ -927,13 +994,23 @@ holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
      workspace; the first failure in region order is reported.  A single
      large region keeps both threads for its own sweep.  */
   long first = -1;
-  int fail_st = HOLENT_SUCCESS;
-  double ns = 0.0;
+  int fail_st = HOLENT_SUCCESS, stop = 0;
+  double ns = 0.0, done = 0.0;
   const long nr = (long) nreg;
+  const int par = nreg >= RT_BATCH_PAR && b->nthreads > 1;
+  /* Serial: each minimiser polls inside too (one region may be large);
+     on threads, once per region.  */
+  for (size_t t = 0; t < b->nthreads; t++)
+    b->ws[t]->poll = par ? NULL : poll;
 #pragma omp parallel for schedule(dynamic, 8) reduction(+ : ns) \
-    num_threads(b->nthreads) if (nreg >= RT_BATCH_PAR && b->nthreads > 1)
+    num_threads(b->nthreads) if (par)
   for (long k = 0; k < nr; k++)
     {
+      int stopped;
+#pragma omp atomic read
+      stopped = stop;
+      if (stopped)
+        continue;
       size_t t = 0;
 #ifdef _OPENMP
       t = (size_t) omp_get_thread_num ();  /* < b->nthreads */
@@ -941,6 +1018,19 @@ holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
       size_t nsh = 0;
       int st = batch_one (b->reg[t], b->ws[t], bg, method, &in[k], &S[k],
                           &nsh, conf ? &conf[k] : NULL);
+      if (st == HOLENT_SUCCESS && poll && poll->fn)
+        {
+          double d;
+#pragma omp atomic capture
+          d = ++done;
+          if (poll->fn (poll->ctx, d, (double) nreg))
+            st = HOLENT_EINTR;
+        }
+      if (st == HOLENT_EINTR)
+        {
+#pragma omp atomic write
+          stop = 1;
+        }
       if (st)
         {
 #pragma omp critical (holent_rt_batch_fail)

@@ -59,6 +59,11 @@ holent_rt_workspace *holent_rt_alloc (size_t nmax);
 holent_rt_workspace *holent_rt_alloc_dp (size_t nmax);
 void holent_rt_free (holent_rt_workspace *w);
 
+/* The minimisers of w call poll->fn (poll->ctx, done, total) about every
+   1e5 elementary steps (done and total in those steps) and return
+   HOLENT_EINTR when it returns nonzero; NULL (the default): never.  */
+int holent_rt_set_poll (holent_rt_workspace *w, const holent_poll *poll);
+
 /* Lower (never raise) the number of partner changes the fast path logs
    for unwinding its minimiser (8 N + 64 by default, a few per point are
    used in practice); past it, the unwinding sweeps sub-runs again.  For
@@ -168,11 +173,15 @@ typedef struct
    of the first failing region in order (holent_region_set's or
    holent_rt_entropy_method's; HOLENT_ETOOBIG when it has more rows than
    the batch was made for) and sets *failed (if non-NULL) to its index;
-   the other entries are then unspecified.  */
+   the other entries are then unspecified.  poll (NULL: never) is called
+   once per region done (done = regions done, total = nreg) and, below 16
+   regions, inside each minimiser too; when it asks to stop, the regions
+   not yet started are skipped and HOLENT_EINTR is returned (*failed: a
+   region that was stopped or not started).  */
 int holent_rt_batch_run (holent_rt_batch *b, const holent_geo_bg *bg,
                          holent_rt_method method, size_t nreg,
                          const holent_rt_input *in, double *S,
                          double *n_short, holent_rt_conf *conf,
-                         size_t *failed);
+                         size_t *failed, const holent_poll *poll);
 
 #endif /* HOLENT_RT_H */

@@ -16,6 +16,7 @@ holent_strerror (int status)
     case HOLENT_EUNSUP:    return "not supported for this background";
     case HOLENT_ETOOBIG:   return "problem too large";
     case HOLENT_ECOINCIDE: return "boundary points coincide";
+    case HOLENT_EINTR:     return "interrupted";
     case HOLENT_ETIMELIKE: return "boundary points are timelike or null separated";
     default:               return "unknown status";
     }

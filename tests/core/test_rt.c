@@ -3,7 +3,8 @@
  * non-crossing pairing, every face, with the regulated lengths in closed
  * form, not via holent_geo); the sweep against the DP on random regions
  * in every bulk (same minimum and minimiser), also with its unwinding log
- * cut short; the batch of many regions against single calls; the
+ * cut short; the batch of many regions against single calls;
+ * interruption through the poll callback; the
  * candidate counts against the Catalan and central
  * binomial numbers; and every error path.  */
 #include <math.h>
@@ -506,7 +507,7 @@ test_batch (void)
       double nshort = -1;
       size_t failed = 99;
       HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, nr, in, S,
-                                      &nshort, conf, &failed),
+                                      &nshort, conf, &failed, NULL),
                  HOLENT_SUCCESS);
       HT_CHECK (nshort == 0 && failed == 99, "nshort %g", nshort);
       for (size_t k = 0; k < nr; k++)
@@ -531,7 +532,7 @@ test_batch (void)
       if (nr == NR)
         {
           HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, nr, in, S,
-                                          NULL, NULL, &failed),
+                                          NULL, NULL, &failed, NULL),
                      HOLENT_EOVERLAP);
           HT_CHECK (failed == 7, "failed = %zu", failed);
         }
@@ -542,15 +543,130 @@ test_batch (void)
   holent_rt_batch *b = holent_rt_batch_alloc (NR, 3, 3, 0);
   size_t failed = 0;
   HT_STATUS (holent_rt_batch_run (b, &bg, HOLENT_RT_AUTO, NR, in, S, NULL,
-                                  NULL, &failed), HOLENT_ETOOBIG);
+                                  NULL, &failed, NULL), HOLENT_ETOOBIG);
   HT_STATUS (holent_rt_batch_run (NULL, &bg, HOLENT_RT_AUTO, NR, in, S, NULL,
-                                  NULL, &failed), HOLENT_EINVAL);
+                                  NULL, &failed, NULL), HOLENT_EINVAL);
   HT_CHECK (holent_rt_batch_alloc (1, 0, 3, 0) == NULL, "no rows");
   holent_rt_batch_free (b);
   holent_rt_batch_free (NULL);
   holent_region_free (r);
   holent_rt_free (w);
   gsl_rng_free (rng);
+}
+
+/* Interruption: a poll that stops after a few calls makes every long
+ * path return HOLENT_EINTR (sweep on a line, on two threads over two
+ * turns, the unwinding, the DP, the batch); one that never stops changes
+ * nothing, and its progress only grows, up to about the total.  */
+typedef struct
+{
+  int calls, stop_at;
+  double last, total;
+  int monotone;
+} poll_probe;
+
+static int
+probe_fn (void *ctx, double done, double total)
+{
+  poll_probe *p;
+#pragma omp critical (test_rt_probe)
+  {
+    p = ctx;
+    p->calls++;
+    p->monotone = p->monotone && total >= 0 && done >= 0;
+    p->last = done > p->last ? done : p->last;
+    p->total = total;
+  }
+  return p->stop_at > 0 && p->calls >= p->stop_at;
+}
+
+static void
+test_poll (void)
+{
+  const size_t n = 1100;
+  holent_geo_bg line, btz;
+  holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
+  holent_geo_bg_init (&btz, HOLENT_BULK_BTZ, 6, 1e-4, 0.8, 0.8, 1, 1);
+  holent_region *rl = holent_region_alloc (n), *rc = holent_region_alloc (n);
+  holent_rt_workspace *w = holent_rt_alloc (n);
+  holent_rt_workspace *wd = holent_rt_alloc_dp (300);
+  double *a = malloc (n * sizeof *a), *b = malloc (n * sizeof *b);
+  for (size_t k = 0; k < n; k++)
+    {
+      a[k] = 6.0 * (k + 0.05 * (k % 7)) / n;
+      b[k] = a[k] + 6.0 * (0.3 + 0.04 * (k % 5)) / n;
+    }
+  HT_STATUS (holent_region_set (rl, 0, 0, n, a, b), HOLENT_SUCCESS);
+  HT_STATUS (holent_region_set (rc, 1, 6, n, a, b), HOLENT_SUCCESS);
+  holent_rt_result r0, r1;
+  size_t *pairs = malloc (2 * n * sizeof *pairs);
+  for (int c = 0; c < 2; c++)
+    {
+      const holent_geo_bg *bg = c ? &btz : &line;
+      const holent_region *r = c ? rc : rl;
+      HT_STATUS (holent_rt_entropy (w, bg, r, &r0, pairs, NULL),
+                 HOLENT_SUCCESS);
+      poll_probe never = { 0, 0, 0, 0, 1 };
+      holent_poll pn = { probe_fn, &never };
+      HT_STATUS (holent_rt_set_poll (w, &pn), HOLENT_SUCCESS);
+      HT_STATUS (holent_rt_entropy (w, bg, r, &r1, pairs, NULL),
+                 HOLENT_SUCCESS);
+      HT_CHECK (r1.S == r0.S && never.calls > 3 && never.monotone
+                && never.last <= 1.05 * never.total
+                && never.last >= 0.5 * never.total,
+                "case %d: %d calls, done %g of %g", c, never.calls,
+                never.last, never.total);
+      for (int at = 1; at <= 9; at += 4)  /* early, and in the unwinding */
+        {
+          poll_probe stop = { 0, at, 0, 0, 1 };
+          holent_poll ps = { probe_fn, &stop };
+          holent_rt_set_poll (w, &ps);
+          HT_STATUS (holent_rt_entropy (w, bg, r, &r1, pairs, NULL),
+                     HOLENT_EINTR);
+        }
+      holent_rt_set_poll (w, NULL);
+    }
+  /* the DP */
+  HT_STATUS (holent_region_set (rc, 1, 6, 300, a, b), HOLENT_SUCCESS);
+  poll_probe stop = { 0, 2, 0, 0, 1 };
+  holent_poll ps = { probe_fn, &stop };
+  holent_rt_set_poll (wd, &ps);
+  HT_STATUS (holent_rt_entropy_method (wd, &btz, rc, HOLENT_RT_DP, &r1, NULL,
+                                       NULL), HOLENT_EINTR);
+  HT_STATUS (holent_rt_set_poll (NULL, &ps), HOLENT_EINVAL);
+  /* the batch: per region, serial and on threads */
+  enum { NR = 40 };
+  holent_rt_input in[NR];
+  double S[NR];
+  for (int k = 0; k < NR; k++)
+    in[k] = (holent_rt_input) { 5, a + 5 * k, b + 5 * k };
+  for (size_t nr = 4; nr <= NR; nr += NR - 4)
+    {
+      holent_rt_batch *bt = holent_rt_batch_alloc (nr, 5, 5, 0);
+      poll_probe cnt = { 0, 0, 0, 0, 1 };
+      holent_poll pc = { probe_fn, &cnt };
+      HT_STATUS (holent_rt_batch_run (bt, &btz, HOLENT_RT_AUTO, nr, in, S,
+                                      NULL, NULL, NULL, &pc),
+                 HOLENT_SUCCESS);
+      HT_CHECK (cnt.calls == (int) nr && cnt.last == (double) nr
+                && cnt.total == (double) nr, "batch of %zu: %d calls", nr,
+                cnt.calls);
+      poll_probe st2 = { 0, 2, 0, 0, 1 };
+      holent_poll p2 = { probe_fn, &st2 };
+      size_t failed = 99;
+      HT_STATUS (holent_rt_batch_run (bt, &btz, HOLENT_RT_AUTO, nr, in, S,
+                                      NULL, NULL, &failed, &p2),
+                 HOLENT_EINTR);
+      HT_CHECK (failed < nr, "failed = %zu", failed);
+      holent_rt_batch_free (bt);
+    }
+  free (a);
+  free (b);
+  free (pairs);
+  holent_region_free (rl);
+  holent_region_free (rc);
+  holent_rt_free (w);
+  holent_rt_free (wd);
 }
 
 static void
@@ -598,6 +714,7 @@ main (void)
   test_errors ();
   test_oracle ();
   test_batch ();
+  test_poll ();
   test_large ();
   return HT_DONE ();
 }
