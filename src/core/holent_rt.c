@@ -483,7 +483,7 @@ sweep_column (sweep_state *st, const holent_geo_bg *bg, const double *y,
   size_t J = (e - 1 - lo) / 2 + 1;
   for (size_t j = 0; j < J; j++)
     st->arc[j] = uarc (y, N, e - 1 - 2 * j, e);
-  holent_vmath_arc_lengths (bg, J, st->arc, c);
+  holent_vmath_arc_lengths_sorted (bg, J, st->arc, c);  /* ascending */
   return J;
 }
 

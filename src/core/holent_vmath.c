@@ -100,6 +100,52 @@ holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
     }
 }
 
+/* Above this x, expm1(-2x) rounds to -1 and log sinh x = x - log 2
+   exactly (e^-38 is below half an ulp of 1).  */
+#define LNSINH_LINEAR 19.0
+
+void
+holent_vmath_arc_lengths_sorted (const holent_geo_bg *bg, size_t n,
+                                 const double *arc, double *len)
+{
+  switch (bg->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+    case HOLENT_BULK_CONICAL_DEFECT:
+      holent_vmath_arc_lengths (bg, n, arc, len);
+      return;
+    default:
+      break;
+    }
+  /* first arc in the linear range of both terms (bisection) */
+  const double k = bg->kL < bg->kR ? bg->kL : bg->kR;
+  size_t lo = 0, hi = n;
+  while (lo < hi)
+    {
+      size_t mid = lo + (hi - lo) / 2;
+      if (k * arc[mid] >= LNSINH_LINEAR)
+        hi = mid;
+      else
+        lo = mid + 1;
+    }
+  holent_vmath_arc_lengths (bg, lo, arc, len);
+  const double pref = bg->pref, kL = bg->kL, kR = bg->kR;
+  if (kL == kR)
+    {
+#pragma omp simd
+      for (size_t i = lo; i < n; i++)
+        len[i] = pref + 2.0 * (kL * arc[i] - M_LN2);
+    }
+  else
+    {
+#pragma omp simd
+      for (size_t i = lo; i < n; i++)
+        len[i] = pref + ((kL * arc[i] - M_LN2) + (kR * arc[i] - M_LN2));
+    }
+}
+
 /* The arc from x1 to x2 in the positive sense, or a status.  On a circle
    fmod is exact; for |d| < L it returns d itself, so that case skips the
    call.  */

@@ -15,6 +15,13 @@
 void holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
                                const double *arc, double *len);
 
+/* The same for ascending arcs: in the BTZ family the lengths of arcs with
+   k arc >= 19 (both k) are pref + sum (k arc - log 2) without a call, the
+   very value of the kernel (there log(-expm1(-2x)) is exactly 0 in libm
+   and libmvec; tests/core/test_vmath.c checks it).  */
+void holent_vmath_arc_lengths_sorted (const holent_geo_bg *bg, size_t n,
+                                      const double *arc, double *len);
+
 /* holent_geo_point_lengths (same arguments, statuses and results), with
    the lengths evaluated in blocks by the kernel above.  */
 int holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,

@@ -63,6 +63,37 @@ test_kernel (void)
     }
 }
 
+/* Ascending arcs in the BTZ family: past k arc = 19 the linear form is
+   the kernel's value to the last bit.  */
+static void
+test_sorted (void)
+{
+  enum { M = 2001 };
+  static double arc[M], a1[M], a2[M];
+  for (int b = 2; b <= 6; b++)
+    {
+      if (b == 4)
+        continue;  /* thermal AdS: no sinh */
+      holent_geo_bg bg;
+      HT_STATUS (holent_geo_bg_init (&bg, (holent_bulk) b, 50.0, 1e-5, 0.3,
+                                     b >= 5 ? 0.9 : 0.3, 1, 3),
+                 HOLENT_SUCCESS);
+      for (int i = 0; i < M; i++)
+        arc[i] = 1e-6 + 49.9 * i / (M - 1.0);
+      holent_vmath_arc_lengths (&bg, M, arc, a1);
+      holent_vmath_arc_lengths_sorted (&bg, M, arc, a2);
+      int same = 1;
+      for (int i = 0; i < M; i++)
+        same = same && a1[i] == a2[i];
+      HT_CHECK (same, "bulk %d: sorted = kernel", b);
+      /* and for x = k arc in [18.5, 60] directly: log(-expm1(-2x)) = 0 */
+      int zero = 1;
+      for (double x = 19.0; x < 60.0; x *= 1.00001)
+        zero = zero && log (-expm1 (-2.0 * x)) == 0.0;
+      HT_CHECK (zero, "log(-expm1(-2x)) = 0 past 19");
+    }
+}
+
 static void
 test_points (void)
 {
@@ -126,6 +157,7 @@ int
 main (void)
 {
   test_kernel ();
+  test_sorted ();
   test_points ();
   return HT_DONE ();
 }
