@@ -125,7 +125,7 @@ endfunction
 %!test
 %! ## Four-leaf star with unit weights on A1, A2, A3 and the purifier: the
 %! ## perfect-tensor-like vector S(I) = min(|I|, 4 - |I|) (Bao et al. 2015),
-%! ## which violates no MMI but saturates it.
+%! ## with the most negative tripartite information, I3 = 3 - 6 + 1 = -2.
 %! [S, cuts] = mincut_entropy_vector ([1 2; 1 3; 1 4; 1 5], [1 1 1 1], [0 1 2 3 4],
 %!                                    "parties", 3);
 %! c = sum (dec2bin (1:7) == "1", 2);

@@ -135,6 +135,10 @@
 %!      f = setdiff (labels, {"rev", "singlevec"});
 %!    case "labels3"      # three integer labels 0 .. N+1 using parties 1, 2
 %!      f = setdiff (labels, {"sparsevec"});
+%!    case "all"          # nothing else fits (a 1 x 7 matrix, a certificate)
+%!      f = labels;
+%!    case "side"         # a cell of regions of parties 1..4, or 7 coefficients
+%!      f = setdiff (labels, {"cell", "emptycell"});
 %!    case "svec"         # an entropy vector of 2^N - 1 entries
 %!      f = [nonnum, bad, infs, {"e00", "e02", "e20", "nd3", "col3", "hugevec"}];
 %!    otherwise
@@ -155,6 +159,7 @@
 %!  bb = ads3_background ("bcft", "half_line", "tension", 0.3);
 %!  bi = ads3_background ("bcft", "interval", "length", 5, "tension", [0.1 0.3], "beta", 1);
 %!  bt = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.5);
+%!  [~, cert] = contraction_proof ({[1 2], [2 3], [1 3]}, {1, 2, 3, [1 2 3]}, 3);
 %!  T = {
 %!   "ads3_background", {"thermal", "circle", "beta", 2, "c", 12, "cutoff", 1e-4}, ...
 %!     {"word:STATE", "word:BOUNDARY", "optname:", "pos:beta", "optname:", "pos:c", "optname:", "pos:cutoff"};
@@ -218,7 +223,12 @@
 %!   "page_curve", {bt, [1 2; 3 Inf], [0 1]}, {"bg3:BG", "radiation:R", "reals:t"};
 %!   "brane_profile", {bb, [0.1 0.2]}, {"bg3:BG", "lens:Z"};
 %!   "mincut_entropy_vector", {[1 2; 2 3], [1 2], [1 0 2], "parties", 2}, ...
-%!     {"edges:EDGES", "weights2:WEIGHTS", "labels3:LABELS", "optname:", "dim:parties"}};
+%!     {"edges:EDGES", "weights2:WEIGHTS", "labels3:LABELS", "optname:", "dim:parties"};
+%!   "contraction_proof", {{[1 2], [2 3], [1 3]}, {1, 2, 3, [1 2 3]}, 3, "max_nodes", 1e5}, ...
+%!     {"side:LHS", "side:RHS", "dim:N", "optname:", "nonneg:max_nodes"};
+%!   "contraction_check", {cert}, {"all:CERT"};
+%!   "entropy_cone_test", {Sv, "tol", 1e-9, "inequalities", ones(1, 7), "rays", eye(7)}, ...
+%!     {"svec:S", "optname:", "nonneg:tol", "optname:", "all:inequalities", "optname:", "all:rays"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)
@@ -375,6 +385,7 @@
 %!   bh = ads_background (4, "black_brane", "zh", 1);
 %!   z = linspace (0, 1.2, 40)';
 %!   Sv = [1 1 1.5 1 1.5 1.5 1.2];
+%!   [~, fmap] = __holent_cone__ ("prove", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0);
 %!   G = {"__holent_geodesic__", {bc, 0.1, 0.5, 0}, 1;
 %!        "__holent_interval__", {bc, [0.5 1]}, 1;
 %!        "__holent_rt__", {"entropy", "rt_entropy", "A", bc, [0 1; 2 3]}, 2;
@@ -393,7 +404,10 @@
 %!        "__holent_bcft__", {"entropy", "rt_entropy", "A", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
 %!        "__holent_bcft__", {"check", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
 %!        "__holent_bcft__", {"page", "f", ads3_background("bcft_tfd", "half_line", "beta", 1), [1 Inf], [0 1]}, 2;
-%!        "__holent_bcft__", {"profile", "f", ads3_background("bcft", "half_line"), [0.1 0.2], 0}, 2};
+%!        "__holent_bcft__", {"profile", "f", ads3_background("bcft", "half_line"), [0.1 0.2], 0}, 2;
+%!        "__holent_cone__", {"prove", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0}, 2;
+%!        "__holent_cone__", {"check", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), fmap}, 2;
+%!        "__holent_cone__", {"facets", 3}, 2};
 %!   bad = {};
 %!   for r = 1:rows (G)
 %!     [gw, args, p0] = G{r,:};
