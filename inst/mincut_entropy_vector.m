@@ -59,7 +59,7 @@ function [S, cuts] = mincut_entropy_vector (edges, weights, labels, varargin)
   endif
   bad = find (labels != round (labels) | labels < 0, 1);
   if (! isempty (bad))
-    error ("holent:labels", "%s: LABELS must be integers >= 0 (0 bulk, 1..N party, N+1 purifier); LABELS(%d) = %g",
+    error ("holent:domain", "%s: LABELS must be integers >= 0 (0 bulk, 1..N party, N+1 purifier); LABELS(%d) = %g",
            fn, bad, labels(bad));
   endif
   V = numel (labels);
@@ -75,19 +75,19 @@ function [S, cuts] = mincut_entropy_vector (edges, weights, labels, varargin)
       error ("holent:domain", "%s: parties must be an integer, got %g", fn, N);
     endif
     if (max (labels) > N + 1)
-      error ("holent:labels", "%s: LABELS go up to %d but parties = %d allows 0 .. %d (N+1 = purifier)",
+      error ("holent:inconsistent", "%s: LABELS go up to %d but parties = %d allows 0 .. %d (N+1 = purifier)",
              fn, max (labels), N, N + 1);
     endif
   else
     N = max (labels);
     if (N < 1 || N > 16)
-      error ("holent:labels", "%s: LABELS must name 1 .. 16 parties (max (LABELS) = %d)",
+      error ("holent:domain", "%s: LABELS must name 1 .. 16 parties (max (LABELS) = %d)",
              fn, N);
     endif
   endif
   missing = setdiff (1:N, labels(:)');
   if (! isempty (missing))
-    error ("holent:labels", "%s: party %d has no boundary vertex (LABELS must use every party 1 .. %d)",
+    error ("holent:inconsistent", "%s: party %d has no boundary vertex (LABELS must use every party 1 .. %d)",
            fn, missing(1), N);
   endif
   if (nargout > 1)

@@ -119,7 +119,7 @@ do_mincut (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   free (tail), free (head), free (label);
   holent_mincut_workspace_free (ws);
   if (st == HOLENT_EEMPTY)
-    mexErrMsgIdAndTxt ("holent:labels", "party %zu has no boundary vertex "
+    mexErrMsgIdAndTxt ("holent:inconsistent", "party %zu has no boundary vertex "
                        "(LABELS must use every party 1 .. N = %g)", bad + 1, n);
   if (st == HOLENT_EINVAL || st == HOLENT_EDOM)
     holent_gw_fail (st, "", "WEIGHTS", bad);

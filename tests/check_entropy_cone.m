@@ -102,7 +102,7 @@
 %!   assert (ok, sprintf ("facet %d not proved", f));
 %!   if (f == fs(1))
 %!     assert (allpairs_check (cert));
-%!     printf ("      orbit 8 representative: %d x %d points, log2 maps %.0f, %d nodes, %d backtracks\n",
+%!     printf ("      orbit 8 representative: %d points, %d values each, log2 maps %.0f, %d nodes, %d backtracks\n",
 %!             cert.points, cert.values, cert.log2_initial, cert.nodes, cert.backtracks);
 %!   endif
 %! endfor
