@@ -19,6 +19,27 @@ set_bad (int *bad, int v)
     *bad = v;
 }
 
+/* The one-sided and two-sided length kernels are those of holent_geo and
+   holent_tfd, on the matching bulk.  */
+static int
+set_lengths (holent_bcft_bg *bg)
+{
+  int st;
+  if (bg->btz)
+    st = holent_geo_bg_init (&bg->geo, HOLENT_BULK_PLANAR_BTZ, 0.0, bg->eps,
+                             bg->beta, bg->beta, 1.0, bg->c);
+  else if (bg->kind == HOLENT_BCFT_INTERVAL)
+    st = holent_geo_bg_init (&bg->geo, HOLENT_BULK_GLOBAL_ADS,
+                             2.0 * bg->length, bg->eps, INFINITY, INFINITY,
+                             1.0, bg->c);
+  else
+    st = holent_geo_bg_init (&bg->geo, HOLENT_BULK_POINCARE, 0.0, bg->eps,
+                             INFINITY, INFINITY, 1.0, bg->c);
+  if (!st && bg->kind == HOLENT_BCFT_TFD)
+    st = holent_tfd_init (&bg->tfd, 0, 0.0, bg->eps, bg->beta, bg->c, 0.0);
+  return st ? HOLENT_EDOM : HOLENT_SUCCESS;
+}
+
 int
 holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
                      double length, double eps, double beta, double T0,
@@ -78,7 +99,7 @@ holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
     {
       bg->btz = isfinite (beta);
       bg->S_H = bg->btz ? INFINITY : 0.0;
-      return HOLENT_SUCCESS;
+      return set_lengths (bg);
     }
 
   /* Interval: Hawking-Page with boundary entropy (doc/bcft.md):
@@ -110,7 +131,7 @@ holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
     }
   else
     bg->z0 = length / M_PI;
-  return HOLENT_SUCCESS;
+  return set_lengths (bg);
 }
 
 static int
@@ -131,17 +152,11 @@ lncosh (double y)
   return y + log1p (exp (-2.0 * y)) - M_LN2;
 }
 
-/* Unchecked kernels.  */
+/* Unchecked kernel: the one-sided geodesic over a distance d.  */
 static double
 pair_len (const holent_bcft_bg *bg, double d)
 {
-  if (bg->btz)
-    return 2.0 * (log (bg->beta / (M_PI * bg->eps))
-                  + holent_geo_lnsinh (M_PI * d / bg->beta));
-  if (bg->kind == HOLENT_BCFT_INTERVAL)   /* thermal AdS: doubled circle */
-    return 2.0 * log (2.0 * bg->length / (M_PI * bg->eps)
-                      * sin (M_PI * d / (2.0 * bg->length)));
-  return 2.0 * log (d / bg->eps);
+  return holent_geo_len_unchecked (&bg->geo, d);
 }
 
 static double
@@ -270,16 +285,6 @@ holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z, double *x)
   return HOLENT_SUCCESS;
 }
 
-/* log(cosh a + cosh b) without overflow.  */
-static double
-ln_cosh_sum (double a, double b)
-{
-  a = fabs (a);
-  b = fabs (b);
-  double M = a > b ? a : b, m = a > b ? b : a;
-  return M - M_LN2 + log1p (exp (-2.0 * M) + exp (m - M) + exp (-m - M));
-}
-
 int
 holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1, double t1,
                            double x2, double t2, double *len)
@@ -293,12 +298,8 @@ holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1, double t1,
     st = in_domain (bg, x2);
   if (st)
     return st;
-  /* Embedding of the eternal planar BTZ (doc/bcft.md):
-     cosh d ~ (beta/(2 pi eps))^2 (cosh(2pi dx/beta) + cosh(2pi (t1+t2)/beta)).  */
-  double k = 2.0 * M_PI / bg->beta;
-  *len = 2.0 * log (bg->beta / (M_PI * bg->eps)) - M_LN2
-         + ln_cosh_sum (k * (x1 - x2), k * (t1 + t2));
-  return HOLENT_SUCCESS;
+  /* through the bridge: holent_tfd's length without a shock */
+  return holent_tfd_cross_length (&bg->tfd, x1, t1, x2, t2, len);
 }
 
 /* ---- regions ------------------------------------------------------ */

@@ -22,6 +22,8 @@
 
 #include <stddef.h>
 #include "holent.h"
+#include "holent_geo.h"
+#include "holent_tfd.h"
 
 typedef enum
 {
@@ -54,6 +56,10 @@ typedef struct
                         half line at beta < Inf: Inf; otherwise 0        */
   double zh;         /* horizon depth beta/(2 pi) (Inf without)          */
   double z0;         /* thermal AdS: tip depth length/pi (Inf otherwise) */
+  holent_geo_bg geo; /* lengths between two points of one side: Poincare,
+                        planar BTZ, or global AdS of circumference
+                        2 length (the doubled interval, thermal AdS)     */
+  holent_tfd_bg tfd; /* TFD: the two-sided geometry of holent_tfd        */
 } holent_bcft_bg;
 
 /* Check every parameter and fill *bg.  length is ignored (Inf) on the
