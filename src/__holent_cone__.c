@@ -115,7 +115,7 @@ do_mincut (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   free (lab);
   plhs[0] = mxCreateDoubleMatrix (ncut, 1, mxREAL);
   st = holent_mincut_entropy (nv, ne, tail, head, w, label, (unsigned) n,
-                              mxGetPr (plhs[0]), cuts, &bad, ws);
+                              mxGetPr (plhs[0]), cuts, &bad, ws, NULL);
   free (tail), free (head), free (label);
   holent_mincut_workspace_free (ws);
   if (st == HOLENT_EEMPTY)
@@ -219,7 +219,7 @@ do_prove (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       holent_contract_workspace_free (ws);
       contract_fail (HOLENT_ENOMEM, lm, rm, nl, nr);
     }
-  s = holent_contract_prove (n, nl, lm, a, nr, rm, b, maxn, f, &st, ws);
+  s = holent_contract_prove (n, nl, lm, a, nr, rm, b, maxn, f, &st, ws, NULL);
   holent_contract_workspace_free (ws);
   if (s)
     {

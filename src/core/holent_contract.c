@@ -75,7 +75,8 @@ typedef struct
   const double *a;
   double tol;
   double nodes, backtracks, max_nodes;
-  int nomem, stop;
+  const holent_poll *poll;
+  int nomem, stop, intr;
 } search;
 
 static double
@@ -258,6 +259,9 @@ dfs (search *s)
           cand[wi] &= cand[wi] - 1;
           if (s->max_nodes > 0 && s->nodes >= s->max_nodes)
             s->stop = 1;
+          if (s->poll != NULL && s->poll->fn != NULL && fmod (s->nodes, 64) == 0
+              && s->poll->fn (s->poll->ctx, s->nodes, s->max_nodes))
+            s->stop = s->intr = 1;
           if (s->stop || s->nomem)
             {
               free (cand);
@@ -376,7 +380,7 @@ holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
                        const double *a, unsigned nr, const uint32_t *rmask,
                        const double *b, double max_nodes, uint32_t *f,
                        holent_contract_stats *st,
-                       holent_contract_workspace *ws)
+                       holent_contract_workspace *ws, const holent_poll *poll)
 {
   uint32_t xb[HOLENT_CONTRACT_NMAX + 1], yb[HOLENT_CONTRACT_NMAX + 1];
   double rad[HOLENT_CONTRACT_NMAX + 1], amax = 0, bmax = 0;
@@ -405,6 +409,7 @@ holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
   /* integer and small rational weights are exact; this absorbs rounding */
   s.tol = 1e-9 * (amax > bmax ? amax : bmax);
   s.max_nodes = max_nodes;
+  s.poll = poll;
   for (y = 0; y < 4096; y++)
     {
       ws->wlo[y] = wsum (b, nr < 12 ? nr : 12, y);
@@ -428,6 +433,12 @@ holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
   for (x = 0; x < np; x++)
     {
       uint64_t *d = dom_of (ws, (uint32_t) x);
+      if (x % 64 == 0 && poll != NULL && poll->fn != NULL
+          && poll->fn (poll->ctx, 0.0, max_nodes))
+        {
+          free (balls);
+          return HOLENT_EINTR;
+        }
       for (i = 0; i <= n; i++)
         rad[i] = wsum (a, nl, (uint32_t) x ^ xb[i]) + s.tol;
       if (balls != NULL)
@@ -493,6 +504,8 @@ holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
   st->backtracks = s.backtracks;
   if (s.nomem)
     return HOLENT_ENOMEM;
+  if (s.intr)
+    return HOLENT_EINTR;
   if (!st->found)
     {
       st->found = s.stop ? -1 : 0;

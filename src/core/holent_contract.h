@@ -62,13 +62,16 @@ void holent_contract_workspace_free (holent_contract_workspace *w);
 /* Search for a contraction map.  max_nodes > 0 bounds the search (then
    found = -1).  f (2^L entries) receives the map when found = 1.
    EINVAL for NULL or NaN, EDOM for a bad mask or weight or n, ETOOBIG
-   beyond the limits.  */
+   beyond the limits.  poll (NULL: never interrupted) is called every 64
+   points of the candidate set-up and every 64 search nodes (done = nodes,
+   total = max_nodes or 0); HOLENT_EINTR when it asks to stop.  */
 int holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
                            const double *a, unsigned nr,
                            const uint32_t *rmask, const double *b,
                            double max_nodes, uint32_t *f,
                            holent_contract_stats *st,
-                           holent_contract_workspace *ws);
+                           holent_contract_workspace *ws,
+                           const holent_poll *poll);
 
 /* Independent checker of a certificate f: *ok = 1 when (i) and (ii)
    hold.  Otherwise *bad_x is a failing point and *bad_l the failing

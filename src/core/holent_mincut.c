@@ -293,7 +293,8 @@ int
 holent_mincut_entropy (size_t nv, size_t ne, const size_t *tail,
                        const size_t *head, const double *w, const int *label,
                        unsigned n, double *s, unsigned char *cuts,
-                       size_t *bad, holent_mincut_workspace *ws)
+                       size_t *bad, holent_mincut_workspace *ws,
+                       const holent_poll *poll)
 {
   uint32_t k;
   int st;
@@ -303,6 +304,9 @@ holent_mincut_entropy (size_t nv, size_t ne, const size_t *tail,
     return st;
   for (k = 1; k < (1u << n); k++)
     {
+      if (poll != NULL && poll->fn != NULL
+          && poll->fn (poll->ctx, (double) (k - 1), (double) ((1u << n) - 1)))
+        return HOLENT_EINTR;
       st = holent_mincut_cut (nv, ne, tail, head, w, label, n, k, &s[k - 1],
                               cuts ? cuts + (size_t) (k - 1) * nv : NULL, ws);
       if (st)

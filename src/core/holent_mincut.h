@@ -58,11 +58,14 @@ int holent_mincut_cut (size_t nv, size_t ne, const size_t *tail,
 
 /* The whole entropy vector s[0 .. 2^n - 2]; when cuts != NULL,
    cuts[(k - 1) * nv + v] = side of vertex v for subset k.  Checks the
-   graph first (holent_mincut_check, *bad as there).  */
+   graph first (holent_mincut_check, *bad as there).  poll (NULL: never
+   interrupted) is called once per cut; HOLENT_EINTR when it asks to
+   stop.  */
 int holent_mincut_entropy (size_t nv, size_t ne, const size_t *tail,
                            const size_t *head, const double *w,
                            const int *label, unsigned n, double *s,
                            unsigned char *cuts, size_t *bad,
-                           holent_mincut_workspace *ws);
+                           holent_mincut_workspace *ws,
+                           const holent_poll *poll);
 
 #endif /* HOLENT_MINCUT_H */

@@ -75,9 +75,24 @@ prove (unsigned n, unsigned nl, const uint32_t *lm, const double *a,
        holent_contract_stats *st)
 {
   holent_contract_workspace *ws = holent_contract_workspace_alloc (nl, nr);
-  int s = holent_contract_prove (n, nl, lm, a, nr, rm, b, 0, f, st, ws);
+  int s = holent_contract_prove (n, nl, lm, a, nr, rm, b, 0, f, st, ws, NULL);
   holent_contract_workspace_free (ws);
   return s;
+}
+
+static int
+stop_second (void *ctx, double done, double total)
+{
+  int *calls = ctx;
+  (void) done, (void) total;
+  return ++*calls == 2;
+}
+
+static int
+stop_now (void *ctx, double done, double total)
+{
+  (void) ctx, (void) done, (void) total;
+  return 1;
 }
 
 int
@@ -179,26 +194,43 @@ main (void)
   {
     const uint32_t l[5] = { 7, 14, 28, 25, 19 }, r[6] = { 3, 6, 12, 24, 17, 31 };
     holent_contract_workspace *ws = holent_contract_workspace_alloc (5, 6);
-    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0.5, f, &st, ws), 0);
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0.5, f, &st, ws, NULL), 0);
     HT_CHECK (st.found == -1 || (st.found == 1 && st.nodes == 0),
               "node limit: found %d nodes %g", st.found, st.nodes);
     /* error paths */
-    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0, NULL, &st, ws), HOLENT_EINVAL);
-    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, NAN, f, &st, ws), HOLENT_EINVAL);
-    HT_STATUS (holent_contract_prove (4, 5, l, one, 6, r, one, 0, f, &st, ws), HOLENT_EDOM);
-    HT_STATUS (holent_contract_prove (0, 5, l, one, 6, r, one, 0, f, &st, ws), HOLENT_EDOM);
-    HT_STATUS (holent_contract_prove (17, 5, l, one, 6, r, one, 0, f, &st, ws), HOLENT_ETOOBIG);
-    HT_STATUS (holent_contract_prove (5, 5, l, one, 5, r, one, 0, f, &st, ws), HOLENT_EDOM);
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0, NULL, &st, ws, NULL), HOLENT_EINVAL);
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, NAN, f, &st, ws, NULL), HOLENT_EINVAL);
+    HT_STATUS (holent_contract_prove (4, 5, l, one, 6, r, one, 0, f, &st, ws, NULL), HOLENT_EDOM);
+    HT_STATUS (holent_contract_prove (0, 5, l, one, 6, r, one, 0, f, &st, ws, NULL), HOLENT_EDOM);
+    HT_STATUS (holent_contract_prove (17, 5, l, one, 6, r, one, 0, f, &st, ws, NULL), HOLENT_ETOOBIG);
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 5, r, one, 0, f, &st, ws, NULL), HOLENT_EDOM);
     {
       double bad[6] = { 1, 1, -1, 1, 1, 1 };
-      HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, bad, 0, f, &st, ws), HOLENT_EDOM);
+      HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, bad, 0, f, &st, ws, NULL), HOLENT_EDOM);
       bad[2] = NAN;
-      HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, bad, 0, f, &st, ws), HOLENT_EINVAL);
+      HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, bad, 0, f, &st, ws, NULL), HOLENT_EINVAL);
       HT_STATUS (holent_contract_check (5, 5, l, one, 6, r, bad, f, &ok, &bx, &bl), HOLENT_EINVAL);
     }
     f[3] = 64;
     HT_STATUS (holent_contract_check (5, 5, l, one, 6, r, one, f, &ok, &bx, &bl), HOLENT_EDOM);
     HT_STATUS (holent_contract_check (5, 5, l, one, 6, r, one, f, NULL, &bx, &bl), HOLENT_EINVAL);
+    holent_contract_workspace_free (ws);
+  }
+  /* interruption at the first poll, in the set-up */
+  {
+    const uint32_t l[5] = { 7, 14, 28, 25, 19 }, r[6] = { 3, 6, 12, 24, 17, 31 };
+    holent_contract_workspace *ws = holent_contract_workspace_alloc (5, 6);
+    holent_poll pl = { stop_now, NULL };
+    int calls = 0;
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0, f, &st, ws, &pl),
+               HOLENT_EINTR);
+    /* and in the search: 32 points make one set-up call, the second call
+       comes from the first search node */
+    pl.fn = stop_second;
+    pl.ctx = &calls;
+    HT_STATUS (holent_contract_prove (5, 5, l, one, 6, r, one, 0, f, &st, ws, &pl),
+               HOLENT_EINTR);
+    HT_CHECK (calls == 2, "poll called %d times", calls);
     holent_contract_workspace_free (ws);
   }
   HT_CHECK (holent_contract_workspace_alloc (0, 3) == NULL, "L = 0 refused");

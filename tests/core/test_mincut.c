@@ -59,6 +59,14 @@ brute (size_t nv, size_t ne, const size_t *t, const size_t *h,
   return best;
 }
 
+static int
+stop_third (void *ctx, double done, double total)
+{
+  int *calls = ctx;
+  (void) done, (void) total;
+  return ++*calls == 3;
+}
+
 int
 main (void)
 {
@@ -77,7 +85,7 @@ main (void)
     double sw[4] = { 1, 1, 1, 1 };
     int sl[5] = { 0, 1, 2, 3, 4 };
     uint32_t k;
-    HT_STATUS (holent_mincut_entropy (5, 4, st, sh, sw, sl, 3, s, cuts, &bad, ws),
+    HT_STATUS (holent_mincut_entropy (5, 4, st, sh, sw, sl, 3, s, cuts, &bad, ws, NULL),
                HOLENT_SUCCESS);
     for (k = 1; k < 8; k++)
       {
@@ -112,7 +120,7 @@ main (void)
               /* integer weights make ties (several minimal cuts) common */
               w[ne++] = trial % 2 ? floor (4 * urand (&seed)) : urand (&seed);
             }
-      HT_STATUS (holent_mincut_entropy (nv, ne, t, h, w, lab, n, s, cuts, &bad, ws),
+      HT_STATUS (holent_mincut_entropy (nv, ne, t, h, w, lab, n, s, cuts, &bad, ws, NULL),
                  HOLENT_SUCCESS);
       for (k = 1; k < (1u << n); k++)
         {
@@ -128,10 +136,10 @@ main (void)
     size_t et[2] = { 0, 1 }, eh[2] = { 1, 2 };
     double ew[2] = { 1, 1 };
     int el[3] = { 1, 0, 2 };
-    HT_STATUS (holent_mincut_entropy (3, 2, et, eh, ew, el, 1, s, NULL, &bad, ws),
+    HT_STATUS (holent_mincut_entropy (3, 2, et, eh, ew, el, 1, s, NULL, &bad, ws, NULL),
                HOLENT_SUCCESS);
     HT_CLOSE (s[0], 1, 0);
-    HT_STATUS (holent_mincut_entropy (3, 2, et, eh, ew, el, 1, NULL, NULL, &bad, ws),
+    HT_STATUS (holent_mincut_entropy (3, 2, et, eh, ew, el, 1, NULL, NULL, &bad, ws, NULL),
                HOLENT_EINVAL);
     HT_STATUS (holent_mincut_check (3, 2, et, eh, ew, el, 1, NULL), HOLENT_EINVAL);
     HT_STATUS (holent_mincut_check (3, 2, NULL, eh, ew, el, 1, &bad), HOLENT_EINVAL);
@@ -160,6 +168,20 @@ main (void)
     HT_STATUS (holent_mincut_cut (33, 2, et, eh, ew, el, 1, 1, &sb, NULL, ws), HOLENT_EDOM);
     HT_STATUS (holent_mincut_cut (3, 2, et, eh, ew, el, 1, 1, NULL, NULL, ws), HOLENT_EINVAL);
     HT_STATUS (holent_mincut_cut (3, 2, et, eh, ew, el, 1, 1, &sb, NULL, NULL), HOLENT_EINVAL);
+  }
+  /* interruption: the poll asks to stop at the third cut */
+  {
+    size_t et[1] = { 0 }, eh[1] = { 1 };
+    double ew[1] = { 1 };
+    int el[3] = { 1, 2, 3 };
+    int calls = 0;
+    holent_poll pl = { stop_third, &calls };
+    HT_STATUS (holent_mincut_entropy (3, 1, et, eh, ew, el, 2, s, NULL, &bad, ws, &pl),
+               HOLENT_EINTR);
+    HT_CHECK (calls == 3, "poll called %d times", calls);
+    pl.fn = NULL;
+    HT_STATUS (holent_mincut_entropy (3, 1, et, eh, ew, el, 2, s, NULL, &bad, ws, &pl),
+               HOLENT_SUCCESS);
   }
   holent_mincut_workspace_free (ws);
   holent_mincut_workspace_free (NULL);
