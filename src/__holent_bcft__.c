@@ -445,7 +445,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       size_t n = mxGetM (a), bad;
       const double *p = mxGetPr (a);
       holent_bcft_result r;
-      int st = holent_bcft_entropy (g.ws, &bg, n, p, p + n, &r, &bad);
+      int st = holent_bcft_entropy (g.ws, &bg, n, p, p + n, &r, &bad, NULL);
       if (st)
         {
           region_name (nm, sizeof nm, name, is_cell, k);
@@ -531,7 +531,7 @@ do_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   holent_bcft_page pg;
   const double *p = mxGetPr (R);
-  int st = holent_bcft_page_prepare (g.ws, &bg, n, p, p + n, &pg, &bad);
+  int st = holent_bcft_page_prepare (g.ws, &bg, n, p, p + n, &pg, &bad, NULL);
   if (st)
     {
       region_fail (&g, st, bad, fn, "R", &bg);

@@ -485,14 +485,32 @@ normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
 /* Full non-crossing pairings of [i, j) in P; prefix F with L singles
    (parity), suffix G with exactly k R singles, k <= kmax.  Singles are
    never inside a pair (they would cross it).  */
-static void
-run_dp (holent_bcft_workspace *w, size_t kmax)
+static int
+polled (const holent_poll *poll, double done, double total)
+{
+  return poll && poll->fn && poll->fn (poll->ctx, done, total);
+}
+
+static int
+run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
 {
   size_t m = w->m, M = w->M;
   const double *C = w->C;
+  /* progress in elementary steps: m^3/24 for P, m^2 (kmax + 1)/4 for G */
+  double md = (double) m, total = md * md * md / 24.0
+                                   + md * md * ((double) kmax + 1.0) / 4.0;
+  double done = 0.0, next = 1e5;
   for (size_t i = 0; i <= m; i++)
     w->P[IX (i, i)] = 0.0;
   for (size_t len = 2; len <= m; len += 2)
+    {
+      done += (double) (m - len + 1) * (double) len / 2.0;
+      if (done >= next)
+        {
+          if (polled (poll, done, total))
+            return HOLENT_EINTR;
+          next = done + 1e5;
+        }
     for (size_t i = 0; i + len <= m; i++)
       {
         size_t j = i + len;
@@ -510,6 +528,7 @@ run_dp (holent_bcft_workspace *w, size_t kmax)
         w->P[IX (i, j)] = best;
         w->Pch[IX (i, j)] = arg;
       }
+    }
   w->F[0] = 0.0;
   w->F[1] = INFINITY;
   for (size_t i = 1; i <= m; i++)
@@ -535,6 +554,14 @@ run_dp (holent_bcft_workspace *w, size_t kmax)
   for (size_t k = 0; k <= kmax; k++)
     w->G[IX (m, k)] = k ? INFINITY : 0.0;
   for (size_t ii = m; ii-- > 0;)
+    {
+      done += (double) (m - ii) * ((double) kmax + 1.0) / 2.0;
+      if (done >= next)
+        {
+          if (polled (poll, done, total))
+            return HOLENT_EINTR;
+          next = done + 1e5;
+        }
     for (size_t k = 0; k <= kmax; k++)
       {
         double best = k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY;
@@ -551,6 +578,8 @@ run_dp (holent_bcft_workspace *w, size_t kmax)
         w->G[IX (ii, k)] = best;
         w->Gch[IX (ii, k)] = arg;
       }
+    }
+  return HOLENT_SUCCESS;
 }
 
 /* Walk the choices back: pairs and singles (end 0: L, 1: R).  */
@@ -633,7 +662,8 @@ fill_costs (holent_bcft_workspace *w, const holent_bcft_bg *bg, int right)
 int
 holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                      size_t n, const double *a, const double *b,
-                     holent_bcft_result *res, size_t *bad)
+                     holent_bcft_result *res, size_t *bad,
+                     const holent_poll *poll)
 {
   if (bad)
     *bad = (size_t) -1;
@@ -648,7 +678,9 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   int right = bg->kind == HOLENT_BCFT_INTERVAL && bg->btz;
   size_t kmax = right ? w->m : 0;
   fill_costs (w, bg, right);
-  run_dp (w, kmax);
+  st = run_dp (w, kmax, poll);
+  if (st)
+    return st;
   /* The face between the last L and the first R single holds the
      horizon; it lies in the homology region when c0 ^ parity.  */
   double hlen = bg->btz ? bg->S_H * 6.0 / bg->c : 0.0;
@@ -707,7 +739,8 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
 int
 holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                           size_t n, const double *a, const double *b,
-                          holent_bcft_page *pg, size_t *bad)
+                          holent_bcft_page *pg, size_t *bad,
+                          const holent_poll *poll)
 {
   if (bad)
     *bad = (size_t) -1;
@@ -723,7 +756,9 @@ holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   fill_costs (w, bg, 0);
   for (size_t i = 0; i < m; i++)   /* bridge: k h(t) is added at eval */
     w->rc[i] = 0.0;
-  run_dp (w, m);
+  st = run_dp (w, m, poll);
+  if (st)
+    return st;
   /* A_k: best one-sided configuration with k bridge geodesics; the
      two-sided minimum is attained by a left-right symmetric one.  */
   for (size_t k = 0; k <= m; k++)

@@ -156,10 +156,13 @@ typedef struct
  * HOLENT_EOVERLAP (*bad = a row overlapping an earlier one),
  * HOLENT_ETOOBIG (n above the workspace), HOLENT_EUNSUP (TFD; use the
  * Page-curve functions).  The pointers of *res stay valid until the
- * workspace is used again.  */
+ * workspace is used again.  poll (may be NULL): the O(m^3) programme calls
+ * poll->fn about every 1e5 steps and returns HOLENT_EINTR when it asks to
+ * stop.  */
 int holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                          size_t n, const double *a, const double *b,
-                         holent_bcft_result *res, size_t *bad);
+                         holent_bcft_result *res, size_t *bad,
+                         const holent_poll *poll);
 
 /* ---- Page curve of a radiation region in the TFD -------------------- */
 
@@ -186,7 +189,8 @@ typedef struct
 int holent_bcft_page_prepare (holent_bcft_workspace *w,
                               const holent_bcft_bg *bg, size_t n,
                               const double *a, const double *b,
-                              holent_bcft_page *pg, size_t *bad);
+                              holent_bcft_page *pg, size_t *bad,
+                              const holent_poll *poll);
 
 /* S[i] at the boundary times t[i] (any sign; both sides run forward);
  * kbridge[i] (may be NULL): geodesics through the bridge per side in the

@@ -294,7 +294,7 @@ test_dp_brute (void)
         }
       holent_bcft_result r;
       size_t bad;
-      int st = holent_bcft_entropy (w, bg, (size_t) n, a, b, &r, &bad);
+      int st = holent_bcft_entropy (w, bg, (size_t) n, a, b, &r, &bad, NULL);
       HT_STATUS (st, HOLENT_SUCCESS);
       if (st)
         continue;
@@ -340,28 +340,28 @@ test_dp_brute (void)
   holent_bcft_result r;
   size_t bad;
   double a[3] = { 1, 2, 0.5 }, b[3] = { 1.5, 3, 1.2 };
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EOVERLAP);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EOVERLAP);
   HT_CHECK (bad == 0 || bad == 2, "bad %zu", bad);
   a[2] = -0.5;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EDOM);
   HT_CHECK (bad == 2, "bad %zu", bad);
   a[2] = NAN;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
   a[2] = 4; b[2] = 4;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EEMPTY);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EEMPTY);
   b[2] = INFINITY;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
   b[2] = 9;
-  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 3, a, b, &r, &bad), HOLENT_EDOM);  /* past length 5 */
-  HT_STATUS (holent_bcft_entropy (w, bgs, 0, a, b, &r, &bad), HOLENT_EEMPTY);
-  HT_STATUS (holent_bcft_entropy (w, bgs, 7, a, b, &r, &bad), HOLENT_ETOOBIG);
-  HT_STATUS (holent_bcft_entropy (NULL, bgs, 3, a, b, &r, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 3, a, b, &r, &bad, NULL), HOLENT_EDOM);  /* past length 5 */
+  HT_STATUS (holent_bcft_entropy (w, bgs, 0, a, b, &r, &bad, NULL), HOLENT_EEMPTY);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 7, a, b, &r, &bad, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_bcft_entropy (NULL, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
   /* touching rows merge; the whole interval in the BTZ saddle is the horizon */
   double a2[2] = { 0, 2 }, b2[2] = { 2, 5 };
-  HT_STATUS (holent_bcft_entropy (w, bgs + 3, 2, a2, b2, &r, &bad), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 3, 2, a2, b2, &r, &bad, NULL), HOLENT_SUCCESS);
   HT_CHECK (r.n == 1 && r.m == 0 && r.horizon, "whole interval");
   HT_CLOSE (r.S, bgs[3].S_H, 1e-14);
-  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 2, a2, b2, &r, &bad), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 2, a2, b2, &r, &bad, NULL), HOLENT_SUCCESS);
   HT_CHECK (r.S == 0.0, "whole interval, pure state");
   HT_CHECK (holent_bcft_workspace_alloc (0) == NULL, "alloc 0");
   HT_CHECK (holent_bcft_workspace_alloc (HOLENT_BCFT_MMAX) == NULL, "alloc too big");
@@ -397,7 +397,7 @@ test_page_brute (void)
         }
       if (trial % 3 == 0)
         b[n - 1] = INFINITY;
-      HT_STATUS (holent_bcft_page_prepare (w, &bg, (size_t) n, a, b, &pg, NULL), HOLENT_SUCCESS);
+      HT_STATUS (holent_bcft_page_prepare (w, &bg, (size_t) n, a, b, &pg, NULL, NULL), HOLENT_SUCCESS);
       int m = (int) pg.m;
       double xs[4];
       int k = 0;
@@ -437,7 +437,7 @@ test_page_brute (void)
         }
     }
   double a = 1.0, b = INFINITY, t = NAN, S;
-  HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a, &b, &pg, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a, &b, &pg, NULL, NULL), HOLENT_SUCCESS);
   /* [b, Inf): Page time from cosh(2 pi t/beta) = e^rho sinh(2 pi b/beta) */
   HT_CLOSE (pg.page_time, bg.beta / (2 * M_PI) * acosh (exp (bg.rho[0]) * sinh (2 * M_PI * a / bg.beta)), 1e-12);
   HT_CHECK (pg.n_island == 1, "one island edge");
@@ -463,14 +463,54 @@ test_page_brute (void)
   HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL, NULL), HOLENT_EINVAL);
   {
     double a0 = 0.0, b0 = 2.0;   /* a radiation region touching x = 0 */
-    HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a0, &b0, &pg, NULL), HOLENT_EDOM);
+    HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a0, &b0, &pg, NULL, NULL), HOLENT_EDOM);
   }
   holent_bcft_bg hl;
   HT_STATUS (holent_bcft_bg_init (&hl, 0, 1, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
-  HT_STATUS (holent_bcft_page_prepare (w, &hl, 1, &a, &b, &pg, NULL), HOLENT_EUNSUP);
+  HT_STATUS (holent_bcft_page_prepare (w, &hl, 1, &a, &b, &pg, NULL, NULL), HOLENT_EUNSUP);
   holent_bcft_result r;
   b = 3;
-  HT_STATUS (holent_bcft_entropy (w, &bg, 1, &a, &b, &r, NULL), HOLENT_EUNSUP);
+  HT_STATUS (holent_bcft_entropy (w, &bg, 1, &a, &b, &r, NULL, NULL), HOLENT_EUNSUP);
+  holent_bcft_workspace_free (w);
+}
+
+/* a poll that stops after a given number of calls */
+static int
+stop_after (void *ctx, double done, double total)
+{
+  int *left = ctx;
+  (void) done;
+  (void) total;
+  return --*left < 0;
+}
+
+static void
+test_poll (void)
+{
+  holent_bcft_workspace *w = holent_bcft_workspace_alloc (400);
+  holent_bcft_bg bg;
+  HT_STATUS (holent_bcft_bg_init (&bg, 1, 1000, 1e-3, 50, 0.3, 0.2, 1, 0, NULL), HOLENT_SUCCESS);
+  double a[400], b[400];
+  for (int k = 0; k < 400; k++)
+    {
+      a[k] = 1 + 2.4 * k;
+      b[k] = a[k] + 1.1 + 0.5 * sin (k);
+    }
+  holent_bcft_result r;
+  int left = 0;
+  holent_poll p = { stop_after, &left };
+  HT_STATUS (holent_bcft_entropy (w, &bg, 400, a, b, &r, NULL, &p), HOLENT_EINTR);
+  left = 1000000;
+  HT_STATUS (holent_bcft_entropy (w, &bg, 400, a, b, &r, NULL, &p), HOLENT_SUCCESS);
+  HT_CHECK (left < 1000000, "the poll was called");
+  double S = r.S;
+  HT_STATUS (holent_bcft_entropy (w, &bg, 400, a, b, &r, NULL, NULL), HOLENT_SUCCESS);
+  HT_CHECK (r.S == S, "same result without a poll");
+  holent_bcft_bg tfd;
+  holent_bcft_page pg;
+  HT_STATUS (holent_bcft_bg_init (&tfd, 2, 0, 1e-3, 50, 0.3, 0, 1, 0, NULL), HOLENT_SUCCESS);
+  left = 0;
+  HT_STATUS (holent_bcft_page_prepare (w, &tfd, 400, a, b, &pg, NULL, &p), HOLENT_EINTR);
   holent_bcft_workspace_free (w);
 }
 
@@ -482,5 +522,6 @@ main (void)
   test_brane_lengths ();
   test_dp_brute ();
   test_page_brute ();
+  test_poll ();
   return HT_DONE ();
 }
