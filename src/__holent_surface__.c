@@ -1,0 +1,229 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* RT surfaces as curves (gateway of holent_surface).
+ *
+ *   C = __holent_surface__ ("curves", BG, PTS, PAIRS, ARCS, TOL)
+ *       PTS the sorted endpoints, PAIRS m x 2 (1-based), ARCS m: one
+ *       k x 2 (k x 3 with the time in rotating BTZ) curve per pair.
+ *   [PAIRS, ARCS, HOR, S] = __holent_surface__ ("runner", BG, IV, PAIRS, ARCS, HOR)
+ *       IV the normalised intervals [start, end] of the region.
+ *   [C, DEPTH] = __holent_surface__ ("horizon", BG, XA, XB, TOL)
+ *   C = __holent_surface__ ("profile", HDBG, BALL, TOP, TOL)
+ */
+#include <math.h>
+#include <string.h>
+#include "holent_gw.h"
+#include "holent_gw_hd.h"
+#include "core/holent_surface.h"
+#include "core/holent_region.h"
+
+static const char FN[] = "__holent_surface__";
+
+static mxArray *
+curve_out (const holent_curve *c, int with_t)
+{
+  size_t nc = with_t ? 3 : 2;
+  mxArray *a = mxCreateDoubleMatrix (c->n, nc, mxREAL);
+  double *p = mxGetPr (a);
+  memcpy (p, c->x, c->n * sizeof *p);
+  memcpy (p + c->n, c->y, c->n * sizeof *p);
+  if (with_t)
+    memcpy (p + 2 * c->n, c->t, c->n * sizeof *p);
+  return a;
+}
+
+static holent_surface_workspace *
+ws_new (void)
+{
+  holent_surface_workspace *w = holent_surface_alloc ();
+  if (w == NULL)
+    holent_gw_fail (HOLENT_ENOMEM, FN, "workspace", (size_t) -1);
+  return w;
+}
+
+/* 0-based pair indices from an m x 2 double array of 1-based ones.  */
+static void
+get_pairs (const mxArray *a, size_t npts, size_t *out, size_t m)
+{
+  const double *p = mxGetPr (a);
+  for (size_t i = 0; i < m; i++)
+    for (int k = 0; k < 2; k++)
+      {
+        double v = p[i + k * m];
+        if (!(v >= 1.0 && v <= (double) npts && v == floor (v)))
+          mexErrMsgIdAndTxt ("holent:invalid", "PAIRS(%zu,%d) is not an "
+                             "endpoint index", i + 1, k + 1);
+        out[2 * i + k] = (size_t) v - 1;
+      }
+}
+
+static void
+op_curves (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  holent_geo_bg bg;
+  size_t npts, np, na;
+  (void) nlhs;
+  if (nrhs != 6)
+    mexErrMsgIdAndTxt ("holent:nargs", "curves needs BG, PTS, PAIRS, ARCS, TOL");
+  holent_gw_bg (prhs[1], FN, &bg);
+  const double *pts = holent_gw_real (prhs[2], FN, "PTS", &npts);
+  holent_gw_real (prhs[3], FN, "PAIRS", &np);
+  const double *arcs = holent_gw_real (prhs[4], FN, "ARCS", &na);
+  double tol = holent_gw_scalar (prhs[5], FN, "TOL");
+  size_t m = na;
+  if (np != 2 * m || (m > 0 && mxGetN (prhs[3]) != 2))
+    mexErrMsgIdAndTxt ("holent:invalid", "PAIRS must be m x 2 with m = numel (ARCS)");
+  size_t *pr = mxCalloc (2 * m + 1, sizeof *pr);
+  get_pairs (prhs[3], npts, pr, m);
+  int with_t = bg.bulk == HOLENT_BULK_ROTATING_BTZ
+               || bg.bulk == HOLENT_BULK_PLANAR_ROTATING_BTZ;
+  holent_surface_workspace *w = ws_new ();
+  mxArray *cell = mxCreateCellMatrix (1, m);
+  for (size_t i = 0; i < m; i++)
+    {
+      double xa = pts[pr[2 * i]], xb = pts[pr[2 * i + 1]];
+      if (bg.circle)
+        {
+          /* the geodesic subtends arcs[i]: from xa forwards, or from xb */
+          double d = xb - xa;
+          if (fabs (arcs[i] - d) > fabs (arcs[i] - (bg.L - d)))
+            {
+              double t = xa;
+              xa = xb;
+              xb = t + bg.L;
+            }
+        }
+      int st = holent_surface_geodesic (w, &bg, xa, xb, tol);
+      if (st)
+        {
+          holent_surface_free (w);
+          mxFree (pr);
+          mxDestroyArray (cell);
+          holent_gw_fail (st, FN, "geodesic", i);
+        }
+      mxSetCell (cell, i, curve_out (&w->cur, with_t));
+    }
+  holent_surface_free (w);
+  mxFree (pr);
+  plhs[0] = cell;
+}
+
+static void
+op_runner (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  holent_geo_bg bg;
+  size_t niv, np, na;
+  (void) nlhs;
+  if (nrhs != 6)
+    mexErrMsgIdAndTxt ("holent:nargs", "runner needs BG, IV, PAIRS, ARCS, HOR");
+  holent_gw_bg (prhs[1], FN, &bg);
+  const double *iv = holent_gw_real (prhs[2], FN, "IV", &niv);
+  holent_gw_real (prhs[3], FN, "PAIRS", &np);
+  const double *amin = holent_gw_real (prhs[4], FN, "ARCS", &na);
+  double hmin = holent_gw_scalar (prhs[5], FN, "HOR");
+  size_t n = niv / 2;
+  if (niv != 2 * n || np != 2 * na || na != n)
+    mexErrMsgIdAndTxt ("holent:invalid", "IV, PAIRS and ARCS do not match");
+  if (n > HOLENT_SURFACE_RUNNER_NMAX)
+    mexErrMsgIdAndTxt ("holent:toobig", "the runner-up is available for at "
+                       "most %d intervals, got %zu",
+                       (int) HOLENT_SURFACE_RUNNER_NMAX, n);
+  size_t pmin[2 * HOLENT_SURFACE_RUNNER_NMAX], pr[2 * HOLENT_SURFACE_RUNNER_NMAX];
+  double arcs[HOLENT_SURFACE_RUNNER_NMAX], S = 0;
+  int hor = 0;
+  get_pairs (prhs[3], 2 * n, pmin, n);
+  holent_region *r = holent_region_alloc (n > 0 ? n : 1);
+  holent_surface_workspace *w = holent_surface_alloc ();
+  int st = (r == NULL || w == NULL) ? HOLENT_ENOMEM : HOLENT_SUCCESS;
+  if (!st)
+    st = holent_region_set (r, bg.circle, bg.L, n, iv, iv + n);
+  if (!st && r->n != n)
+    st = HOLENT_EINVAL;
+  if (!st)
+    st = holent_surface_runner_up (w, &bg, r, pmin, amin, hmin != 0.0, pr,
+                                   arcs, &hor, &S);
+  holent_region_free (r);
+  holent_surface_free (w);
+  if (st == HOLENT_EDOM)
+    mexErrMsgIdAndTxt ("holent:domain", "the region has a single RT "
+                       "candidate: there is no runner-up");
+  if (st)
+    holent_gw_fail (st, FN, "region", (size_t) -1);
+  mxArray *P = mxCreateDoubleMatrix (n, 2, mxREAL), *A = mxCreateDoubleMatrix (n, 1, mxREAL);
+  for (size_t i = 0; i < n; i++)
+    {
+      mxGetPr (P)[i] = (double) pr[2 * i] + 1;
+      mxGetPr (P)[i + n] = (double) pr[2 * i + 1] + 1;
+      mxGetPr (A)[i] = arcs[i];
+    }
+  plhs[0] = P;
+  plhs[1] = A;
+  plhs[2] = mxCreateLogicalScalar (hor != 0);
+  plhs[3] = mxCreateDoubleScalar (S);
+}
+
+static void
+op_horizon (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  holent_geo_bg bg;
+  double depth;
+  (void) nlhs;
+  if (nrhs != 5)
+    mexErrMsgIdAndTxt ("holent:nargs", "horizon needs BG, XA, XB, TOL");
+  holent_gw_bg (prhs[1], FN, &bg);
+  double xa = holent_gw_scalar (prhs[2], FN, "XA");
+  double xb = holent_gw_scalar (prhs[3], FN, "XB");
+  double tol = holent_gw_scalar (prhs[4], FN, "TOL");
+  holent_surface_workspace *w = ws_new ();
+  int st = holent_surface_horizon (w, &bg, xa, xb, tol, &depth);
+  if (st)
+    {
+      holent_surface_free (w);
+      holent_gw_fail (st, FN, "BG", (size_t) -1);
+    }
+  plhs[0] = curve_out (&w->cur, 0);
+  plhs[1] = mxCreateDoubleScalar (depth);
+  holent_surface_free (w);
+}
+
+static void
+op_profile (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  holent_hd_bg bg;
+  (void) nlhs;
+  if (nrhs != 5)
+    mexErrMsgIdAndTxt ("holent:nargs", "profile needs HDBG, BALL, TOP, TOL");
+  double ball = holent_gw_scalar (prhs[2], FN, "BALL");
+  double top = holent_gw_scalar (prhs[3], FN, "TOP");
+  double tol = holent_gw_scalar (prhs[4], FN, "TOL");
+  holent_gw_hd_bg (prhs[1], FN, &bg);
+  holent_surface_workspace *w = holent_surface_alloc ();
+  int st = w == NULL ? HOLENT_ENOMEM
+                     : holent_surface_profile (w, &bg, ball != 0.0, top, tol);
+  holent_hd_bg_free (&bg);
+  if (st)
+    {
+      holent_surface_free (w);
+      holent_gw_fail (st, FN, "profile", (size_t) -1);
+    }
+  plhs[0] = curve_out (&w->cur, 0);
+  holent_surface_free (w);
+}
+
+void
+mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  char op[16];
+  holent_gw_init ();
+  holent_gw_nargs (FN, nlhs, 4, nrhs, 1, 6);
+  holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
+  if (strcmp (op, "curves") == 0)
+    op_curves (nlhs, plhs, nrhs, prhs);
+  else if (strcmp (op, "runner") == 0)
+    op_runner (nlhs, plhs, nrhs, prhs);
+  else if (strcmp (op, "horizon") == 0)
+    op_horizon (nlhs, plhs, nrhs, prhs);
+  else if (strcmp (op, "profile") == 0)
+    op_profile (nlhs, plhs, nrhs, prhs);
+  else
+    mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);
+}

@@ -1,0 +1,590 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* holent_surface.c: RT surfaces as sampled curves (see holent_surface.h
+ * and doc/surfaces.md).  */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_odeiv2.h>
+#include "holent_surface.h"
+
+holent_surface_workspace *
+holent_surface_alloc (void)
+{
+  return calloc (1, sizeof (holent_surface_workspace));
+}
+
+void
+holent_surface_free (holent_surface_workspace *w)
+{
+  if (w == NULL)
+    return;
+  free (w->cur.x);
+  free (w->cur.y);
+  free (w->cur.t);
+  free (w->pairings);
+  free (w->stack);
+  free (w);
+}
+
+static int
+push (holent_curve *c, double x, double y, double t)
+{
+  if (c->n == c->cap)
+    {
+      size_t cap = c->cap ? 2 * c->cap : 256;
+      double *nx = realloc (c->x, cap * sizeof *nx);
+      if (nx == NULL)
+        return HOLENT_ENOMEM;
+      c->x = nx;
+      double *ny = realloc (c->y, cap * sizeof *ny);
+      if (ny == NULL)
+        return HOLENT_ENOMEM;
+      c->y = ny;
+      double *nt = realloc (c->t, cap * sizeof *nt);
+      if (nt == NULL)
+        return HOLENT_ENOMEM;
+      c->t = nt;
+      c->cap = cap;
+    }
+  c->x[c->n] = x;
+  c->y[c->n] = y;
+  c->t[c->n] = t;
+  c->n++;
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_surface_picture (const holent_geo_bg *bg)
+{
+  return bg->circle ? 1 : 0;
+}
+
+/* ---- geodesics: one parametrisation per family, by proper length s ---- */
+
+enum fam { FAM_POINCARE, FAM_DISK, FAM_BTZ };
+
+typedef struct
+{
+  enum fam fam;
+  int circle;
+  double xc;       /* centre: boundary coordinate (line) or angle (disk)  */
+  double rad;      /* Poincare: radius of the semicircle                  */
+  double ch, sh;   /* disk: cos h, sin h, h half the covering opening     */
+  double alpha;    /* disk: defect parameter (angles divided by it)       */
+  double rp, rm;   /* BTZ: horizon radii                                  */
+  double a1, a2, b1, b2, logN;
+} geo_par;
+
+static double
+logaddexp (double a, double b)
+{
+  return a > b ? a + log1p (exp (b - a)) : b + log1p (exp (a - b));
+}
+
+/* Point at parameter s in picture coordinates; *bd its distance to the
+   boundary in the picture.  */
+static void
+geo_eval (const geo_par *g, double s, double *px, double *py, double *pt,
+          double *bd)
+{
+  switch (g->fam)
+    {
+    case FAM_POINCARE:
+      *px = g->xc + g->rad * tanh (s);
+      *py = g->rad / cosh (s);
+      *pt = 0.0;
+      *bd = *py;
+      return;
+    case FAM_DISK:
+      {
+        /* Covering Poincare disk: w = (X1 + i X2)/(1 + T1) with
+           T1 = cosh s / sin h, X1 = cot h cosh s, X2 = sinh s.  */
+        double cs = cosh (s), den = g->sh + cs;
+        double u = g->ch * cs / den, v = g->sh * sinh (s) / den;
+        double R = hypot (u, v), ph = g->xc + atan2 (v, u) / g->alpha;
+        *px = R * cos (ph);
+        *py = R * sin (ph);
+        *pt = 0.0;
+        *bd = 1.0 - R;
+        return;
+      }
+    default:
+      {
+        /* light-cone components of X = (e^-s p1 + e^s p2)/N in R^{2,2}:
+           T1 +- X1 = U+-, X2 +- T2 = V+-, alpha = U+ U-.  */
+        double lup = logaddexp (-s + g->a1, s + g->a2) - g->logN;
+        double lum = logaddexp (-s - g->a1, s - g->a2) - g->logN;
+        double lvp = logaddexp (-s + g->b1, s + g->b2) - g->logN;
+        double lvm = logaddexp (-s - g->b1, s - g->b2) - g->logN;
+        double al = exp (lup + lum);
+        double a = 0.5 * (lup - lum), b = 0.5 * (lvp - lvm);
+        double dd = (g->rp - g->rm) * (g->rp + g->rm);
+        double r = sqrt (g->rm * g->rm + al * dd);
+        double ph = (g->rp * a + g->rm * b) / dd;
+        *pt = (g->rm * a + g->rp * b) / dd;
+        if (g->circle)
+          {
+            double R = r / (1.0 + sqrt (1.0 + r * r));
+            if (!isfinite (R))
+              R = 1.0;
+            *px = R * cos (g->xc + ph);
+            *py = R * sin (g->xc + ph);
+            *bd = 1.0 - R;
+          }
+        else
+          {
+            *px = g->xc + ph;
+            *py = 1.0 / r;
+            *bd = *py;
+          }
+        return;
+      }
+    }
+}
+
+typedef struct
+{
+  const geo_par *g;
+  double tol;
+  holent_curve *c;
+} refine_ctx;
+
+/* Append the points of (sa, sb], refining while the curve's midpoint is
+   farther than tol from the chord's.  */
+static int
+refine (const refine_ctx *rc, double sa, const double *pa, double sb,
+        const double *pb, int depth)
+{
+  double sm = 0.5 * (sa + sb), pm[3], bd;
+  geo_eval (rc->g, sm, &pm[0], &pm[1], &pm[2], &bd);
+  double dev = hypot (pm[0] - 0.5 * (pa[0] + pb[0]),
+                      pm[1] - 0.5 * (pa[1] + pb[1]));
+  if (dev > rc->tol && depth < 40)
+    {
+      int st = refine (rc, sa, pa, sm, pm, depth + 1);
+      if (st)
+        return st;
+      return refine (rc, sm, pm, sb, pb, depth + 1);
+    }
+  return push (rc->c, pb[0], pb[1], pb[2]);
+}
+
+/* Parameter beyond which the curve is within tol/16 of the boundary, on
+   the side sign (+1 or -1).  */
+static double
+geo_smax (const geo_par *g, double tol, double sign)
+{
+  double s = 1.0, x, y, t, bd;
+  for (int k = 0; k < 200; k++)
+    {
+      geo_eval (g, sign * s, &x, &y, &t, &bd);
+      if (bd < tol / 16.0 || s > 700.0)
+        break;
+      s *= 1.25;
+    }
+  return s;
+}
+
+static int
+sample (holent_curve *c, const geo_par *g, double tol, double xb1,
+        double yb1, double xb2, double yb2)
+{
+  const int nseg = 32;
+  double s0 = -geo_smax (g, tol, -1.0), s1 = geo_smax (g, tol, 1.0);
+  double pa[3], pb[3], bd;
+  refine_ctx rc = { g, tol, c };
+  int st = push (c, xb1, yb1, 0.0);
+  if (st)
+    return st;
+  geo_eval (g, s0, &pa[0], &pa[1], &pa[2], &bd);
+  if ((st = push (c, pa[0], pa[1], pa[2])))
+    return st;
+  for (int k = 1; k <= nseg; k++)
+    {
+      double sb = s0 + (s1 - s0) * k / nseg;
+      geo_eval (g, sb, &pb[0], &pb[1], &pb[2], &bd);
+      double sa = s0 + (s1 - s0) * (k - 1) / nseg;
+      if ((st = refine (&rc, sa, pa, sb, pb, 0)))
+        return st;
+      memcpy (pa, pb, sizeof pa);
+    }
+  return push (c, xb2, yb2, 0.0);
+}
+
+static void
+btz_radii (const holent_geo_bg *bg, double *rp, double *rm)
+{
+  double L = bg->circle ? bg->L : 2.0 * M_PI;
+  *rp = 0.5 * L * (1.0 / bg->beta_L + 1.0 / bg->beta_R);
+  *rm = 0.5 * L * (1.0 / bg->beta_L - 1.0 / bg->beta_R);
+}
+
+int
+holent_surface_geodesic (holent_surface_workspace *w,
+                         const holent_geo_bg *bg, double x1, double x2,
+                         double tol)
+{
+  if (w == NULL || bg == NULL || isnan (x1) || isnan (x2) || isnan (tol))
+    return HOLENT_EINVAL;
+  if (!isfinite (x1) || !isfinite (x2) || !(tol > 0.0) || !isfinite (tol)
+      || x1 == x2)
+    return HOLENT_EDOM;
+  if (bg->circle && !(x2 - x1 > 0.0 && x2 - x1 <= bg->L))
+    return HOLENT_EDOM;
+  w->cur.n = 0;
+  geo_par g;
+  memset (&g, 0, sizeof g);
+  g.circle = bg->circle;
+  g.alpha = 1.0;
+  double ph1 = 0, ph2 = 0;
+  if (bg->circle)
+    {
+      ph1 = 2.0 * M_PI * x1 / bg->L;
+      ph2 = 2.0 * M_PI * x2 / bg->L;
+    }
+  else if (x2 < x1)
+    {
+      double tmp = x1;
+      x1 = x2;
+      x2 = tmp;
+    }
+  switch (bg->bulk)
+    {
+    case HOLENT_BULK_POINCARE:
+      g.fam = FAM_POINCARE;
+      g.xc = 0.5 * (x1 + x2);
+      g.rad = 0.5 * (x2 - x1);
+      return sample (&w->cur, &g, tol, x1, 0.0, x2, 0.0);
+    case HOLENT_BULK_GLOBAL_ADS:
+    case HOLENT_BULK_THERMAL_ADS:
+    case HOLENT_BULK_CONICAL_DEFECT:
+      {
+        double h = 0.5 * bg->alpha * (ph2 - ph1);
+        if (bg->alpha < 1.0 && h >= M_PI_2)
+          {
+            /* no geodesic on this side of the defect: through the apex */
+            int st = push (&w->cur, cos (ph1), sin (ph1), 0.0);
+            if (!st)
+              st = push (&w->cur, 0.0, 0.0, 0.0);
+            if (!st)
+              st = push (&w->cur, cos (ph2), sin (ph2), 0.0);
+            return st;
+          }
+        if (h >= M_PI)
+          return HOLENT_EDOM;  /* the whole circle in global AdS */
+        g.fam = FAM_DISK;
+        g.alpha = bg->alpha;
+        g.xc = 0.5 * (ph1 + ph2);
+        g.ch = cos (h);
+        g.sh = sin (h);
+        return sample (&w->cur, &g, tol, cos (ph1), sin (ph1), cos (ph2),
+                       sin (ph2));
+      }
+    default:
+      {
+        double D = bg->circle ? ph2 - ph1 : x2 - x1;
+        g.fam = FAM_BTZ;
+        btz_radii (bg, &g.rp, &g.rm);
+        g.xc = bg->circle ? 0.5 * (ph1 + ph2) : 0.5 * (x1 + x2);
+        /* endpoints at -D/2 and D/2, t = 0: a = r+ phi, b = -r- phi */
+        g.a1 = -g.rp * D / 2;
+        g.a2 = g.rp * D / 2;
+        g.b1 = g.rm * D / 2;
+        g.b2 = -g.rm * D / 2;
+        double rm = fabs (g.rm);
+        /* N^2 = -2 p1.p2 = 2 (cosh(r+ D) - cosh(r- D)) */
+        g.logN = 0.5 * (log (4.0) + holent_geo_lnsinh ((g.rp + rm) * D / 2)
+                        + holent_geo_lnsinh ((g.rp - rm) * D / 2));
+        if (bg->circle)
+          return sample (&w->cur, &g, tol, cos (ph1), sin (ph1), cos (ph2),
+                         sin (ph2));
+        return sample (&w->cur, &g, tol, x1, 0.0, x2, 0.0);
+      }
+    }
+}
+
+int
+holent_surface_horizon (holent_surface_workspace *w,
+                        const holent_geo_bg *bg, double xa, double xb,
+                        double tol, double *depth)
+{
+  if (w == NULL || bg == NULL || depth == NULL || isnan (tol)
+      || isnan (xa) || isnan (xb))
+    return HOLENT_EINVAL;
+  if (!(tol > 0.0) || !isfinite (tol))
+    return HOLENT_EDOM;
+  if (!bg->horizon)
+    return HOLENT_EUNSUP;
+  double rp, rm;
+  btz_radii (bg, &rp, &rm);
+  w->cur.n = 0;
+  if (!bg->circle)
+    {
+      *depth = 1.0 / rp;
+      int st = push (&w->cur, xa, *depth, 0.0);
+      return st ? st : push (&w->cur, xb, *depth, 0.0);
+    }
+  double R = rp / (1.0 + sqrt (1.0 + rp * rp));
+  *depth = R;
+  /* sagitta R (1 - cos(dphi/2)) <= tol */
+  double c = 1.0 - tol / R;
+  int n = c > -1.0 ? (int) ceil (M_PI / acos (c)) : 4;
+  if (n < 16)
+    n = 16;
+  if (n > 1 << 20)
+    n = 1 << 20;
+  for (int k = 0; k <= n; k++)
+    {
+      double ph = 2.0 * M_PI * (k == n ? 0 : k) / n;
+      int st = push (&w->cur, R * cos (ph), R * sin (ph), 0.0);
+      if (st)
+        return st;
+    }
+  return HOLENT_SUCCESS;
+}
+
+/* ---- runner-up: brute force over the candidates of holent_rt ---- */
+
+static int
+pairing_add (holent_surface_workspace *w, const int *match, size_t np)
+{
+  if (w->npairing == w->cap_pairing)
+    {
+      size_t cap = w->cap_pairing ? 2 * w->cap_pairing : 64;
+      size_t *p = realloc (w->pairings, cap * np * sizeof *p);
+      if (p == NULL)
+        return HOLENT_ENOMEM;
+      w->pairings = p;
+      w->cap_pairing = cap;
+    }
+  size_t *dst = w->pairings + w->npairing * np, m = 0;
+  for (size_t i = 0; i < np; i++)
+    if ((size_t) match[i] > i)
+      {
+        dst[2 * m] = i;
+        dst[2 * m + 1] = (size_t) match[i];
+        m++;
+      }
+  w->npairing++;
+  return HOLENT_SUCCESS;
+}
+
+/* Every non-crossing pairing of np points: match the first free point
+   with every later free one that crosses no pair made so far.  */
+static int
+pairings (holent_surface_workspace *w, int *match, size_t np)
+{
+  size_t i = 0;
+  while (i < np && match[i] >= 0)
+    i++;
+  if (i == np)
+    return pairing_add (w, match, np);
+  for (size_t j = i + 1; j < np; j += 2)
+    {
+      if (match[j] >= 0)
+        continue;
+      int ok = 1;
+      for (size_t a = 0; a < np && ok; a++)
+        if (match[a] >= 0)
+          {
+            size_t b = (size_t) match[a];
+            if ((i < a && a < j) != (i < b && b < j))
+              ok = 0;
+          }
+      if (!ok)
+        continue;
+      match[i] = (int) j;
+      match[j] = (int) i;
+      int st = pairings (w, match, np);
+      match[i] = match[j] = -1;
+      if (st)
+        return st;
+    }
+  return HOLENT_SUCCESS;
+}
+
+static int
+same_conf (size_t m, const size_t *p, const double *a, int h,
+           const size_t *q, const double *b, int k, double tol)
+{
+  if (h != k)
+    return 0;
+  for (size_t i = 0; i < m; i++)
+    if (p[2 * i] != q[2 * i] || p[2 * i + 1] != q[2 * i + 1]
+        || fabs (a[i] - b[i]) > tol)
+      return 0;
+  return 1;
+}
+
+int
+holent_surface_runner_up (holent_surface_workspace *w,
+                          const holent_geo_bg *bg, const holent_region *r,
+                          const size_t *pmin, const double *amin, int hmin,
+                          size_t *pairs, double *arcs, int *horizon,
+                          double *S)
+{
+  if (w == NULL || bg == NULL || r == NULL || pmin == NULL || amin == NULL
+      || pairs == NULL || arcs == NULL || horizon == NULL || S == NULL
+      || r->circle != bg->circle)
+    return HOLENT_EINVAL;
+  size_t n = r->n, np = 2 * n;
+  if (r->whole || n == 0)
+    return HOLENT_EDOM;
+  if (n > HOLENT_SURFACE_RUNNER_NMAX)
+    return HOLENT_ETOOBIG;
+  int match[2 * HOLENT_SURFACE_RUNNER_NMAX];
+  for (size_t i = 0; i < np; i++)
+    match[i] = -1;
+  w->npairing = 0;
+  int st = pairings (w, match, np);
+  if (st)
+    return st;
+  /* faces: with a horizon, or a defect, the face is named by a boundary
+     segment k (pts[k], pts[k+1]); otherwise one pass with no face */
+  int faces = bg->circle && (bg->horizon || (bg->bulk == HOLENT_BULK_CONICAL_DEFECT
+                                             && bg->alpha < 1.0));
+  size_t nk = faces ? np : 1;
+  double best = INFINITY, ctol = 1e-12 * (bg->circle ? bg->L : 1.0);
+  double arc[HOLENT_SURFACE_RUNNER_NMAX];
+  for (size_t q = 0; q < w->npairing; q++)
+    {
+      const size_t *pq = w->pairings + q * np;
+      for (size_t k = 0; k < nk; k++)
+        {
+          double len = 0.0;
+          for (size_t i = 0; i < n; i++)
+            {
+              size_t a = pq[2 * i], b = pq[2 * i + 1];
+              double d = r->pts[b] - r->pts[a];
+              if (!bg->circle)
+                arc[i] = d;
+              else if (!faces)
+                arc[i] = d < bg->L - d ? d : bg->L - d;
+              else  /* away from the face: segment k inside [a, b) ? */
+                arc[i] = (k >= a && k < b) ? bg->L - d : d;
+              len += holent_geo_len_unchecked (bg, arc[i]);
+            }
+          int hz = faces && bg->horizon && ((k % 2 == 0) == (r->start0 != 0));
+          double Sq = bg->c / 6.0 * len + (hz ? bg->S_BH : 0.0);
+          if (!(Sq < best))
+            continue;
+          if (same_conf (n, pq, arc, hz, pmin, amin, hmin, ctol))
+            continue;
+          best = Sq;
+          memcpy (pairs, pq, np * sizeof *pairs);
+          memcpy (arcs, arc, n * sizeof *arcs);
+          *horizon = hz;
+        }
+    }
+  if (!isfinite (best))
+    return HOLENT_EDOM;  /* a single candidate: no runner-up */
+  *S = best;
+  return HOLENT_SUCCESS;
+}
+
+/* ---- AdS_{d+1} strip and ball profiles ---- */
+
+typedef struct
+{
+  const holent_hd_bg *bg;
+  int ball;
+  int bad;
+} prof_par;
+
+static int
+prof_rhs (double s, const double y[], double dy[], void *par)
+{
+  (void) s;
+  prof_par *p = par;
+  double f, fp, z = y[1];
+  if (!(z > 0.0) || holent_hd_f (p->bg, z, &f, &fp))
+    {
+      p->bad = 1;
+      return GSL_EBADFUNC;
+    }
+  double sf = sqrt (f > 0.0 ? f : 0.0), c = cos (y[2]), sn = sin (y[2]);
+  dy[0] = c;
+  dy[1] = sf * sn;
+  dy[2] = -(p->bg->d - 1) * sf * c / z;
+  if (p->ball)
+    dy[2] -= (p->bg->d - 2) * sn / y[0];
+  return GSL_SUCCESS;
+}
+
+int
+holent_surface_profile (holent_surface_workspace *w,
+                        const holent_hd_bg *bg, int ball, double top,
+                        double tol)
+{
+  if (w == NULL || bg == NULL || isnan (top) || isnan (tol))
+    return HOLENT_EINVAL;
+  if (!(top > 0.0) || !(top < bg->zh) || !(top <= bg->zmax)
+      || !(tol > 0.0) || !isfinite (tol))
+    return HOLENT_EDOM;
+  double f0, fp0;
+  if (holent_hd_f (bg, top, &f0, &fp0) || !(f0 > 0.0))
+    return HOLENT_EDOM;
+  w->cur.n = 0;
+  int st = push (&w->cur, 0.0, top, 0.0);
+  if (st)
+    return st;
+  prof_par par = { bg, ball != 0, 0 };
+  gsl_odeiv2_system sys = { prof_rhs, NULL, 3, &par };
+  gsl_odeiv2_step *step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 3);
+  gsl_odeiv2_control *ctrl = gsl_odeiv2_control_y_new (1e-12 * top, 1e-12);
+  gsl_odeiv2_evolve *ev = gsl_odeiv2_evolve_alloc (3);
+  if (step == NULL || ctrl == NULL || ev == NULL)
+    {
+      st = HOLENT_ENOMEM;
+      goto done;
+    }
+  /* start off the turning point with the series th = th'(0) s (the ball's
+     r = 0 is a regular singular point of the equation) */
+  double sf0 = sqrt (f0), k0 = -sf0 / top * (ball ? 1.0 : bg->d - 1);
+  double s = 1e-7 * top;
+  double y[3] = { s, top + 0.5 * sf0 * k0 * s * s, k0 * s };
+  double zstop = 1e-9 * top, h = 1e-3 * top;
+  size_t it = 0;
+  while (y[1] > zstop)
+    {
+      double dy[3];
+      if (prof_rhs (s, y, dy, &par) != GSL_SUCCESS || ++it > 2000000)
+        {
+          st = HOLENT_ENOCONV;
+          goto done;
+        }
+      /* picture tolerance: sagitta h^2 |th'|/8 <= tol; never cross z = 0 */
+      double hmax = sqrt (8.0 * tol / (fabs (dy[2]) + 1e-300));
+      if (hmax > 0.5 * y[1])
+        hmax = 0.5 * y[1];
+      if (h > hmax)
+        h = hmax;
+      double t1 = s + hmax;
+      int gs = gsl_odeiv2_evolve_apply (ev, ctrl, step, &sys, &s, t1, &h, y);
+      if (gs != GSL_SUCCESS || par.bad || !(y[0] > 0.0))
+        {
+          st = HOLENT_ENOCONV;
+          goto done;
+        }
+      if (y[1] <= zstop)
+        break;
+      if ((st = push (&w->cur, y[0], y[1], 0.0)))
+        goto done;
+    }
+  {
+    /* the last stretch is straight to O(z^2): extrapolate to z = 0 */
+    double f, fp;
+    holent_hd_f (bg, y[1] > 0 ? y[1] : 0.0, &f, &fp);
+    double sn = sin (y[2]), r0 = y[0];
+    if (sn < 0.0 && y[1] > 0.0)
+      r0 += y[1] * cos (y[2]) / (sqrt (f) * -sn);
+    st = push (&w->cur, r0, 0.0, 0.0);
+  }
+done:
+  gsl_odeiv2_evolve_free (ev);
+  gsl_odeiv2_control_free (ctrl);
+  gsl_odeiv2_step_free (step);
+  return st;
+}

@@ -1,0 +1,106 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* holent_surface.h: RT surfaces as curves, for pictures and checks.
+ *
+ * AdS3 (constant-time slice; doc/surfaces.md):
+ *   picture "half plane" on a line: points (x, z), z the areal coordinate
+ *     1/r (the Poincare z in the vacuum, the Fefferman-Graham z of the
+ *     static planar BTZ metric (1/z^2)(dz^2/f + dx^2), f = 1 - z^2 r_+^2);
+ *   picture "disk" on a circle: points (R cos phi, R sin phi) with
+ *     phi = 2 pi x / L and R = r/(1 + sqrt(1 + r^2)), r the areal radius
+ *     (circumference 2 pi r); for global and thermal AdS this is the
+ *     Poincare disk, where geodesics are circles orthogonal to |w| = 1.
+ *     With a conical defect r is the areal radius of the covering global
+ *     AdS (r_cov = r/alpha) and the angle is the true one.
+ *   Rotating BTZ: the HRT geodesic leaves the t = 0 slice; its points come
+ *   with their time t (third coordinate) and are drawn projected.
+ * Geodesics are built in the embedding space R^{2,2} as
+ *   X(s) = (e^s p + e^-s q)/sqrt(-2 p.q),  s the proper length,
+ * p, q the null rays of the endpoints, and mapped back to the picture.
+ *
+ * Sampling: 32 equal steps in s between the two parameters where the curve
+ * comes within tol/16 of the boundary, then every step is halved while the
+ * midpoint of the curve is farther than tol (picture units) from the
+ * midpoint of the chord (at most 40 halvings); the exact boundary
+ * endpoints close the curve.
+ *
+ * AdS_{d+1} strips and balls: the profile is a geodesic of the conformally
+ * flat 2-metric Omega^2 (dr^2 + dz^2/f), Omega = r^{d-2}/z^{d-1} (strip:
+ * r^0); in its arc-length parameter with direction angle theta
+ *   r' = cos th,  z' = sqrt(f) sin th,
+ *   th' = -(d-1) sqrt(f) cos th / z - (d-2) sin th / r,
+ * integrated from the turning point (r = 0, th = 0) to the boundary with
+ * GSL's rk8pd, steps capped so that the sagitta h^2 |th'|/8 stays below
+ * tol.  GPL-3.0-or-later.  */
+#ifndef HOLENT_SURFACE_H
+#define HOLENT_SURFACE_H
+
+#include <stddef.h>
+#include "holent.h"
+#include "holent_geo.h"
+#include "holent_region.h"
+#include "holent_hd.h"
+
+/* Largest number of intervals for the runner-up (brute force).  */
+#define HOLENT_SURFACE_RUNNER_NMAX ((size_t) 8)
+
+/* A growing list of points: x[i], y[i] in picture coordinates, t[i] the
+   boundary time of the point (0 on static slices).  */
+typedef struct
+{
+  size_t n, cap;
+  double *x, *y, *t;
+} holent_curve;
+
+typedef struct
+{
+  holent_curve cur;
+  /* runner-up enumeration scratch */
+  size_t *pairings;       /* all non-crossing pairings, 2n per pairing   */
+  size_t npairing, cap_pairing;
+  size_t *stack;
+} holent_surface_workspace;
+
+holent_surface_workspace *holent_surface_alloc (void);
+void holent_surface_free (holent_surface_workspace *w);
+
+/* Picture kind of a background: 0 half plane (line), 1 disk (circle).  */
+int holent_surface_picture (const holent_geo_bg *bg);
+
+/* The geodesic from boundary point x1 to x2 (boundary coordinates) that
+ * subtends the arc from x1 to x2 in the positive direction (on a circle
+ * 0 < x2 - x1 <= L; on a line x1 != x2), sampled to tol into w->cur
+ * (replacing its contents).  With a conical defect and
+ * alpha (x2 - x1) 2 pi / L >= pi the infimum is the path through the
+ * apex: two radial segments.  Returns EINVAL/EDOM on bad input, ENOMEM.  */
+int holent_surface_geodesic (holent_surface_workspace *w,
+                             const holent_geo_bg *bg, double x1, double x2,
+                             double tol);
+
+/* The horizon of a background with one (r = r_+) sampled to tol into
+ * w->cur: the circle of radius R_h in the disk (closed: first point
+ * repeated last); on a line, the segment z = 1/r_+ for x in [xa, xb].
+ * *depth gets R_h or 1/r_+.  EUNSUP without a horizon.  */
+int holent_surface_horizon (holent_surface_workspace *w,
+                            const holent_geo_bg *bg, double xa, double xb,
+                            double tol, double *depth);
+
+/* The best candidate that differs from the minimiser (pairs/arcs of
+ * holent_rt_entropy, horizon flag hmin): same candidate set as
+ * holent_rt, enumerated by brute force for r->n <= RUNNER_NMAX.
+ * pairs (2 n), arcs (n), *horizon and *S receive it.  EDOM when the
+ * region has a single candidate, ETOOBIG above RUNNER_NMAX.  */
+int holent_surface_runner_up (holent_surface_workspace *w,
+                              const holent_geo_bg *bg,
+                              const holent_region *r, const size_t *pmin,
+                              const double *amin, int hmin, size_t *pairs,
+                              double *arcs, int *horizon, double *S);
+
+/* Profile of the strip of turning point top = z* (ball = 0) or of the
+ * ball of tip depth top (ball = 1), sampled to tol into w->cur as points
+ * (x or r, z) from the turning point (0, top) to the boundary (half
+ * width or radius, 0).  */
+int holent_surface_profile (holent_surface_workspace *w,
+                            const holent_hd_bg *bg, int ball, double top,
+                            double tol);
+
+#endif /* HOLENT_SURFACE_H */

@@ -1,0 +1,84 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Unit tests of holent_surface: error paths, the Poincare semicircle, the
+   horizon circle, the runner-up of two intervals and a vacuum profile.  */
+#include <math.h>
+#include "holent_ctest.h"
+#include "holent_surface.h"
+
+int
+main (void)
+{
+  holent_geo_bg bg, bc, bb;
+  holent_surface_workspace *w = holent_surface_alloc ();
+  HT_CHECK (w != NULL, "alloc");
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_POINCARE, 0, 1e-6, 0, 0, 1, 1), 0);
+  HT_STATUS (holent_geo_bg_init (&bc, HOLENT_BULK_GLOBAL_ADS, 2 * M_PI, 1e-6, 0, 0, 1, 1), 0);
+  HT_STATUS (holent_geo_bg_init (&bb, HOLENT_BULK_BTZ, 2 * M_PI, 1e-6, 1, 1, 1, 1), 0);
+
+  /* errors */
+  HT_STATUS (holent_surface_geodesic (NULL, &bg, 0, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_geodesic (w, &bg, NAN, 1, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_geodesic (w, &bg, 0, 0, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_geodesic (w, &bg, 0, 1, 0), HOLENT_EDOM);
+  HT_STATUS (holent_surface_geodesic (w, &bg, 0, INFINITY, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_geodesic (w, &bc, 1, 0.5, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_geodesic (w, &bc, 0, 2 * M_PI, 1e-3), HOLENT_EDOM);
+  double depth;
+  HT_STATUS (holent_surface_horizon (w, &bc, 0, 1, 1e-3, &depth), HOLENT_EUNSUP);
+  HT_STATUS (holent_surface_horizon (w, &bb, 0, 1, -1, &depth), HOLENT_EDOM);
+  HT_STATUS (holent_surface_horizon (w, &bb, 0, 1, 1e-3, NULL), HOLENT_EINVAL);
+
+  /* Poincare: semicircle through the endpoints */
+  HT_STATUS (holent_surface_geodesic (w, &bg, 1, 3, 1e-5), 0);
+  double worst = 0;
+  for (size_t i = 0; i < w->cur.n; i++)
+    {
+      double e = fabs (hypot (w->cur.x[i] - 2, w->cur.y[i]) - 1);
+      worst = e > worst ? e : worst;
+    }
+  HT_CHECK (worst < 1e-13, "semicircle off by %g", worst);
+  HT_CLOSE (w->cur.x[0], 1, 0);
+  HT_CLOSE (w->cur.x[w->cur.n - 1], 3, 0);
+
+  /* BTZ horizon: closed circle of radius r+/(1 + sqrt(1 + r+^2)) */
+  HT_STATUS (holent_surface_horizon (w, &bb, 0, 1, 1e-4, &depth), 0);
+  double rp = 2 * M_PI;
+  HT_CLOSE (depth, rp / (1 + sqrt (1 + rp * rp)), 1e-15);
+  HT_CLOSE (w->cur.x[0], w->cur.x[w->cur.n - 1], 0);
+
+  /* runner-up of two close intervals on a line: the disconnected pair */
+  holent_region *r = holent_region_alloc (4);
+  double a[2] = { 0, 1.2 }, b[2] = { 1, 2.2 };
+  HT_STATUS (holent_region_set (r, 0, 0, 2, a, b), 0);
+  size_t pmin[4] = { 0, 3, 1, 2 }, pr[4];
+  double amin[2] = { 2.2, 0.2 }, arcs[2], S;
+  int hor;
+  HT_STATUS (holent_surface_runner_up (w, &bg, r, pmin, amin, 0, pr, arcs, &hor, &S), 0);
+  HT_CHECK (pr[0] == 0 && pr[1] == 1 && pr[2] == 2 && pr[3] == 3, "pairs");
+  HT_CLOSE (S, (2 * log (1 / 1e-6) + 2 * log (1 / 1e-6)) / 6, 1e-12);
+  HT_STATUS (holent_surface_runner_up (w, &bc, r, pmin, amin, 0, pr, arcs, &hor, &S), HOLENT_EINVAL);
+  HT_STATUS (holent_region_set (r, 0, 0, 1, a, b), 0);
+  size_t p1[2] = { 0, 1 };
+  double a1[1] = { 1 };
+  HT_STATUS (holent_surface_runner_up (w, &bg, r, p1, a1, 0, pr, arcs, &hor, &S), HOLENT_EDOM);
+  holent_region_free (r);
+
+  /* vacuum AdS4 ball: the hemisphere */
+  holent_hd_bg hb;
+  HT_STATUS (holent_hd_bg_init (&hb, 3, HOLENT_HD_VACUUM, INFINITY, 1, 1, 1e-3), 0);
+  HT_STATUS (holent_surface_profile (w, &hb, 1, 2.0, 1e-6), 0);
+  worst = 0;
+  for (size_t i = 0; i < w->cur.n; i++)
+    {
+      double e = fabs (hypot (w->cur.x[i], w->cur.y[i]) - 2);
+      worst = e > worst ? e : worst;
+    }
+  HT_CHECK (worst < 1e-8, "hemisphere off by %g", worst);
+  HT_STATUS (holent_surface_profile (w, &hb, 1, -1, 1e-6), HOLENT_EDOM);
+  HT_STATUS (holent_surface_profile (w, &hb, 1, NAN, 1e-6), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_profile (NULL, &hb, 1, 1, 1e-6), HOLENT_EINVAL);
+
+  holent_surface_free (w);
+  holent_surface_free (NULL);
+  return HT_DONE ();
+}
