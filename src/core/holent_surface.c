@@ -499,7 +499,7 @@ prof_rhs (double s, const double y[], double dy[], void *par)
   (void) s;
   prof_par *p = par;
   double f, fp, z = y[1];
-  if (!(z > 0.0) || holent_hd_f (p->bg, z, &f, &fp))
+  if (!(z > 0.0) || holent_hd_bg_f (p->bg, z, &f, &fp))
     {
       p->bad = 1;
       return GSL_EBADFUNC;
@@ -524,7 +524,7 @@ holent_surface_profile (holent_surface_workspace *w,
       || !(tol > 0.0) || !isfinite (tol))
     return HOLENT_EDOM;
   double f0, fp0;
-  if (holent_hd_f (bg, top, &f0, &fp0) || !(f0 > 0.0))
+  if (holent_hd_bg_f (bg, top, &f0, &fp0) || !(f0 > 0.0))
     return HOLENT_EDOM;
   w->cur.n = 0;
   int st = push (&w->cur, 0.0, top, 0.0);
@@ -576,7 +576,7 @@ holent_surface_profile (holent_surface_workspace *w,
   {
     /* the last stretch is straight to O(z^2): extrapolate to z = 0 */
     double f, fp;
-    holent_hd_f (bg, y[1] > 0 ? y[1] : 0.0, &f, &fp);
+    holent_hd_bg_f (bg, y[1] > 0 ? y[1] : 0.0, &f, &fp);
     double sn = sin (y[2]), r0 = y[0];
     if (sn < 0.0 && y[1] > 0.0)
       r0 += y[1] * cos (y[2]) / (sqrt (f) * -sn);

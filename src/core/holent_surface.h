@@ -38,7 +38,7 @@
 #include "holent.h"
 #include "holent_geo.h"
 #include "holent_region.h"
-#include "holent_hd.h"
+#include "holent_hd_bg.h"
 
 /* Largest number of intervals for the runner-up (brute force).  */
 #define HOLENT_SURFACE_RUNNER_NMAX ((size_t) 8)
