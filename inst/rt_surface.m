@@ -19,7 +19,7 @@
 ## its time t in a third column and is drawn projected.
 ##
 ## Sampling: the curves are sampled so that no chord strays more than
-## @var{tol} (default 1e-3) from the curve in the picture's coordinates;
+## @var{tol} (default 1e-3, at least 1e-10, at most 0.5) from the curve in the picture's coordinates;
 ## each curve starts and ends exactly on the boundary.
 ##
 ## @var{which} is @qcode{"minimal"} (the default: the minimiser of
@@ -57,7 +57,7 @@ function surf = rt_surface (bg, A, varargin)
   o = __holent_opts__ (fn, {"tol", "configuration"}, varargin);
   tol = 1e-3;
   if (isfield (o, "tol"))
-    tol = __holent_scalar__ (fn, "tol", o.tol, {0, 0.5, "(]"});
+    tol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
   endif
   which = "minimal";
   if (isfield (o, "configuration"))

@@ -14,7 +14,7 @@
 ## then integrated from it as a geodesic of the 2-metric
 ## (r^(d-2)/z^(d-1))^2 (dr^2 + dz^2/f) (the strip without the r factor),
 ## with steps short enough that no chord strays more than @var{tol}
-## (default 1e-3 times the size) from the curve (@file{doc/surfaces.md}).
+## times the size (default 1e-3, from 1e-10 to 0.5) from the curve (@file{doc/surfaces.md}).
 ##
 ## @var{prof} is a struct array of the size of @var{sizes} with fields
 ## @code{shape}, @code{size}, @code{top} (z* or the tip depth),
@@ -42,7 +42,7 @@ function prof = surface_profile (bg, shape, sizes, varargin)
   o = __holent_opts__ (fn, {"tol"}, varargin);
   rtol = 1e-3;
   if (isfield (o, "tol"))
-    rtol = __holent_scalar__ (fn, "tol", o.tol, "positive");
+    rtol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
   endif
   ball = strcmp (shape, "ball");
   try
@@ -52,14 +52,13 @@ function prof = surface_profile (bg, shape, sizes, varargin)
       [~, ~, ~, top] = __holent_hd__ ("strip", bg, sizes, 1);
     endif
   catch err
+    ## the solvers name the sizes R(k) or L(k): here they are SIZES(k)
+    err.message = regexprep (err.message, '(^|: )(R|L)\(', '$1SIZES(');
     __holent_rethrow__ (err, "__holent_hd__", fn);
   end_try_catch
   prof = struct ("shape", {}, "size", {}, "top", {}, "x", {}, "z", {}, "zh", {});
   for k = 1:numel (sizes)
-    tol = rtol;
-    if (! isfield (o, "tol"))
-      tol = 1e-3 * sizes(k);
-    endif
+    tol = rtol * sizes(k);
     c = __holent_call__ ("__holent_surface__", "profile", bg, double (ball), top(k), tol);
     if (! ball)
       ## mirror the half profile: from -l/2 through the turning point
@@ -85,4 +84,4 @@ endfunction
 %!error <Invalid call> surface_profile (ads_background (4, "vacuum"), "ball")
 %!error <SHAPE must be> surface_profile (ads_background (4, "vacuum"), "disk", 1)
 %!error <SIZES\(2\) = -1 must be positive> surface_profile (ads_background (4, "vacuum"), "strip", [1 -1])
-%!error <beyond> surface_profile (ads_background (4, "black_brane", "zh", 1), "ball", 1e6)
+%!error <SIZES\(1\) = 1e\+06 is beyond> surface_profile (ads_background (4, "black_brane", "zh", 1), "ball", 1e6)

@@ -160,6 +160,11 @@
 %!  bi = ads3_background ("bcft", "interval", "length", 5, "tension", [0.1 0.3], "beta", 1);
 %!  bt = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.5);
 %!  [~, cert] = contraction_proof ({[1 2], [2 3], [1 3]}, {1, 2, 3, [1 2 3]}, 3);
+%!  ## figures draw into hidden axes (the gnuplot toolkit works headless)
+%!  ax = findobj (0, "tag", "holent_rob_axes");
+%!  if (isempty (ax))
+%!    ax = axes ("parent", figure ("visible", "off"), "tag", "holent_rob_axes");
+%!  endif
 %!  T = {
 %!   "ads3_background", {"thermal", "circle", "beta", 2, "c", 12, "cutoff", 1e-4}, ...
 %!     {"word:STATE", "word:BOUNDARY", "optname:", "pos:beta", "optname:", "pos:c", "optname:", "pos:cutoff"};
@@ -229,6 +234,18 @@
 %!   "contraction_check", {cert}, {"all:CERT"};
 %!   "entropy_cone_test", {Sv, "tol", 1e-9, "inequalities", ones(1, 7), "rays", eye(7)}, ...
 %!     {"svec:S", "optname:", "nonneg:tol", "optname:", "all:inequalities", "optname:", "all:rays"}};
+%!   "rt_surface", {bc, [0 1; 2 3], "tol", 1e-3, "configuration", "runner_up"}, ...
+%!     {"bg3:BG", "region:A", "optname:", "pos:tol", "optname:", "word:configuration"};
+%!   "surface_profile", {bh, "ball", [0.5 1], "tol", 1e-3}, ...
+%!     {"bghd:BG", "word:SHAPE", "lens:SIZES", "optname:", "pos:tol"};
+%!   "plot_rt_surface", {ax, bc, [0 1; 2 3], "runner_up", true, "tol", 1e-3}, ...
+%!     {"", "bg3:BG", "region:A", "optname:", "bool:runner_up", "optname:", "pos:tol"};
+%!   "plot_surface_profile", {ax, bh, "strip", [0.5 1], "tol", 1e-3}, ...
+%!     {"", "bghd:BG", "word:SHAPE", "lens:SIZES", "optname:", "pos:tol"};
+%!   "plot_phase_diagram", {ax, [1 2], [1 2 3], [1 2 2; 2 2 1], "labels", {"a", "b"}}, ...
+%!     {"", "coords:X", "coords:Y", "", "optname:", ""};
+%!   "parameter_scan", {@(a, b) a + b, [1 2], [3 4], "workers", 1, "progress", false}, ...
+%!     {"", "", "", "optname:", "pos:workers", "optname:", "bool:progress"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)

@@ -228,8 +228,8 @@ holent_surface_geodesic (holent_surface_workspace *w,
 {
   if (w == NULL || bg == NULL || isnan (x1) || isnan (x2) || isnan (tol))
     return HOLENT_EINVAL;
-  if (!isfinite (x1) || !isfinite (x2) || !(tol > 0.0) || !isfinite (tol)
-      || x1 == x2)
+  if (!isfinite (x1) || !isfinite (x2) || !(tol >= HOLENT_SURFACE_TOLMIN)
+      || !(tol <= 1.0) || x1 == x2)
     return HOLENT_EDOM;
   if (bg->circle && !(x2 - x1 > 0.0 && x2 - x1 <= bg->L))
     return HOLENT_EDOM;
@@ -313,7 +313,7 @@ holent_surface_horizon (holent_surface_workspace *w,
   if (w == NULL || bg == NULL || depth == NULL || isnan (tol)
       || isnan (xa) || isnan (xb))
     return HOLENT_EINVAL;
-  if (!(tol > 0.0) || !isfinite (tol))
+  if (!(tol >= HOLENT_SURFACE_TOLMIN) || !(tol <= 1.0))
     return HOLENT_EDOM;
   if (!bg->horizon)
     return HOLENT_EUNSUP;
@@ -521,7 +521,7 @@ holent_surface_profile (holent_surface_workspace *w,
   if (w == NULL || bg == NULL || isnan (top) || isnan (tol))
     return HOLENT_EINVAL;
   if (!(top > 0.0) || !(top < bg->zh) || !(top <= bg->zmax)
-      || !(tol > 0.0) || !isfinite (tol))
+      || !(tol >= HOLENT_SURFACE_TOLMIN * top) || !isfinite (tol))
     return HOLENT_EDOM;
   double f0, fp0;
   if (holent_hd_bg_f (bg, top, &f0, &fp0) || !(f0 > 0.0))

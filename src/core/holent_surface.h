@@ -40,6 +40,10 @@
 #include "holent_region.h"
 #include "holent_hd_bg.h"
 
+/* Smallest sampling tolerance (picture units; for profiles relative to
+   the turning point's depth): below it the number of samples explodes.  */
+#define HOLENT_SURFACE_TOLMIN 1e-10
+
 /* Largest number of intervals for the runner-up (brute force).  */
 #define HOLENT_SURFACE_RUNNER_NMAX ((size_t) 8)
 
@@ -69,7 +73,7 @@ int holent_surface_picture (const holent_geo_bg *bg);
 /* The geodesic from boundary point x1 to x2 (boundary coordinates) that
  * subtends the arc from x1 to x2 in the positive direction (on a circle
  * 0 < x2 - x1 <= L; on a line x1 != x2), sampled to tol into w->cur
- * (replacing its contents).  With a conical defect and
+ * (replacing its contents), tol in [TOLMIN, 1].  With a conical defect and
  * alpha (x2 - x1) 2 pi / L >= pi the infimum is the path through the
  * apex: two radial segments.  Returns EINVAL/EDOM on bad input, ENOMEM.  */
 int holent_surface_geodesic (holent_surface_workspace *w,

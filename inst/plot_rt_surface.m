@@ -1,0 +1,171 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## Copyright (C) 2026 The holent developers.
+
+## -*- texinfo -*-
+## @deftypefn  {} {@var{h} =} plot_rt_surface (@var{bg}, @var{A})
+## @deftypefnx {} {@var{h} =} plot_rt_surface (@var{hax}, @var{bg}, @var{A})
+## @deftypefnx {} {@var{h} =} plot_rt_surface (@dots{}, "runner_up", @var{tf}, "tol", @var{tol}, @var{prop}, @var{val}, @dots{})
+## Draw the RT configuration of the region @var{A} (an n x 2 matrix of
+## intervals, as in @code{rt_entropy}) in the AdS3 background @var{bg} on
+## the natural picture of the constant-time slice (@code{rt_surface}):
+## the Poincare disk for a circle, with the horizon (dark disk) or the
+## conical defect (marked at the centre), the upper half plane for a line
+## (the boundary drawn on top, depth z growing downwards, the region
+## beyond a planar horizon shaded).  The intervals of @var{A} are
+## highlighted on the boundary, the minimal surface is drawn solid and,
+## with @qcode{"runner_up"} true, the best other candidate dashed.  The
+## horizon, when it is part of the surface, is outlined in the surface's
+## colour.
+##
+## Draws into the axes @var{hax} or the current axes.  Other
+## property/value pairs are applied to the minimal surface's lines.
+## @var{tol} is the sampling tolerance of @code{rt_surface} (default
+## 2e-3).  Works headless: @code{figure ("visible", "off")} then
+## @code{print -dpng}.
+##
+## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
+## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
+## @code{horizon}, @code{defect}, @code{label}; and @code{surf}, the
+## configuration drawn (from @code{rt_surface}).
+##
+## @seealso{rt_surface, rt_entropy, plot_surface_profile, plot_phase_diagram}
+## @end deftypefn
+
+function h = plot_rt_surface (varargin)
+  fn = "plot_rt_surface";
+  if (nargin < 2)
+    print_usage ();
+  endif
+  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol"});
+  [bg, A] = deal (args{:});
+  tol = 2e-3;
+  if (isfield (o, "tol"))
+    tol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
+  endif
+  ru = false;
+  if (isfield (o, "runner_up"))
+    ru = __holent_bool__ (fn, "runner_up", o.runner_up);
+  endif
+  if (iscell (A))
+    error ("holent:type", "%s: A must be one region (an n x 2 matrix), not a cell", fn);
+  endif
+  r = [];
+  try
+    s = rt_surface (bg, A, "tol", tol);
+    if (ru)
+      r = rt_surface (bg, A, "tol", tol, "configuration", "runner_up");
+    endif
+  catch err
+    __holent_rethrow__ (err, "rt_surface", fn);
+  end_try_catch
+  [hax, held, pal] = __holent_fig_begin__ (hax);
+  h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
+              "surface", [], "runner_up", [], "horizon", [], "defect", [],
+              "label", [], "surf", s);
+  disk = strcmp (s.picture, "disk");
+  if (disk)
+    L = bg.circumference;
+    t = linspace (0, 2 * pi, 721);
+    h.bulk = fill (hax, cos (t), sin (t), pal.bulk, "edgecolor", "none");
+    if (isfinite (s.horizon_depth))
+      Rh = s.horizon_depth;
+      h.horizon = fill (hax, Rh * cos (t), Rh * sin (t), pal.horizon, "edgecolor", "none");
+    endif
+    if (strcmp (bg.bulk, "conical_defect") && bg.alpha < 1)
+      h.defect = plot (hax, 0, 0, "p", "markersize", 12,
+                       "markerfacecolor", pal.defect, "color", pal.defect);
+    endif
+    h.boundary = plot (hax, cos (t), sin (t), "color", pal.boundary, "linewidth", 1.2);
+    for k = 1:rows (s.intervals)
+      u = 2 * pi * linspace (s.intervals(k,1), s.intervals(k,2), 200) / L;
+      h.regions(end+1) = plot (hax, 1.02 * cos (u), 1.02 * sin (u), "color", pal.region,
+                               "linewidth", 5);
+    endfor
+  else
+    x = s.endpoints;
+    span = max (x) - min (x);
+    xl = [min(x) - 0.2 * span, max(x) + 0.2 * span];
+    zc = max (cellfun (@(c) max (c(:,2)), s.curves));
+    zm = 1.3 * zc;
+    if (isfinite (s.horizon_depth) && s.horizon_depth < 3 * zc)
+      zm = max (zm, 1.2 * s.horizon_depth);
+    endif
+    h.bulk = fill (hax, xl([1 2 2 1]), [0 0 zm zm], pal.bulk, "edgecolor", "none");
+    if (isfinite (s.horizon_depth) && s.horizon_depth < zm)
+      zh = s.horizon_depth;
+      h.horizon = fill (hax, xl([1 2 2 1]), [zh zh zm zm], pal.horizon, "edgecolor", "none");
+    endif
+    h.boundary = plot (hax, xl, [0 0], "color", pal.boundary, "linewidth", 1.2);
+    for k = 1:rows (s.intervals)
+      h.regions(end+1) = plot (hax, s.intervals(k,:), [0 0], "color", pal.region,
+                               "linewidth", 5);
+    endfor
+    set (hax, "ydir", "reverse", "xlim", xl, "ylim", [-0.03 * zm, zm]);
+    xlabel (hax, "x");  ylabel (hax, "z");
+  endif
+  if (! isempty (r))
+    for k = 1:numel (r.curves)
+      c = r.curves{k};
+      h.runner_up(end+1) = plot (hax, c(:,1), c(:,2), "--", "color", pal.runner,
+                                 "linewidth", 2);
+    endfor
+    if (! isempty (r.horizon_curve))
+      c = r.horizon_curve;
+      h.runner_up(end+1) = plot (hax, c(:,1), c(:,2), "--", "color", pal.runner,
+                                 "linewidth", 2);
+    endif
+  endif
+  for k = 1:numel (s.curves)
+    c = s.curves{k};
+    h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
+  endfor
+  if (! isempty (s.horizon_curve))
+    c = s.horizon_curve;
+    h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
+  endif
+  __holent_fig_props__ (fn, h.surface, props);
+  txt = sprintf ("S = %.4g", s.S);
+  if (! isempty (r))
+    txt = sprintf ("%s   (runner-up %.4g)", txt, r.S);
+  endif
+  h.label = title (hax, txt, "color", pal.boundary);
+  if (disk)
+    axis (hax, "equal");
+    set (hax, "xlim", [-1.1 1.1], "ylim", [-1.1 1.1], "visible", "off");
+  endif
+  if (! held)
+    hold (hax, "off");
+  endif
+endfunction
+
+%!demo
+%! ## Two arcs on a BTZ circle: the connected surface, the disconnected
+%! ## runner-up dashed, the horizon dark.
+%! figure ("visible", "off");
+%! bg = ads3_background ("thermal", "circle", "beta", 3);
+%! h = plot_rt_surface (bg, [0.3 1.5; 2.0 3.4], "runner_up", true);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_rt_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bg = ads3_background ("thermal", "circle", "beta", 1);
+%!   h = plot_rt_surface (bg, [0 0.99 * 2 * pi], "runner_up", true, "linewidth", 4);
+%!   assert (isaxes (h.axes));
+%!   assert (all (ishghandle (h.surface)));
+%!   assert (numel (h.surface), 2);          # geodesic and horizon
+%!   assert (get (h.surface(1), "linewidth"), 4);
+%!   ## the drawn data are the surface's curves
+%!   assert (get (h.surface(1), "xdata")(:), h.surf.curves{1}(:,1));
+%!   ax = axes ("parent", figure ("visible", "off"));
+%!   h2 = plot_rt_surface (ax, ads3_background ("vacuum", "line"), [0 1; 1.5 2]);
+%!   assert (h2.axes, ax);
+%!   assert (get (ax, "ydir"), "reverse");
+%!   close (get (ax, "parent"));
+%! unwind_protect_cleanup
+%!   close (f);
+%! end_unwind_protect
+
+%!error <Invalid call> plot_rt_surface (1)
+%!error <runner_up must be> plot_rt_surface (ads3_background ("vacuum", "line"), [0 1], "runner_up", "yes")
