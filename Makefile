@@ -48,6 +48,11 @@ check: throwaway-install
 
 demo: throwaway-install
 	$(OCT) --eval '$(PKGSETUP) pkg load holent; holent_demo ();' 2>&1 | $(FILTER)
+	$(OCT) --eval '$(PKGSETUP) pkg load holent; addpath ("$(CURDIR)/doc/gallery"); f = render_gallery ("$(BUILD)/gallery"); printf ("%s\n", f{:});' 2>&1 | $(FILTER)
+
+# The committed images of the README gallery (doc/gallery/*.png).
+gallery: throwaway-install
+	$(OCT) --eval '$(PKGSETUP) pkg load holent; addpath ("$(CURDIR)/doc/gallery"); render_gallery ("$(CURDIR)/doc/gallery");' 2>&1 | $(FILTER)
 
 bench: throwaway-install
 	$(OCT) --eval '$(PKGSETUP) pkg load holent; addpath ("$(CURDIR)/bench"); run_benchmarks ();' 2>&1 | $(FILTER)
@@ -56,4 +61,4 @@ clean:
 	rm -rf $(BUILD) $(TARBALL)
 	$(MAKE) -C src clean
 
-.PHONY: all dist deps install throwaway-install check demo bench clean
+.PHONY: all dist deps install throwaway-install check demo gallery bench clean

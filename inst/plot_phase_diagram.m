@@ -17,11 +17,11 @@
 ## the phase numbers; taken from the strings when @var{f} returns strings).
 ##
 ## Each grid point is drawn as a cell (cell edges half way between grid
-## values, so grids need not be uniform), one colour per phase with a
-## legend, and the phase boundaries as lines along the cell edges that
-## separate different phases.  Other property/value pairs go to the
-## boundary line.  @var{h} is a struct of handles: @code{axes},
-## @code{cells}, @code{boundary}, @code{legend}, @code{keys}; @var{P}
+## values, so grids need not be uniform), one colour per phase, each phase
+## named inside its region, and the phase boundaries as lines along the
+## cell edges that separate different phases.  Other property/value pairs
+## go to the boundary line.  @var{h} is a struct of handles: @code{axes},
+## @code{cells}, @code{boundary}, @code{labels} (the text objects); @var{P}
 ## holds the phase numbers and @var{labels} their names.
 ##
 ## @seealso{parameter_scan, find_transition, plot_rt_surface}
@@ -89,7 +89,7 @@ function [h, P, labels] = plot_phase_diagram (varargin)
   n = numel (I);
   F = [(1:n)', (1:n)' + n, (1:n)' + 2*n, (1:n)' + 3*n];
   [hax, held, pal] = __holent_fig_begin__ (hax);
-  h = struct ("axes", hax, "cells", [], "boundary", [], "legend", [], "keys", []);
+  h = struct ("axes", hax, "cells", [], "boundary", [], "labels", []);
   h.cells = patch (hax, "faces", F, "vertices", V, "facevertexcdata", cols(P(:), :),
                    "facecolor", "flat", "edgecolor", "none");
   ## boundaries: edges between neighbouring cells of different phases
@@ -109,11 +109,17 @@ function [h, P, labels] = plot_phase_diagram (varargin)
   endif
   h.boundary = plot (hax, bx, by, "color", pal.boundary, "linewidth", 1.5);
   __holent_fig_props__ (fn, h.boundary, props);
-  present = unique (P(:))';
-  for k = present
-    h.keys(end+1) = patch (hax, NaN, NaN, cols(k,:), "edgecolor", pal.boundary);
+  ## each phase named inside its region, at its cell nearest the centroid
+  cx = (ex(1:end-1) + ex(2:end)) / 2;  cy = (ey(1:end-1) + ey(2:end)) / 2;
+  [CX, CY] = ndgrid (cx, cy);
+  sx = diff (ex([1 end]));  sy = diff (ey([1 end]));
+  for k = unique (P(:))'
+    in = find (P == k);
+    m = [mean(CX(in)), mean(CY(in))];
+    [~, j] = min (((CX(in) - m(1)) / sx).^2 + ((CY(in) - m(2)) / sy).^2);
+    h.labels(end+1) = text (hax, CX(in(j)), CY(in(j)), labels{k}, "color", pal.boundary,
+                            "horizontalalignment", "center", "fontweight", "bold");
   endfor
-  h.legend = legend (hax, h.keys, labels(present), "location", "northeastoutside");
   set (hax, "xlim", ex([1 end]), "ylim", ey([1 end]), "box", "on", "layer", "top");
   if (isfield (o, "xlabel"))
     xlabel (hax, o.xlabel);
@@ -144,7 +150,7 @@ endfunction
 %! ## d relative to the width w (the boundary is d = (sqrt(2) - 1) w).
 %! figure ("visible", "off");
 %! vac = ads3_background ("vacuum", "line");
-%! ph = @(d, w) merge (mutual_information (vac, [0 w], [w + d, 2*w + d]) > 0, ...
+%! ph = @(d, w) merge (mutual_information (vac, [0 w], [w + d, 2*w + d]) > 1e-9, ...
 %!                     "connected", "disconnected");
 %! plot_phase_diagram (ph, linspace (0.05, 1, 25), linspace (0.2, 2, 25), ...
 %!                     "xlabel", "separation d", "ylabel", "width w");

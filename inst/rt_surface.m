@@ -86,16 +86,16 @@ function surf = rt_surface (bg, A, varargin)
     s.S = S(k);
     s.pairs = c.pairs;  s.arcs = c.arcs;  s.horizon = c.horizon;
     if (strcmp (which, "runner_up"))
-      [s.pairs, s.arcs, s.horizon, s.S] = __holent_call__ ("__holent_surface__",
+      [s.pairs, s.arcs, s.horizon, s.S] = __holent_call_fn__ (fn, "__holent_surface__",
         "runner", bg, c.intervals, c.pairs, c.arcs, double (c.horizon));
     endif
     s.endpoints = c.endpoints;  s.intervals = c.intervals;
-    s.curves = __holent_call__ ("__holent_surface__", "curves", bg,
+    s.curves = __holent_call_fn__ (fn, "__holent_surface__", "curves", bg,
                                 c.endpoints, s.pairs, s.arcs, tol);
     s.horizon_depth = NaN;
     s.horizon_curve = zeros (0, 2);
     if (bg.horizon)
-      [hc, s.horizon_depth] = __holent_call__ ("__holent_surface__", "horizon",
+      [hc, s.horizon_depth] = __holent_call_fn__ (fn, "__holent_surface__", "horizon",
                                                bg, min (c.endpoints), max (c.endpoints), tol);
       if (s.horizon)
         s.horizon_curve = hc;

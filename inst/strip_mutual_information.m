@@ -14,9 +14,10 @@
 ## I = max (0, S(l1) + S(l2) - S(s) - S(l1 + s + l2)),
 ## @end example
 ## cutoff-independent.  @var{info}.connected is true where the connected
-## surface wins; for scalar widths @var{info}.s_transition is the separation
-## at which it stops winning (found by @code{fzero}; NaN if none is found
-## within the widths the background can reach).
+## surface wins; @var{info}.s_transition (the size of @var{I}) is, for the
+## widths of each element, the separation at which it stops winning (found
+## as in @code{find_transition ("strip_pair", @dots{})}; NaN if none is
+## found within the widths the background can reach).
 ##
 ## @seealso{strip_entropy, ads_background}
 ## @end deftypefn
@@ -35,7 +36,6 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   if (isfield (o, "length"))
     Lp = __holent_scalar__ (fn, "length", o.length, "positive");
   endif
-  scal = isscalar (l1) && isscalar (l2);
   try
     [l1, s, l2] = common_size_ (l1, s, l2);
   catch
@@ -52,28 +52,12 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   g = gap (l1, s, l2);
   I = max (0, g);
   info.connected = g > 0;
-  info.s_transition = NaN;
-  if (scal && ! isempty (l1))
-    l1 = l1(1);  l2 = l2(1);
-    lo = 1e-6 * min (l1, l2);
-    if (gap (l1, lo, l2) > 0)
-      ## bracket the transition by doubling the separation
-      hi = min (l1, l2);
-      try
-        for k = 1:30
-          if (gap (l1, hi, l2) <= 0)
-            info.s_transition = fzero (@(x) gap (l1, x, l2), [lo, hi],
-                                       optimset ("TolX", 1e-13 * hi));
-            break;
-          endif
-          lo = hi;  hi *= 2;
-        endfor
-      catch err
-        if (! strcmp (err.identifier, "holent:reach"))
-          rethrow (err);
-        endif
-      end_try_catch
-    endif
+  ## the transition for each pair of widths, by root finding in the core
+  info.s_transition = NaN (size (l1));
+  if (! isempty (l1))
+    [u, ~, j] = unique ([l1(:), l2(:)], "rows");
+    st = __holent_call_fn__ (fn, "__holent_transition__", "strip_pair", bg, u(:,1), u(:,2));
+    info.s_transition = reshape (st(j), size (l1));
   endif
 endfunction
 
@@ -136,6 +120,15 @@ endfunction
 %! ## thermal effects make the transition come earlier than in vacuum
 %! [~, iv] = strip_mutual_information (ads_background (4, "vacuum"), 1.2, 0.1, 0.9);
 %! assert (info.s_transition < iv.s_transition);
+
+%!test
+%! ## vector widths: one transition per element, each as for scalars
+%! bg = ads_background (4, "black_brane", "zh", 1);
+%! [~, info] = strip_mutual_information (bg, [1.2 0.5 1.2], [0.1 0.2 0.3], [0.9 0.5 0.9]);
+%! [~, i1] = strip_mutual_information (bg, 1.2, 0.1, 0.9);
+%! [~, i2] = strip_mutual_information (bg, 0.5, 0.1, 0.5);
+%! assert (info.s_transition, [i1.s_transition, i2.s_transition, i1.s_transition]);
+%! assert (all (isfinite (info.s_transition)));
 
 %!error <Invalid call> strip_mutual_information (ads_background (4, "vacuum"), 1, 1)
 %!error <common size> strip_mutual_information (ads_background (4, "vacuum"), [1 2], [1 2 3], 1)

@@ -59,7 +59,7 @@ function prof = surface_profile (bg, shape, sizes, varargin)
   prof = struct ("shape", {}, "size", {}, "top", {}, "x", {}, "z", {}, "zh", {});
   for k = 1:numel (sizes)
     tol = rtol * sizes(k);
-    c = __holent_call__ ("__holent_surface__", "profile", bg, double (ball), top(k), tol);
+    c = __holent_call_fn__ (fn, "__holent_surface__", "profile", bg, double (ball), top(k), tol);
     if (! ball)
       ## mirror the half profile: from -l/2 through the turning point
       c = [-flipud(c(2:end,1)), flipud(c(2:end,2)); c];

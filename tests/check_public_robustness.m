@@ -245,7 +245,12 @@
 %!   "plot_phase_diagram", {ax, [1 2], [1 2 3], [1 2 2; 2 2 1], "labels", {"a", "b"}}, ...
 %!     {"", "coords:X", "coords:Y", "", "optname:", ""};
 %!   "parameter_scan", {@(a, b) a + b, [1 2], [3 4], "workers", 1, "progress", false}, ...
-%!     {"", "", "", "optname:", "pos:workers", "optname:", "bool:progress"}};
+%!     {"", "", "", "optname:", "pos:workers", "optname:", "bool:progress"};
+%!   "find_transition", {"plateau", bc}, {"word:KIND", "bg3:BG"};
+%!   "find_transition", {"mutual_information", bl, [1 2], [1 1]}, {"", "bg3:BG", "lens:L1", "lens:L2"};
+%!   "find_transition", {"hawking_page", "Omega", [0 0.2], "circumference", 3}, ...
+%!     {"", "optname:", "omegas:Omega", "optname:", "lens:circumference"};
+%!   "find_transition", {"strip_pair", bh, 0.5, 0.5}, {"", "bghd:BG", "lens:L1", "lens:L2"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)

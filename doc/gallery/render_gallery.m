@@ -1,0 +1,63 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## Copyright (C) 2026 The holent developers.
+## -*- texinfo -*-
+## @deftypefn {} {@var{files} =} render_gallery (@var{outdir})
+## Render the figures of the README gallery into @var{outdir} as small
+## PNGs, headless (hidden figures), and return their paths.  Run by
+## @code{make demo} (into the build directory) and @code{make gallery}
+## (into doc/gallery, the committed images).  Demo data: our own invented
+## scenario.
+## @end deftypefn
+function files = render_gallery (outdir)
+  if (! exist (outdir, "dir"))
+    mkdir (outdir);
+  endif
+  ws = warning ("off", "Octave:gnuplot-graphics");
+  f = figure ("visible", "off", "position", [0 0 480 400]);
+  files = {};
+  unwind_protect
+    ## 1. two arcs on a BTZ circle: connected against disconnected
+    bg = ads3_background ("thermal", "circle", "beta", 3);
+    plot_rt_surface (bg, [0.3 1.5; 2.0 3.4], "runner_up", true);
+    files{end+1} = save_ (f, outdir, "btz_two_arcs.png");
+    ## 2. the plateau: the horizon joins the surface
+    clf (f);
+    plot_rt_surface (ads3_background ("thermal", "circle", "beta", 1), [0 6.05], "runner_up", true);
+    files{end+1} = save_ (f, outdir, "btz_plateau.png");
+    ## 3. a heavy state: geodesics avoid the conical defect
+    clf (f);
+    plot_rt_surface (ads3_background ("heavy", "circle", "alpha", 0.4), [0.3 3.6], "runner_up", true);
+    files{end+1} = save_ (f, outdir, "conical_defect.png");
+    ## 4. three intervals on the thermal line
+    clf (f);
+    plot_rt_surface (ads3_background ("thermal", "line", "beta", 3), [0 1; 1.3 2.5; 4 7], "runner_up", true);
+    files{end+1} = save_ (f, outdir, "planar_btz_three.png");
+    ## 5. strips in a black brane
+    clf (f);
+    plot_surface_profile (ads_background (4, "black_brane", "zh", 1), "strip", [0.5 1 2 4]);
+    files{end+1} = save_ (f, outdir, "strip_profiles.png");
+    ## 6. phase diagram of two equal intervals on the thermal line
+    clf (f);
+    th = ads3_background ("thermal", "line", "beta", 2);
+    ph = @(d, w) merge (mutual_information (th, [0 w], [w + d, 2*w + d]) > 1e-9, ...
+                        "connected", "disconnected");
+    w = linspace (0.1, 4, 30);
+    h = plot_phase_diagram (ph, linspace (0.01, 0.6, 30), w, ...
+                            "xlabel", "separation d", "ylabel", "width w");
+    ## the transition line of find_transition through the cells
+    hold (h.axes, "on");
+    w = linspace (0.1, 4, 200);
+    plot (h.axes, find_transition ("mutual_information", th, w, w), w, "--",
+          "color", [0.68 0.24 0.20], "linewidth", 2);
+    hold (h.axes, "off");
+    files{end+1} = save_ (f, outdir, "phase_two_intervals.png");
+  unwind_protect_cleanup
+    close (f);
+    warning (ws);
+  end_unwind_protect
+endfunction
+
+function p = save_ (f, outdir, name)
+  p = fullfile (outdir, name);
+  print (f, "-dpng", "-S480,400", p);
+endfunction
