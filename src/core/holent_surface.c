@@ -282,7 +282,10 @@ holent_surface_geodesic (holent_surface_workspace *w,
         return sample (&w->cur, &g, tol, cos (ph1), sin (ph1), cos (ph2),
                        sin (ph2));
       }
-    default:
+    case HOLENT_BULK_PLANAR_BTZ:
+    case HOLENT_BULK_BTZ:
+    case HOLENT_BULK_ROTATING_BTZ:
+    case HOLENT_BULK_PLANAR_ROTATING_BTZ:
       {
         double D = bg->circle ? ph2 - ph1 : x2 - x1;
         g.fam = FAM_BTZ;
@@ -302,6 +305,8 @@ holent_surface_geodesic (holent_surface_workspace *w,
                          sin (ph2));
         return sample (&w->cur, &g, tol, x1, 0.0, x2, 0.0);
       }
+    default:
+      return HOLENT_EINVAL;
     }
 }
 
