@@ -7,6 +7,7 @@
 ## @deftypefnx {} {[@var{x}, @var{info}] =} find_transition ("wedge", @var{bg}, @var{l1}, @var{l2})
 ## @deftypefnx {} {[@var{x}, @var{info}] =} find_transition ("hawking_page", "Omega", @var{Omega}, "circumference", @var{L})
 ## @deftypefnx {} {[@var{x}, @var{info}] =} find_transition ("strip_pair", @var{hdbg}, @var{l1}, @var{l2})
+## @deftypefnx {} {[@var{x}, @var{info}] =} find_transition ("page_time", @var{bg}, @var{R})
 ## The parameter value at which the winning configuration changes, found
 ## by bracketing root finding (Brent, to a few units in the last place) on
 ## the exact difference of the two competing configurations
@@ -30,6 +31,15 @@
 ## the separation s* of two parallel strips of widths @var{l1}, @var{l2} in
 ## the AdS_(d+1) background @var{hdbg} beyond which the disconnected surface
 ## wins; NaN when the reachable widths run out first.
+## @item @qcode{"page_time"}
+## the Page time of the radiation region @var{R} (an n x 2 matrix, or a
+## cell array of them) in the two-sided BCFT background @var{bg}
+## (@code{ads3_background ("bcft_tfd", ...)}; @code{page_curve}): the time
+## at which the least entropy with geodesics through the bridge reaches the
+## island entropy; 0 when the island wins from the start.  Bracketed and
+## solved (@code{fzero}, bracketing) on the exact entropies of the core;
+## @code{conf_below}/@code{conf_above} give the geodesics through the
+## bridge and onto the brane on each side.
 ## @end table
 ##
 ## @var{x} has the size of the parameter arrays (NaN where there is no
@@ -127,13 +137,62 @@ function [x, info] = find_transition (kind, varargin)
       [x, found] = __holent_call_fn__ (fn, "__holent_transition__", "strip_pair", bg, l1, l2);
       info.below = repmat ({"connected"}, size (x));
       info.above = repmat ({"disconnected"}, size (x));
+    case "page_time"
+      if (numel (varargin) != 2)
+        print_usage ();
+      endif
+      [bg, R] = deal (varargin{:});
+      if (! __holent_is_bcft__ (bg) || ! strcmp (bg.state, "bcft_tfd"))
+        error ("holent:background", "%s: BG must be a two-sided BCFT background from ads3_background (\"bcft_tfd\", ...)", fn);
+      endif
+      if (! iscell (R))
+        R = {R};
+      elseif (isempty (R))
+        error ("holent:empty", "%s: R is an empty cell: give a region or a cell array of them", fn);
+      endif
+      x = zeros (size (R));  found = true (size (R));
+      info.conf_below = cell (size (R));  info.conf_above = info.conf_below;
+      for k = 1:numel (R)
+        if (! isnumeric (R{k}) || islogical (R{k}) || ! isreal (R{k}))
+          error ("holent:type", "%s: R must be a real n x 2 matrix of [start, end] rows", fn);
+        endif
+        r = full (double (R{k}));
+        ## S_no_island(t) - S_island grows with t (the bridge geodesics):
+        ## bracket its sign change, then Brent (fzero) on the exact values
+        g = @(t) page_ (fn, bg, r, t);
+        if (g (0) >= 0)
+          x(k) = 0;          # the island wins from the start
+        else
+          hi = 1;
+          while (g (hi) < 0 && hi < 1e6)
+            hi *= 2;
+          endwhile
+          if (g (hi) < 0)
+            x(k) = NaN;  found(k) = false;
+            continue;
+          endif
+          x(k) = fzero (g, [0, hi], optimset ("TolX", 4 * eps * hi));
+        endif
+        [~, kb, nb] = __holent_call__ ("__holent_bcft__", "page", fn, bg, r,
+                                       x(k) * [1 - 1e-6, 1 + 1e-6] + [0 1e-9]);
+        info.conf_below{k} = struct ("n_bridge", kb(1), "n_brane", nb(1));
+        info.conf_above{k} = struct ("n_bridge", kb(2), "n_brane", nb(2));
+      endfor
+      info.below = repmat ({"no_island"}, size (x));
+      info.above = repmat ({"island"}, size (x));
     otherwise
-      error ("holent:option", "%s: unknown KIND '%s' (expected plateau, mutual_information, wedge, hawking_page or strip_pair)",
+      error ("holent:option", "%s: unknown KIND '%s' (expected plateau, mutual_information, wedge, hawking_page, strip_pair or page_time)",
              fn, kind);
   endswitch
   info.found = logical (found);
   info.below(! info.found) = {""};
   info.above(! info.found) = {""};
+endfunction
+
+## S_no_island - S_island of the two-sided BCFT at time t (issue 13's core).
+function d = page_ (fn, bg, r, t)
+  [~, ~, ~, Sno, pg] = __holent_call__ ("__holent_bcft__", "page", fn, bg, r, t);
+  d = Sno - pg.S_island;
 endfunction
 
 ## Broadcast two positive arrays to one size.
@@ -216,6 +275,17 @@ endfunction
 %!   x = fzero (@(x) x^(2-d) + (2 + x)^(2-d) - 2, [0.01 10]);
 %!   assert (s, [1 2] * x, 1e-9);
 %! endfor
+
+%!test
+%! ## Page time of R = [b, Inf] in the BCFT thermofield double:
+%! ## cosh(2 pi t/beta) = e^{atanh T} sinh(2 pi b/beta) (Almheiri, Mahajan
+%! ## and Maldacena 2019, arXiv:1910.11077, from memory).
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6, "c", 6);
+%! [t, info] = find_transition ("page_time", bg, {[1, Inf], [0.7, Inf]});
+%! b = [1 0.7];
+%! assert (t, acosh (exp (atanh (0.6)) * sinh (pi * b)) / pi, 1e-10);
+%! assert (info.conf_below{1}.n_bridge > 0 && info.conf_above{1}.n_bridge == 0);
+%! assert (info.above{2}, "island");
 
 %!error <Invalid call> find_transition ()
 %!error <unknown KIND> find_transition ("page", 1)

@@ -14,8 +14,8 @@
 ## I = max (0, S(l1) + S(l2) - S(s) - S(l1 + s + l2)),
 ## @end example
 ## cutoff-independent.  @var{info}.connected is true where the connected
-## surface wins; @var{info}.s_transition (the size of @var{I}) is, for the
-## widths of each element, the separation at which it stops winning (found
+## surface wins; @var{info}.s_transition (the common size of @var{l1} and
+## @var{l2}) is, for each pair of widths, the separation at which it stops winning (found
 ## as in @code{find_transition ("strip_pair", @dots{})}; NaN if none is
 ## found within the widths the background can reach).
 ##
@@ -37,6 +37,7 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
     Lp = __holent_scalar__ (fn, "length", o.length, "positive");
   endif
   try
+    [w1, w2] = common_size_ (l1, l2);   # the widths alone: s_transition
     [l1, s, l2] = common_size_ (l1, s, l2);
   catch
     error ("holent:size", "%s: L1, S and L2 must have one common size or be scalars", fn);
@@ -53,11 +54,11 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   I = max (0, g);
   info.connected = g > 0;
   ## the transition for each pair of widths, by root finding in the core
-  info.s_transition = NaN (size (l1));
-  if (! isempty (l1))
-    [u, ~, j] = unique ([l1(:), l2(:)], "rows");
+  info.s_transition = NaN (size (w1));
+  if (! isempty (w1))
+    [u, ~, j] = unique ([w1(:), w2(:)], "rows");
     st = __holent_call_fn__ (fn, "__holent_transition__", "strip_pair", bg, u(:,1), u(:,2));
-    info.s_transition = reshape (st(j), size (l1));
+    info.s_transition = reshape (st(j), size (w1));
   endif
 endfunction
 
@@ -124,7 +125,7 @@ endfunction
 %!test
 %! ## vector widths: one transition per element, each as for scalars
 %! bg = ads_background (4, "black_brane", "zh", 1);
-%! [~, info] = strip_mutual_information (bg, [1.2 0.5 1.2], [0.1 0.2 0.3], [0.9 0.5 0.9]);
+%! [~, info] = strip_mutual_information (bg, [1.2 0.5 1.2], 0.1, [0.9 0.5 0.9]);
 %! [~, i1] = strip_mutual_information (bg, 1.2, 0.1, 0.9);
 %! [~, i2] = strip_mutual_information (bg, 0.5, 0.1, 0.5);
 %! assert (info.s_transition, [i1.s_transition, i2.s_transition, i1.s_transition]);

@@ -8,6 +8,8 @@
  *       IV the normalised intervals [start, end] of the region.
  *   [C, DEPTH] = __holent_surface__ ("horizon", BG, XA, XB, TOL)
  *   C = __holent_surface__ ("profile", HDBG, BALL, TOP, TOL)
+ *   C = __holent_surface__ ("boosted", BG, X1, T1, X2, T2, TOL)
+ *       one k x 3 curve [X Y t] per element (endpoints at times T1, T2)
  */
 #include <math.h>
 #include <string.h>
@@ -209,12 +211,56 @@ op_profile (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   holent_surface_free (w);
 }
 
+static void
+op_boosted (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+{
+  holent_geo_bg bg;
+  size_t n[4];
+  (void) nlhs;
+  if (nrhs != 7)
+    mexErrMsgIdAndTxt ("holent:nargs", "boosted needs BG, X1, T1, X2, T2, TOL");
+  holent_gw_bg (prhs[1], FN, &bg);
+  const double *x1 = holent_gw_real (prhs[2], FN, "X1", &n[0]);
+  const double *t1 = holent_gw_real (prhs[3], FN, "T1", &n[1]);
+  const double *x2 = holent_gw_real (prhs[4], FN, "X2", &n[2]);
+  const double *t2 = holent_gw_real (prhs[5], FN, "T2", &n[3]);
+  double tol = holent_gw_scalar (prhs[6], FN, "TOL");
+  if (n[1] != n[0] || n[2] != n[0] || n[3] != n[0])
+    mexErrMsgIdAndTxt ("holent:size", "X1, T1, X2 and T2 must have one size");
+  holent_surface_workspace *w = ws_new ();
+  mxArray *cell = mxCreateCellMatrix (n[0], 1);
+  for (size_t i = 0; i < n[0]; i++)
+    {
+      double b = x2[i];
+      if (bg.circle)
+        {
+          /* the arc from x1 in the positive direction */
+          b = x1[i] + fmod (x2[i] - x1[i], bg.L);
+          if (b <= x1[i])
+            b += bg.L;
+        }
+      int st = holent_surface_geodesic_t (w, &bg, x1[i], t1[i], b, t2[i], tol);
+      if (st)
+        {
+          holent_surface_free (w);
+          mxDestroyArray (cell);
+          if (st == HOLENT_ETIMELIKE)
+            mexErrMsgIdAndTxt ("holent:timelike", "endpoints %zu are not "
+                               "spacelike separated", i + 1);
+          holent_gw_fail (st, FN, "X1", i);
+        }
+      mxSetCell (cell, i, curve_out (&w->cur, 1));
+    }
+  holent_surface_free (w);
+  plhs[0] = cell;
+}
+
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
   char op[16];
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 4, nrhs, 1, 6);
+  holent_gw_nargs (FN, nlhs, 4, nrhs, 1, 7);
   holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
   if (strcmp (op, "curves") == 0)
     op_curves (nlhs, plhs, nrhs, prhs);
@@ -224,6 +270,8 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     op_horizon (nlhs, plhs, nrhs, prhs);
   else if (strcmp (op, "profile") == 0)
     op_profile (nlhs, plhs, nrhs, prhs);
+  else if (strcmp (op, "boosted") == 0)
+    op_boosted (nlhs, plhs, nrhs, prhs);
   else
     mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);
 }

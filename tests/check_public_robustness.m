@@ -250,7 +250,10 @@
 %!   "find_transition", {"mutual_information", bl, [1 2], [1 1]}, {"", "bg3:BG", "lens:L1", "lens:L2"};
 %!   "find_transition", {"hawking_page", "Omega", [0 0.2], "circumference", 3}, ...
 %!     {"", "optname:", "omegas:Omega", "optname:", "lens:circumference"};
-%!   "find_transition", {"strip_pair", bh, 0.5, 0.5}, {"", "bghd:BG", "lens:L1", "lens:L2"}};
+%!   "find_transition", {"strip_pair", bh, 0.5, 0.5}, {"", "bghd:BG", "lens:L1", "lens:L2"};
+%!   "find_transition", {"page_time", bt, [1 Inf]}, {"", "bg3:BG", "radiation:R"};
+%!   "geodesic_curve", {bc, [0.5 0], [2 0.1], "tol", 1e-3}, ...
+%!     {"bg3:BG", "coords:P1", "coords:P2", "optname:", "pos:tol"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)

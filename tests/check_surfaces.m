@@ -218,3 +218,25 @@
 %!   assert (p(k).x(end), p(k).size, 1e-6);
 %!   assert (all (diff (p(k).x) >= 0) && all (diff (p(k).z) < 0));
 %! endfor
+
+%!test
+%! ## Boosted intervals (endpoints at different times): the lengths of the
+%! ## sampled curves, integrated here with the metric including dt, against
+%! ## the two-point functions of the boundary theory (common practice;
+%! ## Hubeny, Rangamani and Takayanagi 2007, JHEP 07, 062, from memory):
+%! ## Poincare log((dx^2 - dt^2)/eps^2), planar BTZ
+%! ## log((beta/(pi eps))^2 sinh(pi (dx - dt)/beta) sinh(pi (dx + dt)/beta)),
+%! ## global AdS (L = 2 pi) log((2/eps^2) (cos dt - cos dx)).
+%! eps = 1e-5;  beta = 0.7;
+%! P1 = [-0.4 0.1];  P2 = [1.9 0.9];  dx = 2.3;  dt = 0.8;
+%! c = geodesic_curve (ads3_background ("vacuum", "line"), P1, P2, "tol", 1e-7){1};
+%! len = curve_length (1 ./ c(:,2), c(:,1), c(:,3), 0, 0, 0, 1 / eps);
+%! assert (len, log ((dx^2 - dt^2) / eps^2), -3e-7);
+%! c = geodesic_curve (ads3_background ("thermal", "line", "beta", beta), P1, P2, "tol", 1e-7){1};
+%! len = curve_length (1 ./ c(:,2), c(:,1), c(:,3), 2 * pi / beta, 0, 0, 1 / eps);
+%! ref = log ((beta / (pi * eps))^2 * sinh (pi * (dx - dt) / beta) * sinh (pi * (dx + dt) / beta));
+%! assert (len, ref, -3e-7);
+%! c = geodesic_curve (ads3_background ("vacuum", "circle"), [1 0.2], [2.5 -0.3], "tol", 1e-7){1};
+%! R = hypot (c(:,1), c(:,2));
+%! len = curve_length (2 * R ./ (1 - R.^2), unwrap (atan2 (c(:,2), c(:,1))), c(:,3), 0, 0, 1, 1 / eps);
+%! assert (len, log ((2 / eps^2) * (cos (0.5) - cos (1.5))), -3e-7);

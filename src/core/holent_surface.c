@@ -70,9 +70,13 @@ typedef struct
   enum fam fam;
   int circle;
   double xc;       /* centre: boundary coordinate (line) or angle (disk)  */
-  double rad;      /* Poincare: radius of the semicircle                  */
+  double tc;       /* centre: boundary time                               */
+  double rad;      /* Poincare: radius of the (boosted) semicircle        */
+  double hx, ht;   /* Poincare: half the separation in x and in t         */
   double ch, sh;   /* disk: cos h, sin h, h half the covering opening     */
+  double ct, st;   /* disk: cos tau, sin tau, tau half the covering delay */
   double alpha;    /* disk: defect parameter (angles divided by it)       */
+  double N;        /* disk: normalisation sqrt(-2 p.q)                    */
   double rp, rm;   /* BTZ: horizon radii                                  */
   double a1, a2, b1, b2, logN;
 } geo_par;
@@ -92,21 +96,26 @@ geo_eval (const geo_par *g, double s, double *px, double *py, double *pt,
   switch (g->fam)
     {
     case FAM_POINCARE:
-      *px = g->xc + g->rad * tanh (s);
+      *px = g->xc + g->hx * tanh (s);
       *py = g->rad / cosh (s);
-      *pt = 0.0;
+      *pt = g->tc + g->ht * tanh (s);
       *bd = *py;
       return;
     case FAM_DISK:
       {
-        /* Covering Poincare disk: w = (X1 + i X2)/(1 + T1) with
-           T1 = cosh s / sin h, X1 = cot h cosh s, X2 = sinh s.  */
-        double cs = cosh (s), den = g->sh + cs;
-        double u = g->ch * cs / den, v = g->sh * sinh (s) / den;
-        double R = hypot (u, v), ph = g->xc + atan2 (v, u) / g->alpha;
+        /* Covering global AdS, endpoints at (t, phi) = -+(tau, h):
+           (T1, T2, X1, X2) = (2/N)(cosh s cos tau, sinh s sin tau,
+           cosh s cos h, sinh s sin h), N^2 = 4 sin(h + tau) sin(h - tau);
+           disk radius tanh(rho/2) = sinh rho/(1 + cosh rho).  */
+        double cs = cosh (s), sn = sinh (s);
+        double nn = 0.5 * g->N;
+        double T1 = cs * g->ct / nn, T2 = sn * g->st / nn;
+        double X1 = cs * g->ch / nn, X2 = sn * g->sh / nn;
+        double R = hypot (X1, X2) / (1.0 + hypot (T1, T2));
+        double ph = g->xc + atan2 (X2, X1) / g->alpha;
         *px = R * cos (ph);
         *py = R * sin (ph);
-        *pt = 0.0;
+        *pt = g->tc + atan2 (T2, T1) / g->alpha;
         *bd = 1.0 - R;
         return;
       }
@@ -123,7 +132,7 @@ geo_eval (const geo_par *g, double s, double *px, double *py, double *pt,
         double dd = (g->rp - g->rm) * (g->rp + g->rm);
         double r = sqrt (g->rm * g->rm + al * dd);
         double ph = (g->rp * a + g->rm * b) / dd;
-        *pt = (g->rm * a + g->rp * b) / dd;
+        *pt = g->tc + (g->rm * a + g->rp * b) / dd;
         if (g->circle)
           {
             double R = r / (1.0 + sqrt (1.0 + r * r));
@@ -187,15 +196,19 @@ geo_smax (const geo_par *g, double tol, double sign)
   return s;
 }
 
+/* Sample the curve between its boundary endpoints (xb, yb, tb); the times
+   of the interior points are multiplied by tsc (rescaled circle -> L).  */
 static int
-sample (holent_curve *c, const geo_par *g, double tol, double xb1,
-        double yb1, double xb2, double yb2)
+sample_t (holent_curve *c, const geo_par *g, double tol, double xb1,
+          double yb1, double tb1, double xb2, double yb2, double tb2,
+          double tsc)
 {
   const int nseg = 32;
   double s0 = -geo_smax (g, tol, -1.0), s1 = geo_smax (g, tol, 1.0);
   double pa[3], pb[3], bd;
   refine_ctx rc = { g, tol, c };
-  int st = push (c, xb1, yb1, 0.0);
+  size_t first = c->n + 1;
+  int st = push (c, xb1, yb1, tb1);
   if (st)
     return st;
   geo_eval (g, s0, &pa[0], &pa[1], &pa[2], &bd);
@@ -210,7 +223,16 @@ sample (holent_curve *c, const geo_par *g, double tol, double xb1,
         return st;
       memcpy (pa, pb, sizeof pa);
     }
-  return push (c, xb2, yb2, 0.0);
+  for (size_t i = first; i < c->n; i++)
+    c->t[i] *= tsc;
+  return push (c, xb2, yb2, tb2);
+}
+
+static int
+sample (holent_curve *c, const geo_par *g, double tol, double xb1,
+        double yb1, double tb1, double xb2, double yb2, double tb2)
+{
+  return sample_t (c, g, tol, xb1, yb1, tb1, xb2, yb2, tb2, 1.0);
 }
 
 static void
@@ -226,10 +248,19 @@ holent_surface_geodesic (holent_surface_workspace *w,
                          const holent_geo_bg *bg, double x1, double x2,
                          double tol)
 {
-  if (w == NULL || bg == NULL || isnan (x1) || isnan (x2) || isnan (tol))
+  return holent_surface_geodesic_t (w, bg, x1, 0.0, x2, 0.0, tol);
+}
+
+int
+holent_surface_geodesic_t (holent_surface_workspace *w,
+                           const holent_geo_bg *bg, double x1, double t1,
+                           double x2, double t2, double tol)
+{
+  if (w == NULL || bg == NULL || isnan (x1) || isnan (x2) || isnan (tol)
+      || isnan (t1) || isnan (t2))
     return HOLENT_EINVAL;
-  if (!isfinite (x1) || !isfinite (x2) || !(tol >= HOLENT_SURFACE_TOLMIN)
-      || !(tol <= 1.0) || x1 == x2)
+  if (!isfinite (x1) || !isfinite (x2) || !isfinite (t1) || !isfinite (t2)
+      || !(tol >= HOLENT_SURFACE_TOLMIN) || !(tol <= 1.0) || x1 == x2)
     return HOLENT_EDOM;
   if (bg->circle && !(x2 - x1 > 0.0 && x2 - x1 <= bg->L))
     return HOLENT_EDOM;
@@ -238,49 +269,68 @@ holent_surface_geodesic (holent_surface_workspace *w,
   memset (&g, 0, sizeof g);
   g.circle = bg->circle;
   g.alpha = 1.0;
-  double ph1 = 0, ph2 = 0;
+  g.tc = 0.5 * (t1 + t2);
+  double ph1 = 0, ph2 = 0, tau = 0.5 * (t2 - t1);
   if (bg->circle)
     {
       ph1 = 2.0 * M_PI * x1 / bg->L;
       ph2 = 2.0 * M_PI * x2 / bg->L;
+      tau *= 2.0 * M_PI / bg->L;  /* time in units of the rescaled circle */
     }
   else if (x2 < x1)
     {
       double tmp = x1;
       x1 = x2;
       x2 = tmp;
+      tmp = t1;
+      t1 = t2;
+      t2 = tmp;
+      tau = -tau;
     }
+  double tsc = bg->circle ? bg->L / (2.0 * M_PI) : 1.0;
   switch (bg->bulk)
     {
     case HOLENT_BULK_POINCARE:
+      if (!(fabs (t2 - t1) < x2 - x1))
+        return HOLENT_ETIMELIKE;
       g.fam = FAM_POINCARE;
       g.xc = 0.5 * (x1 + x2);
-      g.rad = 0.5 * (x2 - x1);
-      return sample (&w->cur, &g, tol, x1, 0.0, x2, 0.0);
+      g.hx = 0.5 * (x2 - x1);
+      g.ht = 0.5 * (t2 - t1);
+      g.rad = sqrt ((g.hx - g.ht) * (g.hx + g.ht));
+      return sample (&w->cur, &g, tol, x1, 0.0, t1, x2, 0.0, t2);
     case HOLENT_BULK_GLOBAL_ADS:
     case HOLENT_BULK_THERMAL_ADS:
     case HOLENT_BULK_CONICAL_DEFECT:
       {
-        double h = 0.5 * bg->alpha * (ph2 - ph1);
+        double h = 0.5 * bg->alpha * (ph2 - ph1), ta = bg->alpha * tau;
         if (bg->alpha < 1.0 && h >= M_PI_2)
           {
             /* no geodesic on this side of the defect: through the apex */
-            int st = push (&w->cur, cos (ph1), sin (ph1), 0.0);
+            if (t1 != t2)
+              return HOLENT_EUNSUP;
+            int st = push (&w->cur, cos (ph1), sin (ph1), t1);
             if (!st)
-              st = push (&w->cur, 0.0, 0.0, 0.0);
+              st = push (&w->cur, 0.0, 0.0, t1);
             if (!st)
-              st = push (&w->cur, cos (ph2), sin (ph2), 0.0);
+              st = push (&w->cur, cos (ph2), sin (ph2), t1);
             return st;
           }
         if (h >= M_PI)
           return HOLENT_EDOM;  /* the whole circle in global AdS */
+        if (!(fabs (ta) < h) || !(fabs (ta) < M_PI - h))
+          return HOLENT_ETIMELIKE;
         g.fam = FAM_DISK;
         g.alpha = bg->alpha;
         g.xc = 0.5 * (ph1 + ph2);
+        g.tc = 0.5 * (t1 + t2) / tsc;
         g.ch = cos (h);
         g.sh = sin (h);
-        return sample (&w->cur, &g, tol, cos (ph1), sin (ph1), cos (ph2),
-                       sin (ph2));
+        g.ct = cos (ta);
+        g.st = sin (ta);
+        g.N = 2.0 * sqrt (sin (h + ta) * sin (h - ta));
+        return sample_t (&w->cur, &g, tol, cos (ph1), sin (ph1), t1,
+                         cos (ph2), sin (ph2), t2, tsc);
       }
     case HOLENT_BULK_PLANAR_BTZ:
     case HOLENT_BULK_BTZ:
@@ -291,19 +341,23 @@ holent_surface_geodesic (holent_surface_workspace *w,
         g.fam = FAM_BTZ;
         btz_radii (bg, &g.rp, &g.rm);
         g.xc = bg->circle ? 0.5 * (ph1 + ph2) : 0.5 * (x1 + x2);
-        /* endpoints at -D/2 and D/2, t = 0: a = r+ phi, b = -r- phi */
-        g.a1 = -g.rp * D / 2;
-        g.a2 = g.rp * D / 2;
-        g.b1 = g.rm * D / 2;
-        g.b2 = -g.rm * D / 2;
-        double rm = fabs (g.rm);
-        /* N^2 = -2 p1.p2 = 2 (cosh(r+ D) - cosh(r- D)) */
-        g.logN = 0.5 * (log (4.0) + holent_geo_lnsinh ((g.rp + rm) * D / 2)
-                        + holent_geo_lnsinh ((g.rp - rm) * D / 2));
+        g.tc = 0.5 * (t1 + t2) / tsc;
+        /* endpoints at (phi, t) = -+(D/2, tau) from the centre:
+           a = r+ phi - r- t, b = r+ t - r- phi */
+        double A = g.rp * D / 2 - g.rm * tau, B = g.rp * tau - g.rm * D / 2;
+        if (!(fabs (A) > fabs (B)))
+          return HOLENT_ETIMELIKE;
+        g.a1 = -A;
+        g.a2 = A;
+        g.b1 = -B;
+        g.b2 = B;
+        /* N^2 = -2 p1.p2 = 2 (cosh 2A - cosh 2B) */
+        g.logN = 0.5 * (log (4.0) + holent_geo_lnsinh (fabs (A) + fabs (B))
+                        + holent_geo_lnsinh (fabs (A) - fabs (B)));
         if (bg->circle)
-          return sample (&w->cur, &g, tol, cos (ph1), sin (ph1), cos (ph2),
-                         sin (ph2));
-        return sample (&w->cur, &g, tol, x1, 0.0, x2, 0.0);
+          return sample_t (&w->cur, &g, tol, cos (ph1), sin (ph1), t1,
+                           cos (ph2), sin (ph2), t2, tsc);
+        return sample (&w->cur, &g, tol, x1, 0.0, t1, x2, 0.0, t2);
       }
     default:
       return HOLENT_EINVAL;

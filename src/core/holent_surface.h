@@ -80,6 +80,16 @@ int holent_surface_geodesic (holent_surface_workspace *w,
                              const holent_geo_bg *bg, double x1, double x2,
                              double tol);
 
+/* The same between boundary points at times t1 and t2 (a boosted
+ * interval: the geodesic leaves the constant-time slice; each point
+ * carries its boundary time in w->cur.t).  HOLENT_ETIMELIKE unless the
+ * endpoints are spacelike separated (in the covering space for the
+ * circle bulks); HOLENT_EUNSUP for the path through a defect's apex with
+ * t1 != t2.  */
+int holent_surface_geodesic_t (holent_surface_workspace *w,
+                               const holent_geo_bg *bg, double x1, double t1,
+                               double x2, double t2, double tol);
+
 /* The horizon of a background with one (r = r_+) sampled to tol into
  * w->cur: the circle of radius R_h in the disk (closed: first point
  * repeated last); on a line, the segment z = 1/r_+ for x in [xa, xb].
