@@ -13,6 +13,8 @@
 ## ds^2 = (ell^2/z^2) (-f(z) dt^2 + dz^2/f(z) + dx_1^2 + ... + dx_(d-1)^2)
 ## @end example
 ## for the strips and balls of @code{strip_entropy} and @code{ball_entropy}.
+## The background is built and checked by the C core, which computes every
+## field below; later calls reuse it without recomputation.
 ##
 ## @var{kind} is one of
 ## @table @asis
@@ -22,10 +24,19 @@
 ## f = 1 - (z/zh)^d: the planar black brane, a thermal state; give
 ## @qcode{"zh"} (horizon depth) or @qcode{"T"} (temperature, T = d/(4 pi zh)).
 ## @item @qcode{"tabulated"}
-## f from the user's own samples @qcode{"z"} and @qcode{"f"} (vectors of equal
-## length, at least 5, with z(1) = 0 < z(2) < ... = z_max), interpolated by a
-## cubic spline of (1 - f)/z^d.  f(0) = 1 and f - 1 = O(z^d) are checked; the
-## horizon, if any, is the first zero of the interpolant.
+## f from the user's own data: samples @qcode{"z"} and @qcode{"f"} (vectors
+## of equal length, at least d + 7, with z(1) = 0 < z(2) < ... = z_max, f(1)
+## = 1), or @qcode{"f"} a function handle evaluated (vectorised) on the grid
+## @qcode{"z"} or on 4001 equally spaced points of [0, @qcode{"z_max"}].
+## Rounded or noisy samples are expected: the accuracy of the samples
+## (field @code{noise}) is estimated from the data unless given as
+## @qcode{"noise"}.  m in f = 1 - m z^d + ... comes from a least-squares
+## fit over a window chosen from the data, with an error estimate; data
+## that are not 1 + O(z^d) are refused whatever the sampling.  The
+## horizon is the first zero of f, a double zero (extremal, T = 0) when f
+## touches zero within the noise, or the last sample when the table ends
+## there within the noise.  (1 - f)/z^d is interpolated by a cubic spline
+## clamped at both ends (doc/higher_dimensional.md).
 ## @end table
 ##
 ## Options: @qcode{"ell"} (AdS radius, default 1), @qcode{"G"} (Newton
@@ -34,14 +45,19 @@
 ##
 ## Fields: @code{dimension} (d), @code{kind}, @code{ell}, @code{G},
 ## @code{cutoff}, @code{zh} (Inf without a horizon), @code{horizon}
-## (logical), @code{T} = |f'(zh)|/(4 pi), @code{entropy_density}
+## (logical), @code{extremal} (logical: a double zero), @code{T} =
+## |f'(zh)|/(4 pi) and its error estimate @code{T_error}, @code{entropy_density}
 ## = ell^(d-1)/(4 G zh^(d-1)), @code{energy_density} = (d-1) ell^(d-1) m/(16 pi G)
 ## with f = 1 - m z^d + ... (first law dE = T ds for the brane; for tabulated f
 ## this is the Einstein-gravity value, see doc/higher_dimensional.md),
-## @code{m}, @code{z_max} (Inf for analytic f), @code{z}, @code{f} (the samples,
-## empty for analytic kinds).
+## @code{m} and its error estimate @code{m_error}, @code{noise} (accuracy of
+## the samples of f; 0 for analytic kinds), @code{z_max} (Inf for analytic f),
+## @code{z}, @code{f} (the samples, empty for analytic kinds) and
+## @code{spline} (the interpolant: knots @code{z}, values @code{g} and
+## second derivatives @code{g2} of (1 - f)/z^d).
 ##
-## @seealso{strip_entropy, ball_entropy, strip_mutual_information}
+## @seealso{strip_entropy, ball_entropy, strip_mutual_information,
+## entanglement_velocity, butterfly_velocity}
 ## @end deftypefn
 
 function bg = ads_background (d, kind, varargin)
@@ -50,16 +66,14 @@ function bg = ads_background (d, kind, varargin)
     print_usage ();
   endif
   d = __holent_scalar__ (fn, "D", d, "positive");
-  if (d != round (d) || d < 3 || d > 12)
-    error ("holent:domain", "%s: D must be an integer from 3 to 12, got %g", fn, d);
-  endif
   kinds = {"vacuum", "black_brane", "tabulated"};
   if (! ischar (kind) || ! isrow (kind) || ! any (strcmpi (kind, kinds)))
     error ("holent:option", "%s: KIND must be one of: %s", fn, strjoin (kinds, ", "));
   endif
   kind = lower (kind);
-  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f"}, varargin);
-  own = struct ("vacuum", {{}}, "black_brane", {{"zh", "T"}}, "tabulated", {{"z", "f"}});
+  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max"}, varargin);
+  own = struct ("vacuum", {{}}, "black_brane", {{"zh", "T"}},
+                "tabulated", {{"z", "f", "noise", "z_max"}});
   given = fieldnames (o);
   for k = 1:numel (given)
     if (! any (strcmp (given{k}, [{"ell", "G", "cutoff"}, own.(kind)])))
@@ -77,69 +91,54 @@ function bg = ads_background (d, kind, varargin)
   if (isfield (o, "cutoff"))
     cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");
   endif
-  bg = struct ("dimension", d, "kind", kind, "ell", ell, "G", G,
-               "cutoff", cutoff, "zh", Inf, "horizon", false, "T", 0,
-               "entropy_density", 0, "energy_density", 0, "m", 0,
-               "z_max", Inf, "z", zeros (0, 1), "f", zeros (0, 1));
+  args = {d, kind, ell, G, cutoff};
   switch (kind)
     case "black_brane"
       if (isfield (o, "zh") == isfield (o, "T"))
         error ("holent:option", "%s: the black brane needs exactly one of 'zh' or 'T'", fn);
       elseif (isfield (o, "zh"))
-        zh = __holent_scalar__ (fn, "zh", o.zh, "positive");
+        args(end+1:end+2) = {"zh", __holent_scalar__(fn, "zh", o.zh, "positive")};
       else
-        zh = d / (4 * pi * __holent_scalar__ (fn, "T", o.T, "positive"));
+        args(end+1:end+2) = {"T", __holent_scalar__(fn, "T", o.T, "positive")};
       endif
-      bg.zh = zh;
-      bg.m = 1 / zh^d;
-      fph = -d / zh;
     case "tabulated"
-      if (! isfield (o, "z") || ! isfield (o, "f"))
-        error ("holent:option", "%s: the tabulated kind needs 'z' and 'f'", fn);
+      if (! isfield (o, "f") || ! (isfield (o, "z") || isfield (o, "z_max")))
+        error ("holent:option", "%s: the tabulated kind needs 'z' and 'f' (or 'f' a function handle and 'z_max')", fn);
       endif
-      z = __holent_array__ (fn, "z", o.z);
-      f = __holent_array__ (fn, "f", o.f);
-      if (! isvector (z) || ! isvector (f) || numel (z) != numel (f) || numel (z) < 5)
-        error ("holent:domain", "%s: 'z' and 'f' must be vectors of equal length >= 5", fn);
+      if (isfield (o, "z"))
+        z = __holent_array__ (fn, "z", o.z);
+      else
+        z = linspace (0, __holent_scalar__ (fn, "z_max", o.z_max, "positive"), 4001)';
       endif
-      z = z(:);  f = f(:);
-      if (z(1) != 0 || any (diff (z) <= 0))
-        error ("holent:domain", "%s: 'z' must start at 0 and increase strictly", fn);
-      endif
-      if (abs (f(1) - 1) > 1e-10)
-        error ("holent:domain", "%s: 'f' must be 1 at z = 0 (the AdS boundary), got %g", fn, f(1));
-      endif
-      try
-        [zh, fph, m] = __holent_hd__ ("tabulated", d, z, f);
-      catch err
-        k = regexp (err.message, 'F\((\d+)\)', "tokens", "once");
-        if (! isempty (k))
-          error ("holent:domain",
-                 "%s: f - 1 must vanish like z^%d at the boundary (sample %s, z = %g)",
-                 fn, d, k{1}, z(str2double (k{1})));
+      if (is_function_handle (o.f))
+        try
+          f = o.f (z);
+        catch err
+          error ("holent:option", "%s: the function handle 'f' failed on the grid: %s", fn, err.message);
+        end_try_catch
+        if (! isreal (f) || ! isnumeric (f) || numel (f) != numel (z))
+          error ("holent:option", "%s: the function handle 'f' must return real values of the grid's size", fn);
         endif
-        __holent_rethrow__ (err, "__holent_hd__", fn);
-      end_try_catch
-      bg.z = z;  bg.f = f;  bg.z_max = z(end);  bg.zh = zh;  bg.m = m;
+        f = double (f);
+      else
+        f = __holent_array__ (fn, "f", o.f);
+      endif
+      if (! isvector (z) || ! isvector (f) || numel (z) != numel (f))
+        error ("holent:domain", "%s: 'z' and 'f' must be vectors of equal length", fn);
+      endif
+      noise = 0;
+      if (isfield (o, "noise"))
+        noise = __holent_scalar__ (fn, "noise", o.noise, "positive");
+      endif
+      args(end+1:end+3) = {z(:), f(:), noise};
   endswitch
-  bg.energy_density = (d - 1) * ell^(d-1) * bg.m / (16 * pi * G);
-  if (isfinite (bg.zh))
-    bg.horizon = true;
-    bg.T = abs (fph) / (4 * pi);
-    bg.entropy_density = ell^(d-1) / (4 * G * bg.zh^(d-1));
-  endif
-  if (! all (isfinite ([bg.m, bg.energy_density, bg.entropy_density, bg.T])))
-    txt = cellfun (@(f) sprintf ("%s = %g", f, o.(f)),
-                   intersect (fieldnames (o), {"ell", "G", "zh", "T"}),
-                   "uniformoutput", false);
-    error ("holent:domain",
-           "%s: %s: the energy or entropy density of this background is out of double precision range",
-           fn, strjoin ([{sprintf("D = %d", d)}, txt(:)'], ", "));
-  endif
-  if (bg.horizon)
-    if (cutoff > 1e-2 * bg.zh)
-      warning ("holent:cutoff", "%s: cutoff %g is not small against zh = %g", fn, cutoff, bg.zh);
-    endif
+  try
+    bg = __holent_hdbg__ (args{:});
+  catch err
+    __holent_rethrow__ (err, "__holent_hdbg__", fn);
+  end_try_catch
+  if (bg.horizon && cutoff > 1e-2 * bg.zh)
+    warning ("holent:cutoff", "%s: cutoff %g is not small against zh = %g", fn, cutoff, bg.zh);
   endif
 endfunction
 
@@ -187,8 +186,9 @@ endfunction
 %!error <does not apply> ads_background (4, "vacuum", "zh", 1)
 %!error <needs 'z' and 'f'> ads_background (4, "tabulated", "z", 0:4)
 %!error <equal length> ads_background (4, "tabulated", "z", 0:4, "f", ones (1, 4))
-%!error <start at 0> ads_background (4, "tabulated", "z", 1:5, "f", ones (1, 5))
-%!error <must be 1 at z = 0> ads_background (4, "tabulated", "z", 0:4, "f", 2 * ones (1, 5))
+%!error <z\(1\) = 0 < z\(2\)> ads_background (4, "tabulated", "z", 1:12, "f", ones (1, 12))
+%!error <must be 1 at z = 0> ads_background (4, "tabulated", "z", 0:11, "f", 2 * ones (1, 12))
+%!error <too few samples> ads_background (4, "tabulated", "z", 0:5, "f", ones (1, 6))
 %!error <vanish like z\^4> ads_background (4, "tabulated", "z", linspace (0, 1, 50), "f", 1 - linspace (0, 1, 50).^3)
 %!error <positive> ads_background (4, "black_brane", "zh", -1)
 %!error <NaN> ads_background (4, "tabulated", "z", [0 1 2 NaN 4], "f", ones (1, 5))

@@ -34,14 +34,18 @@ function [S, info] = ball_entropy (bg, R)
   if (nargin != 2)
     print_usage ();
   endif
-  __holent_check_hd__ (fn, bg);
   R = __holent_array__ (fn, "R", R);
   k = find (! (R(:) > 0), 1);
   if (! isempty (k))
     error ("holent:domain", "%s: R(%d) = %g must be a positive radius", fn, k, R(k));
   endif
   try
-    [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, R);
+    if (nargout > 1)
+      [S, fin, del, zs, reach, acc] = __holent_hd__ ("ball", bg, R);
+    else
+      [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, R);
+      acc = [];
+    endif
   catch err
     __holent_rethrow__ (err, "__holent_hd__", fn);
   end_try_catch
@@ -56,7 +60,7 @@ function [S, info] = ball_entropy (bg, R)
              fn, nnz (R(:) <= 2 * bg.cutoff), bg.cutoff);
   endif
   info = struct ("finite", fin, "delta", del, "z_star", zs,
-                 "divergence", S - fin, "reach", reach);
+                 "divergence", S - fin, "reach", reach, "accuracy", acc);
 endfunction
 
 %!function A = hemi (d, R, eps)

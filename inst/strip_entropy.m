@@ -31,6 +31,13 @@
 ## brane, the turning point within 1e-250 zh of the horizon, hundreds of zh;
 ## for a tabulated f, the turning point at z_max, or within 1e-30 zh of its
 ## horizon, some tens of zh).
+## @item accuracy
+## for a tabulated f, the error of @code{finite} (and @code{delta}) that
+## the accuracy of its data allows: the change of @code{finite} when 1 - f
+## is scaled by 1 + rho, rho its relative accuracy (the samples' noise,
+## or the error of m, see doc/higher_dimensional.md); Inf where that
+## background cannot reach the size; 0 for analytic f.  Computed when
+## @var{info} is requested (one more solve).
 ## @end table
 ## Wider strips raise @code{holent:reach}.  If the width of the extremal
 ## surfaces is not monotonic in z* (possible for a tabulated f), the one of
@@ -44,7 +51,6 @@ function [S, info] = strip_entropy (bg, l, varargin)
   if (nargin < 2)
     print_usage ();
   endif
-  __holent_check_hd__ (fn, bg);
   l = __holent_array__ (fn, "L", l);
   o = __holent_opts__ (fn, {"length"}, varargin);
   Lp = 1;
@@ -56,7 +62,12 @@ function [S, info] = strip_entropy (bg, l, varargin)
     error ("holent:domain", "%s: L(%d) = %g must be a positive width", fn, k, l(k));
   endif
   try
-    [S, fin, del, zs, reach] = __holent_hd__ ("strip", bg, l, Lp);
+    if (nargout > 1)
+      [S, fin, del, zs, reach, acc] = __holent_hd__ ("strip", bg, l, Lp);
+    else
+      [S, fin, del, zs, reach] = __holent_hd__ ("strip", bg, l, Lp);
+      acc = [];
+    endif
   catch err
     __holent_rethrow__ (err, "__holent_hd__", fn);
   end_try_catch
@@ -73,7 +84,7 @@ function [S, info] = strip_entropy (bg, l, varargin)
              fn, nnz (zs(:) <= 2 * bg.cutoff), bg.cutoff);
   endif
   info = struct ("finite", fin, "delta", del, "z_star", zs,
-                 "divergence", div, "reach", reach);
+                 "divergence", div, "reach", reach, "accuracy", acc);
 endfunction
 
 %!test

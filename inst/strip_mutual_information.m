@@ -27,7 +27,6 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   if (nargin < 4)
     print_usage ();
   endif
-  __holent_check_hd__ (fn, bg);
   l1 = __holent_array__ (fn, "L1", l1);
   s = __holent_array__ (fn, "S", s);
   l2 = __holent_array__ (fn, "L2", l2);
@@ -63,13 +62,13 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
 endfunction
 
 function g = gain_ (bg, a, b, c, Lp)
-  warning ("off", "holent:cutoff", "local");  # finite parts only
+  ## finite parts only: the stored background is reused, nothing refitted
   n = numel (a);
   try
-    [~, i] = strip_entropy (bg, [a(:); c(:); b(:); a(:) + b(:) + c(:)], "length", Lp);
+    [~, F] = __holent_hd__ ("strip", bg, [a(:); c(:); b(:); a(:) + b(:) + c(:)], Lp);
   catch err
-    ## name this function, and the argument behind strip_entropy's L(k)
-    msg = regexprep (err.message, '^strip_entropy: ', '');
+    ## name this function, and the argument behind the gateway's L(k)
+    msg = regexprep (err.message, '^(__holent_hd__: )+', '');
     k = regexp (msg, '^L\((\d+)\)', "tokens", "once");
     if (! isempty (k))
       k = str2double (k{1});
@@ -79,7 +78,7 @@ function g = gain_ (bg, a, b, c, Lp)
     endif
     error (err.identifier, "strip_mutual_information: %s", msg);
   end_try_catch
-  F = reshape (i.finite, n, 4);
+  F = reshape (F, n, 4);
   g = reshape (F(:,1) + F(:,2) - F(:,3) - F(:,4), size (a));
 endfunction
 

@@ -1,14 +1,12 @@
 /* __holent_bgcheck__ (BG): return nothing when BG is a well-formed
  * background struct made by ads3_background, else raise
- * holent:background with a message naming the field.
- * __holent_bgcheck__ (BG, "hd"): the same for ads_background structs.
- * The wrappers' private __holent_check_bg__ and __holent_check_hd__ call
- * it: one compiled call checks every field the wrappers and gateways read
+ * holent:background with a message naming the field.  (AdS_{d+1}
+ * backgrounds are checked by the core when a gateway unpacks them.)
+ * The wrappers' private __holent_check_bg__ calls it: one compiled call checks every field the wrappers and gateways read
  * in a fraction of the time Octave code takes.  GPL-3.0-or-later.  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
-#include "holent_gw_hd.h"
 
 static const char FN[] = "__holent_bgcheck__";
 
@@ -121,38 +119,15 @@ check_ads3 (const mxArray *s)
   holent_gw_bg (s, FN, &bg);
 }
 
-static void
-check_hd (const mxArray *s)
-{
-  static const char M[] = "ads_background";
-  holent_hd_bg bg;
-  double zh = num (s, "zh", M);
-  if (!(zh > 0))
-    mexErrMsgIdAndTxt ("holent:background",
-                       "BG.zh must be positive (Inf: no horizon)");
-  flag (s, "horizon", M);
-  /* Builds (and here frees) the spline of a tabulated background.  */
-  holent_gw_hd_bg (s, FN, &bg);
-  holent_hd_bg_free (&bg);
-}
-
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  char fam[4] = "";
   (void) plhs;
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 0, nrhs, 1, 2);
-  if (nrhs > 1)
-    holent_gw_string (prhs[1], FN, "FAMILY", fam, sizeof fam);
-  if (nrhs > 1 && strcmp (fam, "hd") != 0)
-    mexErrMsgIdAndTxt ("holent:invalid", "FAMILY must be \"hd\"");
+  holent_gw_nargs (FN, nlhs, 0, nrhs, 1, 1);
   if (!mxIsStruct (prhs[0]) || mxGetNumberOfElements (prhs[0]) != 1)
     mexErrMsgIdAndTxt ("holent:background",
-                       "BG must be a scalar background struct made by %s",
-                       nrhs > 1 ? "ads_background" : "ads3_background");
-  if (nrhs > 1)
-    check_hd (prhs[0]);
-  else
-    check_ads3 (prhs[0]);
+                       "BG must be a scalar background struct made by "
+                       "ads3_background");
+  check_ads3 (prhs[0]);
 }

@@ -16,15 +16,17 @@
 %!error <real, full, double> __holent_hd__ ("ball", bg, true)
 %!error <LPERP must be a scalar> __holent_hd__ ("strip", bg, 1, [1 2])
 %!error <scalar struct> __holent_hd__ ("strip", [bg bg], 1, 1)
-%!error <missing field 'kind'> __holent_hd__ ("strip", rmfield (bg, "kind"), 1, 1)
+%!error <field 'kind' is missing> __holent_hd__ ("strip", rmfield (bg, "kind"), 1, 1)
 %!error <unknown BG.kind> __holent_hd__ ("strip", setfield (bg, "kind", "foam"), 1, 1)
 %!error <BG.dimension must be an integer> __holent_hd__ ("strip", setfield (bg, "dimension", 1e6), 1, 1)
 %!error <inconsistent parameters> __holent_hd__ ("strip", setfield (bg, "zh", -1), 1, 1)
-%!error <differ in length> __holent_hd__ ("strip", setfield (bt, "f", bt.f(1:end-1)), 1, 1)
-%!error <inconsistent parameters> __holent_hd__ ("strip", setfield (bt, "z", flipud (bt.z)), 1, 1)
+%!error <differ in length> __holent_hd__ ("strip", setfield (bt, "spline", setfield (bt.spline, "g", bt.spline.g(1:end-1))), 1, 1)
+%!error <from BG.spline.z> __holent_hd__ ("strip", setfield (bt, "spline", setfield (bt.spline, "z", flipud (bt.spline.z))), 1, 1)
+%!error <inconsistent parameters> __holent_hd__ ("strip", setfield (bt, "spline", setfield (bt.spline, "g2", NaN * bt.spline.g2)), 1, 1)
+%!error <be the background's horizon> __holent_hd__ ("strip", setfield (bt, "zh", 0.9), 1, 1)
 %!error <L\(2\)> __holent_hd__ ("strip", bg, [1 -1], 1)
 %!error <beyond the largest radius> __holent_hd__ ("ball", bt, 1e3)
-%!error <tabulated needs> __holent_hd__ ("tabulated", 4, [0 1 2 3 4])
+%!error <unknown OP> __holent_hd__ ("tabulated", 4, [0 1 2 3 4])
 
 %!test
 %! ## empty input, and outputs of the input's shape

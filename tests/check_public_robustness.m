@@ -423,7 +423,7 @@
 %!        "__holent_thermo__", {"hawking_page", 0.2, 2*pi}, 2;
 %!        "__holent_hd__", {"strip", bh, [0.5 1], 1}, 2;
 %!        "__holent_hd__", {"ball", bh, 0.5}, 2;
-%!        "__holent_hd__", {"tabulated", 4, z, 1 - z.^4}, 2;
+%!        "__holent_hdbg__", {4, "tabulated", 1, 1, 1e-6, z, 1 - z.^4, 0}, 1;
 %!        "__holent_cone__", {"mincut", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2;
 %!        "__holent_bcft__", {"bg", "f", "bcft", "interval", 2, 1e-6, 1, [0.1 0.2], false, 1, 1, "dominant"}, 2;
 %!        "__holent_bcft__", {"entropy", "rt_entropy", "A", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;

@@ -378,3 +378,20 @@ holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *ws,
     }
   return HOLENT_SUCCESS;
 }
+
+static int
+ball_fin (const holent_hd_bg *bg, void *ctx, size_t n, const double *R,
+          double *S, double *fin)
+{
+  return holent_ball_entropy (bg, ctx, n, R, S, fin, NULL, NULL, NULL, NULL);
+}
+
+int
+holent_ball_accuracy (const holent_hd_bg *bg, holent_ball_workspace *ws,
+                      size_t n, const double *R, const double *fin,
+                      double *acc)
+{
+  if (ws == NULL)
+    return HOLENT_EINVAL;
+  return holent_hd_size_accuracy (bg, ball_fin, ws, n, R, fin, acc);
+}

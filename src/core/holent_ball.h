@@ -25,6 +25,12 @@ int holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *w,
                          double *delta, double *ztip, size_t *bad,
                          double *reach);
 
+/* Accuracy of the finite parts fin[i] that the data of a tabulated f
+ * allow (as holent_strip_accuracy).  */
+int holent_ball_accuracy (const holent_hd_bg *bg, holent_ball_workspace *w,
+                          size_t n, const double *R, const double *fin,
+                          double *acc);
+
 /* The hemisphere's constant C_d (finite part per ell^(d-1)
  * Omega_{d-2}/(4G)).  */
 double holent_ball_vacuum_c (int d);

@@ -321,3 +321,43 @@ holent_hd_size_solve (const holent_hd_bg *bg, holent_hd_size_workspace *ws,
   return found ? HOLENT_SUCCESS : HOLENT_ENOCONV;
 }
 
+
+int
+holent_hd_size_accuracy (const holent_hd_bg *bg,
+                         int (*solve) (const holent_hd_bg *, void *, size_t,
+                                       const double *, double *, double *),
+                         void *ctx, size_t n, const double *s,
+                         const double *fin, double *acc)
+{
+  holent_hd_bg bp;
+  if (bg == NULL || solve == NULL
+      || (n > 0 && (s == NULL || fin == NULL || acc == NULL)))
+    return HOLENT_EINVAL;
+  if (bg->kind != HOLENT_HD_TABULATED)
+    {
+      for (size_t i = 0; i < n; i++)
+        acc[i] = 0;
+      return HOLENT_SUCCESS;
+    }
+  int st = holent_hd_bg_perturbed (bg, &bp);
+  if (st)
+    return st;
+  double *Sp = malloc (2 * n * sizeof *Sp + 1), *fp = Sp + n;
+  if (Sp == NULL)
+    st = HOLENT_ENOMEM;
+  int all = st ? st : solve (&bp, ctx, n, s, Sp, fp);
+  for (size_t i = 0; !st && !all && i < n; i++)
+    acc[i] = fabs (fp[i] - fin[i]);
+  /* else one size at a time: one the perturbed data cannot reach gets
+     Inf */
+  for (size_t i = 0; !st && all && i < n; i++)
+    {
+      int s1 = solve (&bp, ctx, 1, s + i, Sp + i, fp + i);
+      if (s1 == HOLENT_ENOMEM)
+        st = s1;
+      acc[i] = s1 ? INFINITY : fabs (fp[i] - fin[i]);
+    }
+  free (Sp);
+  holent_hd_bg_free (&bp);
+  return st;
+}

@@ -53,4 +53,16 @@ int holent_hd_size_solve (const holent_hd_bg *bg, holent_hd_size_workspace *ws,
                           double *fin, double *cut, double *extra,
                           double *zs);
 
+/* Accuracy of finite parts fin[i] of sizes s[i] that the data of a
+ * tabulated f allow: |fin' - fin| with fin' = solve (bg', ...) in the
+ * perturbed background holent_hd_bg_perturbed (bg) (Inf where bg'
+ * cannot reach s[i]); 0 for analytic f.  solve (bg, ctx, n, s, S, fin)
+ * is the strip or ball solver.  */
+int holent_hd_size_accuracy (const holent_hd_bg *bg,
+                             int (*solve) (const holent_hd_bg *, void *,
+                                           size_t, const double *, double *,
+                                           double *),
+                             void *ctx, size_t n, const double *s,
+                             const double *fin, double *acc);
+
 #endif /* HOLENT_HD_SIZE_H */

@@ -25,6 +25,15 @@ int holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *w,
                           double *fin, double *delta, double *zstar,
                           size_t *bad, double *reach);
 
+/* Accuracy of the finite parts fin[i] (from holent_strip_entropy) that
+ * the data of a tabulated f allow: |fin' - fin| with fin' computed in
+ * holent_hd_bg_perturbed (bg) (first order in the data's error; Inf
+ * where the perturbed background cannot reach l[i]); 0 for analytic f.
+ * Costs one more solve per width.  */
+int holent_strip_accuracy (const holent_hd_bg *bg, holent_strip_workspace *w,
+                           double Lperp, size_t n, const double *l,
+                           const double *fin, double *acc);
+
 /* Vacuum closed forms: width/zstar of the strip, and its finite part per
  * unit 2 ell^(d-1) Lperp^(d-2)/(4G) times zstar^(d-2).  */
 double holent_strip_ratio (int d);

@@ -122,7 +122,7 @@ test_strip (void)
         zz[i] = 3.0 * i / (N - 1);
         ff[i] = 1;
       }
-    HT_STATUS (holent_hd_bg_tabulated (&bt, 5, N, zz, ff, 1.3, 0.7, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 5, N, zz, ff, 0, 1.3, 0.7, 1e-3, &bad), HOLENT_SUCCESS);
     HT_STATUS (holent_hd_bg_init (&bv, 5, HOLENT_HD_VACUUM, 0, 1.3, 0.7, 1e-3), HOLENT_SUCCESS);
     double lv[3] = { 0.1, 1, 1.8 }, St[3], ft[3], dt[3], zt[3], Sv[3], fv[3], dv[3], zv[3];
     HT_STATUS (holent_strip_entropy (&bt, w, 2, 3, lv, St, ft, dt, zt, &bad, &reach), HOLENT_SUCCESS);
@@ -171,7 +171,7 @@ test_strip (void)
         zz[i] = 1.3 * i / (N - 1);
         ff[i] = 1 - gsl_pow_int (zz[i], 4);
       }
-    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 1, 1, 1e-4, &bad), HOLENT_SUCCESS);
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 0, 1, 1, 1e-4, &bad), HOLENT_SUCCESS);
     double St[4], ft[4], dt[4], zt[4];
     HT_STATUS (holent_strip_entropy (&bt, w, 1, 4, l, St, ft, dt, zt, &bad, &reach), HOLENT_SUCCESS);
     for (int i = 0; i < 4; i++)
@@ -202,7 +202,7 @@ test_strip (void)
         zz[i] = 4.0 * i / (N - 1);
         ff[i] = 1 - 1.96 * gsl_pow_int (zz[i], 4) / (1 + gsl_pow_int (zz[i], 8));
       }
-    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 0, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
     HT_CHECK (isinf (bt.zh), "no horizon");
     double lj[2] = { 3.0, 3.2 }, Sj[2], fj[2], zj[2];
     HT_STATUS (holent_strip_entropy (&bt, w, 1, 2, lj, Sj, fj, NULL, zj, &bad, &reach), HOLENT_SUCCESS);
