@@ -369,8 +369,8 @@ boundary_fit (int d, size_t n, const double *z, const double *f,
 }
 
 /* f - 1 = O(z^d): with the powers z^1 ... z^(d-1) added to the chosen
-   fit, none may be significant (|a_j| above 5 standard errors and above
-   1e-2 of the largest |1 - f| in the window), in any window from the
+   fit, none may be significant (|a_j| above 8 standard errors, 10 times
+   the noise and 1e-2 of the largest |1 - f| in the window), in any window from the
    smallest with enough samples up to the fit's: a low power is most
    visible near the boundary, noise least in wide windows.  */
 static int
@@ -397,7 +397,9 @@ boundary_check (int d, size_t n, const double *z, const double *f,
           for (int j = 1; j < d; j++)
             {
               double a = c[p + j], s = se[p + j];
-              if (fabs (a) > 5 * s && fabs (a) > 1e-2 * scale)
+              /* (a is the power's share at z = zw) */
+              if (fabs (a) > 8 * s && fabs (a) > 10 * sigma
+                  && fabs (a) > 1e-2 * scale)
                 {
                   /* first sample where the power z^j is felt */
                   for (i = 1; i < np && fabs (a) * pow (z[i] / zw, j) < 5 * sigma; i++)

@@ -166,6 +166,16 @@ table_build (const holent_hd_bg *bg, holent_hd_size_workspace *ws,
       if (y > yhi)
         y = yhi;
       v = size_at (y, &p);
+      /* a solver failing next to the horizon (noisy or extremal data)
+         ends the table where it still worked: smaller sizes stay
+         available, larger ones are beyond reach */
+      if (p.status && n >= 2 && full
+          && (p.status == HOLENT_ENOCONV || p.status == HOLENT_EDOM))
+        {
+          yhi = ws->ty[n - 1];
+          p.status = 0;
+          break;
+        }
       if (p.status)
         return p.status;
       if ((st = table_push (ws, n, y, v)))

@@ -144,7 +144,7 @@ qag (holent_strip_workspace *w, double (*fn) (double, void *), spar *p,
   /* A tabulated f is a spline through data of accuracy noise: asking
      more of the quadrature than the data holds only costs subdivisions
      on the spline's knots (and fails on noisy data).  */
-  double rel = fmax (QAG_EPSREL, 0.1 * p->bg->noise);
+  double rel = fmax (QAG_EPSREL, p->bg->noise);
   int st = gsl_integration_qag (&F, a, b, QAG_EPSABS, rel, QAG_LIMIT,
                                 GSL_INTEG_GAUSS21, w->iw, out, &err);
   /* Roundoff in f (tabulated, next to a horizon) can stop QAG short of

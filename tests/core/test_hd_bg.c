@@ -107,11 +107,79 @@ test_evaluators (void)
   HT_CLOSE (holent_hd_bg_fval (&bg, 5, 0), 1.0, 0);
 }
 
+/* Tabulated data: the charged brane f = 1 - (1+q) z^4 + q z^6 (zh = 1,
+   f'(1) = 2q - 4, m = 1 + q; derived from f), rebuilt from its spline,
+   perturbed, extremal at q = 2, a table ending at the horizon.  */
+static void
+test_tabulated (void)
+{
+  enum { N = 600 };
+  static double z[N], f[N];
+  holent_hd_bg bg, br, bp;
+  size_t bad = 99;
+  for (int qi = 0; qi < 2; qi++)
+    {
+      double q = qi ? 2.0 : 1.5;
+      for (int i = 0; i < N; i++)
+        {
+          z[i] = 1.2 * i / (N - 1);
+          f[i] = 1 - (1 + q) * gsl_pow_int (z[i], 4) + q * gsl_pow_int (z[i], 6);
+        }
+      HT_STATUS (holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+      HT_CLOSE (bg.zh, 1.0, 1e-9);
+      HT_CLOSE (bg.m, 1 + q, 1e-8);
+      HT_CHECK (fabs (bg.m - (1 + q)) <= 3 * bg.m_err, "m error %g", bg.m_err);
+      HT_CHECK (bg.extremal == (q == 2.0), "extremal %d at q = %g", bg.extremal, q);
+      HT_CHECK (fabs (bg.T - fabs (2 * q - 4) / (4 * M_PI)) <= bg.T_err + 1e-15, "T %g", bg.T);
+      HT_CHECK (bg.noise > 0 && bg.noise < 1e-9, "noise %g", bg.noise);
+      /* rebuilt from its spline: the same background, no refit */
+      HT_STATUS (holent_hd_bg_spline (&br, 4, bg.n, bg.tz, bg.tg, bg.tg2, bg.noise, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+      HT_CHECK (br.zh == bg.zh && br.fp_h == bg.fp_h && br.m == bg.m && br.extremal == bg.extremal, "rebuilt");
+      /* perturbed by the data's accuracy: the horizon moves a little */
+      HT_STATUS (holent_hd_bg_perturbed (&bg, &bp), HOLENT_SUCCESS);
+      HT_CHECK (fabs (bp.zh - bg.zh) < 1e-4 && bp.m > bg.m, "perturbed zh %g m %g", bp.zh, bp.m);
+      holent_hd_bg_free (&bp);
+      holent_hd_bg_free (&br);
+      holent_hd_bg_free (&bg);
+    }
+  /* the table ends at the horizon: f = 1 - z^4 exp(z^2 - 1), f'(1) = -6 */
+  for (int i = 0; i < N; i++)
+    {
+      z[i] = (double) i / (N - 1);
+      f[i] = 1 - gsl_pow_int (z[i], 4) * exp (z[i] * z[i] - 1);
+    }
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad), HOLENT_SUCCESS);
+  HT_CHECK (bg.zh == 1.0, "zh %g", bg.zh);
+  HT_CLOSE (bg.fp_h, -6.0, 1e-6);
+  holent_hd_bg_free (&bg);
+  /* errors: a low power, too few samples, spline arrays */
+  for (int i = 0; i < N; i++)
+    f[i] = 1 - 1e-2 * z[i] * z[i] - gsl_pow_int (z[i], 4);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_CHECK (bg.why == HOLENT_HD_WHY_BOUNDARY && bad > 0 && bad < N, "why %d bad %zu", bg.why, bad);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, 6, z, f, 0, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_CHECK (bg.why == HOLENT_HD_WHY_FEW, "why %d", bg.why);
+  HT_STATUS (holent_hd_bg_tabulated (&bg, 4, N, z, f, NAN, 1, 1, 1e-3, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_spline (&bg, 4, N, z, f, NULL, 0, 1, 1, 1e-3, &bad), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_spline (&bg, 4, N, z, f, f, -1, 1, 1, 1e-3, &bad), HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_perturbed (NULL, &bg), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&br, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
+  HT_STATUS (holent_hd_bg_perturbed (&br, &bg), HOLENT_EINVAL);
+  HT_STATUS (holent_hd_bg_init (&br, 4, HOLENT_HD_BRANE, 1e-300, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_CHECK (br.why == HOLENT_HD_WHY_RANGE, "range");
+  double zh;
+  HT_STATUS (holent_hd_brane_zh (4, 1 / M_PI, &zh), HOLENT_SUCCESS);
+  HT_CLOSE (zh, 1.0, 1e-15);
+  HT_STATUS (holent_hd_brane_zh (4, -1, &zh), HOLENT_EDOM);
+  HT_STATUS (holent_hd_brane_zh (4, NAN, &zh), HOLENT_EINVAL);
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
   test_init_errors ();
   test_evaluators ();
+  test_tabulated ();
   return HT_DONE ();
 }

@@ -214,6 +214,32 @@ test_strip (void)
     HT_STATUS (holent_strip_entropy (&bt, w, 1, 1, lr + 1, Sj, NULL, NULL, NULL, &bad, NULL), HOLENT_EDOM);
     holent_hd_bg_free (&bt);
   }
+  /* accuracy: 0 for analytic f; for rounded data small and covering the
+     difference to the analytic brane */
+  {
+    enum { N = 700 };
+    static double zz[N], ff[N];
+    holent_hd_bg bt, bb;
+    double lw[2] = { 0.5, 2 }, Sa[2], fa[2], acc[2], Sb[2], fb[2];
+    HT_STATUS (holent_hd_bg_init (&bb, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-4), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_entropy (&bb, w, 1, 2, lw, Sb, fb, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_accuracy (&bb, w, 1, 2, lw, fb, acc), HOLENT_SUCCESS);
+    HT_CHECK (acc[0] == 0 && acc[1] == 0, "analytic accuracy");
+    for (int i = 0; i < N; i++)
+      {
+        zz[i] = 1.2 * i / (N - 1);
+        ff[i] = round ((1 - gsl_pow_int (zz[i], 4)) * 1e7) / 1e7;  /* 7 decimals */
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, N, zz, ff, 0, 1, 1, 1e-4, &bad), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 2, lw, Sa, fa, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_accuracy (&bt, w, 1, 2, lw, fa, acc), HOLENT_SUCCESS);
+    for (int i = 0; i < 2; i++)
+      HT_CHECK (acc[i] > 0 && acc[i] < 1e-4 && fabs (fa[i] - fb[i]) <= 5 * acc[i],
+                "accuracy %g, error %g", acc[i], fabs (fa[i] - fb[i]));
+    HT_STATUS (holent_strip_accuracy (&bt, NULL, 1, 2, lw, fa, acc), HOLENT_EINVAL);
+    HT_STATUS (holent_strip_accuracy (&bt, w, 1, 2, lw, NULL, acc), HOLENT_EINVAL);
+    holent_hd_bg_free (&bt);
+  }
   holent_strip_workspace_free (w);
 }
 
