@@ -1,6 +1,7 @@
 /* RT surfaces in AdS_{d+1}:
  *   [S, FIN, DELTA, ZSTAR, REACH, ACC] = __holent_hd__ ("strip", BG, L, LPERP)
  *   [S, FIN, DELTA, ZTIP, REACH, ACC]  = __holent_hd__ ("ball", BG, R)
+ *   [VE, VB, ZM] = __holent_hd__ ("velocity", BG)
  * ACC: accuracy of FIN (and DELTA) allowed by a tabulated f's data.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
@@ -27,6 +28,34 @@ fail (int st, holent_hd_bg *bg, holent_strip_workspace *sw,
   holent_gw_fail (st, FN, name, bad);
 }
 
+/* [VE, VB, ZM] = __holent_hd__ ("velocity", BG) */
+static void
+velocity (int nlhs, mxArray *plhs[], const mxArray *bgs)
+{
+  holent_hd_bg bg;
+  double vE, vB, zm, zneed = NAN;
+  holent_gw_hd_bg (bgs, FN, &bg);
+  int st = holent_hd_velocities (&bg, &vE, &zm, &vB, &zneed);
+  double zh = bg.zh;
+  holent_hd_bg_free (&bg);
+  if (st == HOLENT_EDOM && !isfinite (zh))
+    mexErrMsgIdAndTxt ("holent:domain",
+                       "BG has no horizon: the velocities need one");
+  if (st == HOLENT_EDOM && isfinite (zneed))
+    mexErrMsgIdAndTxt ("holent:domain",
+                       "the samples of f must extend past the maximum of "
+                       "-f(z)/z^(2d-2) inside the horizon (still growing at "
+                       "z_max = %g): tabulate f further beyond zh = %g",
+                       zneed, zh);
+  if (st)
+    holent_gw_fail (st, FN, "BG", (size_t) -1);
+  plhs[0] = mxCreateDoubleScalar (vE);
+  if (nlhs > 1)
+    plhs[1] = mxCreateDoubleScalar (vB);
+  if (nlhs > 2)
+    plhs[2] = mxCreateDoubleScalar (zm);
+}
+
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
@@ -35,8 +64,15 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   size_t n, bad = (size_t) -1;
   double reach = INFINITY, Lperp = 1;
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 6, nrhs, 3, 4);
+  holent_gw_nargs (FN, nlhs, 6, nrhs, 2, 4);
   holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
+  if (strcmp (op, "velocity") == 0)
+    {
+      if (nrhs != 2)
+        mexErrMsgIdAndTxt ("holent:nargs", "wrong number of inputs for %s", op);
+      velocity (nlhs, plhs, prhs[1]);
+      return;
+    }
   int strip = strcmp (op, "strip") == 0;
   if (!strip && strcmp (op, "ball") != 0)
     mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);

@@ -8,7 +8,9 @@
 
 %!error <OP must be> __holent_hd__ (1, bg, 1, 1)
 %!error <unknown OP> __holent_hd__ ("area", bg, 1, 1)
-%!error <expected 3 to 4 inputs> __holent_hd__ ("strip", bg)
+%!error <wrong number of inputs> __holent_hd__ ("strip", bg)
+%!error <wrong number of inputs> __holent_hd__ ("velocity", bg, 1)
+%!error <no horizon> __holent_hd__ ("velocity", ads_background (4, "vacuum"))
 %!error <wrong number of inputs> __holent_hd__ ("ball", bg, 1, 1)
 %!error <real, full, double> __holent_hd__ ("strip", bg, 1i, 1)
 %!error <real, full, double> __holent_hd__ ("strip", bg, sparse (1), 1)
