@@ -25,7 +25,11 @@ function v = butterfly_velocity (bg)
   if (nargin != 1)
     print_usage ();
   endif
-  [~, v] = __holent_call__ ("__holent_hd__", "velocity", bg);
+  try
+    [~, v] = __holent_hd__ ("velocity", bg);
+  catch err
+    __holent_rethrow__ (err, "__holent_hd__", "butterfly_velocity");
+  end_try_catch
 endfunction
 
 %!test

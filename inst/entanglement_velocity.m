@@ -26,7 +26,11 @@ function [v, info] = entanglement_velocity (bg)
   if (nargin != 1)
     print_usage ();
   endif
-  [v, vB, zm] = __holent_call__ ("__holent_hd__", "velocity", bg);
+  try
+    [v, vB, zm] = __holent_hd__ ("velocity", bg);
+  catch err
+    __holent_rethrow__ (err, "__holent_hd__", "entanglement_velocity");
+  end_try_catch
   info = struct ("z_m", zm, "butterfly", vB);
 endfunction
 
