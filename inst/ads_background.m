@@ -37,6 +37,16 @@
 ## touches zero within the noise, or the last sample when the table ends
 ## there within the noise.  (1 - f)/z^d is interpolated by a cubic spline
 ## clamped at both ends (doc/higher_dimensional.md).
+## @item @qcode{"vaidya"}
+## a global quench: Vaidya-AdS_(d+1), ds^2 = (1/z^2)(-f dv^2 - 2 dv dz +
+## dx^2) with f(v, z) = 1 - s(v) (1 - F(z)), a shell that leaves the
+## boundary at t = 0 into the final state F: the black brane (give
+## @qcode{"zh"} or @qcode{"T"}) or a tabulated f (give @qcode{"z"} and
+## @qcode{"f"}).  s = theta(v) (thin shell, default) or, with
+## @qcode{"shell_width"} w > 0, s = (1 + tanh(v/w))/2.  Strips:
+## @code{strip_entropy (bg, l, "t", t)}; every other function sees the
+## final state.  The fields are those of the final state, with
+## @code{kind} "vaidya", @code{final} (its kind) and @code{shell_width}.
 ## @end table
 ##
 ## Options: @qcode{"ell"} (AdS radius, default 1), @qcode{"G"} (Newton
@@ -66,14 +76,15 @@ function bg = ads_background (d, kind, varargin)
     print_usage ();
   endif
   d = __holent_scalar__ (fn, "D", d, "positive");
-  kinds = {"vacuum", "black_brane", "tabulated"};
+  kinds = {"vacuum", "black_brane", "tabulated", "vaidya"};
   if (! ischar (kind) || ! isrow (kind) || ! any (strcmpi (kind, kinds)))
     error ("holent:option", "%s: KIND must be one of: %s", fn, strjoin (kinds, ", "));
   endif
   kind = lower (kind);
-  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max"}, varargin);
+  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max", "shell_width"}, varargin);
   own = struct ("vacuum", {{}}, "black_brane", {{"zh", "T"}},
-                "tabulated", {{"z", "f", "noise", "z_max"}});
+                "tabulated", {{"z", "f", "noise", "z_max"}},
+                "vaidya", {{"zh", "T", "z", "f", "noise", "z_max", "shell_width"}});
   given = fieldnames (o);
   for k = 1:numel (given)
     if (! any (strcmp (given{k}, [{"ell", "G", "cutoff"}, own.(kind)])))
@@ -92,6 +103,19 @@ function bg = ads_background (d, kind, varargin)
     cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");
   endif
   args = {d, kind, ell, G, cutoff};
+  if (strcmp (kind, "vaidya"))
+    w = 0;
+    if (isfield (o, "shell_width"))
+      w = __holent_scalar__ (fn, "shell_width", o.shell_width, "nonnegative");
+    endif
+    ## the final state: a brane given zh or T, else tabulated
+    if (isfield (o, "zh") || isfield (o, "T"))
+      kind = "black_brane";
+    else
+      kind = "tabulated";
+    endif
+    args(end+1:end+2) = {w, kind};
+  endif
   switch (kind)
     case "black_brane"
       if (isfield (o, "zh") == isfield (o, "T"))

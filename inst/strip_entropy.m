@@ -3,6 +3,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{S} =} strip_entropy (@var{bg}, @var{l})
 ## @deftypefnx {} {[@var{S}, @var{info}] =} strip_entropy (@var{bg}, @var{l}, "length", @var{Lperp})
+## @deftypefnx {} {[@var{S}, @var{info}] =} strip_entropy (@var{bgq}, @var{l}, "t", @var{t})
 ## Ryu-Takayanagi entropy S = Area/(4 G) of a strip of width @var{l} (an
 ## array; outputs have its size) and transverse size @var{Lperp} (default 1)
 ## in the AdS_(d+1) background @var{bg} from @code{ads_background}.
@@ -39,7 +40,21 @@
 ## background cannot reach the size; 0 for analytic f.  Computed when
 ## @var{info} is requested (one more solve).
 ## @end table
-## Wider strips raise @code{holent:reach}.  If the width of the extremal
+## Wider strips raise @code{holent:reach}.
+##
+## After a global quench (@var{bgq} from @code{ads_background (d, "vaidya",
+## ...)}), @code{"t"} gives the boundary times (a vector; the shell leaves the
+## boundary at t = 0) and @var{S} (of the size of @var{t}) is S(t) of one
+## strip of width @var{l}: the extremal surface (z(x), v(x)) in ingoing
+## coordinates is shot from its tip with a GSL ODE solver, the tip found by a
+## two-dimensional root solve onto (l, t) and followed continuously in t;
+## where several extremal surfaces exist (the late branch from the static
+## surface of the final state) the one of least area is taken, and
+## @code{info.jump} marks the times where the minimal surface changed
+## branch.  @var{info} has @code{finite}, @code{z_star}, @code{v_star} (the
+## tip), @code{jump} and @code{divergence}.  Before the quench S(t) is the
+## vacuum strip; once the static strip of the final state lies after the
+## shell (thin shell) it is that strip (doc/higher_dimensional.md, "Quench").  If the width of the extremal
 ## surfaces is not monotonic in z* (possible for a tabulated f), the one of
 ## least area is returned.
 ##
@@ -52,10 +67,14 @@ function [S, info] = strip_entropy (bg, l, varargin)
     print_usage ();
   endif
   l = __holent_array__ (fn, "L", l);
-  o = __holent_opts__ (fn, {"length"}, varargin);
+  o = __holent_opts__ (fn, {"length", "t"}, varargin);
   Lp = 1;
   if (isfield (o, "length"))
     Lp = __holent_scalar__ (fn, "length", o.length, "positive");
+  endif
+  if (isfield (o, "t") || (isstruct (bg) && isfield (bg, "kind") && strcmp (bg.kind, "vaidya")))
+    [S, info] = quench_ (fn, bg, l, Lp, o);
+    return;
   endif
   k = find (! (l(:) > 0), 1);
   if (! isempty (k))
@@ -85,6 +104,25 @@ function [S, info] = strip_entropy (bg, l, varargin)
   endif
   info = struct ("finite", fin, "delta", del, "z_star", zs,
                  "divergence", div, "reach", reach, "accuracy", acc);
+endfunction
+
+function [S, info] = quench_ (fn, bg, l, Lp, o)
+  ## S(t) after a quench (Vaidya): the core follows the branch in t
+  if (! isfield (o, "t"))
+    error ("holent:option", "%s: BG is a quench: give the boundary times 't'", fn);
+  endif
+  if (! (isstruct (bg) && isfield (bg, "kind") && strcmp (bg.kind, "vaidya")))
+    error ("holent:option", "%s: option 't' needs a quench: BG from ads_background (d, \"vaidya\", ...)", fn);
+  endif
+  l = __holent_scalar__ (fn, "L", l, "positive");
+  t = __holent_array__ (fn, "t", o.t);
+  try
+    [S, fin, zs, vs, jump] = __holent_hd__ ("vaidya", bg, l, Lp, t);
+  catch err
+    __holent_rethrow__ (err, "__holent_hd__", fn);
+  end_try_catch
+  info = struct ("finite", fin, "z_star", zs, "v_star", vs, "jump", jump,
+                 "divergence", S(1) - fin(1));
 endfunction
 
 %!test

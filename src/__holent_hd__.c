@@ -2,6 +2,7 @@
  *   [S, FIN, DELTA, ZSTAR, REACH, ACC] = __holent_hd__ ("strip", BG, L, LPERP)
  *   [S, FIN, DELTA, ZTIP, REACH, ACC]  = __holent_hd__ ("ball", BG, R)
  *   [VE, VB, ZM] = __holent_hd__ ("velocity", BG)
+ *   [S, FIN, ZSTAR, VSTAR, JUMP] = __holent_hd__ ("vaidya", BG, L, LPERP, T)
  * ACC: accuracy of FIN (and DELTA) allowed by a tabulated f's data.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
@@ -26,6 +27,52 @@ fail (int st, holent_hd_bg *bg, holent_strip_workspace *sw,
                        "in this background (%g)", name, bad + 1, x[bad],
                        what, reach);
   holent_gw_fail (st, FN, name, bad);
+}
+
+/* [S, FIN, ZSTAR, VSTAR, JUMP] = __holent_hd__ ("vaidya", BG, L, LPERP, T) */
+static void
+vaidya (int nlhs, mxArray *plhs[], const mxArray *prhs[])
+{
+  holent_hd_bg bg;
+  size_t n, bad = (size_t) -1;
+  double l = holent_gw_scalar (prhs[2], FN, "L");
+  double Lperp = holent_gw_scalar (prhs[3], FN, "LPERP");
+  const double *t = holent_gw_real (prhs[4], FN, "T", &n);
+  const mxArray *wf = mxGetField (prhs[1], 0, "shell_width");
+  if (wf == NULL)
+    mexErrMsgIdAndTxt ("holent:background",
+                       "BG must be a quench made by ads_background (d, \"vaidya\", ...)");
+  double w = holent_gw_scalar (wf, FN, "BG.shell_width");
+  holent_gw_hd_bg (prhs[1], FN, &bg);
+  holent_vaidya_workspace *ws = holent_vaidya_workspace_alloc ();
+  mxArray *out[5];
+  for (int k = 0; k < 4; k++)
+    out[k] = holent_gw_like (prhs[4]);
+  out[4] = mxCreateLogicalArray (mxGetNumberOfDimensions (prhs[4]),
+                                 mxGetDimensions (prhs[4]));
+  int st = ws ? holent_vaidya_strip (&bg, w, ws, Lperp, l, n, t,
+                                     mxGetPr (out[0]), mxGetPr (out[1]),
+                                     mxGetPr (out[2]), mxGetPr (out[3]),
+                                     (unsigned char *) mxGetLogicals (out[4]),
+                                     &bad)
+              : HOLENT_ENOMEM;
+  holent_hd_bg_free (&bg);
+  holent_vaidya_workspace_free (ws);
+  if (st)
+    {
+      for (int k = 0; k < 5; k++)
+        mxDestroyArray (out[k]);
+      if (st == HOLENT_ENOCONV && bad != (size_t) -1)
+        mexErrMsgIdAndTxt ("holent:noconv",
+                           "T(%zu) = %g: no extremal surface of width %g found",
+                           bad + 1, t[bad], l);
+      holent_gw_fail (st, FN, bad != (size_t) -1 ? "T" : "L", bad);
+    }
+  for (int k = 0; k < 5; k++)
+    if (k < (nlhs > 1 ? nlhs : 1))
+      plhs[k] = out[k];
+    else
+      mxDestroyArray (out[k]);
 }
 
 /* [VE, VB, ZM] = __holent_hd__ ("velocity", BG) */
@@ -64,8 +111,15 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   size_t n, bad = (size_t) -1;
   double reach = INFINITY, Lperp = 1;
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 6, nrhs, 2, 4);
+  holent_gw_nargs (FN, nlhs, 6, nrhs, 2, 5);
   holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
+  if (strcmp (op, "vaidya") == 0)
+    {
+      if (nrhs != 5)
+        mexErrMsgIdAndTxt ("holent:nargs", "wrong number of inputs for %s", op);
+      vaidya (nlhs, plhs, prhs);
+      return;
+    }
   if (strcmp (op, "velocity") == 0)
     {
       if (nrhs != 2)

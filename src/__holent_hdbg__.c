@@ -2,6 +2,9 @@
  *   BG = __holent_hdbg__ (D, "vacuum", ELL, G, EPS)
  *   BG = __holent_hdbg__ (D, "black_brane", ELL, G, EPS, "zh"|"T", VALUE)
  *   BG = __holent_hdbg__ (D, "tabulated", ELL, G, EPS, Z, F, NOISE)
+ *   BG = __holent_hdbg__ (D, "vaidya", ELL, G, EPS, W, FINAL, ...)
+ *        (FINAL "black_brane" or "tabulated" followed by its inputs:
+ *        a quench by a shell of width W into that state)
  * The struct is packed from the core's result only (derived quantities,
  * accuracy and the spline that later calls reuse without refitting).
  * SPDX-License-Identifier: GPL-3.0-or-later  */
@@ -50,7 +53,30 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   const double *z = NULL, *f;
   int st = HOLENT_SUCCESS;
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 1, nrhs, 5, 8);
+  holent_gw_nargs (FN, nlhs, 1, nrhs, 5, 10);
+  /* a quench: the shell width, then the final state's own inputs */
+  double w = NAN;
+  const mxArray *a[8];
+  for (int k = 0; k < nrhs && k < 8; k++)
+    a[k] = prhs[k];
+  if (nrhs > 1 && mxIsChar (prhs[1]))
+    {
+      holent_gw_string (prhs[1], FN, "KIND", kind, sizeof kind);
+      if (strcmp (kind, "vaidya") == 0)
+        {
+          if (nrhs < 8)
+            mexErrMsgIdAndTxt ("holent:nargs", "vaidya needs W, FINAL and its inputs");
+          w = holent_gw_scalar (prhs[5], FN, "W");
+          if (!(w >= 0))
+            mexErrMsgIdAndTxt ("holent:domain",
+                               "'shell_width' must be >= 0 (0: thin shell), got %g", w);
+          a[1] = prhs[6];
+          for (int k = 5; k + 2 < nrhs; k++)
+            a[k] = prhs[k + 2];
+          nrhs -= 2;
+          prhs = a;
+        }
+    }
   double dd = holent_gw_scalar (prhs[0], FN, "D");
   holent_gw_string (prhs[1], FN, "KIND", kind, sizeof kind);
   double ell = holent_gw_scalar (prhs[2], FN, "ELL");
@@ -102,5 +128,14 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     holent_gw_fail (st, FN, "BG", bad);
   plhs[0] = holent_gw_hd_pack (&bg, prhs[1], nrhs == 8 ? prhs[5] : NULL,
                                nrhs == 8 ? prhs[6] : NULL);
+  if (!isnan (w))
+    {
+      mxArray *fin = mxDuplicateArray (prhs[1]);
+      mxSetField (plhs[0], 0, "kind", mxCreateString ("vaidya"));
+      mxAddField (plhs[0], "final");
+      mxSetField (plhs[0], 0, "final", fin);
+      mxAddField (plhs[0], "shell_width");
+      mxSetField (plhs[0], 0, "shell_width", mxCreateDoubleScalar (w));
+    }
   holent_hd_bg_free (&bg);
 }

@@ -36,6 +36,9 @@ holent_gw_hd_bg (const mxArray *s, const char *fn, holent_hd_bg *bg)
                        HOLENT_HD_DMAX);
   int d = (int) dd;
   holent_gw_string (field (s, fn, "kind"), fn, "BG.kind", kind, sizeof kind);
+  if (strcmp (kind, "vaidya") == 0)  /* the state after the quench */
+    holent_gw_string (field (s, fn, "final"), fn, "BG.final", kind,
+                      sizeof kind);
   double ell = holent_gw_scalar (field (s, fn, "ell"), fn, "BG.ell");
   double G = holent_gw_scalar (field (s, fn, "G"), fn, "BG.G");
   double eps = holent_gw_scalar (field (s, fn, "cutoff"), fn, "BG.cutoff");

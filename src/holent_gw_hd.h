@@ -8,6 +8,7 @@
 #include "core/holent_strip.h"
 #include "core/holent_ball.h"
 #include "core/holent_hd_vel.h"
+#include "core/holent_vaidya.h"
 
 /* Fill bg from a struct made by ads_background; raises holent:background
    on a malformed struct.  A tabulated background owns a spline: release

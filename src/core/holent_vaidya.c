@@ -1,0 +1,523 @@
+/* holent_vaidya.c: strips after a global quench in Vaidya-AdS_{d+1}.
+ * See holent_vaidya.h and doc/higher_dimensional.md ("Quench: Vaidya").
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
+#include <math.h>
+#include <stdlib.h>
+#include <string.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_math.h>
+#include <gsl/gsl_integration.h>
+#include <gsl/gsl_multiroots.h>
+#include <gsl/gsl_odeiv2.h>
+#include "holent_vaidya.h"
+#include "holent_strip.h"
+
+#define ZEND 1e-7       /* shots stop at z = ZEND z*; asymptotics beyond  */
+#define NSTEP 20000     /* ODE steps of one shot                           */
+#define ROOT_IT 60      /* iterations of the 2D root solve                 */
+#define ROOT_TOL 1e-12  /* residual of the 2D root solve (relative)        */
+#define HALVE 30        /* continuation: halvings of a time step           */
+#define TSTEP 0.05      /* continuation: largest step in t per min(l, zh)  */
+
+struct holent_vaidya_workspace
+{
+  gsl_odeiv2_step *step, *step4;   /* x: 5 components; z: 4 */
+  gsl_odeiv2_control *ctrl;
+  gsl_odeiv2_evolve *evol, *evol4;
+  gsl_multiroot_fsolver *root;
+  gsl_integration_workspace *iw;
+  holent_strip_workspace *strip;
+};
+
+holent_vaidya_workspace *
+holent_vaidya_workspace_alloc (void)
+{
+  holent_vaidya_workspace *w = calloc (1, sizeof *w);
+  if (w == NULL)
+    return NULL;
+  w->step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 5);
+  w->ctrl = gsl_odeiv2_control_y_new (1e-14, 1e-12);
+  w->evol = gsl_odeiv2_evolve_alloc (5);
+  w->step4 = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 4);
+  w->evol4 = gsl_odeiv2_evolve_alloc (4);
+  w->root = gsl_multiroot_fsolver_alloc (gsl_multiroot_fsolver_hybrids, 2);
+  w->iw = gsl_integration_workspace_alloc (200);
+  w->strip = holent_strip_workspace_alloc ();
+  if (!w->step || !w->ctrl || !w->evol || !w->root || !w->iw || !w->strip
+      || !w->step4 || !w->evol4)
+    {
+      holent_vaidya_workspace_free (w);
+      return NULL;
+    }
+  return w;
+}
+
+void
+holent_vaidya_workspace_free (holent_vaidya_workspace *w)
+{
+  if (w == NULL)
+    return;
+  if (w->step)
+    gsl_odeiv2_step_free (w->step);
+  if (w->ctrl)
+    gsl_odeiv2_control_free (w->ctrl);
+  if (w->evol)
+    gsl_odeiv2_evolve_free (w->evol);
+  if (w->step4)
+    gsl_odeiv2_step_free (w->step4);
+  if (w->evol4)
+    gsl_odeiv2_evolve_free (w->evol4);
+  if (w->root)
+    gsl_multiroot_fsolver_free (w->root);
+  if (w->iw)
+    gsl_integration_workspace_free (w->iw);
+  holent_strip_workspace_free (w->strip);
+  free (w);
+}
+
+/* ------------------------------------------------------------------ */
+/* The shot                                                            */
+
+typedef struct
+{
+  const holent_hd_bg *F;
+  double w;      /* shell width, 0: thin                               */
+  double zs;     /* tip depth                                           */
+  int side;      /* thin shell: 0 before (vacuum), 1 after              */
+} vpar;
+
+/* s(v) and s'(v) of the shell profile */
+static double
+shell (const vpar *q, double v, double *sp)
+{
+  if (q->w <= 0)
+    {
+      *sp = 0;
+      return q->side;
+    }
+  double th = tanh (v / q->w);
+  *sp = (1 - th * th) / (2 * q->w);
+  return 0.5 * (1 + th);
+}
+
+/* State (z, v, z', v', J) against x; the conserved quantity of the area
+   z^(1-d) sqrt(Q), Q = 1 - f v'^2 - 2 v' z', gives sqrt(Q) = (z* / z)^(d-1)
+   and the equations of motion
+     v'' = (d-1) Q/z + f_z v'^2/2,
+     z'' = -f v'' - f_z z' v' - f_v v'^2/2,
+   and K for the area (ell = 1, per Lperp^(d-2)).  */
+static int
+rhs (double x, const double y[], double dy[], void *p)
+{
+  const vpar *q = p;
+  int d = q->F->d;
+  double z = y[0], v = y[1], zp = y[2], vp = y[3], F, Fp, sp;
+  (void) x;
+  if (!(z > 0) || holent_hd_bg_f (q->F, z, &F, &Fp))
+    return GSL_EBADFUNC;
+  double s = shell (q, v, &sp);
+  double f = 1 - s * (1 - F), fz = s * Fp, fv = -sp * (1 - F);
+  double Q = 1 - f * vp * vp - 2 * vp * zp;
+  double vpp = (d - 1) * Q / z + 0.5 * fz * vp * vp;
+  dy[0] = zp;
+  dy[1] = vp;
+  dy[2] = -f * vpp - fz * zp * vp - 0.5 * fv * vp * vp;
+  dy[3] = vpp;
+  /* K = J - z^(2-d)/(d-2) stays finite at the boundary (J' the area
+     element zs^(d-1)/z^(2d-2)): no cancellation at the end */
+  dy[4] = (gsl_pow_int (q->zs / z, d - 1) + zp) / gsl_pow_int (z, d - 1);
+  return GSL_SUCCESS;
+}
+
+/* Next to the boundary (once z' < -1) z is the parameter: state (x, v,
+   v_z, K).  The conserved quantity fixes x_z algebraically,
+   x_z^2 = P/((z* / z)^(2d-2) - 1), P = -(f v_z^2 + 2 v_z) = 1 - (1 + v_z)^2
+   + (1 - f) v_z^2, so that the area's divergent part is subtracted
+   without cancellation (dK/dz = -z^(1-d) (sqrt(P R) - 1), R = 1/(1 -
+   (z/z*)^(2d-2))), and
+     dv_z/dz = [(d-1) P R/z + f_z v_z^2/2] (1 + f v_z) + f_z v_z^2
+               + f_v v_z^3/2.  */
+static int
+rhs_z (double z, const double y[], double dy[], void *p)
+{
+  const vpar *q = p;
+  int d = q->F->d;
+  double v = y[1], vz = y[2], F, Fp, sp;
+  if (!(z > 0) || holent_hd_bg_f (q->F, z, &F, &Fp))
+    return GSL_EBADFUNC;
+  double s = shell (q, v, &sp);
+  double om = s * (1 - F), fz = s * Fp, fv = -sp * (1 - F);
+  double u = 1 + vz, P = 1 - u * u + om * vz * vz;
+  double r = gsl_pow_int (z / q->zs, 2 * d - 2);
+  if (!(r < 1) || !(P > 0))
+    return GSL_EBADFUNC;
+  double R = 1 / (1 - r), PR = P * R, sq = sqrt (PR);
+  dy[0] = -sq * gsl_pow_int (z / q->zs, d - 1);
+  dy[1] = vz;
+  dy[2] = ((d - 1) * PR / z + 0.5 * fz * vz * vz) * (u - om * vz)
+          + fz * vz * vz + 0.5 * fv * vz * vz * vz;
+  dy[3] = -((P - 1 + r) * R / (sq + 1)) / gsl_pow_int (z, d - 1);
+  return GSL_SUCCESS;
+}
+
+/* Thin shell: from (x0, y0) the step to x1 crossed v = 0; land on the
+   crossing by bisection of single rk8pd steps and refract there:
+   (z' + f v')' = f_v v'^2/2 integrates to the jump z' -> z' - v' [f]/2,
+   [f] = f(after) - f(before) = -(s_after - s_before)(1 - F(z)).  */
+static int
+cross (holent_vaidya_workspace *ws, gsl_odeiv2_system *sys, vpar *q,
+       int zpar, double x0, const double y0[5], double x1, double *xc,
+       double yc[5])
+{
+  double lo = 0, hi = x1 - x0, yt[5], err[5], v0 = y0[1];
+  for (int it = 0; it < 80 && fabs (hi - lo) > 1e-15 * (fabs (x0) + fabs (hi)); it++)
+    {
+      double h = 0.5 * (lo + hi);
+      memcpy (yt, y0, sizeof yt);
+      gsl_odeiv2_step_reset (ws->step);
+      if (gsl_odeiv2_step_apply (ws->step, x0, h, yt, err, NULL, NULL, sys))
+        return HOLENT_ENOCONV;
+      if ((yt[1] < 0) == (v0 < 0))
+        lo = h;
+      else
+        hi = h;
+    }
+  memcpy (yc, y0, 5 * sizeof *yc);
+  if (hi != 0)
+    {
+      gsl_odeiv2_step_reset (ws->step);
+      if (gsl_odeiv2_step_apply (ws->step, x0, hi, yc, err, NULL, NULL, sys))
+        return HOLENT_ENOCONV;
+    }
+  *xc = x0 + hi;
+  double F, z = zpar ? *xc : yc[0];
+  if (holent_hd_bg_f (q->F, z, &F, NULL))
+    return HOLENT_EDOM;
+  int after = v0 < 0;  /* crossing upwards in v enters the final state */
+  double jump = -((double) after - (double) q->side) * (1 - F);
+  if (zpar)
+    {
+      /* z' = 1/x_z and v' = v_z z' before; z' jumps, v' does not */
+      double dy[4];
+      if (rhs_z (z, yc, dy, q))
+        return HOLENT_ENOCONV;
+      double zp = 1 / dy[0], vp = yc[2] * zp;
+      yc[2] = vp / (zp - 0.5 * vp * jump);
+    }
+  else
+    yc[2] -= 0.5 * yc[3] * jump;
+  q->side = after;
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_vaidya_shoot (const holent_hd_bg *F, double w,
+                     holent_vaidya_workspace *ws, double zs, double vs,
+                     double *lh, double *tb, double *jfin)
+{
+  if (F == NULL || ws == NULL || lh == NULL || tb == NULL || jfin == NULL
+      || isnan (zs) || isnan (vs) || isnan (w))
+    return HOLENT_EINVAL;
+  if (!(zs > 0) || !isfinite (zs) || !isfinite (vs) || !(w >= 0))
+    return HOLENT_EDOM;
+  int d = F->d;
+  vpar q = { F, w, zs, vs >= 0 };
+  gsl_odeiv2_system sys = { rhs, NULL, 5, &q };
+  double y[5] = { zs, vs, 0, 0, -pow (zs, 2 - d) / (d - 2) }, x = 0;
+  double h = 1e-3 * zs, y0[5];
+  double xmax = 50 * zs;
+  gsl_odeiv2_step_reset (ws->step);
+  gsl_odeiv2_evolve_reset (ws->evol);
+  int k = 0;
+  for (; y[2] > -1; k++)
+    {
+      if (k > NSTEP || x > xmax || y[0] > 2 * zs)
+        return HOLENT_ENOCONV;  /* does not reach the boundary */
+      double x0 = x;
+      memcpy (y0, y, sizeof y0);
+      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
+                                        &x, xmax, &h, y);
+      if (st == GSL_EBADFUNC && h > 1e-12 * zs)
+        {
+          h *= 0.1;
+          continue;
+        }
+      if (st)
+        return HOLENT_ENOCONV;
+      if (w <= 0 && ((y[1] < 0) != (y0[1] < 0)))
+        {
+          double xc;
+          if ((st = cross (ws, &sys, &q, 0, x0, y0, x, &xc, y)))
+            return st;
+          x = xc;
+          gsl_odeiv2_step_reset (ws->step);
+          gsl_odeiv2_evolve_reset (ws->evol);
+        }
+    }
+  /* z' < -1: on in z down to ZEND z* (state x, v, v_z, K) */
+  double z = y[0], yz[5] = { x, y[1], y[3] / y[2], y[4], 0 };
+  double zend = ZEND * zs, hz = -1e-3 * z;
+  gsl_odeiv2_system sz = { rhs_z, NULL, 4, &q };
+  gsl_odeiv2_step_reset (ws->step4);
+  gsl_odeiv2_evolve_reset (ws->evol4);
+  for (; z > zend; k++)
+    {
+      if (k > NSTEP)
+        return HOLENT_ENOCONV;
+      double z0 = z;
+      memcpy (y0, yz, sizeof y0);
+      int st = gsl_odeiv2_evolve_apply (ws->evol4, ws->ctrl, ws->step4, &sz,
+                                        &z, zend, &hz, yz);
+      if (st == GSL_EBADFUNC && fabs (hz) > 1e-12 * z)
+        {
+          hz *= 0.1;  /* a trial step left the domain: GSL restored y */
+          continue;
+        }
+      if (st)
+        return HOLENT_ENOCONV;
+      if (w <= 0 && ((yz[1] < 0) != (y0[1] < 0)))
+        {
+          double zc;
+          if ((st = cross (ws, &sz, &q, 1, z0, y0, z, &zc, yz)))
+            return st;
+          z = zc;
+          gsl_odeiv2_step_reset (ws->step4);
+          gsl_odeiv2_evolve_reset (ws->evol4);
+        }
+    }
+  /* beyond ZEND z*: t = v + z + m z^(d+1)/(d+1), the rest of x and of the
+     finite area O(z^d), O(m z^2) (m = s(t) m_F) */
+  double sp, m = shell (&q, yz[1], &sp) * F->m;
+  *lh = yz[0] + gsl_pow_int (z, d) / (d * gsl_pow_int (zs, d - 1));
+  *tb = yz[1] + z + m * gsl_pow_int (z, d + 1) / (d + 1);
+  *jfin = yz[3] + 0.25 * m * z * z;
+  return isfinite (*lh) && isfinite (*tb) && isfinite (*jfin)
+             ? HOLENT_SUCCESS : HOLENT_ENOCONV;
+}
+
+/* ------------------------------------------------------------------ */
+/* Root solve and continuation                                         */
+
+typedef struct
+{
+  const holent_hd_bg *F;
+  double w, l, t;
+  holent_vaidya_workspace *ws;
+  double jfin;
+} rpar;
+
+static int
+resid (const gsl_vector *p, void *vp, gsl_vector *r)
+{
+  rpar *a = vp;
+  double zs = exp (gsl_vector_get (p, 0)), vs = gsl_vector_get (p, 1);
+  double lh, tb;
+  if (holent_vaidya_shoot (a->F, a->w, a->ws, zs, vs, &lh, &tb, &a->jfin))
+    return GSL_EBADFUNC;
+  gsl_vector_set (r, 0, (2 * lh - a->l) / a->l);
+  gsl_vector_set (r, 1, (tb - a->t) / a->l);
+  return GSL_SUCCESS;
+}
+
+/* the tip (zs, vs) of the surface of width l at time t, from a guess */
+static int
+solve (rpar *a, double *zs, double *vs)
+{
+  gsl_multiroot_function fn = { resid, 2, a };
+  double p0[2] = { log (*zs), *vs };
+  gsl_vector_view pv = gsl_vector_view_array (p0, 2);
+  int st = gsl_multiroot_fsolver_set (a->ws->root, &fn, &pv.vector);
+  for (int it = 0; !st; it++)
+    {
+      if (it >= ROOT_IT)
+        return HOLENT_ENOCONV;
+      if (gsl_multiroot_test_residual (a->ws->root->f, ROOT_TOL) == GSL_SUCCESS)
+        break;
+      st = gsl_multiroot_fsolver_iterate (a->ws->root);
+    }
+  if (st)
+    return HOLENT_ENOCONV;
+  const gsl_vector *x = gsl_multiroot_fsolver_root (a->ws->root);
+  *zs = exp (gsl_vector_get (x, 0));
+  *vs = gsl_vector_get (x, 1);
+  /* the finite area at the root itself */
+  double lh, tb;
+  if (holent_vaidya_shoot (a->F, a->w, a->ws, *zs, *vs, &lh, &tb, &a->jfin))
+    return HOLENT_ENOCONV;
+  return HOLENT_SUCCESS;
+}
+
+static double
+inv_f (double z, void *p)
+{
+  double F;
+  holent_hd_bg_f (p, z, &F, NULL);
+  return 1 / F;
+}
+
+typedef struct
+{
+  double t;
+  size_t i;
+} tidx;
+
+static int
+cmp_t (const void *a, const void *b)
+{
+  double x = ((const tidx *) a)->t, y = ((const tidx *) b)->t;
+  return (x > y) - (x < y);
+}
+
+int
+holent_vaidya_strip (const holent_hd_bg *F, double w,
+                     holent_vaidya_workspace *ws, double Lperp, double l,
+                     size_t n, const double *t, double *S, double *finite,
+                     double *zstar, double *vstar, unsigned char *jump,
+                     size_t *bad)
+{
+  if (F == NULL || ws == NULL || (n > 0 && (t == NULL || S == NULL))
+      || isnan (w) || isnan (Lperp) || isnan (l))
+    return HOLENT_EINVAL;
+  if (!(w >= 0) || !isfinite (w) || !(Lperp > 0) || !isfinite (Lperp)
+      || !(l > 0) || !isfinite (l) || !isfinite (F->zh))
+    return HOLENT_EDOM;
+  for (size_t i = 0; i < n; i++)
+    if (!isfinite (t[i]))
+      {
+        if (bad)
+          *bad = i;
+        return isnan (t[i]) ? HOLENT_EINVAL : HOLENT_EDOM;
+      }
+  if (n == 0)
+    return HOLENT_SUCCESS;
+  int d = F->d, st;
+  double pref = 2 * pow (F->ell, d - 1) * pow (Lperp, d - 2) / (4 * F->G);
+  double div = pref * pow (F->eps, 2 - d) / (d - 2);
+  /* the static surface of the final state: extremal in Vaidya too once
+     it lies entirely after a thin shell, t >= r*(z_bb) = int_0^z_bb dz/F */
+  double Sbb, fbb, zbb, rbb = INFINITY;
+  if ((st = holent_strip_entropy (F, ws->strip, Lperp, 1, &l, &Sbb, &fbb,
+                                  NULL, &zbb, NULL, NULL)))
+    {
+      if (st != HOLENT_EDOM)
+        return st;
+      fbb = INFINITY;  /* wider than the final state's strips reach */
+    }
+  else
+    {
+      gsl_function G = { inv_f, (void *) F };
+      double err;
+      if (gsl_integration_qag (&G, 0, zbb, 0, 1e-12, 200, GSL_INTEG_GAUSS21,
+                               ws->iw, &rbb, &err))
+        return HOLENT_ENOCONV;
+    }
+  tidx *o = malloc (n * sizeof *o);
+  if (o == NULL)
+    return HOLENT_ENOMEM;
+  for (size_t i = 0; i < n; i++)
+    {
+      o[i].t = t[i];
+      o[i].i = i;
+    }
+  qsort (o, n, sizeof *o, cmp_t);
+  /* start in the vacuum, before the shell: z* = l/ratio, v* = t - z*
+     (exact for a thin shell) */
+  double ratio = holent_strip_ratio (d), zs = l / ratio;
+  double scale = fmin (l, F->zh), hmax = TSTEP * scale;
+  double tc = fmin (o[0].t, w > 0 ? -12 * w : -1e-3 * scale);
+  double vs = tc - zs, zp = NAN, vp = NAN, tp = NAN;
+  rpar a = { F, w, l, tc, ws, 0 };
+  int have = 0, last = -1;  /* have: the branch is known at tc */
+  if (w <= 0 && tc <= 0)
+    {
+      a.jfin = holent_strip_vacuum_j (d) * pow (zs, 2 - d);
+      have = 1;
+    }
+  else if ((st = solve (&a, &zs, &vs)) == HOLENT_SUCCESS)
+    have = 1;
+  double hcur = hmax;
+  for (size_t k = 0; k < n; k++)
+    {
+      double target = o[k].t;
+      /* follow the branch to the target in steps of at most hmax (halved
+         on failure, doubled on success), extrapolating linearly from the
+         last two tips; a step below 1e-7 of the scale means the branch
+         folds back in t: it ends there */
+      while (have && tc < target)
+        {
+          double tn = fmin (target, tc + hcur);
+          double z1 = zs, v1 = vs + (tn - tc);
+          if (isfinite (tp) && tc > tp)
+            {
+              double r = (tn - tc) / (tc - tp);
+              z1 = zs * pow (zs / zp, r);
+              v1 = vs + (vs - vp) * r;
+            }
+          rpar b = { F, w, l, tn, ws, 0 };
+          if (solve (&b, &z1, &v1) == HOLENT_SUCCESS && fabs (log (z1 / zs)) < 0.5)
+            {
+              zp = zs;  vp = vs;  tp = tc;
+              zs = z1;  vs = v1;  tc = tn;
+              a.jfin = b.jfin;
+              hcur = fmin (hmax, 2 * hcur);
+            }
+          else if ((hcur *= 0.5) < 1e-7 * scale)
+            have = 0;
+        }
+      /* the candidates at the target: the followed branch; the static
+         surface of the final state (exact for a thin shell once t >=
+         r*(z_bb)); the surface found from the static tip as a guess
+         (the late branch of a swallow tail) */
+      double fin_a = have ? pref * a.jfin : INFINITY;
+      double fin_s = INFINITY, zc = NAN, vc = NAN;
+      if (w <= 0 && target >= rbb)
+        {
+          fin_s = fbb;
+          zc = zbb;
+          vc = target - rbb;
+        }
+      else if (isfinite (fbb))
+        {
+          rpar c = { F, w, l, target, ws, 0 };
+          zc = zbb;
+          vc = target - rbb;
+          if (solve (&c, &zc, &vc) == HOLENT_SUCCESS)
+            fin_s = pref * c.jfin;
+        }
+      int same = have && isfinite (zc) && fabs (zs - zc) < 1e-6 * zc;
+      /* the same surface twice: one candidate */
+      int pick = same ? 0 : fin_s < fin_a;
+      if (!isfinite (fin_a) && !isfinite (fin_s))
+        {
+          if (bad)
+            *bad = o[k].i;
+          free (o);
+          return HOLENT_ENOCONV;
+        }
+      if (!have)
+        {
+          /* the followed branch ended: follow the other one from here */
+          zs = zc;
+          vs = vc;
+          tc = target;
+          tp = NAN;
+          a.jfin = fin_s / pref;
+          hcur = hmax;
+          have = 1;
+        }
+      size_t i = o[k].i;
+      double fv = pick ? fin_s : fin_a;
+      S[i] = fv + div;
+      if (finite)
+        finite[i] = fv;
+      if (zstar)
+        zstar[i] = pick ? zc : zs;
+      if (vstar)
+        vstar[i] = pick ? vc : vs;
+      if (jump)
+        jump[i] = last >= 0 && last != pick && !same;
+      last = same ? last : pick;
+    }
+  free (o);
+  return HOLENT_SUCCESS;
+}

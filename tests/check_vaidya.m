@@ -1,0 +1,89 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## Strips after a global quench in Vaidya-AdS_5 (d = 4, final brane zh = 1,
+## G = ell = 1).  Independent references, derived here from the metric
+## ds^2 = (1/z^2)(-f(v,z) dv^2 - 2 dv dz + dx^2), f = 1 - s(v) z^4:
+##  * the area functional z^(1-d) sqrt(1 - f v'^2 - 2 v' z') has the
+##    conserved quantity z^(1-d)/sqrt(Q) = z*^(1-d); its Euler-Lagrange
+##    equations are integrated with ode45 and the tip (z*, v*) is found
+##    with fminsearch (a smooth shell, s = (1 + tanh(v/w))/2);
+##  * limits: the vacuum strip before the quench, the static brane strip
+##    after saturation (strip_entropy of the brane, itself checked against
+##    series and integrals), the early growth dS = (pi/(d-1)) E A t^2 of
+##    Liu and Suh 2014 (PRD 89, 066012), and the growth rate v_E s A in the
+##    linear regime (Liu and Suh 2014, PRL 112, 011601).
+
+%!function dy = vrhs_ (x, y, zs, w)
+%!  ## the Euler-Lagrange equations of z^(1-d) sqrt(Q), d = 4, with
+%!  ## sqrt(Q) = (z*/z)^(d-1) used for the area
+%!  d = 4;
+%!  z = y(1); v = y(2); zp = y(3); vp = y(4);
+%!  s = 0.5 * (1 + tanh (v / w));  sp = 0.5 * (1 - tanh (v / w)^2) / w;
+%!  f = 1 - s * z^4;  fz = -4 * s * z^3;  fv = -sp * z^4;
+%!  Q = 1 - f * vp^2 - 2 * vp * zp;
+%!  vpp = (d - 1) * Q / z + 0.5 * fz * vp^2;
+%!  zpp = -f * vpp - fz * zp * vp - 0.5 * fv * vp^2;
+%!  ## K = J - z^(2-d)/(d-2), J the area: finite at the boundary
+%!  dy = [zp; vp; zpp; vpp; ((zs/z)^(d-1) + zp) / z^(d-1)];
+%!endfunction
+
+%!function [lh, tb, jf] = ode45_shot_ (zs, vs, w)
+%!  ## shot from the tip to z = 0.05 z* with ode45, then the near-boundary
+%!  ## asymptotics (errors O((z/z*)^6) here)
+%!  d = 4;  ze = 0.05 * zs;
+%!  warning ("off", "all", "local");   # ode45 notes the event stop
+%!  opt = odeset ("RelTol", 1e-11, "AbsTol", 1e-13,
+%!                "Events", @(x, y) deal (y(1) - ze, 1, -1));
+%!  [x, y] = ode45 (@(x, y) vrhs_ (x, y, zs, w), [0 50 * zs],
+%!                  [zs; vs; 0; 0; -zs^(2-d) / (d - 2)], opt);
+%!  x = x(end);  y = y(end,:);  ze = y(1);
+%!  m = 0.5 * (1 + tanh ((y(2) + ze) / w));
+%!  lh = x + ze^d / (d * zs^(d-1));
+%!  tb = y(2) + ze + m * ze^(d+1) / (d + 1);
+%!  jf = y(5) + 0.25 * m * ze^2;
+%!endfunction
+
+%!test
+%! ## a smooth shell (w = 0.2): holent's tip, checked by ode45 shots of the
+%! ## equations above: fzero on z* (v* kept) recovers the width, and the
+%! ## boundary time and the finite area agree
+%! w = 0.2;  l = 1.2;  t = 0.6;
+%! bg = ads_background (4, "vaidya", "zh", 1, "shell_width", w);
+%! [S, info] = strip_entropy (bg, l, "t", t);
+%! vs = info.v_star;
+%! zs = fzero (@(z) 2 * ode45_shot_ (z, vs, w) - l, info.z_star * [0.98 1.02],
+%!             optimset ("TolX", 1e-12));
+%! assert (zs, info.z_star, 1e-5);
+%! [lh, tb, jf] = ode45_shot_ (zs, vs, w);
+%! assert (tb, t, 5e-6);               # ode45 at RelTol 1e-11
+%! assert (info.finite, 2 * jf / 4, 5e-6);
+
+%!test
+%! ## limits of a thin-shell quench: vacuum before t = 0, the static brane
+%! ## strip after saturation, early growth (pi/(d-1)) E A t^2
+%! warning ("off", "holent:cutoff", "local");
+%! bg = ads_background (4, "vaidya", "zh", 1);
+%! bv = ads_background (4, "vacuum");
+%! bb = ads_background (4, "black_brane", "zh", 1);
+%! l = 1.5;
+%! t = [-0.3 0.01 0.02 0.03 2.5 4];
+%! [S, info] = strip_entropy (bg, l, "t", t);
+%! [~, iv] = strip_entropy (bv, l);
+%! [~, ib] = strip_entropy (bb, l);
+%! assert (info.finite(1), iv.finite, 1e-9);
+%! assert (info.finite(5:6), ib.finite * [1 1], 1e-8);
+%! c = pi / 3 * bg.energy_density * 2;            # A = 2 Lperp^(d-2), Lperp = 1
+%! g = (info.finite(2:4) - iv.finite) ./ (c * t(2:4).^2);
+%! assert (abs (g - 1) < 0.05);
+%! assert (all (diff (info.finite(2:end)) >= -1e-12));  # grows, then saturates
+
+%!test
+%! ## linear regime of a wide strip: the slope tends to v_E s A (from below)
+%! bg = ads_background (4, "vaidya", "zh", 1);
+%! [~, info] = strip_entropy (bg, 5, "t", [1.4 1.6]);
+%! slope = diff (info.finite) / 0.2;
+%! vsA = entanglement_velocity (bg) * bg.entropy_density * 2;
+%! assert (slope < vsA * 1.001 && slope > 0.85 * vsA);
+
+%!error <give the boundary times> strip_entropy (ads_background (4, "vaidya", "zh", 1), 1)
+%!error <needs a quench> strip_entropy (ads_background (4, "black_brane", "zh", 1), 1, "t", 1)
+%!error <shell_width must be nonnegative> ads_background (4, "vaidya", "zh", 1, "shell_width", -1)
