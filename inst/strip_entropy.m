@@ -72,7 +72,8 @@ function [S, info] = strip_entropy (bg, l, varargin)
   if (isfield (o, "length"))
     Lp = __holent_scalar__ (fn, "length", o.length, "positive");
   endif
-  if (isfield (o, "t") || (isstruct (bg) && isfield (bg, "kind") && strcmp (bg.kind, "vaidya")))
+  if (isfield (o, "t") || (isstruct (bg) && isscalar (bg) && isfield (bg, "kind")
+                           && strcmp (bg.kind, "vaidya")))
     [S, info] = quench_ (fn, bg, l, Lp, o);
     return;
   endif
@@ -111,7 +112,8 @@ function [S, info] = quench_ (fn, bg, l, Lp, o)
   if (! isfield (o, "t"))
     error ("holent:option", "%s: BG is a quench: give the boundary times 't'", fn);
   endif
-  if (! (isstruct (bg) && isfield (bg, "kind") && strcmp (bg.kind, "vaidya")))
+  if (! (isstruct (bg) && isscalar (bg) && isfield (bg, "kind")
+         && strcmp (bg.kind, "vaidya")))
     error ("holent:option", "%s: option 't' needs a quench: BG from ads_background (d, \"vaidya\", ...)", fn);
   endif
   l = __holent_scalar__ (fn, "L", l, "positive");
