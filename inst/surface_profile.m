@@ -30,7 +30,11 @@ function prof = surface_profile (bg, shape, sizes, varargin)
   if (nargin < 3)
     print_usage ();
   endif
-  __holent_check_hd__ (fn, bg);
+  try
+    __holent_hd__ ("check", bg);   # one core call checks BG
+  catch err
+    __holent_rethrow__ (err, "__holent_hd__", fn);
+  end_try_catch
   if (! ischar (shape) || ! any (strcmp (shape, {"strip", "ball"})))
     error ("holent:option", "%s: SHAPE must be \"strip\" or \"ball\"", fn);
   endif

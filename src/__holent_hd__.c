@@ -2,6 +2,7 @@
  *   [S, FIN, DELTA, ZSTAR, REACH, ACC] = __holent_hd__ ("strip", BG, L, LPERP)
  *   [S, FIN, DELTA, ZTIP, REACH, ACC]  = __holent_hd__ ("ball", BG, R)
  *   [VE, VB, ZM] = __holent_hd__ ("velocity", BG)
+ *   __holent_hd__ ("check", BG)   (raises holent:background unless valid)
  *   [S, FIN, ZSTAR, VSTAR, JUMP] = __holent_hd__ ("vaidya", BG, L, LPERP, T)
  * ACC: accuracy of FIN (and DELTA) allowed by a tabulated f's data.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
@@ -113,6 +114,16 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   holent_gw_init ();
   holent_gw_nargs (FN, nlhs, 6, nrhs, 2, 5);
   holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
+  if (strcmp (op, "check") == 0)
+    {
+      /* the background checked by one core call (its unpacking) */
+      holent_hd_bg bg;
+      if (nrhs != 2)
+        mexErrMsgIdAndTxt ("holent:nargs", "wrong number of inputs for %s", op);
+      holent_gw_hd_bg (prhs[1], FN, &bg);
+      holent_hd_bg_free (&bg);
+      return;
+    }
   if (strcmp (op, "vaidya") == 0)
     {
       if (nrhs != 5)
