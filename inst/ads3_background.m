@@ -25,6 +25,21 @@
 ## @item @qcode{"heavy"}
 ## a spinless heavy primary of weight h = hbar = (c/24)(1 - alpha^2) below the
 ## black hole threshold, dual to a conical defect; circle only.
+## @item @qcode{"tfd"}
+## the thermofield double: the eternal two-sided black hole at inverse
+## temperature beta (two copies of planar BTZ or BTZ joined by the
+## Einstein-Rosen bridge); both sides' times run forward.  Options
+## @qcode{"shock_alpha"} (the Kruskal shift of a shock wave, default 0) or
+## @qcode{"shock_energy"} E with @qcode{"shock_time"} t_w (a shell released
+## from the left boundary at time -t_w: alpha = (E/(4M)) exp(2 pi t_w/beta),
+## M = pi c L/(6 beta^2) the black hole's energy; on a line E and M are
+## densities).  Regions are structs with fields @code{left} and
+## @code{right}; a plain matrix is the right side.  @file{doc/tfd_shock.md}.
+## @item @qcode{"quench"}
+## a global quench: a null shell sent in from the boundary at t = 0 turns
+## the vacuum into the black hole of inverse temperature beta (thin-shell
+## AdS3-Vaidya); give the time with the option @qcode{"t"} of the entropy
+## functions.  @file{doc/quench.md}.
 ## @end table
 ##
 ## @var{boundary} is @qcode{"line"} or @qcode{"circle"}.
@@ -120,11 +135,12 @@ function bg = ads3_background (state, boundary, varargin)
     bg = __holent_bcft_background__ (fn, lower (state), boundary, varargin{:});
     return;
   endif
-  state = check_word (fn, "STATE", state, {"vacuum", "thermal", "rotating", "heavy"});
+  state = check_word (fn, "STATE", state, {"vacuum", "thermal", "rotating", "heavy", "tfd", "quench"});
   boundary = check_word (fn, "BOUNDARY", boundary, {"line", "circle"});
 
   names = {"c", "G", "ell", "cutoff", "circumference", "beta", "T", ...
-           "beta_L", "beta_R", "Omega", "alpha", "h", "saddle"};
+           "beta_L", "beta_R", "Omega", "alpha", "h", "saddle", ...
+           "shock_alpha", "shock_energy", "shock_time"};
   o = __holent_opts__ (fn, names, varargin);
 
   ## Which options belong to which state.
@@ -132,6 +148,8 @@ function bg = ads3_background (state, boundary, varargin)
   allowed.thermal = {"beta", "T", "saddle"};
   allowed.rotating = {"beta", "T", "beta_L", "beta_R", "Omega", "saddle"};
   allowed.heavy = {"alpha", "h"};
+  allowed.tfd = {"beta", "T", "shock_alpha", "shock_energy", "shock_time"};
+  allowed.quench = {"beta", "T"};
   common = {"c", "G", "ell", "cutoff", "circumference"};
   given = fieldnames (o);
   for k = 1:numel (given)
@@ -251,6 +269,10 @@ function bg = ads3_background (state, boundary, varargin)
       else
         bg.M = -pi * c / (6 * L);
       endif
+
+    case {"tfd", "quench"}
+      bg = __holent_time_bg__ (fn, bg, o, temperatures (fn, "thermal", o));
+      scales = [L, bg.beta];
 
     case "heavy"
       if (isfield (o, "alpha") && isfield (o, "h"))
@@ -407,6 +429,27 @@ endfunction
 
 %!warning <cutoff> ads3_background ("thermal", "line", "beta", 1e-3, "cutoff", 1e-4);
 
+%!test
+%! ## Time-dependent states (doc/tfd_shock.md, doc/quench.md).
+%! bg = ads3_background ("tfd", "line", "beta", 2);
+%! assert (bg.bulk, "planar_btz");
+%! assert ([bg.state, bg.boundary], "tfdline");
+%! assert (bg.shock_alpha, 0);
+%! bg = ads3_background ("tfd", "circle", "beta", 4, "circumference", 3);
+%! assert (bg.bulk, "btz");   # the eternal black hole, whatever Hawking-Page says
+%! bg = ads3_background ("quench", "circle", "beta", 1);
+%! assert (bg.bulk, "vaidya");
+%! assert (bg.pure);
+
+%!error <does not apply> ads3_background ("tfd", "line", "beta", 1, "alpha", 0.5)
+%!error <shock_alpha> ads3_background ("tfd", "line", "beta", 1, "shock_alpha", -1)
+%!error <shock_alpha> ads3_background ("tfd", "line", "beta", 1, "shock_alpha", NaN)
+%!error <shock_energy> ads3_background ("tfd", "line", "beta", 1, "shock_energy", -1, "shock_time", 1)
+%!error <together> ads3_background ("tfd", "line", "beta", 1, "shock_energy", 1)
+%!error <not both> ads3_background ("tfd", "line", "beta", 1, "shock_energy", 1, "shock_time", 1, "shock_alpha", 2)
+%!error <finite> ads3_background ("tfd", "line", "beta", 1, "shock_energy", 1, "shock_time", Inf)
+%!error <needs 'beta' or 'T'> ads3_background ("quench", "line")
+%!error <does not apply> ads3_background ("quench", "line", "beta", 1, "shock_alpha", 1)
 %!error <Invalid call> ads3_background ("vacuum")
 %!error <unknown STATE> ads3_background ("excited", "line")
 %!error <unknown BOUNDARY> ads3_background ("vacuum", "torus")

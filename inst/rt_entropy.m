@@ -3,6 +3,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{S} =} rt_entropy (@var{bg}, @var{A})
 ## @deftypefnx {} {[@var{S}, @var{conf}] =} rt_entropy (@var{bg}, @var{A})
+## @deftypefnx {} {[@var{S}, @var{conf}] =} rt_entropy (@dots{}, "t", @var{t})
 ## Holographic (Ryu-Takayanagi) entanglement entropy of a region made of
 ## many boundary intervals, minimised exactly over every RT candidate.
 ##
@@ -90,14 +91,41 @@
 ## (k x 2, where they land, [x, z] in the bulk coordinates of
 ## @file{doc/bcft.md}).
 ##
+## @strong{Time} (covariant HRT entropies, @file{doc/hrt_time.md}): a row
+## @code{[start, end, t_start, t_end]} (an n x 4 matrix) gives each endpoint
+## its own boundary time, in every bulk; the endpoints must be pairwise
+## spacelike (else @code{holent:timelike}) and intervals with times must
+## not touch.  On a thermofield double (@code{ads3_background ("tfd", ...)})
+## a region is a struct with fields @code{left} and @code{right} (each n x 2
+## or n x 4, possibly empty; a plain matrix is the right side), minimised
+## over geodesics within a side and through the bridge
+## (@file{doc/tfd_shock.md}; regions on both sides need the line).  The
+## option @qcode{"t"} (scalar or vector) adds t to every endpoint time (on
+## a thermofield double: both sides move forward) and, on a quench
+## (@code{ads3_background ("quench", ...)}), is the boundary time after the
+## quench (@file{doc/quench.md}); a vector gives one entropy per time (the
+## shape of @var{t} for one region, numel(A) x numel(t) for a cell).  On this
+## path @var{conf} has the fields @code{crossings} (geodesics through the
+## bridge) and @code{horizon}, arrays like @var{S}.
+##
 ## @seealso{interval_entropy, mutual_information, tripartite_information,
 ## conditional_entropy, ads3_background, page_curve}
 ## @end deftypefn
 
-function [S, conf] = rt_entropy (bg, A)
+function [S, conf] = rt_entropy (bg, A, varargin)
   fn = "rt_entropy";
-  if (nargin != 2)
+  if (nargin != 2 && nargin != 4)
     print_usage ();
+  endif
+  o = __holent_opts__ (fn, {"t"}, varargin);
+  if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, {A}))
+    t = __holent_time_entropy__ ("times", fn, o);
+    [S, nc, hz] = __holent_time_entropy__ (fn, bg, A, t);
+    sz = merge (iscell (A), size (A), [1 1]);
+    S = __holent_time_entropy__ ("shape", S, sz, t);
+    conf = struct ("crossings", __holent_time_entropy__ ("shape", nc, sz, t),
+                   "horizon", __holent_time_entropy__ ("shape", hz != 0, sz, t));
+    return;
   endif
   __holent_check_bg__ (fn, bg);
   [~, gw] = __holent_is_bcft__ (bg);
@@ -144,6 +172,40 @@ endfunction
 %! assert (conf.brane.landing, [-0.2, sqrt(1 - 0.04)], 1e-14);
 %! assert (conf.pairs, [2 3]);
 %! assert (S, (log (2 / bg.cutoff) + atanh (0.2) + 2 * log (0.1 / bg.cutoff)) / 6, 1e-12);
+
+%!test
+%! ## Endpoint times: equal times give the static value; a boosted interval
+%! ## on the vacuum line depends on dx^2 - dt^2 only (Lorentz invariance;
+%! ## Hubeny, Rangamani and Takayanagi 2007, JHEP 07 (2007) 062).
+%! bg = ads3_background ("vacuum", "line", "c", 3, "cutoff", 1e-6);
+%! assert (rt_entropy (bg, [0 1 0.2 0.2; 2 3 0.2 0.2]), rt_entropy (bg, [0 1; 2 3]), 1e-12);
+%! assert (rt_entropy (bg, [0 5 0 3]), log (4 / 1e-6), 1e-12);
+%! S = rt_entropy (bg, {[0 1], [0 5 0 3]}, "t", [0 1 2]);
+%! assert (size (S), [2 3]);
+%! assert (S(2,:), log (4 / 1e-6) * [1 1 1], 1e-12);
+
+%!test
+%! ## Hartman and Maldacena 2013 (JHEP 05 (2013) 014): S(A_L u A_R) grows
+%! ## like 2 (c/3) log cosh(2 pi t/beta) and saturates at 2 S(A).
+%! bg = ads3_background ("tfd", "line", "beta", 1, "c", 3, "cutoff", 1e-6);
+%! A = struct ("left", [0 2], "right", [0 2]);
+%! t = [0 0.3 0.6 1.5];
+%! [S, conf] = rt_entropy (bg, A, "t", t);
+%! h = 2 * log (1 / (pi * 1e-6) * cosh (2 * pi * t));
+%! s1 = 2 * log (1 / (pi * 1e-6) * sinh (2 * pi));
+%! assert (S, min (h, s1), 1e-10);
+%! assert (conf.crossings, 2 * (h < s1));
+
+%!error <timelike> rt_entropy (ads3_background ("vacuum", "line"), [0 1 0 2])
+%!error <achronal> rt_entropy (ads3_background ("vacuum", "line"), [0 1 0 0; 1.5 2 1 1])
+%!error <touches> rt_entropy (ads3_background ("vacuum", "line"), [0 1 0 0; 1 2 0 0])
+%!error <thermofield double> rt_entropy (ads3_background ("vacuum", "line"), struct ("left", [0 1]))
+%!error <sides are 'left' and 'right'> rt_entropy (ads3_background ("tfd", "line", "beta", 1), struct ("middle", [0 1]))
+%!error <own times> rt_entropy (ads3_background ("quench", "line", "beta", 1), [0 1 0 0])
+%!error <not supported> rt_entropy (ads3_background ("tfd", "circle", "beta", 1), struct ("left", [0 1], "right", [0 1]))
+%!error <has no intervals> rt_entropy (ads3_background ("tfd", "line", "beta", 1), struct ("left", zeros (0, 2)))
+%!error <NaN> rt_entropy (ads3_background ("vacuum", "line"), [0 1], "t", NaN)
+
 %!test
 %! ## One interval reproduces interval_entropy (Calabrese and Cardy 2004,
 %! ## J. Stat. Mech. P06002: S = (c/3) log(l/eps) on a line).
