@@ -3,6 +3,7 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{len} =} geodesic_length (@var{bg}, @var{x1}, @var{x2})
 ## @deftypefnx {} {@var{len} =} geodesic_length (@dots{}, "class", @var{cls})
+## @deftypefnx {} {@var{len} =} geodesic_length (@dots{}, "t1", @var{t1}, "t2", @var{t2}, "side1", @var{s1}, "side2", @var{s2}, "timelike", @var{tf}, "t", @var{t})
 ## Regulated length, in units of the AdS radius ell, of the boundary-anchored
 ## geodesic of background @var{bg} (from @code{ads3_background}) between the
 ## boundary points @var{x1} and @var{x2}.
@@ -24,12 +25,27 @@
 ##
 ## Coincident points (on a circle: equal modulo L) are an error.
 ##
+## @strong{Time} (@file{doc/hrt_time.md}): @qcode{"t1"} and @qcode{"t2"}
+## (default 0, broadcast like the points) are the boundary times of the
+## endpoints: the covariant (HRT) length, in every bulk.  The points must
+## be spacelike separated (else @code{holent:timelike}) unless
+## @qcode{"timelike"}, true, which returns the timelike branch as a
+## complex number (imaginary part pi; Doi, Harper, Mollabashi, Takayanagi and
+## Taki 2023, PRL 130, 031601).  On a thermofield double
+## (@code{ads3_background ("tfd", ...)}) @qcode{"side1"} and
+## @qcode{"side2"} are @qcode{"left"} or @qcode{"right"} (default right):
+## points on different sides are joined through the Einstein-Rosen bridge
+## (shortest winding on a circle; with the shock shift of the background),
+## both times running forward (@file{doc/tfd_shock.md}).  @qcode{"t"} adds
+## to both times, and on a quench is the time after it (t1, t2 must then
+## be equal or absent; @file{doc/quench.md}).
+##
 ## @seealso{ads3_background, interval_entropy}
 ## @end deftypefn
 
 function len = geodesic_length (bg, x1, x2, varargin)
   fn = "geodesic_length";
-  if (nargin != 3 && nargin != 5)
+  if (nargin < 3 || mod (nargin, 2) != 1)
     print_usage ();
   endif
   if (__holent_is_bcft__ (bg))
@@ -37,12 +53,14 @@ function len = geodesic_length (bg, x1, x2, varargin)
            "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
            fn);
   endif
-  __holent_check_bg__ (fn, bg);
-  cls = 0;
-  if (! isempty (varargin))
-    o = __holent_opts__ (fn, {"class"}, varargin);
+  o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);
+  timed = numel (fieldnames (rmfield (o, intersect (fieldnames (o), {"class"})))) > 0 ...
+          || __holent_time_entropy__ ("timed", bg, {});
+  if (! timed)
+    __holent_check_bg__ (fn, bg);
   endif
-  if (! isempty (varargin) && isfield (o, "class"))
+  cls = 0;
+  if (isfield (o, "class"))
     v = o.class;
     choices = {"shorter", "positive", "negative"};
     if (! ischar (v) || ! any (strcmpi (v, choices)))
@@ -66,6 +84,12 @@ function len = geodesic_length (bg, x1, x2, varargin)
     end_try_catch
     x1 = x1 + z;
     x2 = x2 + z;
+  endif
+  if (timed)
+    x1 = __holent_array__ (fn, "X1", x1);
+    x2 = __holent_array__ (fn, "X2", x2);
+    len = timed_length (fn, bg, x1, x2, cls, o);
+    return;
   endif
   try
     ## NaN, Inf, overflow and coincident points are checked in the core
@@ -98,6 +122,72 @@ function explain_bad_points (fn, bg, x1, x2)
   endif
 endfunction
 
+## Covariant lengths, two-sided lengths and the quench (doc/hrt_time.md).
+function len = timed_length (fn, bg, x1, x2, cls, o)
+  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state"))
+    error ("holent:background", "%s: BG must be a background struct made by ads3_background", fn);
+  endif
+  tfd = strcmp (bg.state, "tfd");
+  quench = strcmp (bg.state, "quench");
+  t1 = t2 = 0;
+  if (isfield (o, "t1"))
+    t1 = __holent_array__ (fn, "t1", o.t1);
+  endif
+  if (isfield (o, "t2"))
+    t2 = __holent_array__ (fn, "t2", o.t2);
+  endif
+  t = 0;
+  if (isfield (o, "t"))
+    t = __holent_scalar__ (fn, "t", o.t, "real");
+  endif
+  side = {1, 1};
+  names = {"side1", "side2"};
+  for k = 1:2
+    if (isfield (o, names{k}))
+      if (! tfd)
+        error ("holent:option", "%s: '%s' applies to a thermofield double (ads3_background (\"tfd\", ...)) only",
+               fn, names{k});
+      endif
+      v = o.(names{k});
+      if (! ischar (v) || ! any (strcmpi (v, {"left", "right"})))
+        error ("holent:option", "%s: '%s' must be \"left\" or \"right\"", fn, names{k});
+      endif
+      side{k} = strcmpi (v, "right");
+    endif
+  endfor
+  tl = false;
+  if (isfield (o, "timelike"))
+    tl = o.timelike;
+    if (! ((islogical (tl) || isnumeric (tl)) && isscalar (tl) && (tl == 0 || tl == 1)))
+      error ("holent:option", "%s: 'timelike' must be true or false", fn);
+    endif
+  endif
+  try
+    z = zeros (size (x1 + t1 + t2));
+  catch
+    error ("holent:size", "%s: X1, X2, t1 and t2 do not broadcast", fn);
+  end_try_catch
+  x1 = x1 + z;
+  x2 = x2 + z;
+  t1 = t1 + z + t;
+  t2 = t2 + z + t;
+  if (quench && any (t1(:) != t2(:)))
+    error ("holent:unsupported", "%s: on a quench both ends live at the time 't' (t1 and t2 must agree)", fn);
+  endif
+  s1 = side{1} + 0 * z;
+  s2 = side{2} + 0 * z;
+  try
+    [re, im] = __holent_time__ ("geodesic", bg, x1, t1, s1, x2, t2, s2, cls, double (tl));
+  catch err
+    __holent_rethrow__ (err, "__holent_time__", fn);
+  end_try_catch
+  if (any (im(:)))
+    len = complex (re, im);
+  else
+    len = re;
+  endif
+endfunction
+
 %!shared bgl, bgc
 %! bgl = ads3_background ("vacuum", "line", "cutoff", 1e-3);
 %! bgc = ads3_background ("thermal", "circle", "beta", 1, "cutoff", 1e-4);
@@ -127,6 +217,28 @@ endfunction
 %! assert (geodesic_length (h1, 0, 5, "class", "positive"), geodesic_length (v, 0, 5), 1e-12);
 %! assert (geodesic_length (h1, 0, 5, "class", "negative"), geodesic_length (v, 0, 5), 1e-12);
 
+%!test
+%! ## Covariant lengths: the vacuum line depends on dx^2 - dt^2 (Hubeny,
+%! ## Rangamani and Takayanagi 2007); the timelike branch adds i pi (Doi et
+%! ## al. 2023); the thermofield double grows like 2 log cosh(2 pi t/beta)
+%! ## through the bridge (Hartman and Maldacena 2013) and the shock adds
+%! ## alpha/2 inside (Shenker and Stanford 2014).
+%! assert (geodesic_length (bgl, 0, 5, "t2", 3), 2 * log (4 / 1e-3), 1e-12);
+%! assert (geodesic_length (bgl, 0, [5 6], "t1", 1, "t2", 1), 2 * log ([5 6] / 1e-3), 1e-12);
+%! len = geodesic_length (bgl, 0, 3, "t2", 5, "timelike", true);
+%! assert (len, 2 * log (4 / 1e-3) + 1i * pi, 1e-12);
+%! tfd = ads3_background ("tfd", "line", "beta", 2, "cutoff", 1e-4);
+%! t = [0 0.5 2];
+%! assert (geodesic_length (tfd, 0, 0, "side1", "left", "t", 0, "t1", t, "t2", t),
+%!         2 * log (2 / (pi * 1e-4) * cosh (2 * pi * t / 2)), 1e-12);
+%! sh = ads3_background ("tfd", "line", "beta", 2, "cutoff", 1e-4, "shock_alpha", 3);
+%! assert (geodesic_length (sh, 1, 1, "side1", "left"), 2 * log (2 / (pi * 1e-4)) + 2 * log (2.5), 1e-12);
+%! assert (geodesic_length (sh, 0, 1), geodesic_length (tfd, 0, 1), 1e-12);
+
+%!error <timelike or null> geodesic_length (bgl, 0, 1, "t2", 2)
+%!error <applies to a thermofield double> geodesic_length (bgl, 0, 1, "side1", "left")
+%!error <must be "left" or "right"> geodesic_length (ads3_background ("tfd", "line", "beta", 1), 0, 1, "side1", "middle")
+%!error <t1 and t2 must agree> geodesic_length (ads3_background ("quench", "line", "beta", 1), 0, 1, "t1", 1)
 %!error <Invalid call> geodesic_length (bgl, 1)
 %!error <coincide> geodesic_length (bgl, 1, [2 1])
 %!error <coincide> geodesic_length (bgc, 1, 1 + 2 * pi)

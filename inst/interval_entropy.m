@@ -4,6 +4,7 @@
 ## @deftypefn  {} {@var{S} =} interval_entropy (@var{bg}, @var{l})
 ## @deftypefnx {} {[@var{S}, @var{branch}] =} interval_entropy (@var{bg}, @var{l})
 ## @deftypefnx {} {[@dots{}] =} interval_entropy (@var{bg}, @var{l}, "at", @var{x0})
+## @deftypefnx {} {@dots{} =} interval_entropy (@dots{}, "dt", @var{dt}, "t", @var{t}, "timelike", @var{tf})
 ## Ryu-Takayanagi entropy of a single boundary interval of length @var{l}
 ## (an array; @var{S} has its size) in background @var{bg} from
 ## @code{ads3_background}.
@@ -36,6 +37,21 @@
 ## log(2 l/eps) + log g adjacent to the boundary of a half line at zero
 ## temperature.
 ##
+## @strong{Time} (@file{doc/hrt_time.md}): @qcode{"dt"} (broadcast against
+## @var{l}) makes the interval boosted: its right end sits dt later than its
+## left end (covariant HRT entropy, with the homology constraint as above).
+## The endpoints must be spacelike (|dt| below the distance, on a circle
+## the circle distance), else @code{holent:timelike}, unless
+## @qcode{"timelike"}, true asks for the timelike entanglement entropy of
+## Doi, Harper, Mollabashi, Takayanagi and Taki 2023 (PRL 130, 031601): the
+## complex value (c/6)(log|P| + prefactor) + i pi c/6 of one geodesic, no
+## homology term (the branch is documented in @file{doc/hrt_time.md}).
+## @qcode{"t"} (scalar or vector) is the time after a quench
+## (@code{ads3_background ("quench", ...)}) or a shift of both endpoint
+## times; a vector gives one result per time (the shape of @var{t} for a
+## scalar @var{l}, numel(l) x numel(t) otherwise).  On this path
+## @var{branch} is true where the horizon is part of the surface.
+##
 ## @seealso{ads3_background, geodesic_length, rt_entropy}
 ## @end deftypefn
 
@@ -47,8 +63,13 @@ function [S, branch] = interval_entropy (bg, l, varargin)
   if (__holent_is_bcft__ (bg))
     [S, branch] = bcft_intervals (fn, bg, l, varargin);
     return;
-  elseif (nargin != 2)
+  endif
+  if (mod (nargin, 2) != 0)
     print_usage ();
+  endif
+  if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
+    [S, branch] = timed (fn, bg, l, varargin);
+    return;
   endif
   __holent_check_bg__ (fn, bg);
   if (! (isnumeric (l) && isreal (l)) || islogical (l) || issparse (l)
@@ -103,6 +124,72 @@ function [S, branch] = bcft_intervals (fn, bg, l, args)
              "%s: some interval, or its distance to the boundary, is not longer than twice the cutoff %g",
              fn, bg.cutoff);
   endif
+endfunction
+
+## The time path: boosted intervals, the quench, the timelike branch.
+function [S, branch] = timed (fn, bg, l, args)
+  o = __holent_opts__ (fn, {"dt", "t", "timelike"}, args);
+  l = __holent_array__ (fn, "L", l);
+  dt = 0;
+  if (isfield (o, "dt"))
+    dt = __holent_array__ (fn, "dt", o.dt);
+  endif
+  tl = false;
+  if (isfield (o, "timelike"))
+    tl = o.timelike;
+    if (! ((islogical (tl) || isnumeric (tl)) && isscalar (tl) && (tl == 0 || tl == 1)))
+      error ("holent:option", "%s: 'timelike' must be true or false", fn);
+    endif
+  endif
+  t = __holent_time_entropy__ ("times", fn, o);
+  try
+    z = zeros (size (l + dt));
+  catch
+    error ("holent:size", "%s: L (%s) and dt (%s) do not broadcast", fn,
+           mat2str (size (l)), mat2str (size (dt)));
+  end_try_catch
+  l = l + z;
+  dt = dt + z;
+  if (isfield (bg, "boundary") && strcmp (bg.boundary, "line"))
+    bad = find (! (l(:) > 0), 1);
+  else
+    bad = find (! (l(:) > 0 & l(:) <= bg.circumference), 1);
+  endif
+  if (! isempty (bad))
+    error ("holent:domain", "%s: L(%d) = %g must be a positive length (at most the circumference on a circle)",
+           fn, bad, l(bad));
+  endif
+  n = numel (l);
+  S = zeros (n, numel (t));
+  branch = false (n, numel (t));
+  todo = true (n, 1);
+  if (tl)
+    ## Causal pairs: one geodesic on the timelike branch.
+    for j = 1:numel (t)
+      try
+        [re, im] = __holent_time__ ("geodesic", bg, zeros (n, 1), t(j) * ones (n, 1),
+                                    ones (n, 1), l(:), dt(:) + t(j), ones (n, 1), 1, 1);
+      catch err
+        __holent_rethrow__ (err, "__holent_time__", fn);
+      end_try_catch
+      todo = (im == 0);
+      S(:,j) = bg.c / 6 * complex (re, im);
+    endfor
+  endif
+  if (any (todo))
+    A = arrayfun (@(a, b) [0, a, 0, b], l(todo), dt(todo), "uniformoutput", false);
+    if (isfield (bg, "state") && strcmp (bg.state, "quench"))
+      if (any (dt(:) != 0))
+        error ("holent:unsupported", "%s: 'dt' is not supported on a quench: the interval lives at the time 't'", fn);
+      endif
+      A = cellfun (@(r) r(1:2), A, "uniformoutput", false);
+    endif
+    [Sr, ~, hz] = __holent_time_entropy__ (fn, bg, A, t);
+    S(todo,:) = Sr;
+    branch(todo,:) = hz != 0;
+  endif
+  S = __holent_time_entropy__ ("shape", S, size (l), t);
+  branch = __holent_time_entropy__ ("shape", branch, size (l), t);
 endfunction
 
 function explain_bad_length (fn, bg, l)
@@ -190,6 +277,33 @@ endfunction
 %! title (sprintf ("BTZ, beta = %g, c = %g: plateau near l = L", bg.beta, bg.c));
 
 %!warning <twice the cutoff> interval_entropy (ads3_background ("vacuum", "line", "cutoff", 1e-3), 1e-3);
+%!test
+%! ## Boosted interval on the thermal line (Hubeny, Rangamani and Takayanagi
+%! ## 2007): S = (c/6) log((beta/(pi eps))^2 sinh(pi(l - dt)/beta) sinh(pi(l + dt)/beta)).
+%! bg = ads3_background ("thermal", "line", "beta", 2, "c", 6, "cutoff", 1e-6);
+%! f = @(l, dt) log ((2 / (pi * 1e-6))^2 * sinh (pi * (l - dt) / 2) .* sinh (pi * (l + dt) / 2));
+%! assert (interval_entropy (bg, [1 3], "dt", 0.5), f ([1 3], 0.5), 1e-12);
+%! ## timelike branch (Doi, Harper, Mollabashi, Takayanagi and Taki 2023):
+%! ## (c/3) log((beta/(pi eps)) sinh(pi T0/beta)) + i pi c/6 for dx -> 0
+%! S = interval_entropy (bg, 1e-9, "dt", 1.5, "timelike", true);
+%! assert (real (S), 2 * log (2 / (pi * 1e-6) * sinh (pi * 1.5 / 2)), 1e-7);
+%! assert (imag (S), pi, 1e-12);
+%! ## spacelike ones stay real on that path
+%! assert (interval_entropy (bg, 3, "dt", 0.5, "timelike", true), f (3, 0.5), 1e-12);
+
+%!test
+%! ## Quench on a line: the vacuum before, the thermal value once t >= l/2
+%! ## (Balasubramanian et al. 2011, PRD 84, 026010).
+%! bg = ads3_background ("quench", "line", "beta", 1, "c", 3, "cutoff", 1e-6);
+%! S = interval_entropy (bg, 2, "t", [-1 1 1.5]);
+%! assert (S, [log(2 / 1e-6), log(1 / (pi * 1e-6) * sinh (2 * pi)) * [1 1]], 1e-12);
+%! assert (size (interval_entropy (bg, [1 2 3], "t", [0 1])), [3 2]);
+
+%!error <timelike> interval_entropy (ads3_background ("vacuum", "line"), 1, "dt", 2)
+%!error <timelike> interval_entropy (ads3_background ("vacuum", "line"), 1, "dt", 1)
+%!error <'timelike' must be> interval_entropy (ads3_background ("vacuum", "line"), 1, "timelike", 3)
+%!error <not supported on a quench> interval_entropy (ads3_background ("quench", "line", "beta", 1), 1, "dt", 0.1)
+%!error <do not broadcast> interval_entropy (ads3_background ("vacuum", "line"), [1 2], "dt", [0 0 0])
 %!error <Invalid call> interval_entropy (ads3_background ("vacuum", "line"))
 %!error <positive length> interval_entropy (ads3_background ("vacuum", "line"), [1 -1])
 %!error <must lie in> interval_entropy (ads3_background ("vacuum", "circle"), 7)
