@@ -1,7 +1,8 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
 
 ## -*- texinfo -*-
-## @deftypefn {} {@var{H} =} conditional_entropy (@var{bg}, @var{A}, @var{B})
+## @deftypefn  {} {@var{H} =} conditional_entropy (@var{bg}, @var{A}, @var{B})
+## @deftypefnx {} {@var{H} =} conditional_entropy (@dots{}, "t", @var{t})
 ## Holographic conditional entropy H(A|B) = S(AB) - S(B) of two disjoint
 ## regions (n x 2 matrices of [start, end] rows, conventions of
 ## @code{rt_entropy}, or cell arrays of them, broadcast as in
@@ -14,16 +15,29 @@
 ## at positive distance from B (fewer where they touch).
 ##
 ## @seealso{mutual_information, tripartite_information, rt_entropy}
+##
+## Time (@file{doc/hrt_time.md}): regions may be n x 4 matrices
+## @code{[start, end, t_start, t_end]}, or, on a thermofield double, structs
+## with fields @code{left} and @code{right} (@file{doc/tfd_shock.md}); the
+## option @qcode{"t"} (scalar or vector) shifts every time, or is the time
+## after a quench; a vector gives one value per time.  Unions stack the
+## rows (of each side).
 ## @end deftypefn
 
-function H = conditional_entropy (bg, A, B)
+function H = conditional_entropy (bg, A, B, varargin)
   fn = "conditional_entropy";
-  if (nargin != 3)
+  if (nargin != 3 && nargin != 5)
     print_usage ();
   endif
-  [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B"}, {A, B}, {[1 2]});
+  [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B"}, {A, B}, {[1 2]}, varargin);
   H = Su{1} - Sp{2};
 endfunction
+
+%!test
+%! ## S(A|B) = S(AB) - S(B) with boosted regions.
+%! bg = ads3_background ("thermal", "line", "beta", 1);
+%! A = [0 1 0 0.3];  B = [2 3 0.1 0];
+%! assert (conditional_entropy (bg, A, B), rt_entropy (bg, [A; B]) - rt_entropy (bg, B), 1e-12);
 
 %!test
 %! ## H(A|B) = S(A) - I(A:B); shifts by (c/3) n_A log(eps1/eps2) with the cutoff.

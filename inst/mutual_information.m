@@ -1,7 +1,8 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
 
 ## -*- texinfo -*-
-## @deftypefn {} {@var{I} =} mutual_information (@var{bg}, @var{A}, @var{B})
+## @deftypefn  {} {@var{I} =} mutual_information (@var{bg}, @var{A}, @var{B})
+## @deftypefnx {} {@var{I} =} mutual_information (@dots{}, "t", @var{t})
 ## Holographic mutual information I(A:B) = S(A) + S(B) - S(AB) of two
 ## disjoint regions, each an n x 2 matrix of [start, end] rows with any
 ## number of intervals (conventions of @code{rt_entropy}), in background
@@ -19,16 +20,40 @@
 ## contact point.
 ##
 ## @seealso{rt_entropy, tripartite_information, conditional_entropy}
+##
+## Time (@file{doc/hrt_time.md}): regions may be n x 4 matrices
+## @code{[start, end, t_start, t_end]}, or, on a thermofield double, structs
+## with fields @code{left} and @code{right} (@file{doc/tfd_shock.md}); the
+## option @qcode{"t"} (scalar or vector) shifts every time, or is the time
+## after a quench; a vector gives one value per time.  Unions stack the
+## rows (of each side).
 ## @end deftypefn
 
-function I = mutual_information (bg, A, B)
+function I = mutual_information (bg, A, B, varargin)
   fn = "mutual_information";
-  if (nargin != 3)
+  if (nargin != 3 && nargin != 5)
     print_usage ();
   endif
-  [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B"}, {A, B}, {[1 2]});
+  [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B"}, {A, B}, {[1 2]}, varargin);
   I = Sp{1} + Sp{2} - Su{1};
 endfunction
+
+%!test
+%! ## Two-sided mutual information of A_L = A_R = [0, l]: positive until
+%! ## cosh(2 pi t/beta) = sinh(pi l/beta) (Hartman and Maldacena 2013,
+%! ## JHEP 05 (2013) 014), and zero after.
+%! bg = ads3_background ("tfd", "line", "beta", 1, "c", 3, "cutoff", 1e-6);
+%! l = 1.5;
+%! ts = acosh (sinh (pi * l)) / (2 * pi);
+%! I = mutual_information (bg, struct ("left", [0 l]), struct ("right", [0 l]), "t", [0, 0.9 * ts, 1.1 * ts]);
+%! I0 = 2 * (log (1 / (pi * 1e-6) * sinh (pi * l)) - log (1 / (pi * 1e-6)));
+%! assert (I(1), I0, 1e-9);
+%! assert (I(2) > 0 && I(3) == 0);
+%! ## quench: mutual information of two intervals against time
+%! q = ads3_background ("quench", "line", "beta", 1);
+%! I = mutual_information (q, [0 1], [1.2 2.2], "t", [-1 0.05 5]);
+%! assert (I(1), mutual_information (ads3_background ("vacuum", "line"), [0 1], [1.2 2.2]), 1e-12);
+%! assert (I(3), mutual_information (ads3_background ("thermal", "line", "beta", 1), [0 1], [1.2 2.2]), 1e-12);
 
 %!test
 %! ## Headrick 2010 (Phys. Rev. D 82, 126010), two intervals in the vacuum on

@@ -1,7 +1,8 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
 
 ## -*- texinfo -*-
-## @deftypefn {} {@var{I3} =} tripartite_information (@var{bg}, @var{A}, @var{B}, @var{C})
+## @deftypefn  {} {@var{I3} =} tripartite_information (@var{bg}, @var{A}, @var{B}, @var{C})
+## @deftypefnx {} {@var{I3} =} tripartite_information (@dots{}, "t", @var{t})
 ## Tripartite information
 ## @example
 ## I3(A:B:C) = S(A) + S(B) + S(C) - S(AB) - S(AC) - S(BC) + S(ABC)
@@ -20,17 +21,32 @@
 ## sign, S(X) + S(Y) and S(XZ), S(YZ)), so I3 stays finite then too.
 ##
 ## @seealso{mutual_information, conditional_entropy, rt_entropy}
+##
+## Time (@file{doc/hrt_time.md}): regions may be n x 4 matrices
+## @code{[start, end, t_start, t_end]}, or, on a thermofield double, structs
+## with fields @code{left} and @code{right} (@file{doc/tfd_shock.md}); the
+## option @qcode{"t"} (scalar or vector) shifts every time, or is the time
+## after a quench; a vector gives one value per time.  Unions stack the
+## rows (of each side).
 ## @end deftypefn
 
-function I3 = tripartite_information (bg, A, B, C)
+function I3 = tripartite_information (bg, A, B, C, varargin)
   fn = "tripartite_information";
-  if (nargin != 4)
+  if (nargin != 4 && nargin != 6)
     print_usage ();
   endif
   [Sp, Su] = __holent_unions__ (fn, bg, {"A", "B", "C"}, {A, B, C},
-                                {[1 2], [1 3], [2 3], [1 2 3]});
+                                {[1 2], [1 3], [2 3], [1 2 3]}, varargin);
   I3 = Sp{1} + Sp{2} + Sp{3} - Su{1} - Su{2} - Su{3} + Su{4};
 endfunction
+
+%!test
+%! ## Holographic monogamy I3 <= 0 (Hayden, Headrick and Maloney 2013, PRD
+%! ## 87, 046003) holds at every time after a quench.
+%! q = ads3_background ("quench", "line", "beta", 1);
+%! I3 = tripartite_information (q, [0 1], [1.1 2], [2.2 3.5], "t", linspace (0, 2, 9));
+%! assert (all (I3 <= 1e-9));
+%! assert (size (I3), [1 9]);
 
 %!test
 %! ## I3 = I(A:B) + I(A:C) - I(A:BC), and I3 <= 0 (MMI, Hayden, Headrick and

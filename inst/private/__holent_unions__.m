@@ -10,7 +10,17 @@
 ## @code{holent:cutoff} when some interval or gap is not longer than twice
 ## the cutoff.
 ## @end deftypefn
-function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions)
+function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
+  ## Time-dependent states and regions with times (issue 12).
+  o = struct ();
+  if (nargin > 5)
+    o = __holent_opts__ (fn, {"t"}, opts);
+  endif
+  if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, args))
+    [Sp, Su] = __holent_time_unions__ (fn, bg, names, args, unions,
+                                       __holent_time_entropy__ ("times", fn, o));
+    return;
+  endif
   [~, gw] = __holent_is_bcft__ (bg);
   __holent_check_bg__ (fn, bg);
   [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args);

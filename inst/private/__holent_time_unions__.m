@@ -1,0 +1,108 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+## -*- texinfo -*-
+## @deftypefn {} {[@var{Sp}, @var{Su}] =} __holent_time_unions__ (@var{fn}, @var{bg}, @var{names}, @var{args}, @var{unions}, @var{t})
+## The time path of @code{__holent_unions__}: the entropies of the parties
+## @var{args} (regions: n x 2 or n x 4 matrices, structs with fields left
+## and right on a thermofield double, or cells of them, batched like
+## @code{__holent_parties__}) and of the unions listed in @var{unions}, at
+## each time of @var{t}.  A union of matrices stacks their rows (n x 2
+## rows get zero times when another party has times); on a thermofield
+## double it stacks each side (a matrix is the right side).  Shapes as
+## @code{__holent_time_entropy__ ("shape", ...)}.
+## @end deftypefn
+function [Sp, Su] = __holent_time_unions__ (fn, bg, names, args, unions, t)
+  np = numel (args);
+  P = cell (np, 1);
+  sz = [1 1];
+  nel = 1;
+  for i = 1:np
+    a = args{i};
+    if (iscell (a))
+      if (isempty (a))
+        error ("holent:empty", "%s: %s is an empty cell array", fn, names{i});
+      endif
+      P{i} = a;
+      if (numel (a) != 1)
+        if (nel != 1 && numel (a) != nel)
+          error ("holent:size", "%s: %s has %d regions where %d were expected",
+                 fn, names{i}, numel (a), nel);
+        endif
+        nel = numel (a);
+        sz = size (a);
+      endif
+    else
+      P{i} = {a};
+    endif
+  endfor
+  for i = 1:np
+    if (numel (P{i}) == 1)
+      P{i} = repmat (P{i}, sz);
+    endif
+  endfor
+  nu = numel (unions);
+  R = cell (nel, np + nu);
+  for i = 1:np
+    R(:,i) = P{i}(:);
+  endfor
+  for j = 1:nu
+    for k = 1:nel
+      R{k,np+j} = join (fn, cellfun (@(p) p{k}, P(unions{j}), "uniformoutput", false));
+    endfor
+  endfor
+  S = __holent_time_entropy__ (fn, bg, R(:), t);
+  S = reshape (S, nel, np + nu, numel (t));
+  Sp = cell (np, 1);
+  Su = cell (nu, 1);
+  for i = 1:np
+    Sp{i} = __holent_time_entropy__ ("shape", reshape (S(:,i,:), nel, []), sz, t);
+  endfor
+  for j = 1:nu
+    Su{j} = __holent_time_entropy__ ("shape", reshape (S(:,np+j,:), nel, []), sz, t);
+  endfor
+endfunction
+
+## The union of regions rs (a cell); n x 2 rows stay n x 2 unless some
+## region has times.
+function u = join (fn, rs)
+  w4 = any (cellfun (@(r) isnumeric (r) && columns (r) == 4, rs)) ...
+       || any (cellfun ("isstruct", rs));
+  if (! w4)
+    u = vertcat (rs{:});
+  elseif (any (cellfun ("isstruct", rs)))
+    u = struct ("left", zeros (0, 4), "right", zeros (0, 4));
+    for k = 1:numel (rs)
+      r = rs{k};
+      if (! isstruct (r))
+        r = struct ("right", r);
+      endif
+      for f = {"left", "right"}
+        if (isfield (r, f{1}) && ! isempty (r.(f{1})))
+          u.(f{1}) = [u.(f{1}); widen(fn, r.(f{1}))];
+        endif
+      endfor
+    endfor
+  else
+    u = zeros (0, 4);
+    for k = 1:numel (rs)
+      u = [u; widen(fn, rs{k})];
+    endfor
+  endif
+endfunction
+
+## n x 2 rows as n x 4 with zero times.
+function m = widen (fn, m)
+  if (! isnumeric (m) || ! ismatrix (m) || ! any (columns (m) == [2 4]))
+    error ("holent:type", "%s: a region must be an n x 2 or n x 4 real matrix", fn);
+  endif
+  m = double (m);
+  if (columns (m) == 2)
+    m = [m, zeros(rows (m), 2)];
+  endif
+endfunction
+
+%!test
+%! bg = ads3_background ("vacuum", "line", "c", 3, "cutoff", 1e-6);
+%! [Sp, Su] = __holent_time_unions__ ("f", bg, {"A", "B"}, {[0 1], [2 3 0.5 0.5]}, {[1 2]}, 0);
+%! assert (Sp{1}, log (1e6), 1e-9);
+%! assert (Su{1}, rt_entropy (bg, [0 1 0 0; 2 3 0.5 0.5]), 1e-12);
