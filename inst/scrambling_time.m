@@ -1,0 +1,67 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
+## -*- texinfo -*-
+## @deftypefn {} {[@var{t_star}, @var{alpha_star}] =} scrambling_time (@var{bg}, @var{A})
+## Scrambling under a shock wave (Shenker and Stanford 2014, JHEP 03 (2014)
+## 067): the smallest shift @var{alpha_star} of the shock at which the
+## two-sided mutual information I(A_L : A_R) of the region @var{A} (a struct
+## with fields @code{left} and @code{right}, at the times it gives) vanishes,
+## and the time @var{t_star} = (beta/(2 pi)) log(4 M alpha_star/E) at which a
+## perturbation of energy E (@code{bg.shock_energy}) must be released on the
+## left for that: the scrambling time.  @var{bg} is a thermofield double
+## (@code{ads3_background ("tfd", ..., "shock_energy", E, "shock_time", tw)};
+## the shift it carries is ignored here; without an energy @var{t_star} is
+## NaN).  For A_L = A_R = [0, l] at t = 0, alpha* = 2 (sinh(pi l/beta) - 1).
+## Derivation: @file{doc/tfd_shock.md}.
+##
+## @seealso{mi_vanishing_time, ads3_background, mutual_information}
+## @end deftypefn
+
+function [tstar, astar] = scrambling_time (bg, A)
+  fn = "scrambling_time";
+  if (nargin != 2)
+    print_usage ();
+  endif
+  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state")
+      || ! strcmp (bg.state, "tfd"))
+    error ("holent:background",
+           "%s: BG must be a thermofield double made by ads3_background (\"tfd\", ...)", fn);
+  endif
+  try
+    astar = __holent_time__ ("scramble", bg, A);
+  catch err
+    __holent_rethrow__ (err, "__holent_time__", fn);
+  end_try_catch
+  tstar = NaN;
+  if (bg.shock_energy > 0 && astar > 0)
+    ## the inverse of the shift formula, in the core
+    circle = strcmp (bg.boundary, "circle");
+    try
+      [a1, M] = __holent_time__ ("shock", double (circle),
+                                 merge (circle, bg.circumference, 1), bg.beta,
+                                 bg.c, bg.shock_energy, 0);
+    catch err
+      __holent_rethrow__ (err, "__holent_time__", fn);
+    end_try_catch
+    ## alpha(tw) = a1 exp(2 pi tw/beta): solve alpha(tw) = astar
+    tstar = bg.beta / (2 * pi) * log (astar / a1);
+  endif
+endfunction
+
+%!test
+%! ## Shenker and Stanford 2014: alpha* = 2 (sinh(pi l/beta) - 1) and
+%! ## t* = (beta/(2 pi)) log(4 M alpha*/E).
+%! E = 1e-4;  l = 2;  beta = 1;
+%! bg = ads3_background ("tfd", "line", "beta", beta, "c", 6, "shock_energy", E, "shock_time", 0);
+%! [ts, as] = scrambling_time (bg, struct ("left", [0 l], "right", [0 l]));
+%! assert (as, 2 * (sinh (pi * l / beta) - 1), 1e-10 * as);
+%! M = pi * 6 / (6 * beta^2);
+%! assert (ts, beta / (2 * pi) * log (4 * M * as / E), 1e-10);
+%! ## the mutual information indeed vanishes there
+%! sh = ads3_background ("tfd", "line", "beta", beta, "c", 6, "shock_alpha", as * (1 + 1e-9));
+%! assert (mutual_information (sh, struct ("left", [0 l]), struct ("right", [0 l])), 0, 1e-8);
+
+%!error <Invalid call> scrambling_time (1)
+%!error <thermofield double> scrambling_time (ads3_background ("thermal", "line", "beta", 1), struct ("left", [0 1], "right", [0 1]))
+%!error <left has no intervals> scrambling_time (ads3_background ("tfd", "line", "beta", 1), struct ("right", [0 1]))
