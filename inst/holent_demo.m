@@ -121,6 +121,30 @@ function holent_demo ()
     printf ("   %8.2f %12.4f %12.4f  %s\n", t(k), S(k), info.S_no_island(k), info.phase{k});
   endfor
   printf ("   island edge on the brane at (x, z) = (%.4f, %.4f)\n", info.island(1,:));
+
+  ## 8. Time: a global quench and the two-sided black hole (invented
+  ## scenario, for the demo only).
+  q = ads3_background ("quench", "line", "beta", 1, "c", 12, "cutoff", 1e-6);
+  A = [0 2; 2.5 3.5];
+  ts = [-0.5 0 0.25 0.5 0.75 1 1.5 2];
+  Sq = rt_entropy (q, A, "t", ts);
+  Iq = mutual_information (q, A(1,:), A(2,:), "t", ts);
+  printf ("\n8. Global quench (beta = 1, c = 12): two intervals [0,2], [2.5,3.5]\n");
+  printf ("   %8s %12s %12s\n", "t", "S(A)", "I(A1:A2)");
+  printf ("   %8.2f %12.4f %12.4f\n", [ts; Sq; Iq]);
+  tfd = ads3_background ("tfd", "line", "beta", 1, "c", 12, "cutoff", 1e-6);
+  R = struct ("left", [0 2], "right", [0 2]);
+  tt = [0 0.25 0.5 0.75 1 1.25];
+  [St, conf] = rt_entropy (tfd, R, "t", tt);
+  printf ("   two-sided S(A_L u A_R), A = [0, 2] on both sides; mutual information\n");
+  printf ("   vanishes at t = %.4f\n", mi_vanishing_time (tfd, R));
+  printf ("   %8s %12s %10s\n", "t", "S", "bridges");
+  printf ("   %8.2f %12.4f %10d\n", [tt; St; conf.crossings]);
+  sh = ads3_background ("tfd", "line", "beta", 1, "c", 12, "cutoff", 1e-6,
+                        "shock_energy", 1e-6, "shock_time", 0);
+  [tstar, astar] = scrambling_time (sh, R);
+  printf ("   scrambling: a shock of energy density 1e-6 kills I(A_L:A_R) when sent at\n");
+  printf ("   t_w = %.4f (shift alpha* = %.4f)\n", tstar, astar);
 endfunction
 
 function s = params_str (p)
@@ -137,4 +161,5 @@ endfunction
 %! assert (! isempty (strfind (s, "connected")));
 %! assert (isempty (strfind (s, " NO ")));
 %! assert (! isempty (strfind (s, "Page time")));
+%! assert (! isempty (strfind (s, "Global quench")));
 %!error <called with too many inputs> holent_demo (1)
