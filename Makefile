@@ -26,7 +26,7 @@ $(TARBALL): $(DIST_SRC) DESCRIPTION INDEX LICENSE Makefile
 	rm -rf $(BUILD)/dist && mkdir -p $(BUILD)/dist/$(PKG)/src/core
 	cp -r DESCRIPTION INDEX inst doc $(BUILD)/dist/$(PKG)/
 	cp LICENSE $(BUILD)/dist/$(PKG)/COPYING
-	cp src/Makefile src/*.c src/*.h $(BUILD)/dist/$(PKG)/src/
+	cp src/Makefile src/*.c src/*.cc src/*.h $(BUILD)/dist/$(PKG)/src/
 	cp src/core/*.c src/core/*.h $(BUILD)/dist/$(PKG)/src/core/
 	tar -C $(BUILD)/dist -czf $@ $(PKG)
 	@echo "built $@"

@@ -61,8 +61,13 @@
 ## holds) and one struct per family, @code{sa}, @code{al}, @code{ssa},
 ## @code{wm}, @code{mmi}, @code{cyclic}, each with @code{count} (instances
 ## evaluated), @code{violated} (how many have lhs - rhs < -tol),
-## @code{holds} (logical: none violated), @code{worst_value} (the smallest
-## lhs - rhs; Inf when there is no instance), @code{worst_instance} (that
+## @code{undecided} (how many evaluated to NaN: counted neither as holding
+## nor as violated; the values are computed on @var{Svec} scaled by a
+## power of two, so entries near the double range do not overflow and this
+## is 0 for every finite @var{Svec}), @code{holds} (logical: none violated
+## and none undecided), @code{worst_value} (the smallest lhs - rhs; Inf
+## when there is no instance; -Inf or Inf only when that value itself is
+## beyond the double range), @code{worst_instance} (that
 ## inequality as text, e.g. @qcode{"S(A1A2) + S(A2A3) >= S(A2) + S(A1A2A3)"}),
 ## @code{worst_regions} (a cell of its regions as party index vectors, in
 ## the order X, Y, Z, @dots{}) and @code{complete} (every instance was
@@ -130,6 +135,7 @@ function rep = entropy_inequalities (Svec, varargin)
     cy = bs(1);
     cy.count = sum ([bs.count]);
     cy.violated = sum ([bs.violated]);
+    cy.undecided = sum ([bs.undecided]);
     cy.holds = all ([bs.holds]);
     cy.complete = all ([bs.complete]);
     [~, jw] = min ([bs.worst_value]);
@@ -151,10 +157,11 @@ function rep = entropy_inequalities (Svec, varargin)
 endfunction
 
 function s = one_family (Svec, fam, m, complete, tol, names)
-  [cnt, viol, worst, masks] = __holent_ineq__ (Svec, fam, m, double (complete), tol);
+  [cnt, viol, worst, masks, und] = __holent_ineq__ (Svec, fam, m, double (complete), tol);
   s.count = cnt;
   s.violated = viol;
-  s.holds = viol == 0;
+  s.undecided = und;
+  s.holds = viol == 0 && und == 0;
   s.worst_value = worst;
   regs = arrayfun (@(x) find (bitget (x, 1:numel (names))), masks,
                    "uniformoutput", false);
@@ -506,6 +513,26 @@ endfunction
 %! assert (! isempty (strfind (out, "MMI")));
 %! assert (! isempty (regexp (out, 'MMI\s+10\s+4\s+-0.693')));
 %! assert (! isempty (strfind (out, "every instance")));
+
+%!test
+%! ## Entries near the double range (regression): with S = a on every
+%! ## subset of three parties MMI = 3a - 3a - a = -a by hand; the unscaled
+%! ## sum 3e308 used to overflow to Inf and count as holding.
+%! rep = entropy_inequalities (1e308 * ones (7, 1));
+%! assert (rep.mmi.worst_value, -1e308, 1e293);
+%! assert (! rep.mmi.holds && rep.mmi.violated == 1 && rep.mmi.undecided == 0);
+%! assert (! rep.cyclic.holds && ! rep.holds);
+%! ## mixed signs near the range, where the cyclic sum used to meet
+%! ## Inf - Inf = NaN: the values agree with brute_family on the vector
+%! ## scaled by 2^-1000 (exact), and no instance is undecided
+%! S = 8e307 * (-1) .^ (1:31)' .* (1 + (1:31)' / 31);
+%! rep = entropy_inequalities (S);
+%! [c, w] = brute_family (S * 2^-1000, 5, "cyclic", 5);
+%! assert (rep.cyclic.by_size(2).count, c);
+%! assert (rep.cyclic.by_size(2).worst_value * 2^-1000, w, 1e-12 * abs (w));
+%! assert (rep.cyclic.undecided, 0);
+%! [~, w] = brute_family (S * 2^-1000, 5, "mmi", 0);
+%! assert (rep.mmi.worst_value * 2^-1000, w, 1e-12 * abs (w));
 
 %!error <Invalid call> entropy_inequalities ()
 %!error <2\^N - 1 entries> entropy_inequalities ([1 2])

@@ -1,12 +1,15 @@
-/* [COUNT, VIOLATED, WORST, REGIONS] = __holent_ineq__ (S, FAMILY, M,
- * COMPLETE, TOL): one family of entropy inequalities evaluated on the
- * entropy vector S (2^N - 1 entries).  FAMILY is "sa", "al", "ssa", "wm",
- * "mmi" or "cyclic" (M = number of regions, odd, for "cyclic"); COMPLETE
- * nonzero asks for every instance.  REGIONS: the party masks of the worst
- * instance (a row, empty when there is none).  GPL-3.0-or-later.  */
+/* [COUNT, VIOLATED, WORST, REGIONS, UNDECIDED] = __holent_ineq__ (S,
+ * FAMILY, M, COMPLETE, TOL): one family of entropy inequalities evaluated
+ * on the entropy vector S (2^N - 1 entries).  FAMILY is "sa", "al",
+ * "ssa", "wm", "mmi" or "cyclic" (M = number of regions, odd, for
+ * "cyclic"); COMPLETE nonzero asks for every instance.  REGIONS: the
+ * party masks of the worst instance (a row, empty when there is none);
+ * UNDECIDED: instances that evaluated to NaN.  Ctrl-C stops a long
+ * enumeration (progress line: holent_gw_poll).  GPL-3.0-or-later.  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
+#include "holent_gw_poll.h"
 #include "core/holent_ineq.h"
 
 static const char FN[] = "__holent_ineq__";
@@ -23,7 +26,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   int st;
 
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 4, nrhs, 5, 5);
+  holent_gw_nargs (FN, nlhs, 5, nrhs, 5, 5);
   const double *s = holent_gw_real (prhs[0], FN, "S", &len);
   holent_gw_string (prhs[1], FN, "FAMILY", fam, sizeof fam);
   for (f = 0; f < sizeof names / sizeof names[0]; f++)
@@ -48,7 +51,9 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     mexErrMsgIdAndTxt ("holent:domain",
                        "M must be odd with 3 <= M <= N = %u, got %g", n, m);
   st = holent_ineq_eval (n, s, (holent_ineq_family) f, (unsigned) m,
-                         complete != 0, tol, &res);
+                         complete != 0, tol, &res,
+                         holent_gw_poll ("entropy_inequalities"));
+  holent_gw_poll_end ();
   if (st == HOLENT_EINVAL)
     {
       for (k = 0; k < len && isfinite (s[k]); k++)
@@ -73,4 +78,6 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       for (j = 0; j < res.nregions; j++)
         out[j] = (double) res.regions[j];
     }
+  if (nlhs > 4)
+    plhs[4] = mxCreateDoubleScalar (res.undecided);
 }

@@ -16,6 +16,7 @@
 #include <string.h>
 #include <math.h>
 #include "holent_gw.h"
+#include "holent_gw_poll.h"
 #include "core/holent_region.h"
 #include "core/holent_rt.h"
 
@@ -61,6 +62,7 @@ static void
 gw_raise (gw_state *g)
 {
   gw_release (g);
+  holent_gw_poll_end ();
   mexErrMsgIdAndTxt (g->id, "%s", g->msg);
 }
 
@@ -345,8 +347,14 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   double nshort = 0.0;
   size_t failed = 0;
+  /* Ctrl-C and progress: per region, and inside the minimisers.  */
   int st = holent_rt_batch_run (g.batch, &bg, method, ncell, g.in, S,
-                                &nshort, g.conf, &failed, NULL);
+                                &nshort, g.conf, &failed, holent_gw_poll (fn));
+  if (st == HOLENT_EINTR)
+    {
+      gw_release (&g);
+      holent_gw_interrupt ();
+    }
   if (st)
     {
       region_name (nm, sizeof nm, name, is_cell, failed);
@@ -360,6 +368,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     for (size_t k = 0; k < ncell; k++)
       make_conf_entry (&g.conf[k], &bg, conf, k);
   gw_release (&g);
+  holent_gw_poll_end ();
   if (nlhs > 1)
     plhs[1] = mxCreateDoubleScalar (nshort);
 }

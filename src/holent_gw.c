@@ -3,6 +3,7 @@
 #include <string.h>
 #include <gsl/gsl_errno.h>
 #include "holent_gw.h"
+#include "holent_gw_poll.h"
 
 void
 holent_gw_init (void)
@@ -118,6 +119,9 @@ holent_gw_fail (int status, const char *fn, const char *name, size_t index)
 {
   (void) fn;  /* Octave prefixes messages with the gateway name */
   const char *id;
+  holent_gw_poll_end ();  /* the message starts on a line of its own */
+  if (status == HOLENT_EINTR)
+    holent_gw_interrupt ();  /* Ctrl-C: back to the prompt, no error */
   switch (status)
     {
     case HOLENT_EINVAL:    id = "holent:invalid"; break;

@@ -215,6 +215,7 @@
 %!   "strip_entropy", {bv, 0.5}, {"bghd:BG", "lens:L"};
 %!   "ball_entropy", {bh, [0.5 1]}, {"bghd:BG", "lens:R"};
 %!   "ball_entropy", {bv, 0.5}, {"bghd:BG", "lens:R"};
+%!   "holent_progress", {"auto"}, {"word:MODE"};
 %!   "strip_mutual_information", {bh, 0.5, 0.1, 0.5, "length", 2}, ...
 %!     {"bghd:BG", "lens:L1", "lens:S", "lens:L2", "optname:", "pos:length"};
 %!   "entanglement_velocity", {bh}, {"bghd:BG"};
@@ -346,7 +347,7 @@
 %!     if (isempty (npos))
 %!       npos = numel (args);
 %!     endif
-%!     if (any (strcmp (fn, {"btz_thermodynamics", "hawking_page"})))
+%!     if (any (strcmp (fn, {"btz_thermodynamics", "hawking_page", "holent_progress"})))
 %!       npos = 0;
 %!     endif
 %!     nopt = numel (args) - npos;

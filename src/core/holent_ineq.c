@@ -13,12 +13,45 @@ typedef struct
   unsigned t;         /* regions per instance */
   unsigned k;         /* cyclic: m = 2k + 1 */
   uint32_t full;      /* all n parties */
-  double tol;
+  double tol;         /* scaled like s */
+  double inv;         /* 2^-e with max |s| < 2^e: sums of a few scaled
+                         entries cannot overflow, and scaling is exact */
   holent_ineq_result *res;
+  const holent_poll *poll;
+  double done, total, next;  /* tuples visited, expected, next poll */
+  int stop;
 } walk;
 
-/* S of a non-empty union (mask 0 never occurs: regions are non-empty).  */
-#define SS(w, x) ((w)->s[(x) - 1])
+/* S of a non-empty union (mask 0 never occurs: regions are non-empty),
+   scaled.  */
+#define SS(w, x) ((w)->s[(x) - 1] * (w)->inv)
+
+/* Poll the caller every 2^16 tuples.  */
+#define POLL_EVERY 65536.0
+static void
+tick (walk *w)
+{
+  w->next = w->done + POLL_EVERY;
+  if (w->poll != NULL && w->poll->fn != NULL
+      && w->poll->fn (w->poll->ctx, w->done, w->total))
+    w->stop = 1;
+}
+#define TICK(w) \
+  do { if (++(w)->done >= (w)->next) tick (w); } while (0)
+
+/* The power of two 2^-e with max |s_i| < 2^e (1 when every s_i is 0).  */
+static double
+inv_scale (const double *s, size_t len)
+{
+  double mx = 0.0;
+  int e;
+  for (size_t i = 0; i < len; i++)
+    mx = fmax (mx, fabs (s[i]));
+  if (mx == 0.0 || !isfinite (mx))
+    return 1.0;
+  frexp (mx, &e);
+  return ldexp (1.0, -e);
+}
 
 static double
 value_of (const walk *w, const uint32_t *r)
@@ -66,6 +99,13 @@ visit (walk *w, const uint32_t *r)
   double v = value_of (w, r);
   holent_ineq_result *res = w->res;
   res->count += 1.0;
+  if (isnan (v))
+    {
+      /* cannot happen for finite scaled entries; never count it as
+         holding if it does */
+      res->undecided += 1.0;
+      return;
+    }
   if (v < -w->tol)
     res->violated += 1.0;
   if (v < res->worst)
@@ -131,12 +171,13 @@ all_tuples (walk *w, uint32_t *r, unsigned d, uint32_t used)
     {
       if (canonical (w, r))
         visit (w, r);
+      TICK (w);
       return;
     }
   lo = floor_of (w, r, d);
   /* the non-empty submasks of rest in increasing order (ends at 0), so
      that the first worst instance found has the lowest parties */
-  for (x = (0u - rest) & rest; x; x = (x - rest) & rest)
+  for (x = (0u - rest) & rest; x && !w->stop; x = (x - rest) & rest)
     {
       if (x <= lo)
         continue;
@@ -160,7 +201,7 @@ subset_triples (walk *w, unsigned n)
             if (canonical (w, r))
               visit (w, r);
           }
-  for (x = 1; x <= w->full; x++)
+  for (x = 1; x <= w->full && !w->stop; x++)
     {
       uint32_t rest = w->full & ~x;
       for (y = (0u - rest) & rest; y; y = (y - rest) & rest)
@@ -168,6 +209,7 @@ subset_triples (walk *w, unsigned n)
           r[0] = x, r[1] = y, r[2] = rest & ~y;
           if (r[2] && canonical (w, r))
             visit (w, r);
+          TICK (w);
         }
     }
 }
@@ -186,6 +228,9 @@ subset_cyclic (walk *w, unsigned n)
       for (j = 0; j < m; j++)
         r[j] = 1u << idx[j];
       visit (w, r);
+      TICK (w);
+      if (w->stop)
+        return;
       for (j = m; j-- > 0;)
         if (idx[j] < n - m + j)
           break;
@@ -211,6 +256,9 @@ subset_cyclic (walk *w, unsigned n)
           lo = hi;
         }
       visit (w, r);
+      TICK (w);
+      if (w->stop)
+        return;
       for (j = m - 1; j-- > 0;)
         if (idx[j] < n - (m - 1) + j)
           break;
@@ -281,6 +329,12 @@ setup (walk *w, unsigned n, const double *s, holent_ineq_family fam,
   if (fam == HOLENT_INEQ_CYCLIC && m > n)
     return HOLENT_EDOM;
   w->s = s;
+  w->inv = inv_scale (s, ((size_t) 1 << n) - 1);
+  w->poll = NULL;
+  w->stop = 0;
+  w->done = 0.0;
+  w->next = POLL_EVERY;
+  w->total = 0.0;
   w->fam = fam;
   w->t = *t;
   w->k = (*t - 1) / 2;
@@ -308,14 +362,45 @@ holent_ineq_value (unsigned n, const double *s, holent_ineq_family fam,
         return HOLENT_EOVERLAP;
       used |= regions[j];
     }
-  *value = value_of (&w, regions);
+  /* exact unless the unscaled value leaves the double range (+-Inf) */
+  *value = value_of (&w, regions) / w.inv;
   return HOLENT_SUCCESS;
+}
+
+/* Roughly how many tuples the enumeration visits (for progress only).  */
+static double
+expected_tuples (const walk *w, unsigned n, int complete)
+{
+  double t = w->t, ordered = 0.0, binom = 1.0;
+  if (!complete)
+    {
+      if (w->t == 3)
+        return pow (3.0, n);
+      return 2.0 * pow (2.0, n < 30 ? n : 30);
+    }
+  /* ordered t-tuples of disjoint non-empty sets, by inclusion-exclusion */
+  for (unsigned j = 0; j <= w->t; j++)
+    {
+      ordered += (j % 2 ? -1.0 : 1.0) * binom * pow (t + 1.0 - j, n);
+      binom = binom * (t - j) / (j + 1.0);
+    }
+  switch (w->fam)
+    {
+    case HOLENT_INEQ_SA: case HOLENT_INEQ_SSA: case HOLENT_INEQ_WM:
+      return ordered / 2.0;
+    case HOLENT_INEQ_MMI:
+      return ordered / 6.0;
+    case HOLENT_INEQ_CYCLIC:
+      return ordered / t;
+    default:
+      return ordered;
+    }
 }
 
 int
 holent_ineq_eval (unsigned n, const double *s, holent_ineq_family fam,
                   unsigned m, int complete, double tol,
-                  holent_ineq_result *res)
+                  holent_ineq_result *res, const holent_poll *poll)
 {
   walk w;
   unsigned t;
@@ -336,9 +421,11 @@ holent_ineq_eval (unsigned n, const double *s, holent_ineq_family fam,
     complete = 1;
   if (complete && pow (t + 1.0, n) > HOLENT_INEQ_BUDGET)
     return HOLENT_ETOOBIG;
-  w.tol = tol;
+  w.tol = tol * w.inv;
   w.res = res;
-  res->count = res->violated = 0.0;
+  w.poll = poll;
+  w.total = expected_tuples (&w, n, complete);
+  res->count = res->violated = res->undecided = 0.0;
   res->worst = INFINITY;
   res->nregions = 0;
   memset (res->regions, 0, sizeof res->regions);
@@ -348,5 +435,11 @@ holent_ineq_eval (unsigned n, const double *s, holent_ineq_family fam,
     subset_triples (&w, n);
   else
     subset_cyclic (&w, n);
+  if (w.stop)
+    return HOLENT_EINTR;
+  /* back to the caller's scale: +-Inf only when the worst value itself
+     is beyond the double range */
+  if (isfinite (res->worst))
+    res->worst /= w.inv;
   return HOLENT_SUCCESS;
 }

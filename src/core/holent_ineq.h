@@ -61,6 +61,9 @@ typedef struct
 {
   double count;     /* instances evaluated                               */
   double violated;  /* instances with lhs - rhs < -tol                   */
+  double undecided; /* instances whose value came out NaN: neither
+                       holding nor violated (none for finite s, which
+                       are evaluated scaled by a power of two)          */
   double worst;     /* smallest lhs - rhs; +INFINITY when count = 0      */
   unsigned nregions;                   /* regions of the worst; 0 if none */
   uint32_t regions[HOLENT_INEQ_NMAX];  /* their masks, in family order   */
@@ -82,9 +85,13 @@ int holent_ineq_value (unsigned n, const double *s, holent_ineq_family fam,
 
 /* Evaluate every instance of the family's complete set (complete != 0)
    or of its subset.  s must be finite (EINVAL), tol >= 0 (EDOM), m odd
-   with 3 <= m <= n for CYCLIC (EDOM).  */
+   with 3 <= m <= n for CYCLIC (EDOM).  Values are computed on s scaled
+   by a power of two, so entries near the double range do not overflow;
+   worst is +-Inf only when the worst value itself is beyond that range.
+   poll (may be NULL) is called every 2^16 tuples; HOLENT_EINTR when it
+   asks to stop (*res is then partial).  */
 int holent_ineq_eval (unsigned n, const double *s, holent_ineq_family fam,
                       unsigned m, int complete, double tol,
-                      holent_ineq_result *res);
+                      holent_ineq_result *res, const holent_poll *poll);
 
 #endif /* HOLENT_INEQ_H */

@@ -195,20 +195,20 @@ test_errors (void)
   r[1] = 2;
   HT_STATUS (holent_ineq_value (3, s, HOLENT_INEQ_MMI, 0, r, &v), HOLENT_SUCCESS);
 
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, NULL), HOLENT_EINVAL);
-  HT_STATUS (holent_ineq_eval (3, NULL, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_EINVAL);
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, NAN, &res), HOLENT_EINVAL);
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, -1e-3, &res), HOLENT_EDOM);
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, INFINITY, &res), HOLENT_EDOM);
-  HT_STATUS (holent_ineq_eval (0, s, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_EDOM);
-  HT_STATUS (holent_ineq_eval (17, s, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_ETOOBIG);
-  HT_STATUS (holent_ineq_eval (3, s, (holent_ineq_family) -1, 0, 1, 0, &res), HOLENT_EINVAL);
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res), HOLENT_EDOM);
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_CYCLIC, 2, 1, 0, &res), HOLENT_EDOM);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, NULL, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, NAN, &res, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, -1e-3, &res, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, INFINITY, &res, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_ineq_eval (0, s, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_ineq_eval (17, s, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_ineq_eval (3, s, (holent_ineq_family) -1, 0, 1, 0, &res, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_CYCLIC, 2, 1, 0, &res, NULL), HOLENT_EDOM);
   s[4] = NAN;
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_EINVAL);
   s[4] = INFINITY;
-  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_EINVAL);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_EINVAL);
   s[4] = 0;
   {
     /* complete enumeration beyond the budget is refused, not attempted */
@@ -216,11 +216,11 @@ test_errors (void)
     HT_CHECK (big != NULL, "calloc");
     if (big)
       {
-        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_MMI, 0, 1, 0, &res), HOLENT_ETOOBIG);
-        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res), HOLENT_ETOOBIG);
-        HT_STATUS (holent_ineq_eval (12, big, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res), HOLENT_ETOOBIG);
+        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_MMI, 0, 1, 0, &res, NULL), HOLENT_ETOOBIG);
+        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res, NULL), HOLENT_ETOOBIG);
+        HT_STATUS (holent_ineq_eval (12, big, HOLENT_INEQ_CYCLIC, 5, 1, 0, &res, NULL), HOLENT_ETOOBIG);
         /* SA is always complete: N = 16 is fine */
-        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_SA, 0, 0, 0, &res), HOLENT_SUCCESS);
+        HT_STATUS (holent_ineq_eval (16, big, HOLENT_INEQ_SA, 0, 0, 0, &res, NULL), HOLENT_SUCCESS);
         HT_CLOSE (res.count, (43046721.0 - 131072.0 + 1.0) / 2, 0);
         HT_CHECK (res.worst == 0.0 && res.violated == 0, "zero vector");
         free (big);
@@ -228,7 +228,7 @@ test_errors (void)
   }
   /* N = 1: no instance at all */
   s[0] = 1.0;
-  HT_STATUS (holent_ineq_eval (1, s, HOLENT_INEQ_SA, 0, 1, 0, &res), HOLENT_SUCCESS);
+  HT_STATUS (holent_ineq_eval (1, s, HOLENT_INEQ_SA, 0, 1, 0, &res, NULL), HOLENT_SUCCESS);
   HT_CHECK (res.count == 0 && isinf (res.worst) && res.nregions == 0, "N = 1");
 }
 
@@ -247,7 +247,7 @@ test_complete (void)
           holent_ineq_nregions (fams[f], m, &t);
           for (i = 0; i < ((1u << n) - 1); i++)
             s[i] = randu () * popcount (i + 1) - 0.3 * randu ();
-          HT_STATUS (holent_ineq_eval (n, s, fams[f], m, 1, 0.0, &res), HOLENT_SUCCESS);
+          HT_STATUS (holent_ineq_eval (n, s, fams[f], m, 1, 0.0, &res, NULL), HOLENT_SUCCESS);
           brute (n, s, fams[f], t, &cnt, &worst);
           HT_CHECK (res.count == cnt, "n %u family %u m %u: count %g, brute %g",
                     n, f, m, res.count, cnt);
@@ -285,7 +285,7 @@ test_subsets (void)
             uint32_t r[HOLENT_INEQ_NMAX], x, y, z, c;
             unsigned t, j;
             holent_ineq_nregions (fams[f], m, &t);
-            HT_STATUS (holent_ineq_eval (n, s, fams[f], m, 0, tol, &res), HOLENT_SUCCESS);
+            HT_STATUS (holent_ineq_eval (n, s, fams[f], m, 0, tol, &res, NULL), HOLENT_SUCCESS);
             if (t == 3)
               {
                 /* single parties and covering triples, by brute force */
@@ -355,7 +355,7 @@ test_ghz (void)
   for (i = 0; i < 15; i++)
     s[i] = log (2.0);
   s[14] = 0;
-  HT_STATUS (holent_ineq_eval (4, s, HOLENT_INEQ_MMI, 0, 1, 1e-12, &res), HOLENT_SUCCESS);
+  HT_STATUS (holent_ineq_eval (4, s, HOLENT_INEQ_MMI, 0, 1, 1e-12, &res, NULL), HOLENT_SUCCESS);
   HT_CLOSE (res.worst, -log (2.0), 1e-15);
   /* MMI (X, Y, Z) with X, Y, Z single parties of not covering all four: 4 of 10 */
   HT_CHECK (res.count == 10, "count %g", res.count);
@@ -365,11 +365,91 @@ test_ghz (void)
   /* a quantum state: SA, AL, SSA, WM hold */
   for (i = HOLENT_INEQ_SA; i <= HOLENT_INEQ_WM; i++)
     {
-      HT_STATUS (holent_ineq_eval (4, s, (holent_ineq_family) i, 0, 1, 1e-12, &res), HOLENT_SUCCESS);
+      HT_STATUS (holent_ineq_eval (4, s, (holent_ineq_family) i, 0, 1, 1e-12, &res, NULL), HOLENT_SUCCESS);
       HT_CHECK (res.worst >= -1e-15 && res.violated == 0, "family %u worst %g", i, res.worst);
     }
-  HT_STATUS (holent_ineq_eval (4, s, HOLENT_INEQ_CYCLIC, 3, 1, 1e-12, &res), HOLENT_SUCCESS);
+  HT_STATUS (holent_ineq_eval (4, s, HOLENT_INEQ_CYCLIC, 3, 1, 1e-12, &res, NULL), HOLENT_SUCCESS);
   HT_CLOSE (res.worst, -log (2.0), 1e-15);
+}
+
+/* Entries near the double range: the unscaled MMI sum 3e308 overflows
+   to +Inf and used to count as holding.  With S = a on every subset of
+   three parties MMI is 3a - 3a - a = -a (the same formula by hand);
+   the cyclic family with m = 3 is MMI.  Also: values beyond the double
+   range come out as +-Inf, never NaN.  */
+static void
+test_overflow (void)
+{
+  double s[7], v;
+  holent_ineq_result res;
+  uint32_t r[3] = { 1, 2, 4 };
+  for (unsigned i = 0; i < 7; i++)
+    s[i] = 1e308;
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_MMI, 0, 1, 0.0, &res, NULL), HOLENT_SUCCESS);
+  HT_CHECK (res.violated == 1 && res.undecided == 0, "violated %g undecided %g",
+            res.violated, res.undecided);
+  HT_CLOSE (res.worst, -1e308, 1e-15);
+  HT_STATUS (holent_ineq_eval (3, s, HOLENT_INEQ_CYCLIC, 3, 1, 0.0, &res, NULL), HOLENT_SUCCESS);
+  HT_CLOSE (res.worst, -1e308, 1e-15);
+  HT_STATUS (holent_ineq_value (3, s, HOLENT_INEQ_MMI, 0, r, &v), HOLENT_SUCCESS);
+  HT_CLOSE (v, -1e308, 1e-15);
+  /* SA on X = A1, Y = A2 with S(A1A2) = -1.7e308: 3 * 1.7e308 > DBL_MAX */
+  s[0] = s[1] = 1.7e308;
+  s[2] = -1.7e308;
+  r[0] = 1, r[1] = 2;
+  HT_STATUS (holent_ineq_value (2, s, HOLENT_INEQ_SA, 0, r, &v), HOLENT_SUCCESS);
+  HT_CHECK (isinf (v) && v > 0, "v = %g", v);
+  /* Cyclic m = 5 on 5 parties with alternating huge entries: finite
+     worst or +-Inf, never NaN, and every instance decided.  */
+  double s5[31];
+  for (unsigned i = 0; i < 31; i++)
+    s5[i] = (i % 3 == 0 ? 1.7e308 : -1.6e308);
+  HT_STATUS (holent_ineq_eval (5, s5, HOLENT_INEQ_CYCLIC, 5, 1, 0.0, &res, NULL), HOLENT_SUCCESS);
+  HT_CHECK (!isnan (res.worst) && res.undecided == 0 && res.count == 12,
+            "worst %g undecided %g count %g", res.worst, res.undecided, res.count);
+}
+
+/* The poll contract: called with done <= total increasing, a nonzero
+   return gives HOLENT_EINTR; polling without stopping changes nothing.  */
+typedef struct { int calls, stop_at; double last, total; int bad; } poll_rec;
+
+static int
+rec_poll (void *ctx, double done, double total)
+{
+  poll_rec *p = ctx;
+  if (done < p->last || (p->calls > 0 && total != p->total))
+    p->bad = 1;
+  p->last = done;
+  p->total = total;
+  return ++p->calls >= p->stop_at;
+}
+
+static void
+test_poll (void)
+{
+  enum { N = 12 };
+  static double s[(1 << N) - 1];
+  holent_ineq_result res, ref;
+  for (unsigned i = 0; i < (1u << N) - 1; i++)
+    s[i] = (double) ((i * 2654435761u) % 1000) / 100.0;
+  poll_rec p = { 0, 1000000, 0.0, 0.0, 0 };
+  holent_poll pl = { rec_poll, &p };
+  HT_STATUS (holent_ineq_eval (N, s, HOLENT_INEQ_MMI, 0, 1, 0.0, &ref, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_ineq_eval (N, s, HOLENT_INEQ_MMI, 0, 1, 0.0, &res, &pl), HOLENT_SUCCESS);
+  HT_CHECK (p.calls > 3 && !p.bad, "calls %d bad %d", p.calls, p.bad);
+  HT_CHECK (res.count == ref.count && res.worst == ref.worst, "same result");
+  /* done never runs past the expected total by much (progress display) */
+  HT_CHECK (p.last <= 1.01 * p.total, "done %g of %g", p.last, p.total);
+  poll_rec q = { 0, 2, 0.0, 0.0, 0 };
+  holent_poll ql = { rec_poll, &q };
+  HT_STATUS (holent_ineq_eval (N, s, HOLENT_INEQ_MMI, 0, 1, 0.0, &res, &ql), HOLENT_EINTR);
+  HT_CHECK (q.calls == 2, "calls %d", q.calls);
+  holent_poll none = { NULL, NULL };
+  HT_STATUS (holent_ineq_eval (N, s, HOLENT_INEQ_MMI, 0, 1, 0.0, &res, &none), HOLENT_SUCCESS);
+  /* the subset enumerations poll too */
+  q.calls = 0, q.stop_at = 1;
+  static double b[(1 << 16) - 1];
+  HT_STATUS (holent_ineq_eval (16, b, HOLENT_INEQ_SSA, 0, 0, 0.0, &res, &ql), HOLENT_EINTR);
 }
 
 int
@@ -380,5 +460,7 @@ main (void)
   test_complete ();
   test_subsets ();
   test_ghz ();
+  test_overflow ();
+  test_poll ();
   return HT_DONE ();
 }

@@ -1,0 +1,68 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## Ctrl-C and progress on long calls, checked on a real octave-cli
+## session: SIGINT is sent to it (tests/interrupt_session.sh) while a long
+## rt_entropy call runs, as Ctrl-C at the prompt does.
+
+%!function [lat, out] = session (setup, long, after, delay)
+%! sh = file_in_loadpath ("interrupt_session.sh");
+%! q = @(s) ["'" strrep(s, "'", "'\\''") "'"];   # for the shell
+%! cmd = sprintf ("bash %s %s %s %s %s %g", sh, q (pkg ("local_list")),
+%!                q (setup), q (long), q (after), delay);
+%! [st, out] = system (cmd);
+%! assert (st, 0, out);
+%! lat = number_after (out, "LATENCY");
+%!endfunction
+
+%!function v = number_after (out, word)
+%! ## the numbers printed after WORD (first occurrence); [] if none
+%! t = regexp (out, [word ' ([-+.\deE ]+)'], "tokens", "once");
+%! v = [];
+%! if (! isempty (t))
+%!   v = sscanf (t{1}, "%f")';
+%! endif
+%!endfunction
+
+%!function setup = calibrated (seconds)
+%! ## a batch of BTZ regions of 400 intervals, as many as make the call
+%! ## last about SECONDS uninterrupted (measured on 16 of them first)
+%! setup = sprintf (["bg = ads3_background ('thermal', 'circle', 'beta', 1); " ...
+%!   "rand ('seed', 1); A = reshape (sort (rand (800, 1)) * 2 * pi, 2, [])'; " ...
+%!   "t = tic (); rt_entropy (bg, repmat ({A}, 1, 16)); per = toc (t) / 16; " ...
+%!   "K = min (4e5, ceil (%g / per)); C = repmat ({A}, 1, K); keep = 42; " ...
+%!   "printf ('READY %%g %%d\\n', per * K, K);"], seconds);
+%!endfunction
+
+%!test
+%! ## Ctrl-C 3 s into a batch that would run about 60 s: the prompt is back
+%! ## within a fraction of a second (the limit below is generous for a
+%! ## loaded machine), the call left no result, the workspace is intact,
+%! ## and the same session computes again.  The interactive session shows
+%! ## a progress line, erased when the call stops.
+%! [lat, out] = session (calibrated (60), "S = rt_entropy (bg, C);",
+%!   "printf ('AGAIN %d %d %.15g %.15g\\n', keep, exist ('S', 'var'), rt_entropy (bg, [0 1]), interval_entropy (bg, 1));", 3);
+%! est = number_after (out, "READY")(1);
+%! assert (est > 20, "the batch is too short to test an interrupt: %g s", est);
+%! printf ("  Ctrl-C latency %.3f s (call would take %.0f s)\n", lat, est);
+%! assert (lat < 3, out);
+%! back = number_after (out, "BACK");
+%! assert (back < 10, out);
+%! again = number_after (out, "AGAIN");
+%! assert (again(1:2), [42 0]);
+%! assert (again(3), again(4), 1e-12 * abs (again(4)));
+%! ## the progress line was shown (after 2 s) and erased with blanks
+%! assert (! isempty (regexp (out, "rt_entropy: +\\d+% done")), out);
+%! assert (! isempty (regexp (out, "\r +\r")), out);
+
+%!test
+%! ## Progress: never in a non-interactive run by default, always with
+%! ## holent_progress ("on").
+%! oct = [OCTAVE_HOME() "/bin/octave-cli"];
+%! run = @(pre) system (sprintf ("%s --norc --no-history --quiet --eval \"%s\" 2>&1", oct,
+%!   ["pkg ('local_list', '" pkg("local_list") "'); pkg load holent; " pre " " ...
+%!    strrep(calibrated (3.5), "READY", "N") " S = rt_entropy (bg, C); disp (numel (S))"]));
+%! [st, out] = run ("");
+%! assert (st, 0, out);
+%! assert (isempty (strfind (out, "% done")), out);
+%! [st, out] = run ("holent_progress ('on');");
+%! assert (st, 0, out);
+%! assert (! isempty (regexp (out, "rt_entropy: +\\d+% done, about \\d+ s left")), out);
