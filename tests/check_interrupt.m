@@ -59,7 +59,7 @@
 %! oct = [OCTAVE_HOME() "/bin/octave-cli"];
 %! run = @(pre) system (sprintf ("%s --norc --no-history --quiet --eval \"%s\" 2>&1", oct,
 %!   ["pkg ('local_list', '" pkg("local_list") "'); pkg load holent; " pre " " ...
-%!    strrep(calibrated (3.5), "READY", "N") " S = rt_entropy (bg, C); disp (numel (S))"]));
+%!    strrep(calibrated (9), "READY", "N") " S = rt_entropy (bg, C); disp (numel (S))"]));
 %! [st, out] = run ("");
 %! assert (st, 0, out);
 %! assert (isempty (strfind (out, "% done")), out);
