@@ -57,8 +57,14 @@ gallery: throwaway-install
 bench: throwaway-install
 	$(OCT) --eval '$(PKGSETUP) pkg load holent; addpath ("$(CURDIR)/bench"); run_benchmarks ();' 2>&1 | $(FILTER)
 
+# libFuzzer harnesses of the core (fuzz/), FUZZ_TIME seconds each; needs
+# clang.  make check runs them briefly (a fixed number of inputs).
+FUZZ_TIME ?= 60
+fuzz:
+	bash fuzz/run.sh "$(BUILD)/fuzz" $(FUZZ_TIME)
+
 clean:
 	rm -rf $(BUILD) $(TARBALL)
 	$(MAKE) -C src clean
 
-.PHONY: all dist deps install throwaway-install check demo gallery bench clean
+.PHONY: all dist deps install throwaway-install check demo gallery bench clean fuzz

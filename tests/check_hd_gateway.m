@@ -37,3 +37,9 @@
 %! [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, [0.1; 0.2]);
 %! assert (size (zs), [2 1]);
 %! assert (reach > 0.2);
+
+## a huge dimension is refused before any conversion to int (the cast
+## used to overflow: undefined behaviour, flagged by UBSan)
+%!error <D must be an integer> __holent_hdbg__ (1e300, "vacuum", 1, 1, 1e-3)
+%!error <D must be an integer> __holent_hdbg__ (-1e300, "vacuum", 1, 1, 1e-3)
+%!error <D must be an integer> __holent_hdbg__ (2^31, "vacuum", 1, 1, 1e-3)

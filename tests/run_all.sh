@@ -48,6 +48,15 @@ for t in "$ROOT"/tests/core/test_*.c; do
   fi
 done
 
+if selected fuzz && command -v "${CLANG:-clang}" > /dev/null; then
+  echo "== libFuzzer harnesses (fuzz/, a short reproducible run each)"
+  out=$(bash "$ROOT/fuzz/run.sh" "$BUILD/fuzz" 0 short 2>&1)
+  printf '%s\n' "$out" | grep -E '^(fuzz|FAIL)' || printf '%s\n' "$out" | tail -20
+  p=$(printf '%s\n' "$out" | grep -c '^fuzz .*: ok')
+  f=$(printf '%s\n' "$out" | grep -c '^FAIL')
+  pass=$((pass + p)); fail=$((fail + f))
+fi
+
 echo "== Octave: BIST of inst/*.m and cross-checks in tests/"
 res="$WORK/octave_result.txt"
 rm -f "$res"

@@ -16,15 +16,22 @@ function run_tests (root, result, filter)
   for k = 1:numel (names)
     nm = names{k};
     t0 = tic ();
+    nxfail = 0;
     try
-      [n, nmax] = test (nm, "quiet", stdout);
+      [n, nmax, nxfail] = test (nm, "quiet", stdout);
     catch err
       printf ("FAIL %s: the test run raised: %s\n", nm, err.message);
       n = 0;  nmax = 1;
     end_try_catch
+    ## %!xtest blocks that fail are known failures (a regression test of a
+    ## defect another change fixes), listed but not counted as failed
     pass += n;
-    fail += nmax - n;
-    printf ("%-32s %4d of %4d passed  (%.1f s)\n", nm, n, nmax, toc (t0));
+    fail += nmax - n - nxfail;
+    xf = "";
+    if (nxfail > 0)
+      xf = sprintf (", %d known failure(s)", nxfail);
+    endif
+    printf ("%-32s %4d of %4d passed%s  (%.1f s)\n", nm, n, nmax, xf, toc (t0));
     fflush (stdout);
   endfor
   printf ("octave: %d passed, %d failed\n", pass, fail);

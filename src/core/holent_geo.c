@@ -1,5 +1,6 @@
 /* holent_geo.c: regulated geodesic lengths in AdS3 backgrounds.
  * Derivations: doc/ads3_geodesics.md.  GPL-3.0-or-later.  */
+#include <float.h>
 #include <math.h>
 #include <gsl/gsl_math.h>
 #include "holent_geo.h"
@@ -103,16 +104,30 @@ holent_geo_bg_init (holent_geo_bg *bg, holent_bulk bulk, double L,
     case HOLENT_BULK_THERMAL_ADS:
     case HOLENT_BULK_CONICAL_DEFECT:
       bg->kL = bg->kR = M_PI * bg->alpha / L;
-      bg->pref = 2.0 * log (L / (M_PI * bg->alpha * eps));
+      /* in logs: L/(pi alpha eps) overflows for L = 1e308, eps = 1e-320 */
+      bg->pref = 2.0 * (log (L) - log (M_PI * bg->alpha) - log (eps));
       bg->wgt = 1.0;
       break;
     default:
       bg->kL = M_PI / bg->beta_L;
       bg->kR = M_PI / bg->beta_R;
-      bg->pref = log (bg->beta_L / (M_PI * eps)) + log (bg->beta_R / (M_PI * eps));
+      bg->pref = (log (bg->beta_L) - log (M_PI * eps))
+                 + (log (bg->beta_R) - log (M_PI * eps));
       bg->wgt = 1.0;
       break;
     }
+  /* No Inf and no lost digits without a word: the derived constants must
+     be finite, the scale k eps of the shortest meaningful arc a normal
+     number (else log sin(k l) loses its digits in subnormals or gives
+     -Inf), and k L finite on a circle.  */
+  if (!isfinite (bg->pref) || !isfinite (bg->s_density)
+      || (bg->circle && !isfinite (bg->S_BH)))
+    return HOLENT_EDOM;
+  if (bulk != HOLENT_BULK_POINCARE
+      && (!(fmin (bg->kL, bg->kR) * eps >= DBL_MIN)
+          || !isfinite (fmax (bg->kL, bg->kR))
+          || (bg->circle && !isfinite (fmax (bg->kL, bg->kR) * L))))
+    return HOLENT_EDOM;
   return HOLENT_SUCCESS;
 }
 

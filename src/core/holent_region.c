@@ -10,9 +10,23 @@
 
 typedef struct
 {
-  double s, l;          /* start and length                         */
-  size_t row, last;     /* first and last input row merged into it  */
+  double s, e;          /* start and end (e > s; e may pass L on a circle) */
+  double ss, se;        /* the scale each was given at (see tol2)           */
+  size_t row, last;     /* first and last input row merged into it          */
 } piece;
+
+/* Whether two coordinates coincide is decided from those two alone:
+   |x - y| <= HOLENT_REGION_ULPS eps max(scale_x, scale_y), a scale being
+   the magnitude the coordinate was given at (and at least L on a circle,
+   where reducing mod L and adding L round at that scale).  Never from
+   the rest of the region: a far-away row must not decide how the others
+   merge, and a party and a union of parties then normalise the same
+   points the same way.  */
+static double
+tol2 (double sx, double sy)
+{
+  return HOLENT_REGION_ULPS * DBL_EPSILON * fmax (sx, sy);
+}
 
 holent_region *
 holent_region_alloc (size_t nmax)
@@ -95,27 +109,23 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
   if (n == 0)
     return HOLENT_EEMPTY;
 
-  /* One scale for "equal": rounding in a + L and in the reduction mod L
-     is a few ulps of the largest coordinate.  */
-  double scale = L;
   for (size_t i = 0; i < n; i++)
-    {
-      if (!isfinite (a[i]) || !isfinite (b[i]) || !isfinite (b[i] - a[i]))
-        {
-          r->bad[0] = i;
-          return HOLENT_EINVAL;
-        }
-      scale = fmax (scale, fmax (fabs (a[i]), fabs (b[i])));
-    }
-  const double tol = 16.0 * DBL_EPSILON * scale;
-  r->tol = tol;
+    if (!isfinite (a[i]) || !isfinite (b[i]) || !isfinite (b[i] - a[i]))
+      {
+        r->bad[0] = i;
+        return HOLENT_EINVAL;
+      }
 
   piece *p = r->scratch;
   size_t whole_row = (size_t) -1;
   for (size_t i = 0; i < n; i++)
     {
       double d = b[i] - a[i];
+      double sa = fmax (fabs (a[i]), L), sb = fmax (fabs (b[i]), L);
+      double tol = tol2 (sa, sb);
       p[i].row = p[i].last = i;
+      p[i].ss = sa;
+      p[i].se = sb;
       if (!circle)
         {
           if (d < -tol)
@@ -129,7 +139,7 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
               return HOLENT_EEMPTY;
             }
           p[i].s = a[i];
-          p[i].l = d;
+          p[i].e = b[i];
           continue;
         }
       if (d > L + tol)
@@ -143,7 +153,7 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
             return fail2 (r, HOLENT_EOVERLAP, whole_row, i);
           whole_row = i;
           p[i].s = 0.0;
-          p[i].l = L;
+          p[i].e = L;
           continue;
         }
       double len = fmod (d, L);
@@ -160,7 +170,7 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
       if (s >= L)  /* -tiny + L rounds to L */
         s = 0.0;
       p[i].s = s;
-      p[i].l = len;
+      p[i].e = s + len;
     }
   if (whole_row != (size_t) -1)
     {
@@ -173,16 +183,19 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
 
   qsort (p, n, sizeof *p, cmp_piece);
 
-  /* Sweep: merge touching pieces in place, stop at the first overlap.  */
+  /* Sweep: merge touching pieces in place, stop at the first overlap.
+     The end of a merged piece is the end of its last row, as given, so
+     every comparison is between two input coordinates.  */
   size_t m = 0;
   for (size_t i = 1; i < n; i++)
     {
-      double end = p[m].s + p[m].l, gap = p[i].s - end;
+      double gap = p[i].s - p[m].e, tol = tol2 (p[m].se, p[i].ss);
       if (gap < -tol)
         return fail2 (r, HOLENT_EOVERLAP, p[m].last, p[i].row);
       if (gap <= tol)
         {
-          p[m].l = p[i].s + p[i].l - p[m].s;
+          p[m].e = p[i].e;
+          p[m].se = p[i].se;
           p[m].last = p[i].last;
         }
       else
@@ -193,7 +206,8 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
   if (circle)
     {
       /* The last piece against the first one, one turn later.  */
-      double gap = p[0].s + L - (p[m - 1].s + p[m - 1].l);
+      double gap = p[0].s + L - p[m - 1].e;
+      double tol = tol2 (p[m - 1].se, p[0].ss);
       if (gap < -tol)
         return fail2 (r, HOLENT_EOVERLAP, p[m - 1].last, p[0].row);
       if (gap <= tol)
@@ -205,7 +219,8 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
               return HOLENT_SUCCESS;
             }
           /* Merge the first piece into the last, which now wraps.  */
-          p[m - 1].l = p[0].s + L + p[0].l - p[m - 1].s;
+          p[m - 1].e = p[0].e + L;
+          p[m - 1].se = p[0].se;
           p[m - 1].last = p[0].last;
           for (size_t i = 1; i < m; i++)
             p[i - 1] = p[i];
@@ -217,11 +232,11 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
   for (size_t k = 0; k < m; k++)
     {
       r->start[k] = p[k].s;
-      r->len[k] = p[k].l;
+      r->len[k] = p[k].e - p[k].s;
       r->row[k] = p[k].row;
     }
   r->start0 = 1;
-  double last_end = p[m - 1].s + p[m - 1].l;
+  double last_end = p[m - 1].e;
   if (circle && last_end >= L)
     {
       /* The last interval wraps through 0: its end comes first.  */
@@ -230,7 +245,7 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
       for (size_t k = 0; k < m - 1; k++)
         {
           r->pts[2 * k + 1] = p[k].s;
-          r->pts[2 * k + 2] = p[k].s + p[k].l;
+          r->pts[2 * k + 2] = p[k].e;
         }
       r->pts[2 * m - 1] = p[m - 1].s;
     }
@@ -238,7 +253,7 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
     for (size_t k = 0; k < m; k++)
       {
         r->pts[2 * k] = p[k].s;
-        r->pts[2 * k + 1] = p[k].s + p[k].l;
+        r->pts[2 * k + 1] = p[k].e;
       }
   return HOLENT_SUCCESS;
 }

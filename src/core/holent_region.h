@@ -14,6 +14,13 @@
 #include <stddef.h>
 #include "holent.h"
 
+/* Two coordinates x, y of a region coincide (touching rows merged,
+   zero length, whole circle, and the border between touching and
+   overlapping) when |x - y| <= HOLENT_REGION_ULPS DBL_EPSILON max(s_x,
+   s_y), s the magnitude of the coordinate as given (at least L on a
+   circle).  See doc/rt_regions.md.  */
+#define HOLENT_REGION_ULPS 16.0
+
 /* Largest number of input rows a region workspace accepts.  */
 #define HOLENT_REGION_NMAX ((size_t) 1 << 26)
 
@@ -30,7 +37,6 @@ typedef struct
   double *pts;      /* 2n endpoints ascending (in [0, L) on a circle)      */
   int start0;       /* 1 if pts[0] starts an interval; 0 if pts[0] ends
                        the interval that wraps through 0 (circle only)     */
-  double tol;       /* the touching tolerance used                         */
   size_t bad[2];    /* offending input rows (0-based) on failure, or
                        (size_t) -1                                         */
   size_t nmax;      /* capacity in input rows                              */
@@ -50,8 +56,10 @@ void holent_region_free (holent_region *r);
  *                   on a circle end - start > L (bad[0] = row)
  *   HOLENT_EEMPTY   n == 0, or a zero-length row (bad[0] = row)
  *   HOLENT_EOVERLAP two rows overlap: bad[0] < bad[1] are two of them.
- * Coordinates closer than tol = 16 DBL_EPSILON max(L, |coordinates|)
- * count as equal (touching, zero length, whole circle).  */
+ * Whether two coordinates count as equal (touching, zero length, whole
+ * circle) is decided from those two coordinates alone (HOLENT_REGION_ULPS
+ * above), so a row is normalised the same way in every region it is part
+ * of.  */
 int holent_region_set (holent_region *r, int circle, double L, size_t n,
                        const double *a, const double *b);
 

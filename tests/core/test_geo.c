@@ -160,11 +160,37 @@ test_interval (void)
   free (ss);
 }
 
+/* Derived constants that overflow, or cutoff-scale arcs that would be
+   subnormal, are refused (EDOM) instead of giving Inf or digit-less
+   lengths; large but representable ratios are computed in logs and
+   agree with the closed form (Calabrese and Cardy 2004), 2 log((L/(pi
+   eps)) sin(pi l/L)), taken here as logs of the pieces.  */
+static void
+test_init_range (void)
+{
+  holent_geo_bg bg;
+  double len;
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, 1e308, 1e-320, 0, 0, 1, 1), HOLENT_EDOM);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, 2 * M_PI, 1e-320, 0, 0, 1, 1), HOLENT_EDOM);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_CONICAL_DEFECT, 1e308, 1e-3, 0, 0, 0.5, 1), HOLENT_EDOM);
+  /* BTZ: S_BH = (pi c/6)(2/beta) L overflows */
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, 1e300, 1e-300, 1e-20, 1e-20, 1, 1e10), HOLENT_EDOM);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_PLANAR_BTZ, 0, 1e-3, 1e-310, 1e-310, 1, 1), HOLENT_EDOM);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, 1e200, 1e-100, 0, 0, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_arc_length (&bg, 1e150, &len), HOLENT_SUCCESS);
+  HT_CLOSE (len, 2 * (log (1e200) - log (M_PI) - log (1e-100) + log (sin (M_PI * 1e-50))), 1e-14);
+  /* the Poincare line has no scale k: any positive cutoff is fine */
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_POINCARE, 0, 1e-320, 0, 0, 1, 1), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_arc_length (&bg, 1.0, &len), HOLENT_SUCCESS);
+  HT_CHECK (isfinite (len), "len %g", len);
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
   test_init_errors ();
+  test_init_range ();
   test_lengths ();
   test_interval ();
   HT_CHECK (holent_strerror (HOLENT_EOVERLAP)[0] != '\0', "strerror");

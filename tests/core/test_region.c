@@ -1,5 +1,6 @@
 /* Unit tests of holent_region: normalisation (sorting, wrapping through 0,
  * merging touching intervals, the whole circle) and every error path.  */
+#include <float.h>
 #include <math.h>
 #include <stdlib.h>
 #include <gsl/gsl_math.h>
@@ -160,11 +161,133 @@ test_normalise (void)
   holent_region_free (r);
 }
 
+/* Copy the normalised intervals of r (on a line) as rows (start, end)
+   into a, b: its endpoints are input coordinates, as given.  */
+static size_t
+rows_of (const holent_region *r, double *a, double *b)
+{
+  for (size_t k = 0; k < r->n; k++)
+    {
+      a[k] = r->pts[2 * k];
+      b[k] = r->pts[2 * k + 1];
+    }
+  return r->n;
+}
+
+static double
+urand (void)
+{
+  return rand () / (RAND_MAX + 1.0);
+}
+
+/* Tolerances belong to the comparison: the regions of the issue-10
+   report, and random regions whose coordinates span many orders of
+   magnitude.  */
+static void
+test_tolerance (void)
+{
+  enum { NR = 24 };
+  holent_region *r = holent_region_alloc (2 * NR), *q = holent_region_alloc (2 * NR);
+  double a[2 * NR], b[2 * NR], a2[2 * NR], b2[2 * NR];
+
+  /* a 1e-6 interval next to one at 1e10 is not zero-length */
+  a[0] = 0; b[0] = 1e-6; a[1] = 1e10; b[1] = 1e10 + 1;
+  HT_STATUS (holent_region_set (r, 0, 0, 2, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 2 && r->len[0] == 1e-6, "n %zu len %g", r->n, r->len[0]);
+  /* a 1e-6 gap next to rows at +-1e10 is kept */
+  a[0] = 0; b[0] = 1; a[1] = 1 + 1e-6; b[1] = 2;
+  a[2] = 1e10; b[2] = 1e10 + 1; a[3] = -1e10 - 1; b[3] = -1e10;
+  HT_STATUS (holent_region_set (r, 0, 0, 4, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 4, "n %zu", r->n);
+  /* the same far away on a circle of circumference 1e11 */
+  HT_STATUS (holent_region_set (r, 1, 1e11, 2, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 1, "at L = 1e11 a 1e-6 gap is below the tolerance: n %zu", r->n);
+  HT_STATUS (holent_region_set (r, 1, 100.0, 2, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 2, "n %zu", r->n);
+  /* touching is decided at the scale of the two coordinates compared:
+     a gap of 4 ulps at 1 touches, a gap of 1e-12 at 1 does not, whatever
+     else the region holds */
+  a[0] = 0; b[0] = 1; a[1] = 1 + 4 * DBL_EPSILON; b[1] = 2;
+  a[1] = 1 + 1e-12;
+  HT_STATUS (holent_region_set (r, 0, 0, 4, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 4, "n %zu", r->n);
+  a[1] = 1 + 4 * DBL_EPSILON;
+  HT_STATUS (holent_region_set (r, 0, 0, 4, a, b), HOLENT_SUCCESS);
+  HT_CHECK (r->n == 3, "n %zu", r->n);
+
+  /* Random regions of rows at magnitudes 10^-8 .. 10^12, some touching
+     to rounding, some separated by tiny true gaps.  Properties:
+     (1) adding far-away rows leaves the intervals of the others as they
+         were; (2) normalising the normalised intervals of a part A
+         together with the raw rows of the rest B gives the same region as
+         normalising all rows (a party and a union normalise the same
+         points the same way); (3) lengths are positive, points strictly
+         ascending.  */
+  for (int trial = 0; trial < 2000; trial++)
+    {
+      size_t n = 1 + (size_t) (urand () * (NR - 2));
+      double x = -pow (10.0, 12.0 * urand ()) * (urand () < 0.5);
+      for (size_t i = 0; i < n; i++)
+        {
+          double mag = pow (10.0, -8.0 + 20.0 * urand ());
+          double w = mag * (0.1 + urand ());
+          int touch = urand () < 0.3;
+          a[i] = touch ? x : x + mag * (urand () < 0.5 ? 1e-9 : urand ());
+          if (touch && i > 0)
+            a[i] = nextafter (x, urand () < 0.5 ? -INFINITY : INFINITY);
+          b[i] = a[i] + w;
+          if (!(b[i] - a[i] > 32 * DBL_EPSILON * fmax (fabs (a[i]), fabs (b[i]))))
+            b[i] = a[i] + 64 * DBL_EPSILON * fmax (1e-300, fabs (a[i]));
+          x = b[i];
+        }
+      /* shuffle */
+      for (size_t i = n; i > 1; i--)
+        {
+          size_t j = (size_t) (urand () * i);
+          double t = a[i - 1]; a[i - 1] = a[j]; a[j] = t;
+          t = b[i - 1]; b[i - 1] = b[j]; b[j] = t;
+        }
+      int st = holent_region_set (r, 0, 0, n, a, b);
+      if (st != HOLENT_SUCCESS)
+        {
+          HT_CHECK (st == HOLENT_EOVERLAP || st == HOLENT_EEMPTY, "trial %d status %d", trial, st);
+          continue;
+        }
+      for (size_t k = 0; k + 1 < 2 * r->n; k++)
+        HT_CHECK (r->pts[k] < r->pts[k + 1], "trial %d: points not ascending", trial);
+      /* (1) far rows */
+      double top = r->pts[2 * r->n - 1];
+      a[n] = fabs (top) * 1e6 + 1e10; b[n] = a[n] * 1.5;
+      HT_STATUS (holent_region_set (q, 0, 0, n + 1, a, b), HOLENT_SUCCESS);
+      int same = q->n == r->n + 1;
+      for (size_t k = 0; same && k < 2 * r->n; k++)
+        same = q->pts[k] == r->pts[k];
+      HT_CHECK (same, "trial %d: a far row changed the region", trial);
+      /* (2) part A = the first half of the rows, normalised first */
+      size_t na = n / 2;
+      if (na == 0)
+        continue;
+      HT_STATUS (holent_region_set (q, 0, 0, na, a, b), HOLENT_SUCCESS);
+      size_t m = rows_of (q, a2, b2);
+      for (size_t i = na; i < n; i++)
+        a2[m] = a[i], b2[m++] = b[i];
+      HT_STATUS (holent_region_set (q, 0, 0, m, a2, b2), HOLENT_SUCCESS);
+      same = q->n == r->n;
+      for (size_t k = 0; same && k < 2 * r->n; k++)
+        same = q->pts[k] == r->pts[k];
+      HT_CHECK (same, "trial %d: part-then-union differs from the union", trial);
+    }
+  holent_region_free (r);
+  holent_region_free (q);
+}
+
 int
 main (void)
 {
+  srand (2026);
   test_alloc ();
   test_errors ();
   test_normalise ();
+  test_tolerance ();
   return HT_DONE ();
 }
