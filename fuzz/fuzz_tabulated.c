@@ -79,7 +79,7 @@ LLVMFuzzerTestOneInput (const uint8_t *data, size_t size)
 
   holent_hd_bg bg;
   size_t bad = (size_t) -1;
-  int st = holent_hd_bg_tabulated (&bg, d, n, z, f, 1.0, 1.0, 1e-3 * zh, &bad);
+  int st = holent_hd_bg_tabulated (&bg, d, n, z, f, 0.0, 1.0, 1.0, 1e-3 * zh, &bad);
 #ifdef FUZZ_KNOWN_HORIZON_DEFECT
   /* issue 10 item 3, fixed by issue 14: a table with a sample within
      rounding of the horizon may still be refused or fail in the strip
