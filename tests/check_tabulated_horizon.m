@@ -4,8 +4,6 @@
 ## the analytic black brane f = 1 - (z/zh)^d with the same zh: the same
 ## metric (common practice), so strip and ball entropies must agree to
 ## the accuracy of the spline through the samples.
-## xtest: known failures until the tabulated-horizon work (issue 14)
-## lands; they become plain tests then.
 
 %!function check_against_brane (z, f, d, zh, L, R)
 %! bg = ads_background (d, "tabulated", "z", z, "f", f);
@@ -22,13 +20,13 @@
 %! endif
 %!endfunction
 
-%!xtest
+%!test
 %! ## the horizon sample rounds to 1 - eps/2: every strip and ball call
 %! ## used to fail with holent:noconv
 %! z = linspace (0, 1.5, 601)';  z(401) = 1 - eps/2;  f = 1 - z.^4;
 %! check_against_brane (z, f, 4, 1, [0.2 0.5 1 2], [0.2 0.5 1]);
 
-%!xtest
+%!test
 %! ## tiny values of either sign at the horizon sample
 %! z = linspace (0, 1.5, 601)';
 %! for v = [0, 3*eps, -3*eps, realmin]
@@ -36,7 +34,7 @@
 %!   check_against_brane (z, f, 4, 1, [0.3 1.5]);
 %! endfor
 
-%!xtest
+%!test
 %! ## random exact-brane tables on linspace (0, 1.4*zh, N): 12 of 150
 %! ## failed with holent:noconv
 %! rand ("seed", 150);
