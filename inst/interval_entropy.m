@@ -67,6 +67,13 @@ function [S, branch] = interval_entropy (bg, l, varargin)
   if (mod (nargin, 2) != 0)
     print_usage ();
   endif
+  if (! (isstruct (bg) && isscalar (bg) && isfield (bg, "bulk")))
+    error ("holent:background",
+           "%s: BG must be a background struct made by ads3_background", fn);
+  endif
+  if (! __holent_time_entropy__ ("timed", bg, {}))
+    __holent_check_bg__ (fn, bg);
+  endif
   if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
     [S, branch] = timed (fn, bg, l, varargin);
     return;

@@ -18,14 +18,16 @@ function varargout = __holent_time_entropy__ (fn, varargin)
   switch (fn)
     case "timed"
       [bg, regs] = deal (varargin{:});
-      tf = isstruct (bg) && isfield (bg, "state") ...
-           && any (strcmp (bg.state, {"tfd", "quench"}));
+      tf = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
+           && ischar (bg.state) && any (strcmp (bg.state, {"tfd", "quench"}));
       for k = 1:numel (regs)
         r = regs{k};
         if (iscell (r))
           tf = tf || __holent_time_entropy__ ("timed", bg, r);
         else
-          tf = tf || isstruct (r) || (isnumeric (r) && columns (r) == 4);
+          tf = tf || (isstruct (r) && isscalar (r) ...
+                      && (isfield (r, "left") || isfield (r, "right"))) ...
+                  || (isnumeric (r) && columns (r) == 4);
         endif
       endfor
       varargout{1} = tf;
