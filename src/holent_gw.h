@@ -1,8 +1,11 @@
 /* holent_gw.h: argument checking and unpacking shared by the MEX
  * gateways.  Gateways check, unpack, call the core and pack; no physics
- * here.  Every error goes through mexErrMsgIdAndTxt with an identifier
- * holent:<reason>, so bad input never crashes Octave.
- * GPL-3.0-or-later.  */
+ * here.  Every error goes through holent_gw_raise, the one function that
+ * turns a core status into holent:<name> and a message naming the public
+ * function, the argument and what was expected, so bad input never
+ * crashes Octave.  Gateways take the public function's name as their
+ * first input (after a mode string, where they have modes).
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
 #ifndef HOLENT_GW_H
 #define HOLENT_GW_H
 
@@ -14,6 +17,28 @@
 /* Switch GSL's abort()ing error handler off: call first in every
    gateway.  */
 void holent_gw_init (void);
+
+/* The one place where a status becomes an Octave error: identifier
+   holent:<holent_status_name (STATUS)>, message "FN: NAME(INDEX): REASON"
+   (FN, NAME left out when NULL or empty, INDEX (0-based, shown 1-based)
+   when HOLENT_NOINDEX; FMT NULL: the status's own text).  Raised through
+   Octave's error (), so no gateway name is put in front.  HOLENT_EINTR
+   returns to the prompt as Ctrl-C does.  Never returns.  */
+void holent_gw_raise (const char *fn, int status, const char *name,
+                      size_t index, const char *fmt, ...)
+#if defined(__GNUC__)
+  __attribute__ ((noreturn, format (printf, 5, 6)))
+#endif
+  ;
+
+/* Raise the core's report E; NAMES[E->arg] (NNAMES of them) names the
+   argument, E->index the element.  */
+void holent_gw_raise_err (const char *fn, const holent_err *e,
+                          const char *const *names, size_t nnames)
+#if defined(__GNUC__)
+  __attribute__ ((noreturn))
+#endif
+  ;
 
 /* Raise holent:nargs unless nlhs <= maxout and minin <= nrhs <= maxin.  */
 void holent_gw_nargs (const char *fn, int nlhs, int maxout, int nrhs,
