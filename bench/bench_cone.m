@@ -44,7 +44,7 @@ function bench_cone (ngraphs, npeer)
   printf ("%12.5f %12.5f %10.4f %14.2e   (per graph, 31 cuts)\n", t_ours, t_peer,
           t_ours / t_peer, err);
 
-  [A, orb, names] = __holent_cone__ ("facets", 5);
+  [A, orb, names] = __holent_cone__ ("facets", "entropy_cone_test", 5);
   printf ("\ncontraction proofs of the eight five-party orbit representatives\n");
   printf ("%-14s %4s %4s %8s %10s %8s %10s\n", "orbit", "L", "R", "nodes", "backtracks",
           "proved", "time [s]");

@@ -41,7 +41,7 @@ function [ok, why] = contraction_check (cert)
     return;
   endif
   f = double (map != 0) * 2.^(0:R-1)';
-  [ok, bx, bl] = __holent_call__ ("__holent_cone__", "check", N, lm, a(:), rm, b(:), f);
+  [ok, bx, bl] = __holent_cone__ ("check", fn, N, lm, a(:), rm, b(:), f);
   ok = ok != 0;
   if (! ok)
     if (bl < 0)

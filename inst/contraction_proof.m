@@ -111,8 +111,8 @@ function [ok, cert] = contraction_proof (lhs, rhs, N, varargin)
     ## nothing on the right: entropies are nonnegative, any map works
     cert.found = 1;  cert.verified = true;
   elseif (L > 0)
-    [found, f, info] = __holent_call__ ("__holent_cone__", "prove", N, lm, a,
-                                        rm, ones (R, 1), maxn);
+    [found, f, info] = __holent_cone__ ("prove", fn, N, lm, a, rm,
+                                        ones (R, 1), maxn);
     cert.found = found;
     cert.exhaustive = found != -1;
     for fld = {"log2_initial", "forced", "nodes", "backtracks", "conflict_parties"}

@@ -91,10 +91,9 @@ function [S, cuts] = mincut_entropy_vector (edges, weights, labels, varargin)
            fn, missing(1), N);
   endif
   if (nargout > 1)
-    [S, cuts] = __holent_call__ ("__holent_cone__", "mincut", edges, weights(:),
-                                 labels(:), N);
+    [S, cuts] = __holent_cone__ ("mincut", fn, edges, weights(:), labels(:), N);
   else
-    S = __holent_call__ ("__holent_cone__", "mincut", edges, weights(:), labels(:), N);
+    S = __holent_cone__ ("mincut", fn, edges, weights(:), labels(:), N);
   endif
 endfunction
 

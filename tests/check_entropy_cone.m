@@ -66,11 +66,11 @@
 %! ## Bao et al. 2015), 372 in the orbits of sizes below for N = 5
 %! ## (Hernandez-Cuenca 2019: 372 facets, 8 orbits, from memory)
 %! for N = 1:4
-%!   A = __holent_cone__ ("facets", N);
+%!   A = __holent_cone__ ("facets", "entropy_cone_test", N);
 %!   assert (rows (A), [1 3 7 20](N));
 %!   assert (rows (unique (A, "rows")), rows (A));
 %! endfor
-%! [A, orb, names] = __holent_cone__ ("facets", 5);
+%! [A, orb, names] = __holent_cone__ ("facets", "entropy_cone_test", 5);
 %! assert (rows (unique (A, "rows")), 372);
 %! assert (accumarray (orb, 1)', [15 20 45 72 60 10 90 60]);
 %! assert (numel (names), 8);
@@ -84,7 +84,7 @@
 %! ## Every facet of N = 3 and 4 and every facet of the first seven N = 5
 %! ## orbits proved by contraction, certificates re-checked on all pairs
 %! for N = 3:5
-%!   [A, orb] = __holent_cone__ ("facets", N);
+%!   [A, orb] = __holent_cone__ ("facets", "entropy_cone_test", N);
 %!   for f = find (orb <= 7)'
 %!     [ok, cert] = prove_row (A(f, :), N);
 %!     assert (ok, sprintf ("N = %d facet %d not proved", N, f));
@@ -95,7 +95,7 @@
 %!test
 %! ## the eighth N = 5 orbit (coefficients 3 and 2: the slowest), all 60
 %! ## instances; the search size of the representative is printed
-%! [A, orb] = __holent_cone__ ("facets", 5);
+%! [A, orb] = __holent_cone__ ("facets", "entropy_cone_test", 5);
 %! fs = find (orb == 8)';
 %! for f = fs
 %!   [ok, cert] = prove_row (A(f, :), 5);
@@ -114,7 +114,7 @@
 %! ## holographic, Bao et al. 2015)
 %! for N = 3:5
 %!   P = graph_pool (N, [300 800 2000](N-2), N);
-%!   [A, orb] = __holent_cone__ ("facets", N);
+%!   [A, orb] = __holent_cone__ ("facets", "entropy_cone_test", N);
 %!   assert (min (min (P * A')) >= 0);
 %!   for j = 1:max (orb)
 %!     c = A(find (orb == j, 1), :)';
@@ -128,7 +128,7 @@
 %! ## side; 7 and 20 rays (Bao et al. 2015, from memory), each realised
 %! ## (up to scale) by a min-cut vector of a graph (Bell pairs and stars)
 %! for N = 3:4
-%!   A = __holent_cone__ ("facets", N);
+%!   A = __holent_cone__ ("facets", "entropy_cone_test", N);
 %!   K = 2^N - 1;
 %!   C = nchoosek (1:rows (A), K - 1);
 %!   Rr = zeros (0, K);

@@ -76,8 +76,14 @@ typedef struct
   double tol;
   double nodes, backtracks, max_nodes;
   const holent_poll *poll;
+  unsigned revisions;  /* since the last poll of propagate */
   int nomem, stop, intr;
 } search;
+
+/* Points dequeued by propagate between polls: one AC-3 pass over a large
+   hypercube may run for seconds before the search takes its first
+   node.  */
+#define PROPAGATE_POLL 4096u
 
 static double
 wb (const holent_contract_workspace *ws, uint32_t z)
@@ -194,6 +200,22 @@ propagate (search *s, size_t qh, size_t qt)
     {
       uint32_t v = ws->queue[qh];
       unsigned l;
+      if (++s->revisions >= PROPAGATE_POLL)
+        {
+          s->revisions = 0;
+          if (s->poll != NULL && s->poll->fn != NULL
+              && s->poll->fn (s->poll->ctx, s->nodes, s->max_nodes))
+            s->stop = s->intr = 1;
+        }
+      if (s->intr)
+        {
+          while (qh != qt)
+            {
+              ws->queued[ws->queue[qh]] = 0;
+              qh = (qh + 1) % slots;
+            }
+          return 0;
+        }
       qh = (qh + 1) % slots;
       ws->queued[v] = 0;
       for (l = 0; l < s->nl; l++)
@@ -491,7 +513,7 @@ holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
   if (!propagate (&s, 0, qt) || s.nomem)
     {
       st->found = 0;
-      return s.nomem ? HOLENT_ENOMEM : HOLENT_SUCCESS;
+      return s.nomem ? HOLENT_ENOMEM : s.intr ? HOLENT_EINTR : HOLENT_SUCCESS;
     }
   for (x = 0; x < np; x++)
     {

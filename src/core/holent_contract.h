@@ -63,8 +63,9 @@ void holent_contract_workspace_free (holent_contract_workspace *w);
    found = -1).  f (2^L entries) receives the map when found = 1.
    EINVAL for NULL or NaN, EDOM for a bad mask or weight or n, ETOOBIG
    beyond the limits.  poll (NULL: never interrupted) is called every 64
-   points of the candidate set-up and every 64 search nodes (done = nodes,
-   total = max_nodes or 0); HOLENT_EINTR when it asks to stop.  */
+   points of the candidate set-up, every 4096 points the propagation
+   revises and every 64 search nodes (done = nodes, total = max_nodes or
+   0); HOLENT_EINTR when it asks to stop.  */
 int holent_contract_prove (unsigned n, unsigned nl, const uint32_t *lmask,
                            const double *a, unsigned nr,
                            const uint32_t *rmask, const double *b,

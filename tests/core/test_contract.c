@@ -88,6 +88,15 @@ stop_second (void *ctx, double done, double total)
   return ++*calls == 2;
 }
 
+/* Counts calls and stops at the call number stored in ctx[1].  */
+static int
+stop_at (void *ctx, double done, double total)
+{
+  int *c = ctx;
+  (void) done, (void) total;
+  return ++c[0] == c[1];
+}
+
 static int
 stop_now (void *ctx, double done, double total)
 {
@@ -232,6 +241,35 @@ main (void)
                HOLENT_EINTR);
     HT_CHECK (calls == 2, "poll called %d times", calls);
     holent_contract_workspace_free (ws);
+  }
+  /* and in the first propagation, before any search node: subadditivity
+     of 13 parties, S(A1) + .. + S(A13) >= S(A1 .. A13), has 2^13 points,
+     so 128 set-up calls, then the propagation dequeues every point and
+     polls after 4096 of them */
+  {
+    uint32_t l[13], r[1] = { (1u << 13) - 1 };
+    double a13[13];
+    uint32_t *f13 = malloc (((size_t) 1 << 13) * sizeof *f13);
+    int c[2] = { 0, 129 };
+    holent_poll pl = { stop_at, c };
+    holent_contract_workspace *ws = holent_contract_workspace_alloc (13, 1);
+    for (int k = 0; k < 13; k++)
+      {
+        l[k] = 1u << k;
+        a13[k] = 1.0;
+      }
+    HT_STATUS (holent_contract_prove (13, 13, l, a13, 1, r, one, 0, f13, &st, ws, &pl),
+               HOLENT_EINTR);
+    HT_CHECK (c[0] == 129 && st.nodes == 0, "poll called %d times, %g nodes",
+              c[0], st.nodes);
+    /* uninterrupted, the same workspace proves it */
+    c[0] = 0;
+    c[1] = -1;
+    HT_STATUS (holent_contract_prove (13, 13, l, a13, 1, r, one, 0, f13, &st, ws, &pl),
+               HOLENT_SUCCESS);
+    HT_CHECK (st.found == 1 && c[0] > 129, "found %d, %d polls", st.found, c[0]);
+    holent_contract_workspace_free (ws);
+    free (f13);
   }
   HT_CHECK (holent_contract_workspace_alloc (0, 3) == NULL, "L = 0 refused");
   HT_CHECK (holent_contract_workspace_alloc (21, 3) == NULL, "L = 21 refused");
