@@ -4,7 +4,8 @@
 SHELL := /bin/bash
 .SHELLFLAGS := -o pipefail -c
 
-VERSION := 0.1.0
+# The version is DESCRIPTION's, the one place it is written.
+VERSION := $(shell sed -n 's/^Version: *//p' DESCRIPTION)
 PKG := holent-$(VERSION)
 # BUILD and TARBALL may be overridden (parallel work trees, CI).
 BUILD ?= $(CURDIR)/build
@@ -22,14 +23,38 @@ all: dist
 
 dist: $(TARBALL)
 
+# Reproducible: the same sources give the same bytes (names sorted, one
+# mtime for every entry, owner 0:0 numeric, modes from the permission bits
+# alone, gzip without name or time stamp).  The mtime is SOURCE_DATE_EPOCH
+# when set, else the last commit's time, else DESCRIPTION's Date.
+DIST_EPOCH := $(or $(SOURCE_DATE_EPOCH),$(shell git log -1 --format=%ct 2>/dev/null),$(shell date -u -d "$$(sed -n 's/^Date: *//p' DESCRIPTION)" +%s))
+TAR_REPRO := --sort=name --format=gnu --mtime=@$(DIST_EPOCH) --owner=0 \
+  --group=0 --numeric-owner --mode=u+rw,go=u-w
+
 $(TARBALL): $(DIST_SRC) DESCRIPTION INDEX LICENSE Makefile
 	rm -rf $(BUILD)/dist && mkdir -p $(BUILD)/dist/$(PKG)/src/core
 	cp -r DESCRIPTION INDEX inst doc $(BUILD)/dist/$(PKG)/
 	cp LICENSE $(BUILD)/dist/$(PKG)/COPYING
 	cp src/Makefile src/*.c src/*.cc src/*.h $(BUILD)/dist/$(PKG)/src/
 	cp src/core/*.c src/core/*.h $(BUILD)/dist/$(PKG)/src/core/
-	tar -C $(BUILD)/dist -czf $@ $(PKG)
+	mkdir -p $(dir $@)
+	LC_ALL=C tar -C $(BUILD)/dist $(TAR_REPRO) -cf - $(PKG) | gzip -n -9 > $@.tmp
+	mv $@.tmp $@
 	@echo "built $@"
+
+# Two builds of the tarball into throwaway paths must agree byte for byte
+# (run by make check under TESTS containing "dist").
+dist-check:
+	@d=$$(mktemp -d) && trap 'rm -rf "$$d"' EXIT && \
+	for k in 1 2; do \
+	  $(MAKE) -s --no-print-directory BUILD=$$d/b$$k TARBALL=$$d/t$$k.tar.gz $$d/t$$k.tar.gz > /dev/null || exit 1; \
+	  sleep 1; \
+	done && \
+	if cmp -s $$d/t1.tar.gz $$d/t2.tar.gz; then \
+	  echo "dist: reproducible ($(PKG).tar.gz, $$(wc -c < $$d/t1.tar.gz) bytes, sha256 $$(sha256sum < $$d/t1.tar.gz | cut -c1-16))"; \
+	else \
+	  echo "FAIL dist: two builds of $(PKG).tar.gz differ"; exit 1; \
+	fi
 
 deps:
 	@bash tests/ensure_deps.sh
@@ -67,4 +92,4 @@ clean:
 	rm -rf $(BUILD) $(TARBALL)
 	$(MAKE) -C src clean
 
-.PHONY: all dist deps install throwaway-install check demo gallery bench clean fuzz
+.PHONY: all dist dist-check deps install throwaway-install check demo gallery bench clean fuzz

@@ -2,7 +2,9 @@
 # Runs every test of holent against the copy installed in PREFIX:
 #  1. C unit tests of the core (tests/core/test_*.c) under
 #     -fsanitize=address,undefined;
-#  2. every BIST block of every inst/*.m and every cross-check file
+#  2. make dist twice into throwaway paths: the tarballs must agree byte
+#     for byte (reproducible release);
+#  3. every BIST block of every inst/*.m and every cross-check file
 #     tests/*.m, with the installed package loaded.
 # Prints "N passed, N failed" last and exits non-zero on any failure.
 set -u
@@ -55,6 +57,15 @@ if selected fuzz && command -v "${CLANG:-clang}" > /dev/null; then
   p=$(printf '%s\n' "$out" | grep -c '^fuzz .*: ok')
   f=$(printf '%s\n' "$out" | grep -c '^FAIL')
   pass=$((pass + p)); fail=$((fail + f))
+fi
+
+if selected dist; then
+  echo "== make dist twice: the same bytes"
+  if out=$(make -s --no-print-directory -C "$ROOT" dist-check 2>&1); then
+    printf '%s\n' "$out"; pass=$((pass + 1))
+  else
+    printf '%s\n' "$out" | tail -20; echo "FAIL dist-check"; fail=$((fail + 1))
+  fi
 fi
 
 echo "== Octave: BIST of inst/*.m and cross-checks in tests/"
