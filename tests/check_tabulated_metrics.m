@@ -81,7 +81,7 @@
 %!test
 %! ## balls and strips of rounded brane data against the analytic brane
 %! ## (itself checked against ode45 and series in check_ball_horizon.m and
-%! ## check_review_4_6.m), within the reported accuracy
+%! ## check_hd_series.m), within the reported accuracy
 %! warning ("off", "holent:cutoff", "local");
 %! bb = ads_background (4, "black_brane", "zh", 1);
 %! [~, ib] = ball_entropy (bb, [0.4 1.5]);

@@ -1,0 +1,33 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## The error identifiers the interface promises (not only the messages),
+## one call per promise; the messages are checked in the functions' own
+## BIST blocks.  Identifiers are listed once in doc/conventions.md.
+
+%!error id=holent:option ads3_background ("excited", "line")
+%!error id=holent:option ads3_background ("vacuum", "torus")
+%!error id=holent:option ads3_background ("vacuum", "line", "colour", 1)
+%!error id=holent:domain ads3_background ("thermal", "line", "beta", 0)
+%!error id=holent:domain ads3_background ("rotating", "line", "beta", 1, "Omega", -1)
+%!error id=holent:domain ads3_background ("heavy", "circle", "alpha", 0)
+%!error id=holent:domain ads3_background ("heavy", "circle", "alpha", 1.01)
+%!error id=holent:domain ads3_background ("vacuum", "line", "cutoff", -1e-3)
+%!error id=holent:inconsistent ads3_background ("vacuum", "line", "c", 10, "G", 1)
+%!error id=holent:boundary ads3_background ("heavy", "line", "alpha", 0.5)
+%!error id=holent:coincident geodesic_length (ads3_background ("vacuum", "circle"), 1, 1 + 2*pi)
+%!error id=holent:domain interval_entropy (ads3_background ("vacuum", "circle"), 7)
+%!error id=holent:overlap rt_entropy (ads3_background ("vacuum", "line"), [0 2; 1 3])
+%!error id=holent:overlap rt_entropy (ads3_background ("thermal", "circle", "beta", 1), [0 2*pi; 1 2])
+%!error id=holent:overlap rt_entropy (ads3_background ("thermal", "circle", "beta", 1), [5 1; 0.5 0.7])
+%!error id=holent:empty rt_entropy (ads3_background ("vacuum", "line"), [1 1])
+%!error id=holent:empty rt_entropy (ads3_background ("vacuum", "line"), zeros (0, 2))
+%!error id=holent:domain rt_entropy (ads3_background ("vacuum", "line"), [2 1])
+%!error id=holent:domain rt_entropy (ads3_background ("vacuum", "circle"), [0 7])
+%!error id=holent:overlap mutual_information (ads3_background ("vacuum", "line"), [0 1], [0.5 2])
+%!error id=holent:overlap tripartite_information (ads3_background ("vacuum", "line"), [0 1], [2 3], [2.5 4])
+%!error id=holent:overlap conditional_entropy (ads3_background ("vacuum", "circle"), [5 1], [0.5 2])
+%!error id=holent:overlap entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [0.5 2]})
+%!error id=holent:unsupported wedge_cross_section (ads3_background ("thermal", "circle", "beta", 1), [0 1], [2 3])
+%!error id=holent:unsupported wedge_cross_section (ads3_background ("rotating", "circle", "beta_L", 1, "beta_R", 2), [0 1], [2 3])
+%!error id=holent:unsupported wedge_cross_section (ads3_background ("heavy", "circle", "alpha", 0.5), [0 1], [2 3])
+%!error id=holent:coincident wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [1 3])
+%!error id=holent:overlap wedge_cross_section (ads3_background ("vacuum", "line"), [0 2], [1 3])
