@@ -1,7 +1,9 @@
 ## SPDX-License-Identifier: GPL-3.0-or-later
 ## Ctrl-C and progress on long calls, checked on a real octave-cli
 ## session: SIGINT is sent to it (tests/interrupt_session.sh) while a long
-## rt_entropy call runs, as Ctrl-C at the prompt does.
+## call runs, as Ctrl-C at the prompt does: a batch of rt_entropy regions,
+## and one large region minimised by the cubic DP (the general path, polled
+## inside its table), which has no batch boundary to stop at.
 
 %!function [lat, out] = session (setup, long, after, delay)
 %! sh = file_in_loadpath ("interrupt_session.sh");
@@ -66,3 +68,36 @@
 %! [st, out] = run ("holent_progress ('on');");
 %! assert (st, 0, out);
 %! assert (! isempty (regexp (out, "rt_entropy: +\\d+% done, about \\d+ s left")), out);
+
+%!function setup = calibrated_dp (seconds)
+%! ## one region on the BTZ circle for the cubic DP (the method "dp" of the
+%! ## region gateway), with as many intervals as make it last about SECONDS:
+%! ## n = 400 is timed first and n scaled as the DP's n^3 (an underestimate
+%! ## once the table leaves the cache); at most 2000 intervals (~200 MB of
+%! ## tables).  Endpoints on a jittered grid, far above the cutoff.
+%! setup = sprintf (["bg = ads3_background ('thermal', 'circle', 'beta', 1, 'cutoff', 1e-7); " ...
+%!   "dp = @(A) __holent_rt__ ('entropy', 'rt_entropy', 'A', bg, A, 'dp'); " ...
+%!   "rand ('seed', 2); mk = @(n) reshape (((0:2*n-1)' + 0.5 + 0.4 * (rand (2*n, 1) - 0.5)) * pi / n, 2, [])'; " ...
+%!   "A0 = mk (400); dp (A0); t = tic (); dp (A0); per = toc (t); " ...
+%!   "n = min (2000, ceil (400 * (%g / per)^(1/3))); A = mk (n); keep = 42; " ...
+%!   "printf ('READY %%g %%d\\n', per * (n / 400)^3, n);"], seconds);
+%!endfunction
+
+%!test
+%! ## Ctrl-C 1.5 s into ONE region minimised by the cubic DP (issue 10: a
+%! ## single long region, not only a batch, must stop): the prompt is back
+%! ## within a fraction of a second, the call left no result, the workspace
+%! ## is intact, and the same session's DP agrees with the O(n^2) sweep on
+%! ## a smaller region afterwards (doc/rt_fast.md).
+%! [lat, out] = session (calibrated_dp (30), "S = dp (A);",
+%!   "printf ('AGAIN %d %d %.15g %.15g\\n', keep, exist ('S', 'var'), dp (A0), rt_entropy (bg, A0));", 1.5);
+%! ready = number_after (out, "READY");
+%! assert (numel (ready), 2, out);
+%! assert (ready(1) > 4, "the DP region is too short to test an interrupt: %g s (n = %d)", ready);
+%! printf ("  Ctrl-C latency %.3f s (one DP region of %d intervals, about %.0f s)\n",
+%!         lat, ready(2), ready(1));
+%! assert (lat < 3, out);
+%! assert (number_after (out, "BACK") < 10, out);
+%! again = number_after (out, "AGAIN");
+%! assert (again(1:2), [42 0]);
+%! assert (again(3), again(4), 1e-12 * abs (again(4)));
