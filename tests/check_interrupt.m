@@ -97,7 +97,9 @@
 %! printf ("  Ctrl-C latency %.3f s (one DP region of %d intervals, about %.0f s)\n",
 %!         lat, ready(2), ready(1));
 %! assert (lat < 3, out);
-%! assert (number_after (out, "BACK") < 10, out);
+%! ## the call ran until the interrupt (it did not fail at once) and stopped
+%! back = number_after (out, "BACK");
+%! assert (back > 1 && back < 10, out);
 %! again = number_after (out, "AGAIN");
 %! assert (again(1:2), [42 0]);
 %! assert (again(3), again(4), 1e-12 * abs (again(4)));
