@@ -56,7 +56,8 @@
 ## is refuted by a graph whose @code{mincut_entropy_vector} violates it.
 ##
 ## Options: @qcode{"max_nodes"} bounds the search (default 1e7, 0 for
-## none).  Limits: L <= 20, R <= 24, L + R <= 28, N <= 16.
+## none).  Limits: L <= 20, R <= 24, L + R <= 28, N <= 16.  Ctrl-C stops
+## a long search (and a progress line shows, see @code{holent_progress}).
 ## Without outputs a summary is printed.  See @file{doc/entropy_cone.md}.
 ##
 ## @seealso{contraction_check, entropy_cone_test, mincut_entropy_vector}

@@ -26,7 +26,8 @@
 ## the parties of k (the homology region of the smallest minimal surface).
 ##
 ## Maximum flow by Dinic's algorithm in C (a 100 x 100 lattice, 10^4
-## vertices, with N = 10: 1023 cuts in about 30 s).  See @file{doc/entropy_cone.md}.
+## vertices, with N = 10: 1023 cuts in about 30 s; Ctrl-C stops it between
+## two cuts, see @code{holent_progress}).  See @file{doc/entropy_cone.md}.
 ##
 ## @seealso{entropy_cone_test, contraction_proof, entropy_inequalities}
 ## @end deftypefn
