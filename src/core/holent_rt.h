@@ -22,8 +22,9 @@
  *     a concave function of the boundary arc it spans):  a sweep over the
  *     right end of every run that keeps, for each left end, one partner;
  *     O(N^2) time (N^2/4 steps on a line, 3N^2/4 on a circle with a
- *     horizon or a defect), O(N) memory, no cap on n.  It rests on a
- *     property verified against the DP on every test region, not proven.
+ *     horizon or a defect), O(N) memory, no cap on n.  Exact for strictly
+ *     concave lengths (proof in doc/rt_fast.md); for the conical defect
+ *     past its cap verified against the DP, not proven.
  *   dp (exact; the general path and the oracle of the tests):  the
  *     interval dynamic programme, O(N^3) time (N^3/24 additions on a line and in
  *     global or thermal AdS, N^3/6 with a horizon or a defect), O(N^2)
