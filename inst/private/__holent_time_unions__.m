@@ -41,16 +41,22 @@ function [Sp, Su] = __holent_time_unions__ (fn, bg, names, args, unions, t)
     endif
   endfor
   nu = numel (unions);
-  R = cell (nel, np + nu);
+  R = N = cell (nel, np + nu);
   for i = 1:np
     R(:,i) = P{i}(:);
+    N(:,i) = names(i);
   endfor
   for j = 1:nu
+    N(:,np+j) = {["the union of " strjoin(names(unions{j}), " and ")]};
     for k = 1:nel
       R{k,np+j} = join (fn, cellfun (@(p) p{k}, P(unions{j}), "uniformoutput", false));
     endfor
   endfor
-  S = __holent_time_entropy__ (fn, bg, R(:), t);
+  if (nel > 1)
+    N = cellfun (@(n, k) sprintf ("%s (instance %d)", n, k), N,
+                 num2cell (repmat ((1:nel)', 1, np + nu)), "uniformoutput", false);
+  endif
+  S = __holent_time_entropy__ (fn, bg, R(:), t, N(:));
   S = reshape (S, nel, np + nu, numel (t));
   Sp = cell (np, 1);
   Su = cell (nu, 1);

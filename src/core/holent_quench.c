@@ -30,6 +30,24 @@ holent_quench_init (holent_quench_bg *q, int circle, double L, double eps,
   return HOLENT_SUCCESS;
 }
 
+int
+holent_quench_make (holent_quench_bg *q, int circle, double L, double eps,
+                    double beta, double c, double ell, holent_err *err)
+{
+  holent_tfd_bg side;
+  holent_tfd_info info;
+  int st = holent_tfd_make (&side, &info, circle, L, eps, beta, c, ell, 0,
+                            0.0, 0, 0.0, 0, 0.0, err);
+  if (st)
+    return st;
+  st = holent_quench_init (q, circle, L, eps, beta, c);
+  if (st)
+    return holent_err_set (err, HOLENT_EINCONSISTENT, -1, HOLENT_NOINDEX,
+                           "the parameters give no quench (%s)",
+                           holent_strerror (st));
+  return HOLENT_SUCCESS;
+}
+
 typedef struct
 {
   double S, C, lam, R;  /* sinh, cosh of R t; pi l/beta or R Phi/2; R */
@@ -180,6 +198,26 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
   (void) i;
   (void) j;
   return holent_quench_length (c->q, arc, c->t, len, NULL);
+}
+
+int
+holent_quench_points_length (const holent_quench_bg *q, double x1, double x2,
+                             double t, double *len)
+{
+  if (q == NULL || len == NULL)
+    return HOLENT_EINVAL;
+  if (!isfinite (x1) || !isfinite (x2) || !isfinite (x2 - x1))
+    return HOLENT_EINVAL;
+  double d = x2 - x1;
+  if (q->vac.circle)
+    {
+      d = fmod (d, q->vac.L);
+      if (d < 0.0)
+        d += q->vac.L;
+    }
+  if (d == 0.0)
+    return HOLENT_ECOINCIDE;
+  return holent_quench_length (q, fabs (d), t, len, NULL);
 }
 
 int
