@@ -637,10 +637,13 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
   if (names && (!mxIsCell (names) || mxGetNumberOfElements (names) != nreg))
     holent_gw_raise (fn, HOLENT_ESIZE, "NAMES", HOLENT_NOINDEX,
                      "must be a cell of %zu names", nreg);
+  char nm[96];
   for (size_t k = 0; k < nreg; k++)
     {
       size_t m = region_rows (cell ? mxGetCell (A, k) : A);
       nmax = m > nmax ? m : nmax;
+      if (names)  /* checked before anything is allocated */
+        holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
     }
   alloc_ws (&g, nmax);
   plhs[0] = mxCreateDoubleMatrix (nreg, nt, mxREAL);
@@ -649,7 +652,6 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
   double *S = mxGetPr (plhs[0]), *pc = mxGetPr (nc), *ph = mxGetPr (hz);
   for (size_t k = 0; k < nreg; k++)
     {
-      char nm[96];
       if (names)
         holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
       else if (cell)

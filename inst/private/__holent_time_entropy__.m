@@ -20,7 +20,7 @@
 ## gateway names it).  "state": true when @var{bg} is a background struct of
 ## that state.  "check": the checks of a static @var{bg} (time-dependent
 ## states are checked by their core constructor in the gateway).  The last
-## form calls the core on the region (or cell of regions) @var{A} at each
+## form checks @var{bg} ("check") and calls the core on the region (or cell of regions) @var{A} at each
 ## time of @var{t}: @var{S} is numel(A) x numel(t); @var{names} (optional,
 ## a cell of numel(A) strings) names the regions in messages.  "shape": an array of
 ## the cell's size @var{sz} for one time, of the shape of @var{t} for one
@@ -98,6 +98,7 @@ function varargout = __holent_time_entropy__ (fn, varargin)
       varargout{1} = R;
     otherwise
       [bg, A, t] = deal (varargin{1:3});
+      __holent_time_entropy__ ("check", fn, bg);
       A = to_double (fn, A);
       [varargout{1:max (nargout, 1)}] = __holent_time__ ("entropy", fn, bg, A, t(:),
                                                          varargin{4:end});

@@ -40,7 +40,7 @@ function [Svec, masks] = time_vector (fn, bg, parties, opts)
     endif
   endfor
   M = 2^N - 1;
-  masks = logical (bitget ((1:M)', 1:N));
+  masks = logical (mod (floor ((1:M)' ./ 2.^(0:N-1)), 2));
   multi = find (sum (masks, 2) > 1);
   unions = arrayfun (@(k) find (masks(k,:)), multi, "uniformoutput", false);
   names = arrayfun (@(j) sprintf ("PARTIES{%d}", j), 1:N, "uniformoutput", false);

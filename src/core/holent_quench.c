@@ -54,14 +54,37 @@ typedef struct
   double gap;           /* circle: pi/2 - Phi/2 */
 } cross_par;
 
-/* Line: h(eta) - pi l/beta, increasing in eta (doc/quench.md); the
-   difference C - sqrt(1 + S^2 E^2) written without cancellation.  */
-static double
-line_eq (double eta, void *p)
+/* Line: the root in [0, hi] of h(eta) - pi l/beta, h increasing in eta
+   (doc/quench.md), h = asinh(S E) + S (1 - E^2)/(E (C + w)), E = e^-eta,
+   w = sqrt(1 + S^2 E^2) (C - w written without cancellation); by
+   Newton's method kept inside the bracket (bisection when a step leaves it): h'(eta) = S (1 - E^2)/(E (C
+   + w)), the second term of h itself (doc/quench.md), so a step costs
+   one evaluation.  Brent's method with a solver allocated per call was
+   the whole cost of a quench scan.  */
+static int
+line_root (const cross_par *c, double hi, double *eta)
 {
-  const cross_par *c = p;
-  double E = exp (-eta), SE = c->S * E, w = sqrt (1.0 + SE * SE);
-  return asinh (SE) + c->S * (1.0 - E * E) / (E * (c->C + w)) - c->lam;
+  double lo = 0.0, x = 0.5 * hi;
+  for (int it = 0; it < 200; it++)
+    {
+      double E = exp (-x), SE = c->S * E, w = sqrt (1.0 + SE * SE);
+      double d = c->S * (1.0 - E * E) / (E * (c->C + w));
+      double h = asinh (SE) + d - c->lam;
+      if (h > 0.0)
+        hi = x;
+      else
+        lo = x;
+      double nx = x - h / d;
+      if (!(nx > lo && nx < hi))
+        nx = 0.5 * (lo + hi);
+      if (fabs (nx - x) <= 1e-14 * fmax (1.0, x) || hi - lo <= 4e-16 * hi)
+        {
+          *eta = nx;
+          return HOLENT_SUCCESS;
+        }
+      x = nx;
+    }
+  return HOLENT_ENOCONV;
 }
 
 /* Circle: G = C - cosh a - R tan(phi) sinh a, a = lam - R phi, written
@@ -136,7 +159,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
       /* Bracket: h(0) = R t < pi l/beta, and h >= 3 S/(8 C E) once
          E <= 1/2, so E = 3 S/(8 C lam) is above the root.  */
       double hi = fmax (M_LN2, log (8.0 * c.C * c.lam / (3.0 * c.S)));
-      st = brent (line_eq, &c, 0.0, hi, &e);
+      st = line_root (&c, hi, &e);
     }
   else
     {
