@@ -132,6 +132,7 @@ endfunction
 
 ## The time path: boosted intervals, the quench, the timelike branch.
 function [S, branch] = timed (fn, bg, l, args)
+  __holent_time_entropy__ ("check", fn, bg);
   o = __holent_opts__ (fn, {"dt", "t", "timelike"}, args);
   l = __holent_array__ (fn, "L", l);
   dt = 0;
@@ -156,7 +157,6 @@ function [S, branch] = timed (fn, bg, l, args)
   todo = true (n, 1);
   if (tl)
     ## Causal pairs: one geodesic on the timelike branch.
-    __holent_time_entropy__ ("check", fn, bg);
     for j = 1:numel (t)
       [re, im] = __holent_time__ ("geodesic", fn, bg, zeros (n, 1), t(j) * ones (n, 1),
                                   ones (n, 1), l(:), dt(:) + t(j), ones (n, 1), 1, 1);
@@ -172,7 +172,7 @@ function [S, branch] = timed (fn, bg, l, args)
       endif
       A = cellfun (@(r) r(1:2), A, "uniformoutput", false);
     endif
-    [Sr, ~, hz] = __holent_time_entropy__ (fn, bg, A, t);
+    [Sr, ~, hz] = __holent_time__ ("entropy", fn, bg, A, t(:));  # BG checked above
     S(todo,:) = Sr;
     branch(todo,:) = hz != 0;
   endif

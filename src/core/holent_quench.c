@@ -64,7 +64,12 @@ typedef struct
 static int
 line_root (const cross_par *c, double hi, double *eta)
 {
-  double lo = 0.0, x = 0.5 * hi;
+  /* Start where h = lam with asinh(S E) ~ S E and w ~ 1 (E small):
+     S E + S/((C + 1) E) = lam.  */
+  double a = c->S / (c->C + 1.0), D = c->lam * c->lam - 4.0 * c->S * a;
+  double lo = 0.0;
+  double x = fmin (hi, fmax (0.0, log ((c->lam + sqrt (fmax (0.0, D)))
+                                        / (2.0 * a))));
   for (int it = 0; it < 200; it++)
     {
       double E = exp (-x), SE = c->S * E, w = sqrt (1.0 + SE * SE);
@@ -125,13 +130,34 @@ brent (double (*f) (double, void *), void *p, double lo, double hi,
   return st == GSL_SUCCESS ? HOLENT_SUCCESS : HOLENT_ENOCONV;
 }
 
+/* sinh and cosh of 2 pi t/beta: once per time in a region scan.  */
+static void
+time_sc (const holent_quench_bg *q, double t, double sc[2])
+{
+  double Rt = 2.0 * M_PI * t / q->beta;
+  sc[0] = sinh (Rt);
+  sc[1] = cosh (Rt);
+}
+
+static int quench_len (const holent_quench_bg *q, double l, double t,
+                       const double sc[2], double *len, double *eta);
+
 int
 holent_quench_length (const holent_quench_bg *q, double l, double t,
                       double *len, double *eta)
 {
-  double e = 0.0;
+  double sc[2];
   if (q == NULL || len == NULL || isnan (l) || !isfinite (t))
     return HOLENT_EINVAL;
+  time_sc (q, t, sc);
+  return quench_len (q, l, t, sc, len, eta);
+}
+
+static int
+quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
+            double *len, double *eta)
+{
+  double e = 0.0;
   int circle = q->vac.circle;
   double L = q->vac.L;
   if (!(l > 0.0) || !isfinite (l) || (circle && !(l < L)))
@@ -150,8 +176,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
         *eta = 0.0;
       return holent_geo_arc_length (&q->bh, l, len);
     }
-  double Rt = 2.0 * M_PI * t / q->beta;
-  cross_par c = { sinh (Rt), cosh (Rt), M_PI * l / q->beta,
+  cross_par c = { sc[0], sc[1], M_PI * l / q->beta,
                   circle ? L / q->beta : 0.0, 0.0 };
   int st;
   if (!circle)
@@ -211,7 +236,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
 typedef struct
 {
   const holent_quench_bg *q;
-  double t;
+  double t, sc[2];
 } q_ctx;
 
 static int
@@ -220,7 +245,7 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
   const q_ctx *c = vctx;
   (void) i;
   (void) j;
-  return holent_quench_length (c->q, arc, c->t, len, NULL);
+  return quench_len (c->q, arc, c->t, c->sc, len, NULL);
 }
 
 int
@@ -250,7 +275,8 @@ holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
 {
   if (q == NULL || !isfinite (t))
     return HOLENT_EINVAL;
-  q_ctx c = { q, t };
+  q_ctx c = { q, t, { 0.0, 0.0 } };
+  time_sc (q, t, c.sc);
   /* The vacuum background sets the candidates: on the circle the state
      is pure (no horizon term) and each chord has the geodesic over its
      shorter arc.  */
