@@ -28,26 +28,13 @@ function [tb, tl] = bulk_light_time (bg, x1, x2, varargin)
     print_usage ();
   endif
   o = __holent_opts__ (fn, {"tol"}, varargin);
-  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "circumference"))
-    error ("holent:background", "%s: BG must be a background struct made by ads3_background", fn);
-  endif
-  tol = 1e-9 * merge (isfinite (bg.circumference), bg.circumference, 1);
+  __holent_time_entropy__ ("check", fn, bg);
+  tol = [];   # the core's default, 1e-9 times the circumference
   if (isfield (o, "tol"))
     tol = __holent_scalar__ (fn, "tol", o.tol, "nonnegative");
   endif
-  x1 = __holent_array__ (fn, "X1", x1);
-  x2 = __holent_array__ (fn, "X2", x2);
-  try
-    z = zeros (size (x1 + x2));
-  catch
-    error ("holent:size", "%s: X1 (%s) and X2 (%s) do not broadcast", fn,
-           mat2str (size (x1)), mat2str (size (x2)));
-  end_try_catch
-  try
-    [tb, tl] = __holent_time__ ("light", bg, x1 + z, x2 + z, tol);
-  catch err
-    __holent_rethrow__ (err, "__holent_time__", fn);
-  end_try_catch
+  [x1, x2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2"}, x1, x2);
+  [tb, tl] = __holent_time__ ("light", fn, bg, x1, x2, tol);
 endfunction
 
 %!test
@@ -74,4 +61,11 @@ endfunction
 %!error <background struct> bulk_light_time (1, 2, 3)
 %!error <do not broadcast> bulk_light_time (ads3_background ("vacuum", "line"), [1 2], [1 2 3])
 %!error <nonnegative> bulk_light_time (ads3_background ("vacuum", "line"), 1, 2, "tol", -1)
-%!error <NaN> bulk_light_time (ads3_background ("vacuum", "line"), NaN, 2)
+%!error <bulk_light_time: X1\(1\): must not be NaN> bulk_light_time (ads3_background ("vacuum", "line"), NaN, 2)
+%!error <X2\(2\): must be finite> bulk_light_time (ads3_background ("vacuum", "line"), 1, [2 Inf])
+%!error <X1 must be a real> bulk_light_time (ads3_background ("vacuum", "line"), 1i, 2)
+%!test
+%! ## a row against a column broadcasts
+%! [tb, tl] = bulk_light_time (ads3_background ("vacuum", "line"), [0; 1], [2 3]);
+%! assert (tl, [2 3; 1 2]);
+%! assert (tb, Inf (2, 2));

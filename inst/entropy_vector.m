@@ -34,6 +34,15 @@
 ## The cost is 2^N - 1 calls of the RT minimiser on unions of up to all
 ## the intervals.  See @file{doc/entropy_inequalities.md} for the ordering.
 ##
+## Time (@file{doc/hrt_time.md}): parties may be n x 4 matrices
+## @code{[start, end, t_start, t_end]} (a time per endpoint), or, on a
+## thermofield double, structs with fields @code{left} and @code{right};
+## on the time-dependent states (@code{ads3_background ("tfd", @dots{})},
+## @code{("quench", @dots{})}) the option @qcode{"t"} (scalar or vector)
+## shifts every time, or is the time after the quench, and @var{Svec} has
+## one column per time.  Unions stack the rows (of each side); the
+## purifier is not available on this path.
+##
 ## @seealso{entropy_inequalities, rt_entropy, mutual_information}
 ## @end deftypefn
 
@@ -41,6 +50,12 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   fn = "entropy_vector";
   if (nargin < 2)
     print_usage ();
+  endif
+  if (iscell (parties) && (__holent_time_entropy__ ("timed", bg, parties)
+                           || any (strcmp (varargin(1:2:end), "t"))))
+    ## parties with endpoint times, time-dependent states (issue 12)
+    [Svec, masks] = __holent_time_unions__ ("vector", fn, bg, parties, varargin);
+    return;
   endif
   __holent_check_bg__ (fn, bg);
   if (! iscell (parties) || isempty (parties))
@@ -206,6 +221,28 @@ endfunction
 %! assert (S(3) < S(1) + S(2));
 %! assert (S(5), S(1) + S(4), 1e-12);
 %! assert (S(7), rt_entropy (bg, vertcat (P{:})), 1e-12);
+
+%!test
+%! ## Parties with endpoint times: every entry is the HRT entropy of that
+%! ## union (rt_entropy of the stacked rows); equal times give the static
+%! ## vector; a quench gives one column per time.
+%! bg = ads3_background ("thermal", "line", "beta", 1, "c", 3);
+%! P = {[0 1 0 0.2], [1.5 2 0.1 0], [3 4.5 0 0]};
+%! [S, masks] = entropy_vector (bg, P);
+%! assert (size (masks), [7 3]);
+%! for k = 1:7
+%!   assert (S(k), rt_entropy (bg, vertcat (P{masks(k,:)})), 1e-12);
+%! endfor
+%! P0 = cellfun (@(p) [p(:,1:2), 0.3 * ones(rows (p), 2)], P, "uniformoutput", false);
+%! assert (entropy_vector (bg, P0), entropy_vector (bg, cellfun (@(p) p(:,1:2), P, "uniformoutput", false)), 1e-12);
+%! q = ads3_background ("quench", "line", "beta", 1);
+%! S = entropy_vector (q, {[0 1], [1.2 2]}, "t", [-1 0.3 9]);
+%! assert (size (S), [3 3]);
+%! assert (S(:,1), entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [1.2 2]}), 1e-12);
+%! assert (S(:,3), entropy_vector (ads3_background ("thermal", "line", "beta", 1), {[0 1], [1.2 2]}), 1e-12);
+%! assert (entropy_inequalities (S(:,2)).holds);
+%!error <entropy_vector: the union of PARTIES\{1\} and PARTIES\{2\}(\(\d\))?: .*overlap> entropy_vector (ads3_background ("vacuum", "line"), {[0 1 0 0], [0.5 2 0 0]})
+%!error <not available with endpoint times> entropy_vector (ads3_background ("vacuum", "line"), {[0 1 0 0]}, "purifier", true)
 
 %!test
 %! ## The purifier of a pure state is the boundary complement: S(X u O)

@@ -124,11 +124,7 @@ endfunction
 
 ## Covariant lengths, two-sided lengths and the quench (doc/hrt_time.md).
 function len = timed_length (fn, bg, x1, x2, cls, o)
-  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state"))
-    error ("holent:background", "%s: BG must be a background struct made by ads3_background", fn);
-  endif
-  tfd = strcmp (bg.state, "tfd");
-  quench = strcmp (bg.state, "quench");
+  __holent_time_entropy__ ("check", fn, bg);
   t1 = t2 = 0;
   if (isfield (o, "t1"))
     t1 = __holent_array__ (fn, "t1", o.t1);
@@ -144,43 +140,26 @@ function len = timed_length (fn, bg, x1, x2, cls, o)
   names = {"side1", "side2"};
   for k = 1:2
     if (isfield (o, names{k}))
-      if (! tfd)
-        error ("holent:option", "%s: '%s' applies to a thermofield double (ads3_background (\"tfd\", ...)) only",
-               fn, names{k});
-      endif
       v = o.(names{k});
       if (! ischar (v) || ! any (strcmpi (v, {"left", "right"})))
         error ("holent:option", "%s: '%s' must be \"left\" or \"right\"", fn, names{k});
       endif
+      if (! __holent_time_entropy__ ("state", bg, "tfd"))
+        error ("holent:option", "%s: '%s' applies to a thermofield double (ads3_background (\"tfd\", ...)) only",
+               fn, names{k});
+      endif
       side{k} = strcmpi (v, "right");
     endif
   endfor
-  tl = false;
-  if (isfield (o, "timelike"))
-    tl = o.timelike;
-    if (! ((islogical (tl) || isnumeric (tl)) && isscalar (tl) && (tl == 0 || tl == 1)))
-      error ("holent:option", "%s: 'timelike' must be true or false", fn);
-    endif
-  endif
-  try
-    z = zeros (size (x1 + t1 + t2));
-  catch
-    error ("holent:size", "%s: X1, X2, t1 and t2 do not broadcast", fn);
-  end_try_catch
-  x1 = x1 + z;
-  x2 = x2 + z;
-  t1 = t1 + z + t;
-  t2 = t2 + z + t;
-  if (quench && any (t1(:) != t2(:)))
+  tl = __holent_time_entropy__ ("timelike", fn, o);
+  [x1, x2, t1, t2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2", "t1", "t2"},
+                                              x1, x2, t1 + t, t2 + t);
+  z = zeros (size (x1));
+  if (__holent_time_entropy__ ("state", bg, "quench") && any (t1(:) != t2(:)))
     error ("holent:unsupported", "%s: on a quench both ends live at the time 't' (t1 and t2 must agree)", fn);
   endif
-  s1 = side{1} + 0 * z;
-  s2 = side{2} + 0 * z;
-  try
-    [re, im] = __holent_time__ ("geodesic", bg, x1, t1, s1, x2, t2, s2, cls, double (tl));
-  catch err
-    __holent_rethrow__ (err, "__holent_time__", fn);
-  end_try_catch
+  [re, im] = __holent_time__ ("geodesic", fn, bg, x1, t1, side{1} + z, x2, t2,
+                              side{2} + z, cls, double (tl));
   if (any (im(:)))
     len = complex (re, im);
   else

@@ -71,9 +71,6 @@ function [S, branch] = interval_entropy (bg, l, varargin)
     error ("holent:background",
            "%s: BG must be a background struct made by ads3_background", fn);
   endif
-  if (! __holent_time_entropy__ ("timed", bg, {}))
-    __holent_check_bg__ (fn, bg);
-  endif
   if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
     [S, branch] = timed (fn, bg, l, varargin);
     return;
@@ -135,28 +132,16 @@ endfunction
 
 ## The time path: boosted intervals, the quench, the timelike branch.
 function [S, branch] = timed (fn, bg, l, args)
+  __holent_time_entropy__ ("check", fn, bg);
   o = __holent_opts__ (fn, {"dt", "t", "timelike"}, args);
   l = __holent_array__ (fn, "L", l);
   dt = 0;
   if (isfield (o, "dt"))
     dt = __holent_array__ (fn, "dt", o.dt);
   endif
-  tl = false;
-  if (isfield (o, "timelike"))
-    tl = o.timelike;
-    if (! ((islogical (tl) || isnumeric (tl)) && isscalar (tl) && (tl == 0 || tl == 1)))
-      error ("holent:option", "%s: 'timelike' must be true or false", fn);
-    endif
-  endif
+  tl = __holent_time_entropy__ ("timelike", fn, o);
   t = __holent_time_entropy__ ("times", fn, o);
-  try
-    z = zeros (size (l + dt));
-  catch
-    error ("holent:size", "%s: L (%s) and dt (%s) do not broadcast", fn,
-           mat2str (size (l)), mat2str (size (dt)));
-  end_try_catch
-  l = l + z;
-  dt = dt + z;
+  [l, dt] = __holent_time_entropy__ ("broadcast", fn, {"L", "dt"}, l, dt);
   if (isfield (bg, "boundary") && strcmp (bg.boundary, "line"))
     bad = find (! (l(:) > 0), 1);
   else
@@ -173,25 +158,21 @@ function [S, branch] = timed (fn, bg, l, args)
   if (tl)
     ## Causal pairs: one geodesic on the timelike branch.
     for j = 1:numel (t)
-      try
-        [re, im] = __holent_time__ ("geodesic", bg, zeros (n, 1), t(j) * ones (n, 1),
-                                    ones (n, 1), l(:), dt(:) + t(j), ones (n, 1), 1, 1);
-      catch err
-        __holent_rethrow__ (err, "__holent_time__", fn);
-      end_try_catch
+      [re, im] = __holent_time__ ("geodesic", fn, bg, zeros (n, 1), t(j) * ones (n, 1),
+                                  ones (n, 1), l(:), dt(:) + t(j), ones (n, 1), 1, 1);
       todo = (im == 0);
       S(:,j) = bg.c / 6 * complex (re, im);
     endfor
   endif
   if (any (todo))
     A = arrayfun (@(a, b) [0, a, 0, b], l(todo), dt(todo), "uniformoutput", false);
-    if (isfield (bg, "state") && strcmp (bg.state, "quench"))
+    if (__holent_time_entropy__ ("state", bg, "quench"))
       if (any (dt(:) != 0))
         error ("holent:unsupported", "%s: 'dt' is not supported on a quench: the interval lives at the time 't'", fn);
       endif
       A = cellfun (@(r) r(1:2), A, "uniformoutput", false);
     endif
-    [Sr, ~, hz] = __holent_time_entropy__ (fn, bg, A, t);
+    [Sr, ~, hz] = __holent_time__ ("entropy", fn, bg, A, t(:));  # BG checked above
     S(todo,:) = Sr;
     branch(todo,:) = hz != 0;
   endif

@@ -23,20 +23,11 @@ function t = mi_vanishing_time (bg, A, varargin)
     print_usage ();
   endif
   o = __holent_opts__ (fn, {"tmax"}, varargin);
-  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state")
-      || ! strcmp (bg.state, "tfd"))
-    error ("holent:background",
-           "%s: BG must be a thermofield double made by ads3_background (\"tfd\", ...)", fn);
-  endif
-  tmax = 100 * bg.beta;
+  tmax = [];   # the core's default, 100 beta
   if (isfield (o, "tmax"))
     tmax = __holent_scalar__ (fn, "tmax", o.tmax, "positive");
   endif
-  try
-    t = __holent_time__ ("mi_zero", bg, A, tmax);
-  catch err
-    __holent_rethrow__ (err, "__holent_time__", fn);
-  end_try_catch
+  t = __holent_time__ ("mi_zero", fn, bg, A, tmax);
 endfunction
 
 %!test

@@ -23,30 +23,7 @@ function [tstar, astar] = scrambling_time (bg, A)
   if (nargin != 2)
     print_usage ();
   endif
-  if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state")
-      || ! strcmp (bg.state, "tfd"))
-    error ("holent:background",
-           "%s: BG must be a thermofield double made by ads3_background (\"tfd\", ...)", fn);
-  endif
-  try
-    astar = __holent_time__ ("scramble", bg, A);
-  catch err
-    __holent_rethrow__ (err, "__holent_time__", fn);
-  end_try_catch
-  tstar = NaN;
-  if (bg.shock_energy > 0 && astar > 0)
-    ## the inverse of the shift formula, in the core
-    circle = strcmp (bg.boundary, "circle");
-    try
-      [a1, M] = __holent_time__ ("shock", double (circle),
-                                 merge (circle, bg.circumference, 1), bg.beta,
-                                 bg.c, bg.shock_energy, 0);
-    catch err
-      __holent_rethrow__ (err, "__holent_time__", fn);
-    end_try_catch
-    ## alpha(tw) = a1 exp(2 pi tw/beta): solve alpha(tw) = astar
-    tstar = bg.beta / (2 * pi) * log (astar / a1);
-  endif
+  [tstar, astar] = __holent_time__ ("scramble", fn, bg, A);
 endfunction
 
 %!test
@@ -64,4 +41,4 @@ endfunction
 
 %!error <Invalid call> scrambling_time (1)
 %!error <thermofield double> scrambling_time (ads3_background ("thermal", "line", "beta", 1), struct ("left", [0 1], "right", [0 1]))
-%!error <left has no intervals> scrambling_time (ads3_background ("tfd", "line", "beta", 1), struct ("right", [0 1]))
+%!error <scrambling_time: A.left: has no intervals> scrambling_time (ads3_background ("tfd", "line", "beta", 1), struct ("right", [0 1]))

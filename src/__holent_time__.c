@@ -1,21 +1,30 @@
 /* __holent_time__: time-dependent AdS3 states (covariant lengths, the
  * thermofield double with its shock, the global quench, bulk light
  * times).  Unpack, call the core (holent_hrt, holent_tfd, holent_quench,
- * holent_causal), pack; no physics.
+ * holent_causal), pack; no physics.  FN is the public function's name:
+ * every error is raised by holent_gw_raise under it.
  *
- *   [RE, IM] = ("geodesic", BG, X1, T1, S1, X2, T2, S2, CLS, TIMELIKE)
+ *   BG = ("background", FN, STATE, BOUNDARY, C, G, ELL, CUTOFF, L, BETA,
+ *         SHOCK_ALPHA, SHOCK_ENERGY, SHOCK_TIME)
+ *       STATE "tfd" or "quench"; the shock values [] when not given.  The
+ *       struct is built from the core constructor's result
+ *       (holent_tfd_make, holent_quench_make); a struct passed back to any
+ *       mode is rebuilt the same way and must match field by field.
+ *   [RE, IM] = ("geodesic", FN, BG, X1, T1, S1, X2, T2, S2, CLS, TIMELIKE)
  *       equal-sized arrays; S1, S2 sides (0 left, 1 right) on a thermofield
  *       double (ignored elsewhere); on a quench T1 == T2 (the wrapper
  *       checks) is the time.  IM is pi on the timelike branch.
- *   [S, NCROSS, HORIZON] = ("entropy", BG, A, T)
+ *   [S, NCROSS, HORIZON] = ("entropy", FN, BG, A, T [, NAMES])
  *       A: a region (n x 2 or n x 4 matrix, or a struct with fields left
  *       and right) or a cell array of them; T a vector of times (shifts
- *       of every endpoint time; the time of a quench).  Outputs are
+ *       of every endpoint time; the time of a quench); NAMES a cell of
+ *       numel (A) names for messages (default A, A{k}).  Outputs are
  *       numel(A) x numel(T).
- *   [TB, TL] = ("light", BG, X1, X2, TOL)
- *   DT = ("mi_zero", BG, A, TMAX)             A a struct (left, right)
- *   ALPHA = ("scramble", BG, A)                A a struct (left, right)
- *   [ALPHA, M] = ("shock", CIRCLE, L, BETA, C, E, TW)
+ *   [TB, TL] = ("light", FN, BG, X1, X2, TOL)    X1, X2 broadcast; TOL []
+ *       for the core's default
+ *   DT = ("mi_zero", FN, BG, A, TMAX)             A a struct (left, right),
+ *       TMAX [] for the core's default
+ *   [TSTAR, ALPHA] = ("scramble", FN, BG, A)      A a struct (left, right)
  *
  * Copyright (C) 2026 The holent developers.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
@@ -38,17 +47,17 @@ typedef struct
   holent_geo_bg geo;       /* static bulks; the one-sided exterior    */
   holent_tfd_bg tfd;
   holent_quench_bg quench;
+  double shock_energy;     /* thermofield double: E of the shock      */
 } time_bg;
 
 /* Everything malloc'd, freed before any error.  */
 typedef struct
 {
+  const char *fn;
   holent_region *reg;
   holent_rt_workspace *rt;
   holent_tfd_workspace *tw;
   double *tp, *ts, *te;
-  char id[32];
-  char msg[400];
 } gw_state;
 
 static void
@@ -60,138 +69,310 @@ release (gw_state *g)
   free (g->tp);
   free (g->ts);
   free (g->te);
-  memset (g, 0, sizeof *g);
+  g->reg = NULL;
+  g->rt = NULL;
+  g->tw = NULL;
+  g->tp = g->ts = g->te = NULL;
 }
 
+/* Free everything, then raise through holent_gw_raise.  */
 static void
-raise (gw_state *g, const char *id, const char *fmt, ...)
+fail (gw_state *g, int status, const char *name, size_t index,
+       const char *fmt, ...)
+#if defined(__GNUC__)
+  __attribute__ ((noreturn, format (printf, 5, 6)))
+#endif
+  ;
+
+static void
+fail (gw_state *g, int status, const char *name, size_t index,
+       const char *fmt, ...)
 {
+  char msg[600], nm[64];
   va_list ap;
   va_start (ap, fmt);
-  vsnprintf (g->msg, sizeof g->msg, fmt, ap);
+  vsnprintf (msg, sizeof msg, fmt, ap);
   va_end (ap);
-  snprintf (g->id, sizeof g->id, "%s", id);
-  char id2[32], msg2[400];
-  memcpy (id2, g->id, sizeof id2);
-  memcpy (msg2, g->msg, sizeof msg2);
+  snprintf (nm, sizeof nm, "%s", name ? name : "");
   release (g);
-  mexErrMsgIdAndTxt (id2, "%s", msg2);
+  holent_gw_raise (g->fn, status, nm, index, "%s", msg);
 }
 
-static const char *
-status_id (int st)
+/* ---- the background: built by the core, packed, re-checked ---- */
+
+static const char *const tfd_names[HOLENT_TFD_NARGS] = {
+  "circumference", "cutoff", "beta", "c", "ell", "shock_alpha",
+  "shock_energy", "shock_time"
+};
+
+typedef struct
 {
-  switch (st)
-    {
-    case HOLENT_EINVAL: return "holent:invalid";
-    case HOLENT_EDOM: return "holent:domain";
-    case HOLENT_ENOMEM: return "holent:nomem";
-    case HOLENT_EOVERLAP: return "holent:overlap";
-    case HOLENT_EEMPTY: return "holent:empty";
-    case HOLENT_ENOCONV: return "holent:noconv";
-    case HOLENT_EUNSUP: return "holent:unsupported";
-    case HOLENT_ETOOBIG: return "holent:toobig";
-    case HOLENT_ECOINCIDE: return "holent:coincident";
-    case HOLENT_ETIMELIKE: return "holent:timelike";
-    default: return "holent:internal";
-    }
-}
+  int tfd, circle;
+  double c, G, ell, eps, L, beta;
+  holent_tfd_info info;
+} bg_params;
 
-static double
-field_scalar (const mxArray *s, const char *f)
+/* The struct of a time-dependent background, field by field.  */
+static mxArray *
+pack_bg (const bg_params *p)
 {
-  const mxArray *a = mxGetField (s, 0, f);
-  if (a == NULL)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "BG is missing field '%s': make it with ads3_background",
-                       f);
-  char nm[40];
-  snprintf (nm, sizeof nm, "BG.%s", f);
-  return holent_gw_scalar (a, "", nm);
+  static const char *f[] = {
+    "state", "boundary", "bulk", "c", "G", "ell", "cutoff", "circumference",
+    "beta", "T", "beta_L", "beta_R", "T_L", "T_R", "Omega", "alpha", "h",
+    "saddle", "horizon", "pure", "S_BH", "entropy_density", "r_plus",
+    "r_minus", "M", "J", "shock_alpha", "shock_energy", "shock_time",
+    "shock_M"
+  };
+  int nf = p->tfd ? 30 : 26;
+  mxArray *s = mxCreateStructMatrix (1, 1, nf, f);
+  const holent_tfd_info *in = &p->info;
+  double T = 1.0 / p->beta;
+  const double num[] = {
+    p->c, p->G, p->ell, p->eps, p->circle ? p->L : INFINITY, p->beta, T,
+    p->beta, p->beta, T, T, 0.0, 1.0, 0.0
+  };
+  mxSetField (s, 0, "state", mxCreateString (p->tfd ? "tfd" : "quench"));
+  mxSetField (s, 0, "boundary",
+              mxCreateString (p->circle ? "circle" : "line"));
+  mxSetField (s, 0, "bulk",
+              mxCreateString (!p->tfd ? "vaidya"
+                              : p->circle ? "btz" : "planar_btz"));
+  for (int k = 0; k < 14; k++)
+    mxSetFieldByNumber (s, 0, 3 + k, mxCreateDoubleScalar (num[k]));
+  mxSetField (s, 0, "saddle", mxCreateString ("btz"));
+  /* The quench is a pure state collapsing: S(A) = S(A^c).  */
+  mxSetField (s, 0, "horizon", mxCreateLogicalScalar (p->tfd));
+  mxSetField (s, 0, "pure", mxCreateLogicalScalar (!p->tfd));
+  const double der[] = {
+    p->tfd ? in->S_BH : 0.0, p->tfd ? in->entropy_density : 0.0,
+    p->tfd ? in->r_plus : 0.0, 0.0, p->tfd ? in->M : 0.0, 0.0,
+    in->shock_alpha, in->shock_energy, in->shock_time, in->shock_M
+  };
+  for (int k = 0; k < nf - 20; k++)
+    mxSetFieldByNumber (s, 0, 20 + k, mxCreateDoubleScalar (der[k]));
+  return s;
 }
 
+/* Build (core constructor) from the parameters in p; raise its reason.  */
 static void
-get_bg (const mxArray *s, time_bg *b)
+make_bg (const char *fn, bg_params *p, time_bg *b, int has_alpha,
+         double alpha, int has_energy, double E, int has_time, double tw)
 {
-  char state[32] = "";
-  const mxArray *f;
-  if (s == NULL || !mxIsStruct (s) || mxGetNumberOfElements (s) != 1)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "BG must be a scalar struct from ads3_background");
-  f = mxGetField (s, 0, "state");
-  if (f != NULL)
-    holent_gw_string (f, "", "BG.state", state, sizeof state);
-  int circle = 0;
-  f = mxGetField (s, 0, "boundary");
-  if (f != NULL)
-    {
-      char bnd[16];
-      holent_gw_string (f, "", "BG.boundary", bnd, sizeof bnd);
-      circle = strcmp (bnd, "circle") == 0;
-    }
-  int st = HOLENT_SUCCESS;
-  if (strcmp (state, "tfd") == 0)
+  holent_err err;
+  int st;
+  memset (&p->info, 0, sizeof p->info);
+  if (p->tfd)
     {
       b->kind = BG_TFD;
-      st = holent_tfd_init (&b->tfd, circle,
-                            circle ? field_scalar (s, "circumference") : 0.0,
-                            field_scalar (s, "cutoff"),
-                            field_scalar (s, "beta"), field_scalar (s, "c"),
-                            field_scalar (s, "shock_alpha"));
+      st = holent_tfd_make (&b->tfd, &p->info, p->circle, p->L, p->eps,
+                            p->beta, p->c, p->ell, has_alpha, alpha,
+                            has_energy, E, has_time, tw, &err);
       b->geo = b->tfd.side;
-    }
-  else if (strcmp (state, "quench") == 0)
-    {
-      b->kind = BG_QUENCH;
-      st = holent_quench_init (&b->quench, circle,
-                               circle ? field_scalar (s, "circumference")
-                                      : 0.0,
-                               field_scalar (s, "cutoff"),
-                               field_scalar (s, "beta"),
-                               field_scalar (s, "c"));
-      b->geo = b->quench.vac;
+      b->shock_energy = p->info.shock_energy;
     }
   else
     {
-      b->kind = BG_STATIC;
-      holent_gw_bg (s, "", &b->geo);
+      b->kind = BG_QUENCH;
+      st = holent_quench_make (&b->quench, p->circle, p->L, p->eps, p->beta,
+                               p->c, p->ell, &err);
+      p->info.shock_time = NAN;
+      b->geo = b->quench.vac;
     }
   if (st)
-    mexErrMsgIdAndTxt ("holent:background",
-                       "BG has inconsistent parameters (%s)",
-                       holent_strerror (st));
+    holent_gw_raise_err (fn, &err, tfd_names, HOLENT_TFD_NARGS);
+  if (!(p->G > 0.0) || !isfinite (p->G))
+    holent_gw_raise (fn, HOLENT_EDOM, "G", HOLENT_NOINDEX,
+                     "must be positive and finite");
 }
 
+static const mxArray *
+field (const char *fn, const mxArray *s, const char *f)
+{
+  const mxArray *a = mxGetField (s, 0, f);
+  if (a == NULL)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, "BG", HOLENT_NOINDEX,
+                     "is missing field '%s': make it with ads3_background",
+                     f);
+  return a;
+}
+
+static double
+field_scalar (const char *fn, const mxArray *s, const char *f)
+{
+  char nm[40];
+  snprintf (nm, sizeof nm, "BG.%s", f);
+  const mxArray *a = field (fn, s, f);
+  size_t n;
+  const double *v = holent_gw_real (a, fn, nm, &n);
+  if (n != 1)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, nm, HOLENT_NOINDEX,
+                     "must be a scalar");
+  return v[0];
+}
+
+/* 1 when the two arrays hold the same value (NaN equal to NaN).  */
+static int
+same_value (const mxArray *a, const mxArray *b)
+{
+  if (mxGetClassID (a) != mxGetClassID (b)
+      || mxGetNumberOfElements (a) != mxGetNumberOfElements (b)
+      || mxIsComplex (a) || mxIsSparse (a) || mxGetM (a) > 1)
+    return 0;
+  if (mxIsChar (a))
+    {
+      char x[64], y[64];
+      return mxGetString (a, x, sizeof x) == 0
+             && mxGetString (b, y, sizeof y) == 0 && strcmp (x, y) == 0;
+    }
+  if (mxIsLogical (a))
+    return *mxGetLogicals (a) == *mxGetLogicals (b);
+  double x = *mxGetPr (a), y = *mxGetPr (b);
+  return x == y || (isnan (x) && isnan (y));
+}
+
+/* Unpack BG: static bulks by the shared unpacker; a thermofield double or
+   a quench rebuilt by its core constructor from its parameters and
+   compared with every field of the struct.  */
+static void
+get_bg (const char *fn, const mxArray *s, time_bg *b)
+{
+  char state[32] = "", bnd[16] = "";
+  memset (b, 0, sizeof *b);
+  if (s == NULL || !mxIsStruct (s) || mxGetNumberOfElements (s) != 1)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, "BG", HOLENT_NOINDEX,
+                     "must be a scalar struct from ads3_background");
+  const mxArray *f = mxGetField (s, 0, "state");
+  if (f != NULL)
+    holent_gw_string (f, fn, "BG.state", state, sizeof state);
+  int tfd = strcmp (state, "tfd") == 0;
+  if (!tfd && strcmp (state, "quench") != 0)
+    {
+      b->kind = BG_STATIC;
+      holent_gw_bg (s, fn, &b->geo);
+      return;
+    }
+  holent_gw_string (field (fn, s, "boundary"), fn, "BG.boundary", bnd,
+                    sizeof bnd);
+  bg_params p = { tfd, strcmp (bnd, "circle") == 0,
+                  field_scalar (fn, s, "c"), field_scalar (fn, s, "G"),
+                  field_scalar (fn, s, "ell"), field_scalar (fn, s, "cutoff"),
+                  field_scalar (fn, s, "circumference"),
+                  field_scalar (fn, s, "beta"), { 0, 0, 0, 0, 0, 0, 0, 0 } };
+  double a = 0.0, E = 0.0, tw = NAN;
+  if (tfd)
+    {
+      a = field_scalar (fn, s, "shock_alpha");
+      E = field_scalar (fn, s, "shock_energy");
+      tw = field_scalar (fn, s, "shock_time");
+    }
+  /* Made from an energy and a time, or from the shift.  */
+  int et = !isnan (tw);
+  make_bg (fn, &p, b, !et, a, et, E, et, tw);
+  mxArray *ref = pack_bg (&p);
+  int nf = mxGetNumberOfFields (ref);
+  for (int k = 0; k < nf; k++)
+    {
+      const char *name = mxGetFieldNameByNumber (ref, k);
+      const mxArray *given = field (fn, s, name);
+      if (!same_value (mxGetFieldByNumber (ref, 0, k), given))
+        {
+          char nm[40];
+          snprintf (nm, sizeof nm, "BG.%s", name);
+          mxDestroyArray (ref);
+          holent_gw_raise (fn, HOLENT_EBACKGROUND, nm, HOLENT_NOINDEX,
+                           "does not match the background its parameters "
+                           "make: build BG with ads3_background");
+        }
+    }
+  mxDestroyArray (ref);
+  if (mxGetNumberOfFields (s) != nf)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, "BG", HOLENT_NOINDEX,
+                     "has %d fields where a %s background has %d: build it "
+                     "with ads3_background", mxGetNumberOfFields (s), state,
+                     nf);
+}
+
+/* An optional scalar option ([] when absent).  */
+static int
+opt_scalar (const char *fn, const mxArray *a, const char *name, double *v)
+{
+  size_t n;
+  const double *p = holent_gw_real (a, fn, name, &n);
+  if (n == 0)
+    return 0;
+  if (n != 1)
+    holent_gw_raise (fn, HOLENT_ETYPE, name, HOLENT_NOINDEX,
+                     "must be a scalar");
+  *v = p[0];
+  return 1;
+}
+
+static void
+do_background (const char *fn, mxArray *plhs[], const mxArray *prhs[])
+{
+  char state[16], bnd[16];
+  time_bg b;
+  holent_gw_string (prhs[2], fn, "STATE", state, sizeof state);
+  holent_gw_string (prhs[3], fn, "BOUNDARY", bnd, sizeof bnd);
+  int tfd = strcmp (state, "tfd") == 0;
+  if (!tfd && strcmp (state, "quench") != 0)
+    holent_gw_raise (fn, HOLENT_EOPTION, "STATE", HOLENT_NOINDEX,
+                     "must be \"tfd\" or \"quench\"");
+  if (strcmp (bnd, "line") != 0 && strcmp (bnd, "circle") != 0)
+    holent_gw_raise (fn, HOLENT_EOPTION, "BOUNDARY", HOLENT_NOINDEX,
+                     "must be \"line\" or \"circle\"");
+  bg_params p = { tfd, strcmp (bnd, "circle") == 0,
+                  holent_gw_scalar (prhs[4], fn, "c"),
+                  holent_gw_scalar (prhs[5], fn, "G"),
+                  holent_gw_scalar (prhs[6], fn, "ell"),
+                  holent_gw_scalar (prhs[7], fn, "cutoff"),
+                  holent_gw_scalar (prhs[8], fn, "circumference"),
+                  holent_gw_scalar (prhs[9], fn, "beta"), { 0, 0, 0, 0, 0, 0, 0, 0 } };
+  double a = 0.0, E = 0.0, tw = 0.0;
+  int ha = opt_scalar (fn, prhs[10], "shock_alpha", &a);
+  int he = opt_scalar (fn, prhs[11], "shock_energy", &E);
+  int ht = opt_scalar (fn, prhs[12], "shock_time", &tw);
+  if (!tfd && (ha || he || ht))
+    holent_gw_raise (fn, HOLENT_EOPTION,
+                     ha ? "shock_alpha" : he ? "shock_energy" : "shock_time",
+                     HOLENT_NOINDEX, "applies to a thermofield double only");
+  make_bg (fn, &p, &b, ha, a, he, E, ht, tw);
+  plhs[0] = pack_bg (&p);
+}
+
+/* ---- lengths ---- */
+
 static const double *
-real_array (const mxArray *a, const char *name, size_t n)
+real_array (const char *fn, const mxArray *a, const char *name, size_t n)
 {
   size_t m;
-  const double *p = holent_gw_real (a, "", name, &m);
+  const double *p = holent_gw_real (a, fn, name, &m);
   if (m != n)
-    mexErrMsgIdAndTxt ("holent:size", "%s must have %zu elements", name, n);
+    holent_gw_raise (fn, HOLENT_ESIZE, name, HOLENT_NOINDEX,
+                     "must have %zu elements", n);
   return p;
 }
 
 static void
-do_geodesic (int nlhs, mxArray *plhs[], const mxArray *prhs[])
+do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
 {
   time_bg b;
-  get_bg (prhs[1], &b);
+  get_bg (fn, prhs[2], &b);
   size_t n;
-  const double *x1 = holent_gw_real (prhs[2], "", "X1", &n);
-  const double *t1 = real_array (prhs[3], "T1", n);
-  const double *s1 = real_array (prhs[4], "SIDE1", n);
-  const double *x2 = real_array (prhs[5], "X2", n);
-  const double *t2 = real_array (prhs[6], "T2", n);
-  const double *s2 = real_array (prhs[7], "SIDE2", n);
-  double cls = holent_gw_scalar (prhs[8], "", "CLASS");
-  double tl = holent_gw_scalar (prhs[9], "", "TIMELIKE");
+  const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n);
+  const double *t1 = real_array (fn, prhs[4], "t1", n);
+  const double *s1 = real_array (fn, prhs[5], "side1", n);
+  const double *x2 = real_array (fn, prhs[6], "X2", n);
+  const double *t2 = real_array (fn, prhs[7], "t2", n);
+  const double *s2 = real_array (fn, prhs[8], "side2", n);
+  double cls = holent_gw_scalar (prhs[9], fn, "class");
+  double tl = holent_gw_scalar (prhs[10], fn, "timelike");
   if (cls != 0.0 && cls != 1.0 && cls != 2.0)
-    mexErrMsgIdAndTxt ("holent:invalid", "CLASS must be 0, 1 or 2");
-  plhs[0] = holent_gw_like (prhs[2]);
-  plhs[1] = holent_gw_like (prhs[2]);
+    holent_gw_raise (fn, HOLENT_EOPTION, "class", HOLENT_NOINDEX,
+                     "must be 0, 1 or 2");
+  plhs[0] = holent_gw_like (prhs[3]);
+  plhs[1] = holent_gw_like (prhs[3]);
   double *re = mxGetPr (plhs[0]), *im = mxGetPr (plhs[1]);
-  (void) nlhs;
   for (size_t i = 0; i < n; i++)
     {
       int st;
@@ -211,20 +392,9 @@ do_geodesic (int nlhs, mxArray *plhs[], const mxArray *prhs[])
                                     &re[i], &im[i]);
           break;
         case BG_QUENCH:
-          {
-            double d = x2[i] - x1[i];
-            if (b.quench.vac.circle)
-              {
-                d = fmod (d, b.quench.vac.L);
-                if (d < 0.0)
-                  d += b.quench.vac.L;
-              }
-            st = isfinite (x1[i]) && isfinite (x2[i]) && d == 0.0
-                   ? HOLENT_ECOINCIDE
-                   : holent_quench_length (&b.quench, fabs (d), t1[i],
-                                           &re[i], NULL);
-            break;
-          }
+          st = holent_quench_points_length (&b.quench, x1[i], x2[i], t1[i],
+                                            &re[i]);
+          break;
         default:
           st = holent_hrt_length (&b.geo, x1[i], t1[i], x2[i], t2[i],
                                   (holent_geo_class) cls, tl != 0.0, &re[i],
@@ -232,43 +402,50 @@ do_geodesic (int nlhs, mxArray *plhs[], const mxArray *prhs[])
           break;
         }
       if (st == HOLENT_ETIMELIKE)
-        mexErrMsgIdAndTxt ("holent:timelike",
-                           "points %zu are timelike or null separated on the "
-                           "boundary (|t2 - t1| must be below their "
-                           "distance; the option \"timelike\", true gives "
-                           "the timelike entanglement branch)", i + 1);
+        holent_gw_raise (fn, st, "X2", i,
+                         "timelike or null separated from X1(%zu) on the "
+                         "boundary (|t2 - t1| must be below their distance; "
+                         "the option \"timelike\", true gives the timelike "
+                         "entanglement branch)", i + 1);
       if (st)
-        holent_gw_fail (st, "", "X1, X2", i);
+        holent_gw_raise (fn, st, "X2", i, "%s (with X1(%zu))",
+                         holent_strerror (st), i + 1);
     }
 }
+
+/* ---- regions ---- */
 
 /* One region: a matrix (n x 2 or n x 4) or, on a thermofield double, a
    struct with fields left and right.  */
 typedef struct
 {
   const mxArray *side[2];  /* left, right (matrices or NULL) */
+  char name[2][112];       /* their names in messages        */
 } region_in;
 
 static void
 read_region (gw_state *g, const mxArray *a, const time_bg *b,
              const char *nm, region_in *r)
 {
+  int st = mxIsStruct (a);
   r->side[0] = r->side[1] = NULL;
-  if (mxIsStruct (a))
+  snprintf (r->name[0], sizeof r->name[0], "%s.left", nm);
+  snprintf (r->name[1], sizeof r->name[1], st ? "%s.right" : "%s", nm);
+  if (st)
     {
       if (b->kind != BG_TFD)
-        raise (g, "holent:type",
-               "%s: a struct region (fields left, right) needs a thermofield "
-               "double background (ads3_background (\"tfd\", ...))", nm);
+        fail (g, HOLENT_ETYPE, nm, HOLENT_NOINDEX,
+               "a struct region (fields left, right) needs a thermofield "
+               "double background (ads3_background (\"tfd\", ...))");
       if (mxGetNumberOfElements (a) != 1)
-        raise (g, "holent:type", "%s must be a scalar struct", nm);
+        fail (g, HOLENT_ETYPE, nm, HOLENT_NOINDEX,
+               "must be a scalar struct");
       for (int k = 0; k < mxGetNumberOfFields (a); k++)
         {
           const char *f = mxGetFieldNameByNumber (a, k);
           if (strcmp (f, "left") && strcmp (f, "right"))
-            raise (g, "holent:type",
-                   "%s has a field '%s': the sides are 'left' and 'right'",
-                   nm, f);
+            fail (g, HOLENT_ETYPE, nm, HOLENT_NOINDEX,
+                   "has a field '%s': the sides are 'left' and 'right'", f);
         }
       r->side[0] = mxGetField (a, 0, "left");
       r->side[1] = mxGetField (a, 0, "right");
@@ -283,91 +460,78 @@ read_region (gw_state *g, const mxArray *a, const time_bg *b,
       if (!mxIsDouble (m) || mxIsComplex (m) || mxIsSparse (m)
           || mxGetNumberOfDimensions (m) != 2
           || (mxGetM (m) > 0 && mxGetN (m) != 2 && mxGetN (m) != 4))
-        raise (g, "holent:type",
-               "%s%s must be a real n x 2 matrix [start, end] or n x 4 "
-               "[start, end, t_start, t_end]", nm,
-               mxIsStruct (a) ? (s ? ".right" : ".left") : "");
+        fail (g, HOLENT_ETYPE, r->name[s], HOLENT_NOINDEX,
+               "must be a real n x 2 matrix [start, end] or n x 4 "
+               "[start, end, t_start, t_end]");
       if (mxGetM (m) == 0)
         r->side[s] = NULL;
       else if (mxGetN (m) == 4 && b->kind == BG_QUENCH)
-        raise (g, "holent:unsupported",
-               "%s: regions with their own times are not supported on a "
-               "quench; give the time with the option \"t\"", nm);
+        fail (g, HOLENT_EUNSUP, r->name[s], HOLENT_NOINDEX,
+               "regions with their own times are not supported on a "
+               "quench; give the time with the option \"t\"");
     }
   if (r->side[0] == NULL && r->side[1] == NULL)
-    raise (g, "holent:empty", "%s has no intervals", nm);
-}
-
-static size_t
-rows_of (const mxArray *m)
-{
-  return m ? mxGetM (m) : 0;
+    fail (g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX, "has no intervals");
 }
 
 /* Columns of one side: a, b and times (zeros when n x 2).  */
 static void
-side_cols (gw_state *g, const mxArray *m, const double **a, const double **b,
-           const double **ta, const double **tb, size_t off)
+side_cols (gw_state *g, const mxArray *m, holent_tfd_side *sd, size_t off)
 {
   size_t n = mxGetM (m);
   const double *p = mxGetPr (m);
-  *a = p;
-  *b = p + n;
+  sd->n = n;
+  sd->a = p;
+  sd->b = p + n;
   if (mxGetN (m) == 4)
     {
-      *ta = p + 2 * n;
-      *tb = p + 3 * n;
+      sd->ta = p + 2 * n;
+      sd->tb = p + 3 * n;
     }
   else
     {
       for (size_t i = 0; i < n; i++)
         g->ts[off + i] = g->te[off + i] = 0.0;
-      *ta = g->ts + off;
-      *tb = g->te + off;
+      sd->ta = g->ts + off;
+      sd->tb = g->te + off;
     }
 }
 
+/* The reason of a failed region, row (0-based) and second row.  */
 static void
-fail_region (gw_state *g, int st, const char *nm, const char *side,
-             size_t row, const holent_region *r)
+fail_region (gw_state *g, int st, const char *nm, size_t row, size_t row2)
 {
   switch (st)
     {
     case HOLENT_EOVERLAP:
-      if (r && r->bad[1] != (size_t) -1 && r->bad[1] != row)
-        raise (g, "holent:overlap", "%s%s: rows %zu and %zu overlap", nm,
-               side, r->bad[0] + 1, r->bad[1] + 1);
-      raise (g, "holent:overlap",
-             "%s%s: row %zu touches or overlaps another row (intervals with "
-             "times must be disjoint)", nm, side, row + 1);
-      break;
+      if (row2 != HOLENT_NOINDEX && row2 != row)
+        fail (g, st, nm, row, "overlaps or touches row %zu (intervals "
+               "with times must be disjoint)", row2 + 1);
+      fail (g, st, nm, row, "touches or overlaps another row (intervals "
+             "with times must be disjoint)");
     case HOLENT_EEMPTY:
-      raise (g, "holent:empty", "%s%s: row %zu is a zero-length interval",
-             nm, side, row + 1);
-      break;
+      fail (g, st, nm, row, "is a zero-length interval");
     case HOLENT_ETIMELIKE:
-      raise (g, "holent:timelike",
-             "%s%s: two endpoints are timelike or null separated (a region "
-             "must be achronal)", nm, side);
-      break;
+      fail (g, st, nm, HOLENT_NOINDEX, "two endpoints are timelike or "
+             "null separated (a region must be achronal)");
     case HOLENT_EINVAL:
-      raise (g, "holent:domain", "%s%s: row %zu must be finite", nm, side,
-             row + 1);
-      break;
+      fail (g, HOLENT_EDOM, nm, row, "must be finite");
     case HOLENT_EDOM:
-      raise (g, "holent:domain",
-             "%s%s: row %zu must have start < end (line) or end - start <= "
-             "circumference (circle)", nm, side, row + 1);
-      break;
+      fail (g, st, nm, row, "must have start < end (line) or end - start "
+             "<= circumference (circle)");
+    case HOLENT_EUNSUP:
+      fail (g, st, nm, HOLENT_NOINDEX, "regions on both sides of a "
+             "thermofield double on a circle are not supported (use the "
+             "line, or one side)");
     default:
-      raise (g, status_id (st), "%s%s: %s", nm, side, holent_strerror (st));
+      fail (g, st, nm, HOLENT_NOINDEX, "%s", holent_strerror (st));
     }
 }
 
 /* S of one region at shift/time t.  */
 static double
-entropy_one (gw_state *g, const time_bg *b, const region_in *r,
-             const char *nm, double t, size_t *ncross, int *horizon)
+entropy_one (gw_state *g, const time_bg *b, const region_in *r, double t,
+             size_t *ncross, int *horizon)
 {
   holent_rt_result res;
   int st;
@@ -380,48 +544,42 @@ entropy_one (gw_state *g, const time_bg *b, const region_in *r,
       for (int s = 0; s < 2; s++)
         if (r->side[s])
           {
-            sd[s].n = rows_of (r->side[s]);
-            side_cols (g, r->side[s], &sd[s].a, &sd[s].b, &sd[s].ta,
-                       &sd[s].tb, off);
+            side_cols (g, r->side[s], &sd[s], off);
             off += sd[s].n;
           }
-      int bad_side = -1;
-      size_t bad_row = 0;
+      int bad_side = 1;
+      size_t bad_row = HOLENT_NOINDEX;
       st = holent_tfd_entropy (g->tw, &b->tfd, &sd[0], &sd[1], t, &res,
                                ncross, &bad_side, &bad_row);
-      if (st == HOLENT_EUNSUP)
-        raise (g, "holent:unsupported",
-               "%s: regions on both sides of a thermofield double on a "
-               "circle are not supported (use the line, or one side)", nm);
       if (st)
-        fail_region (g, st, nm, bad_side == 0 ? ".left" : (bad_side == 1 && r->side[0] ? ".right" : ""),
-                     bad_row, NULL);
+        fail_region (g, st, r->name[bad_side == 0 ? 0 : 1], bad_row,
+                     HOLENT_NOINDEX);
     }
   else
     {
-      const mxArray *m = r->side[1];
-      size_t n = mxGetM (m);
-      const double *a, *bb, *ta, *tb;
-      side_cols (g, m, &a, &bb, &ta, &tb, 0);
-      st = holent_region_set (g->reg, b->geo.circle, b->geo.L, n, a, bb);
+      holent_tfd_side sd;
+      side_cols (g, r->side[1], &sd, 0);
+      st = holent_region_set (g->reg, b->geo.circle, b->geo.L, sd.n, sd.a,
+                              sd.b);
       if (st)
-        fail_region (g, st, nm, "", g->reg->bad[0], g->reg);
+        fail_region (g, st, r->name[1], g->reg->bad[0], g->reg->bad[1]);
       if (b->kind == BG_QUENCH)
         st = holent_quench_entropy (g->rt, &b->quench, g->reg, t, &res,
                                     NULL, NULL);
       else
         {
           size_t bad = 0, bi, bj;
-          st = holent_hrt_region_times (g->reg, n, ta, tb, g->tp, &bad);
+          st = holent_hrt_region_times (g->reg, sd.n, sd.ta, sd.tb, g->tp,
+                                        &bad);
           if (st)
-            fail_region (g, st, nm, "", bad, NULL);
+            fail_region (g, st, r->name[1], bad, HOLENT_NOINDEX);
           for (size_t i = 0; i < 2 * g->reg->n; i++)
             g->tp[i] += t;
           st = holent_hrt_entropy (g->rt, &b->geo, g->reg, g->tp, &res, NULL,
                                    NULL, &bi, &bj);
         }
       if (st)
-        fail_region (g, st, nm, "", 0, NULL);
+        fail_region (g, st, r->name[1], HOLENT_NOINDEX, HOLENT_NOINDEX);
     }
   *horizon = res.horizon;
   return res.S;
@@ -431,8 +589,8 @@ static void
 alloc_ws (gw_state *g, size_t nmax)
 {
   if (nmax > HOLENT_RT_NMAX)
-    raise (g, "holent:toobig", "at most %zu intervals per region",
-           (size_t) HOLENT_RT_NMAX);
+    fail (g, HOLENT_ETOOBIG, "A", HOLENT_NOINDEX,
+           "at most %zu intervals per region", (size_t) HOLENT_RT_NMAX);
   g->reg = holent_region_alloc (nmax);
   g->rt = holent_rt_alloc_dp (nmax);
   g->tw = holent_tfd_workspace_alloc (nmax);
@@ -440,12 +598,14 @@ alloc_ws (gw_state *g, size_t nmax)
   g->ts = malloc (nmax * sizeof (double));
   g->te = malloc (nmax * sizeof (double));
   if (!g->reg || !g->rt || !g->tw || !g->tp || !g->ts || !g->te)
-    raise (g, "holent:nomem", "out of memory");
+    fail (g, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, "out of memory");
 }
 
 static size_t
 region_rows (const mxArray *a)
 {
+  if (a == NULL)
+    return 0;
   if (mxIsStruct (a) && mxGetNumberOfElements (a) == 1)
     {
       const mxArray *l = mxGetField (a, 0, "left");
@@ -456,27 +616,34 @@ region_rows (const mxArray *a)
 }
 
 static void
-do_entropy (int nlhs, mxArray *plhs[], const mxArray *prhs[])
+do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
+            const mxArray *prhs[])
 {
   gw_state g;
   time_bg b;
   memset (&g, 0, sizeof g);
-  get_bg (prhs[1], &b);
-  const mxArray *A = prhs[2];
+  g.fn = fn;
+  get_bg (fn, prhs[2], &b);
+  const mxArray *A = prhs[3];
   size_t nt;
-  const double *t = holent_gw_real (prhs[3], "", "T", &nt);
+  const double *t = holent_gw_real (prhs[4], fn, "t", &nt);
   for (size_t k = 0; k < nt; k++)
     if (!isfinite (t[k]))
-      mexErrMsgIdAndTxt ("holent:domain", "T(%zu) must be finite", k + 1);
+      holent_gw_raise (fn, isnan (t[k]) ? HOLENT_ENAN : HOLENT_EDOM, "t", k,
+                       "must be finite");
   int cell = mxIsCell (A);
   size_t nreg = cell ? mxGetNumberOfElements (A) : 1, nmax = 1;
+  const mxArray *names = nrhs > 5 ? prhs[5] : NULL;
+  if (names && (!mxIsCell (names) || mxGetNumberOfElements (names) != nreg))
+    holent_gw_raise (fn, HOLENT_ESIZE, "NAMES", HOLENT_NOINDEX,
+                     "must be a cell of %zu names", nreg);
+  char nm[96];
   for (size_t k = 0; k < nreg; k++)
     {
-      const mxArray *a = cell ? mxGetCell (A, k) : A;
-      if (a == NULL)
-        mexErrMsgIdAndTxt ("holent:empty", "A{%zu} has no intervals", k + 1);
-      size_t m = region_rows (a);
+      size_t m = region_rows (cell ? mxGetCell (A, k) : A);
       nmax = m > nmax ? m : nmax;
+      if (names)  /* checked before anything is allocated */
+        holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
     }
   alloc_ws (&g, nmax);
   plhs[0] = mxCreateDoubleMatrix (nreg, nt, mxREAL);
@@ -485,18 +652,22 @@ do_entropy (int nlhs, mxArray *plhs[], const mxArray *prhs[])
   double *S = mxGetPr (plhs[0]), *pc = mxGetPr (nc), *ph = mxGetPr (hz);
   for (size_t k = 0; k < nreg; k++)
     {
-      char nm[32];
-      if (cell)
+      if (names)
+        holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
+      else if (cell)
         snprintf (nm, sizeof nm, "A{%zu}", k + 1);
       else
         snprintf (nm, sizeof nm, "A");
+      const mxArray *a = cell ? mxGetCell (A, k) : A;
+      if (a == NULL)
+        fail (&g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX, "has no intervals");
       region_in r;
-      read_region (&g, cell ? mxGetCell (A, k) : A, &b, nm, &r);
+      read_region (&g, a, &b, nm, &r);
       for (size_t j = 0; j < nt; j++)
         {
           size_t ncross;
           int horizon;
-          S[k + nreg * j] = entropy_one (&g, &b, &r, nm, t[j], &ncross,
+          S[k + nreg * j] = entropy_one (&g, &b, &r, t[j], &ncross,
                                          &horizon);
           pc[k + nreg * j] = (double) ncross;
           ph[k + nreg * j] = horizon;
@@ -505,32 +676,60 @@ do_entropy (int nlhs, mxArray *plhs[], const mxArray *prhs[])
   release (&g);
   if (nlhs > 1)
     plhs[1] = nc;
+  else
+    mxDestroyArray (nc);
   if (nlhs > 2)
     plhs[2] = hz;
+  else
+    mxDestroyArray (hz);
 }
 
+/* ---- causality ---- */
+
+/* X1 and X2 broadcast (equal sizes, or one of them a scalar).  */
 static void
-do_light (mxArray *plhs[], const mxArray *prhs[])
+do_light (const char *fn, mxArray *plhs[], const mxArray *prhs[])
 {
   time_bg b;
-  get_bg (prhs[1], &b);
-  size_t n;
-  const double *x1 = holent_gw_real (prhs[2], "", "X1", &n);
-  const double *x2 = real_array (prhs[3], "X2", n);
-  double tol = holent_gw_scalar (prhs[4], "", "TOL");
-  plhs[0] = holent_gw_like (prhs[2]);
-  plhs[1] = holent_gw_like (prhs[2]);
+  get_bg (fn, prhs[2], &b);
+  size_t n1, n2;
+  const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n1);
+  const double *x2 = holent_gw_real (prhs[4], fn, "X2", &n2);
+  const mxArray *shape = n1 == 1 ? prhs[4] : prhs[3];
+  if (n1 != 1 && n2 != 1
+      && (mxGetNumberOfDimensions (prhs[3])
+            != mxGetNumberOfDimensions (prhs[4])
+          || memcmp (mxGetDimensions (prhs[3]), mxGetDimensions (prhs[4]),
+                     mxGetNumberOfDimensions (prhs[3]) * sizeof (mwSize))))
+    holent_gw_raise (fn, HOLENT_ESIZE, "X2", HOLENT_NOINDEX,
+                     "must have the size of X1 or be a scalar (X1 and X2 "
+                     "do not broadcast)");
+  double tol = -1.0;  /* the core's default */
+  opt_scalar (fn, prhs[5], "tol", &tol);
+  plhs[0] = holent_gw_like (shape);
+  plhs[1] = holent_gw_like (shape);
   double *tb = mxGetPr (plhs[0]), *tl = mxGetPr (plhs[1]);
+  size_t n = mxGetNumberOfElements (shape);
   for (size_t i = 0; i < n; i++)
     {
-      int st = holent_causal_times (&b.geo, x1[i], x2[i], tol, &tb[i],
+      size_t i1 = n1 == 1 ? 0 : i, i2 = n2 == 1 ? 0 : i;
+      int st = holent_causal_times (&b.geo, x1[i1], x2[i2], tol, &tb[i],
                                     &tl[i]);
       if (st)
-        holent_gw_fail (st, "", "X1, X2", i);
+        {
+          int one = !isfinite (x1[i1]);
+          double v = one ? x1[i1] : x2[i2];
+          holent_gw_raise (fn, isnan (v) ? HOLENT_ENAN : HOLENT_EDOM,
+                           one ? "X1" : "X2", one ? i1 : i2,
+                           isnan (v) ? "must not be NaN"
+                           : "must be finite, and X2 - X1 too");
+        }
       if (b.kind != BG_STATIC)
         tb[i] = INFINITY;  /* behind a horizon (doc/bulk_causality.md) */
     }
 }
+
+/* ---- two-sided mutual information ---- */
 
 /* The two sides of a struct region, for the mutual-information zeros.  */
 static void
@@ -539,110 +738,100 @@ two_sides (gw_state *g, const time_bg *b, const mxArray *a,
 {
   region_in r;
   if (b->kind != BG_TFD)
-    raise (g, "holent:background",
-           "BG must be a thermofield double (ads3_background (\"tfd\", ...))");
+    fail (g, HOLENT_EBACKGROUND, "BG", HOLENT_NOINDEX,
+           "must be a thermofield double (ads3_background (\"tfd\", ...))");
   if (!mxIsStruct (a))
-    raise (g, "holent:type", "A must be a struct with fields left and right");
+    fail (g, HOLENT_ETYPE, "A", HOLENT_NOINDEX,
+           "must be a struct with fields left and right");
   read_region (g, a, b, "A", &r);
   size_t off = 0;
   for (int s = 0; s < 2; s++)
     {
       if (r.side[s] == NULL)
-        raise (g, "holent:empty", "A.%s has no intervals",
-               s ? "right" : "left");
-      sd[s].n = mxGetM (r.side[s]);
-      side_cols (g, r.side[s], &sd[s].a, &sd[s].b, &sd[s].ta, &sd[s].tb,
-                 off);
+        fail (g, HOLENT_EEMPTY, r.name[s], HOLENT_NOINDEX,
+               "has no intervals");
+      side_cols (g, r.side[s], &sd[s], off);
       off += sd[s].n;
     }
 }
 
 static void
-do_mi (mxArray *plhs[], const mxArray *prhs[], int scramble)
+do_mi (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[],
+       int scramble)
 {
   gw_state g;
   time_bg b;
   holent_tfd_side sd[2];
   memset (&g, 0, sizeof g);
-  get_bg (prhs[1], &b);
-  double tmax = scramble ? 1.0 : holent_gw_scalar (prhs[3], "", "TMAX");
-  alloc_ws (&g, region_rows (prhs[2]) + 1);
-  two_sides (&g, &b, prhs[2], sd);
-  double x;
+  g.fn = fn;
+  get_bg (fn, prhs[2], &b);
+  double tmax = -1.0;  /* the core's default */
+  if (!scramble && opt_scalar (fn, prhs[4], "tmax", &tmax) && !(tmax > 0.0))
+    holent_gw_raise (fn, isnan (tmax) ? HOLENT_ENAN : HOLENT_EDOM, "tmax",
+                     HOLENT_NOINDEX, "must be positive");
+  alloc_ws (&g, region_rows (prhs[3]) + 1);
+  two_sides (&g, &b, prhs[3], sd);
+  double x, ts = NAN;
   int st;
   if (scramble)
-    st = holent_tfd_mi_zero_alpha (g.tw, &b.tfd, &sd[0], &sd[1], &x);
+    st = holent_tfd_scrambling (g.tw, &b.tfd, &sd[0], &sd[1], b.shock_energy,
+                                &x, &ts);
   else
     st = holent_tfd_mi_zero (g.tw, &b.tfd, &sd[0], &sd[1], tmax, &x);
-  if (st == HOLENT_EUNSUP)
-    raise (&g, "holent:unsupported",
-           "regions on both sides of a thermofield double on a circle are "
-           "not supported (use the line)");
   if (st)
-    fail_region (&g, st, "A", "", 0, NULL);
+    fail_region (&g, st, "A", HOLENT_NOINDEX, HOLENT_NOINDEX);
   release (&g);
-  plhs[0] = mxCreateDoubleScalar (x);
-}
-
-/* [ALPHA, M] = ("shock", CIRCLE, L, BETA, C, E, TW): the shift of a shell
-   of energy E sent at left time -TW (holent_tfd_shock_alpha).  */
-static void
-do_shock (mxArray *plhs[], const mxArray *prhs[])
-{
-  double v[6], alpha, M;
-  static const char *nm[6] = { "CIRCLE", "L", "BETA", "C", "shock_energy",
-                               "shock_time" };
-  for (int k = 0; k < 6; k++)
-    v[k] = holent_gw_scalar (prhs[k + 1], "", nm[k]);
-  int st = holent_tfd_shock_alpha (v[0] != 0.0, v[1], v[2], v[3], v[4], v[5],
-                                   &alpha, &M);
-  if (st)
-    mexErrMsgIdAndTxt ("holent:domain",
-                       "shock_energy = %g and shock_time = %g must be finite "
-                       "with shock_energy >= 0, and the shift must not "
-                       "overflow", v[4], v[5]);
-  plhs[0] = mxCreateDoubleScalar (alpha);
-  plhs[1] = mxCreateDoubleScalar (M);
+  if (scramble)
+    {
+      plhs[0] = mxCreateDoubleScalar (ts);
+      if (nlhs > 1)
+        plhs[1] = mxCreateDoubleScalar (x);
+    }
+  else
+    plhs[0] = mxCreateDoubleScalar (x);
 }
 
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  char cmd[16];
+  char mode[16], fn[64];
   holent_gw_init ();
-  if (nrhs < 1)
-    mexErrMsgIdAndTxt ("holent:nargs", "expected a command");
-  holent_gw_string (prhs[0], "", "CMD", cmd, sizeof cmd);
-  if (strcmp (cmd, "geodesic") == 0)
+  if (nrhs < 2)
+    holent_gw_raise ("__holent_time__", HOLENT_ENARGS, NULL, HOLENT_NOINDEX,
+                     "expected a mode and the public function's name");
+  holent_gw_string (prhs[1], "__holent_time__", "FN", fn, sizeof fn);
+  holent_gw_string (prhs[0], fn, "MODE", mode, sizeof mode);
+  if (strcmp (mode, "background") == 0)
     {
-      holent_gw_nargs ("", nlhs, 2, nrhs, 10, 10);
-      do_geodesic (nlhs, plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 1, nrhs, 13, 13);
+      do_background (fn, plhs, prhs);
     }
-  else if (strcmp (cmd, "entropy") == 0)
+  else if (strcmp (mode, "geodesic") == 0)
     {
-      holent_gw_nargs ("", nlhs, 3, nrhs, 4, 4);
-      do_entropy (nlhs, plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 2, nrhs, 11, 11);
+      do_geodesic (fn, plhs, prhs);
     }
-  else if (strcmp (cmd, "light") == 0)
+  else if (strcmp (mode, "entropy") == 0)
     {
-      holent_gw_nargs ("", nlhs, 2, nrhs, 5, 5);
-      do_light (plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 3, nrhs, 5, 6);
+      do_entropy (fn, nlhs, nrhs, plhs, prhs);
     }
-  else if (strcmp (cmd, "mi_zero") == 0)
+  else if (strcmp (mode, "light") == 0)
     {
-      holent_gw_nargs ("", nlhs, 1, nrhs, 4, 4);
-      do_mi (plhs, prhs, 0);
+      holent_gw_nargs (fn, nlhs, 2, nrhs, 6, 6);
+      do_light (fn, plhs, prhs);
     }
-  else if (strcmp (cmd, "scramble") == 0)
+  else if (strcmp (mode, "mi_zero") == 0)
     {
-      holent_gw_nargs ("", nlhs, 1, nrhs, 3, 3);
-      do_mi (plhs, prhs, 1);
+      holent_gw_nargs (fn, nlhs, 1, nrhs, 5, 5);
+      do_mi (fn, nlhs, plhs, prhs, 0);
     }
-  else if (strcmp (cmd, "shock") == 0)
+  else if (strcmp (mode, "scramble") == 0)
     {
-      holent_gw_nargs ("", nlhs, 2, nrhs, 7, 7);
-      do_shock (plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 2, nrhs, 4, 4);
+      do_mi (fn, nlhs, plhs, prhs, 1);
     }
   else
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown command '%s'", cmd);
+    holent_gw_raise (fn, HOLENT_EOPTION, "MODE", HOLENT_NOINDEX,
+                     "unknown mode '%s'", mode);
 }

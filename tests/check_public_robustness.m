@@ -160,6 +160,13 @@
 %!  bi = ads3_background ("bcft", "interval", "length", 5, "tension", [0.1 0.3], "beta", 1);
 %!  bt = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.5);
 %!  [~, cert] = contraction_proof ({[1 2], [2 3], [1 3]}, {1, 2, 3, [1 2 3]}, 3);
+%!  ## time-dependent states: a thermofield double (with a shock from an
+%!  ## energy), a quench, a boosted vacuum; a two-sided region
+%!  bf = ads3_background ("tfd", "line", "beta", 1);
+%!  bs = ads3_background ("tfd", "line", "beta", 1, "shock_energy", 1e-3, "shock_time", 1);
+%!  bq = ads3_background ("quench", "circle", "beta", 1);
+%!  bg = ads3_background ("vacuum", "circle");
+%!  A2 = struct ("left", [0 1], "right", [0 1]);
 %!  ## figures draw into hidden axes (the gnuplot toolkit works headless)
 %!  ax = findobj (0, "tag", "holent_rob_axes");
 %!  if (isempty (ax))
@@ -256,7 +263,16 @@
 %!   "find_transition", {"strip_pair", bh, 0.5, 0.5}, {"", "bghd:BG", "lens:L1", "lens:L2"};
 %!   "find_transition", {"page_time", bt, [1 Inf]}, {"", "bg3:BG", "radiation:R"};
 %!   "geodesic_curve", {bc, [0.5 0], [2 0.1], "tol", 1e-3}, ...
-%!     {"bg3:BG", "coords:P1", "coords:P2", "optname:", "pos:tol"}};
+%!     {"bg3:BG", "coords:P1", "coords:P2", "optname:", "pos:tol"};
+%!   "bulk_light_time", {bc, 0.1, [0.5 1], "tol", 1e-6}, ...
+%!     {"bg3:BG", "coords:X1", "coords:X2", "optname:", "nonneg:tol"};
+%!   "bulk_light_time", {bg, [0 1], 2}, {"bg3:BG", "coords:X1", "coords:X2"};
+%!   "mi_vanishing_time", {bf, A2, "tmax", 5}, {"bg3:BG", "all:A", "optname:", "pos:tmax"};
+%!   "scrambling_time", {bs, A2}, {"bg3:BG", "all:A"};
+%!   "geodesic_length", {bf, 0.1, [0.5 1], "side1", "left", "t1", 0.2, "timelike", false}, ...
+%!     {"bg3:BG", "coords:X1", "coords:X2", "optname:", "word:side1", "optname:", "coords:t1", "optname:", "bool:timelike"};
+%!   "interval_entropy", {bq, [0.5 1], "t", [0 1]}, {"bg3:BG", "lens:L", "optname:", "coords:t"};
+%!   "rt_entropy", {bf, A2, "t", [0 1]}, {"bg3:BG", "", "optname:", "coords:t"}};
 %!endfunction
 
 %!function [ok, why] = rob_try (fn, args, mustfail, argname)
@@ -402,10 +418,7 @@
 %! if (exist (idx, "file"))
 %!   txt = fileread (idx);
 %!   fns = regexp (txt, '(?m)^ (\w+)\s*$', "tokens");
-%!   ## Not yet in the table (issue 12's time functions, landed without
-%!   ## rows; listed in the closing note as open work).
-%!   fns = setdiff ([fns{:}], {"holent_demo", "bulk_light_time", ...
-%!                             "mi_vanishing_time", "scrambling_time"});
+%!   fns = setdiff ([fns{:}], {"holent_demo"});
 %!   assert (setdiff (fns, T(:,1)'), cell (1, 0));
 %! endif
 
@@ -420,6 +433,7 @@
 %!   bh = ads_background (4, "black_brane", "zh", 1);
 %!   z = linspace (0, 1.2, 40)';
 %!   Sv = [1 1 1.5 1 1.5 1.5 1.2];
+%!   btf = ads3_background ("tfd", "line", "beta", 1, "shock_alpha", 0.5);
 %!   [~, fmap] = __holent_cone__ ("prove", "contraction_proof", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0);
 %!   G = {"__holent_geodesic__", {bc, 0.1, 0.5, 0}, 1;
 %!        "__holent_interval__", {bc, [0.5 1]}, 1;
@@ -442,7 +456,14 @@
 %!        "__holent_bcft__", {"profile", "f", ads3_background("bcft", "half_line"), [0.1 0.2], 0}, 2;
 %!        "__holent_cone__", {"prove", "contraction_proof", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0}, 2;
 %!        "__holent_cone__", {"check", "contraction_check", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), fmap}, 2;
-%!        "__holent_cone__", {"facets", "entropy_cone_test", 3}, 2};
+%!        "__holent_cone__", {"facets", "entropy_cone_test", 3}, 2;
+%!        "__holent_time__", {"background", "f", "tfd", "circle", 1, 1.5, 1, 1e-6, 2*pi, 1, [], 1e-3, 2}, 3;
+%!        "__holent_time__", {"geodesic", "f", btf, 0, 0, 0, 1, 0.5, 1, 0, 0}, 3;
+%!        "__holent_time__", {"entropy", "f", btf, {struct("left", [0 1], "right", [0 1 0 0.2])}, [0 1], {"A"}}, 3;
+%!        "__holent_time__", {"entropy", "f", ads3_background("quench", "line", "beta", 1), [0 1; 2 3], 1}, 3;
+%!        "__holent_time__", {"light", "f", ads3_background("heavy", "circle", "alpha", 0.5), 0, [1 2], []}, 3;
+%!        "__holent_time__", {"mi_zero", "f", btf, struct("left", [0 1], "right", [0 1]), []}, 3;
+%!        "__holent_time__", {"scramble", "f", btf, struct("left", [0 1], "right", [0 1])}, 3};
 %!   bad = {};
 %!   for r = 1:rows (G)
 %!     [gw, args, p0] = G{r,:};

@@ -70,3 +70,79 @@
 %!   assert (err(2) < err(1) / 4);
 %!   assert (err(2) < 1e-4);
 %! endfor
+
+%!test
+%! ## One-sided boosted (HRT) lengths from the metric ds^2 = -f dt^2 +
+%! ## dr^2/f + r^2 dx^2, f = r^2 - R2: planar BTZ (R2 = (2 pi/beta)^2, a
+%! ## line), global AdS (R2 = -1) and the conical defect (R2 = -alpha^2) on
+%! ## a circle of circumference 2 pi.  Spacelike geodesics with conserved
+%! ## E = f t', J = r^2 x' (unit speed): r'^2 = f + E^2 - f J^2/r^2, so
+%! ## r'' = r - R2 J^2/r^3, integrated with ode45 from the turning point
+%! ## (the larger root of (r^2 - R2)(r^2 - J^2) + E^2 r^2 = 0) to the
+%! ## cutoff r_c = 1/eps + R2 eps/4 (Fefferman-Graham).  The symmetric
+%! ## geodesic joins (-x, -t) to (x, t): compared with geodesic_length for
+%! ## endpoints 2x apart in space and 2t in time.  Hubeny, Rangamani and
+%! ## Takayanagi 2007 (JHEP 07 (2007) 062) give the closed forms holent
+%! ## uses; the integration here never calls them.
+%! eps = 1e-4;
+%! cases = {ads3_background("thermal", "line", "beta", 1, "cutoff", eps), (2 * pi)^2, [9 0.9; 12 3];
+%!          ads3_background("vacuum", "circle", "cutoff", eps), -1, [1.5 0.5; 4 2];
+%!          ads3_background("heavy", "circle", "alpha", 0.6, "cutoff", eps), -0.36, [1.2 0.3; 3 1]};
+%! for c = 1:rows (cases)
+%!   [bg, R2, JE] = cases{c,:};
+%!   rc = 1 / eps + R2 * eps / 4;
+%!   for k = 1:rows (JE)
+%!     J = JE(k,1);  E = JE(k,2);
+%!     b = J^2 + R2 - E^2;            # r^4 - b r^2 + R2 J^2 = 0
+%!     rs = sqrt ((b + sqrt (b^2 - 4 * R2 * J^2)) / 2);
+%!     rhs = @(s, y) [y(2); y(1) - R2 * J^2 / y(1)^3; E / (y(1)^2 - R2); J / y(1)^2];
+%!     opts = odeset ("RelTol", 1e-11, "AbsTol", 1e-12, ...
+%!                    "Events", @(s, y) deal (y(1) - rc, 1, 1));
+%!     [s, y] = ode45 (rhs, [0, 40], [rs; 0; 0; 0], opts);
+%!     dt = 2 * y(end, 3);  dx = 2 * y(end, 4);
+%!     assert (abs (y(end, 1) - rc) < 1e-6 * rc);
+%!     assert (abs (dt) < abs (dx));   # spacelike on the boundary
+%!     g = geodesic_length (bg, -dx / 2, dx / 2, "t1", -dt / 2, "t2", dt / 2);
+%!     ## the event location of ode45 limits this to a few 1e-6
+%!     assert (g, 2 * s(end), 1e-5 * g);
+%!   endfor
+%! endfor
+
+%!test
+%! ## Bulk null rays from the metric (doc/bulk_causality.md): in global AdS
+%! ## and the conical defect, f = r^2 + alpha^2 (circumference 2 pi), a ray
+%! ## with E = f t' = 1 and J = r^2 x' (|J| < 1) turns where f J^2 = r^2
+%! ## and has r'' = alpha^2 J^2/r^3.  Integrated with ode45 from the
+%! ## turning point out to r ~ 50 (1 + r_t) (the rest to the boundary by
+%! ## quadrature), the ray sweeps 2x in angle and 2t in time; holent
+%! ## must land there (bulk_light_time, tol 1e-4) at that time, and
+%! ## nowhere else: the sweep is pi/alpha for every J (Gao and Wald 2000,
+%! ## Class. Quant. Grav. 17, 4999: never before the boundary light).  In
+%! ## BTZ (f = r^2 - R^2) a ray from the boundary with |J| < E never turns
+%! ## (r'^2 = E^2 - J^2 + J^2 R^2/r^2 > 0) and reaches the horizon.
+%! for alpha = [1 0.6]
+%!   bg = ads3_background ("heavy", "circle", "alpha", alpha);
+%!   for J = [0.2 0.7 0.95]
+%!     rt = alpha * J / sqrt (1 - J^2);
+%!     rhs = @(s, y) [y(2); alpha^2 * J^2 / y(1)^3; 1 / (y(1)^2 + alpha^2); J / y(1)^2];
+%!     ## (a fixed span, no event: the last point is a step of ode45, not
+%!     ## its interpolant)
+%!     opts = odeset ("RelTol", 1e-11, "AbsTol", 1e-13);
+%!     [s, y] = ode45 (rhs, [0, 50 * (1 + rt) / sqrt(1 - J^2)], [rt; 0; 0; 0], opts);
+%!     ## the rest out to the boundary by quadrature (Octave's integral):
+%!     ## dt/dr = t'/r', dx/dr = x'/r'
+%!     rp = @(r) sqrt (1 - J^2 * (r.^2 + alpha^2) ./ r.^2);
+%!     dt = 2 * (y(end, 3) + integral (@(r) 1 ./ ((r.^2 + alpha^2) .* rp (r)), y(end, 1), Inf));
+%!     dx = 2 * (y(end, 4) + integral (@(r) J ./ (r.^2 .* rp (r)), y(end, 1), Inf));
+%!     [tb, tl] = bulk_light_time (bg, 0, dx, "tol", 1e-4);
+%!     assert (tb, dt, 1e-5);
+%!     assert (tb >= tl - 1e-12);
+%!     assert (bulk_light_time (bg, 0, dx + 0.01, "tol", 1e-4), Inf);
+%!   endfor
+%! endfor
+%! R = 2 * pi;  J = 0.9;
+%! rhs = @(s, y) [y(2); -J^2 * R^2 / y(1)^3];
+%! opts = odeset ("RelTol", 1e-10, "Events", @(s, y) deal (y(1) - R, 1, -1));
+%! [s, y] = ode45 (rhs, [0, 1e4], [1e2; -sqrt(1 - J^2 + J^2 * R^2 / 1e4)], opts);
+%! assert (y(end, 1), R, 1e-8);
+%! assert (bulk_light_time (ads3_background ("thermal", "circle", "beta", 1), 0, 0:0.5:3), Inf (1, 7));

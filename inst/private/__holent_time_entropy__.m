@@ -3,14 +3,26 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{tf} =} __holent_time_entropy__ ("timed", @var{bg}, @var{regions})
 ## @deftypefnx {} {@var{t} =} __holent_time_entropy__ ("times", @var{fn}, @var{o})
-## @deftypefnx {} {[@var{S}, @var{ncross}, @var{horizon}] =} __holent_time_entropy__ (@var{fn}, @var{bg}, @var{A}, @var{t})
+## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("timelike", @var{fn}, @var{o})
+## @deftypefnx {} {} __holent_time_entropy__ ("check", @var{fn}, @var{bg})
+## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("state", @var{bg}, @var{state})
+## @deftypefnx {} {[@var{a}, @var{b}, @dots{}] =} __holent_time_entropy__ ("broadcast", @var{fn}, @var{names}, @var{a}, @var{b}, @dots{})
+## @deftypefnx {} {[@var{S}, @var{ncross}, @var{horizon}] =} __holent_time_entropy__ (@var{fn}, @var{bg}, @var{A}, @var{t}, @var{names})
 ## @deftypefnx {} {@var{S} =} __holent_time_entropy__ ("shape", @var{R}, @var{sz}, @var{t})
 ## The time path of the entropy functions.  "timed": true when @var{bg} is a
 ## thermofield double or a quench, or a region of the cell @var{regions} is
 ## a struct or has four columns (endpoint times).  "times": the option
-## @qcode{"t"} of @var{o} as a real finite vector (0 when absent).  The third
-## form calls the core on the region (or cell of regions) @var{A} at each
-## time of @var{t}: @var{S} is numel(A) x numel(t).  "shape": an array of
+## @qcode{"t"} of @var{o} as a real finite vector (0 when absent).
+## "timelike": the option @qcode{"timelike"} of @var{o} (false when absent)
+## as a logical.  "broadcast": the arrays expanded to their common size
+## (@code{holent:size} naming them, from the cell @var{names}, when they do
+## not broadcast); unchanged when one is not a real double array (the
+## gateway names it).  "state": true when @var{bg} is a background struct of
+## that state.  "check": the checks of a static @var{bg} (time-dependent
+## states are checked by their core constructor in the gateway).  The last
+## form checks @var{bg} ("check") and calls the core on the region (or cell of regions) @var{A} at each
+## time of @var{t}: @var{S} is numel(A) x numel(t); @var{names} (optional,
+## a cell of numel(A) strings) names the regions in messages.  "shape": an array of
 ## the cell's size @var{sz} for one time, of the shape of @var{t} for one
 ## region, numel x numel(t) otherwise.
 ## @end deftypefn
@@ -18,8 +30,8 @@ function varargout = __holent_time_entropy__ (fn, varargin)
   switch (fn)
     case "timed"
       [bg, regs] = deal (varargin{:});
-      tf = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
-           && ischar (bg.state) && any (strcmp (bg.state, {"tfd", "quench"}));
+      tf = __holent_time_entropy__ ("state", bg, "tfd") ...
+           || __holent_time_entropy__ ("state", bg, "quench");
       for k = 1:numel (regs)
         r = regs{k};
         if (iscell (r))
@@ -41,6 +53,41 @@ function varargout = __holent_time_entropy__ (fn, varargin)
         endif
       endif
       varargout{1} = t;
+    case "timelike"
+      [f, o] = deal (varargin{:});
+      tl = false;
+      if (isfield (o, "timelike"))
+        tl = o.timelike;
+        if (! ((islogical (tl) || isnumeric (tl)) && isscalar (tl) && isreal (tl)
+               && (tl == 0 || tl == 1)))
+          error ("holent:option", "%s: 'timelike' must be true or false", f);
+        endif
+      endif
+      varargout{1} = logical (full (tl));
+    case "broadcast"
+      [f, nm] = deal (varargin{1:2});
+      a = varargin(3:end);
+      varargout = a;
+      if (! all (cellfun ("isreal", a) & cellfun (@(x) isa (x, "double"), a)))
+        return;   # the gateway names the argument of the wrong type
+      endif
+      try
+        z = zeros (size (plus (a{:}, 0)));
+      catch
+        sz = cellfun (@(x) mat2str (size (x)), a, "uniformoutput", false);
+        error ("holent:size", "%s: %s do not broadcast", f,
+               strjoin (strcat (nm, " (", sz, ")"), ", "));
+      end_try_catch
+      varargout = cellfun (@(x) x + z, a, "uniformoutput", false);
+    case "state"
+      [bg, st] = deal (varargin{:});
+      varargout{1} = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
+                     && ischar (bg.state) && strcmp (bg.state, st);
+    case "check"
+      [f, bg] = deal (varargin{:});
+      if (! __holent_time_entropy__ ("timed", bg, {}))
+        __holent_check_bg__ (f, bg);
+      endif
     case "shape"
       [R, sz, t] = deal (varargin{:});
       if (numel (t) == 1)
@@ -50,17 +97,11 @@ function varargout = __holent_time_entropy__ (fn, varargin)
       endif
       varargout{1} = R;
     otherwise
-      [bg, A, t] = deal (varargin{:});
-      if (! isstruct (bg) || ! isscalar (bg) || ! isfield (bg, "state"))
-        error ("holent:background",
-               "%s: BG must be a background struct made by ads3_background", fn);
-      endif
+      [bg, A, t] = deal (varargin{1:3});
+      __holent_time_entropy__ ("check", fn, bg);
       A = to_double (fn, A);
-      try
-        [varargout{1:max (nargout, 1)}] = __holent_time__ ("entropy", bg, A, t(:));
-      catch err
-        __holent_rethrow__ (err, "__holent_time__", fn);
-      end_try_catch
+      [varargout{1:max (nargout, 1)}] = __holent_time__ ("entropy", fn, bg, A, t(:),
+                                                         varargin{4:end});
   endswitch
 endfunction
 
@@ -93,4 +134,9 @@ endfunction
 %! assert (__holent_time_entropy__ ("timed", bg, {{[0 1], struct("right", [0 1])}}), true);
 %! assert (__holent_time_entropy__ ("shape", [1 2 3], [1 1], [0 1 2]'), [1 2 3]');
 %! assert (__holent_time_entropy__ ("times", "f", struct ()), 0);
+%! assert (__holent_time_entropy__ ("timelike", "f", struct ("timelike", 1)), true);
+%! [a, b] = __holent_time_entropy__ ("broadcast", "f", {"a", "b"}, [1; 2], [3 4]);
+%! assert ({a, b}, {[1 1; 2 2], [3 4; 3 4]});
+%!error <f: a \(\[1 2\]\), b \(\[1 3\]\) do not broadcast> __holent_time_entropy__ ("broadcast", "f", {"a", "b"}, [1 2], [1 2 3])
+%!error <'timelike' must be true or false> __holent_time_entropy__ ("timelike", "f", struct ("timelike", 2))
 %!error <t must not be empty> __holent_time_entropy__ ("times", "f", struct ("t", []))

@@ -22,8 +22,10 @@ holent_causal_times (const holent_geo_bg *bg, double x1, double x2,
   if (bg == NULL || t_bulk == NULL || t_bdy == NULL)
     return HOLENT_EINVAL;
   if (!isfinite (x1) || !isfinite (x2) || !isfinite (x2 - x1)
-      || !(tol >= 0.0) || !isfinite (tol))
+      || isnan (tol) || !isfinite (tol))
     return HOLENT_EINVAL;
+  if (tol < 0.0)
+    tol = 1e-9 * (bg->circle ? bg->L : 1.0);
   double d = x2 - x1;
   *t_bulk = INFINITY;
   if (!bg->circle)

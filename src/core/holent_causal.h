@@ -24,8 +24,9 @@
 /* *t_bulk: the first-return time of a bulk null ray from x1 landing at x2
  * (Inf when none lands there); *t_bdy: the boundary light time, |x2 - x1|
  * on a line, the circle distance on a circle.  x2 counts as a landing
- * point when within tol (>= 0) of it on the circle.  HOLENT_EINVAL for
- * non-finite input or a negative tol.  */
+ * point when within tol of it on the circle; a negative tol means the
+ * default, 1e-9 times the circumference.  HOLENT_EINVAL for non-finite
+ * input.  */
 int holent_causal_times (const holent_geo_bg *bg, double x1, double x2,
                          double tol, double *t_bulk, double *t_bdy);
 

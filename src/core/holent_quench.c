@@ -30,20 +30,66 @@ holent_quench_init (holent_quench_bg *q, int circle, double L, double eps,
   return HOLENT_SUCCESS;
 }
 
+int
+holent_quench_make (holent_quench_bg *q, int circle, double L, double eps,
+                    double beta, double c, double ell, holent_err *err)
+{
+  holent_tfd_bg side;
+  holent_tfd_info info;
+  int st = holent_tfd_make (&side, &info, circle, L, eps, beta, c, ell, 0,
+                            0.0, 0, 0.0, 0, 0.0, err);
+  if (st)
+    return st;
+  st = holent_quench_init (q, circle, L, eps, beta, c);
+  if (st)
+    return holent_err_set (err, HOLENT_EINCONSISTENT, -1, HOLENT_NOINDEX,
+                           "the parameters give no quench (%s)",
+                           holent_strerror (st));
+  return HOLENT_SUCCESS;
+}
+
 typedef struct
 {
   double S, C, lam, R;  /* sinh, cosh of R t; pi l/beta or R Phi/2; R */
   double gap;           /* circle: pi/2 - Phi/2 */
 } cross_par;
 
-/* Line: h(eta) - pi l/beta, increasing in eta (doc/quench.md); the
-   difference C - sqrt(1 + S^2 E^2) written without cancellation.  */
-static double
-line_eq (double eta, void *p)
+/* Line: the root in [0, hi] of h(eta) - pi l/beta, h increasing in eta
+   (doc/quench.md), h = asinh(S E) + S (1 - E^2)/(E (C + w)), E = e^-eta,
+   w = sqrt(1 + S^2 E^2) (C - w written without cancellation); by
+   Newton's method kept inside the bracket (bisection when a step leaves it): h'(eta) = S (1 - E^2)/(E (C
+   + w)), the second term of h itself (doc/quench.md), so a step costs
+   one evaluation.  Brent's method with a solver allocated per call was
+   the whole cost of a quench scan.  */
+static int
+line_root (const cross_par *c, double hi, double *eta)
 {
-  const cross_par *c = p;
-  double E = exp (-eta), SE = c->S * E, w = sqrt (1.0 + SE * SE);
-  return asinh (SE) + c->S * (1.0 - E * E) / (E * (c->C + w)) - c->lam;
+  /* Start where h = lam with asinh(S E) ~ S E and w ~ 1 (E small):
+     S E + S/((C + 1) E) = lam.  */
+  double a = c->S / (c->C + 1.0), D = c->lam * c->lam - 4.0 * c->S * a;
+  double lo = 0.0;
+  double x = fmin (hi, fmax (0.0, log ((c->lam + sqrt (fmax (0.0, D)))
+                                        / (2.0 * a))));
+  for (int it = 0; it < 200; it++)
+    {
+      double E = exp (-x), SE = c->S * E, w = sqrt (1.0 + SE * SE);
+      double d = c->S * (1.0 - E * E) / (E * (c->C + w));
+      double h = asinh (SE) + d - c->lam;
+      if (h > 0.0)
+        hi = x;
+      else
+        lo = x;
+      double nx = x - h / d;
+      if (!(nx > lo && nx < hi))
+        nx = 0.5 * (lo + hi);
+      if (fabs (nx - x) <= 1e-14 * fmax (1.0, x) || hi - lo <= 4e-16 * hi)
+        {
+          *eta = nx;
+          return HOLENT_SUCCESS;
+        }
+      x = nx;
+    }
+  return HOLENT_ENOCONV;
 }
 
 /* Circle: G = C - cosh a - R tan(phi) sinh a, a = lam - R phi, written
@@ -84,13 +130,34 @@ brent (double (*f) (double, void *), void *p, double lo, double hi,
   return st == GSL_SUCCESS ? HOLENT_SUCCESS : HOLENT_ENOCONV;
 }
 
+/* sinh and cosh of 2 pi t/beta: once per time in a region scan.  */
+static void
+time_sc (const holent_quench_bg *q, double t, double sc[2])
+{
+  double Rt = 2.0 * M_PI * t / q->beta;
+  sc[0] = sinh (Rt);
+  sc[1] = cosh (Rt);
+}
+
+static int quench_len (const holent_quench_bg *q, double l, double t,
+                       const double sc[2], double *len, double *eta);
+
 int
 holent_quench_length (const holent_quench_bg *q, double l, double t,
                       double *len, double *eta)
 {
-  double e = 0.0;
+  double sc[2];
   if (q == NULL || len == NULL || isnan (l) || !isfinite (t))
     return HOLENT_EINVAL;
+  time_sc (q, t, sc);
+  return quench_len (q, l, t, sc, len, eta);
+}
+
+static int
+quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
+            double *len, double *eta)
+{
+  double e = 0.0;
   int circle = q->vac.circle;
   double L = q->vac.L;
   if (!(l > 0.0) || !isfinite (l) || (circle && !(l < L)))
@@ -109,8 +176,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
         *eta = 0.0;
       return holent_geo_arc_length (&q->bh, l, len);
     }
-  double Rt = 2.0 * M_PI * t / q->beta;
-  cross_par c = { sinh (Rt), cosh (Rt), M_PI * l / q->beta,
+  cross_par c = { sc[0], sc[1], M_PI * l / q->beta,
                   circle ? L / q->beta : 0.0, 0.0 };
   int st;
   if (!circle)
@@ -118,7 +184,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
       /* Bracket: h(0) = R t < pi l/beta, and h >= 3 S/(8 C E) once
          E <= 1/2, so E = 3 S/(8 C lam) is above the root.  */
       double hi = fmax (M_LN2, log (8.0 * c.C * c.lam / (3.0 * c.S)));
-      st = brent (line_eq, &c, 0.0, hi, &e);
+      st = line_root (&c, hi, &e);
     }
   else
     {
@@ -170,7 +236,7 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
 typedef struct
 {
   const holent_quench_bg *q;
-  double t;
+  double t, sc[2];
 } q_ctx;
 
 static int
@@ -179,7 +245,27 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
   const q_ctx *c = vctx;
   (void) i;
   (void) j;
-  return holent_quench_length (c->q, arc, c->t, len, NULL);
+  return quench_len (c->q, arc, c->t, c->sc, len, NULL);
+}
+
+int
+holent_quench_points_length (const holent_quench_bg *q, double x1, double x2,
+                             double t, double *len)
+{
+  if (q == NULL || len == NULL)
+    return HOLENT_EINVAL;
+  if (!isfinite (x1) || !isfinite (x2) || !isfinite (x2 - x1))
+    return HOLENT_EINVAL;
+  double d = x2 - x1;
+  if (q->vac.circle)
+    {
+      d = fmod (d, q->vac.L);
+      if (d < 0.0)
+        d += q->vac.L;
+    }
+  if (d == 0.0)
+    return HOLENT_ECOINCIDE;
+  return holent_quench_length (q, fabs (d), t, len, NULL);
 }
 
 int
@@ -189,7 +275,8 @@ holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
 {
   if (q == NULL || !isfinite (t))
     return HOLENT_EINVAL;
-  q_ctx c = { q, t };
+  q_ctx c = { q, t, { 0.0, 0.0 } };
+  time_sc (q, t, c.sc);
   /* The vacuum background sets the candidates: on the circle the state
      is pure (no horizon term) and each chord has the geodesic over its
      shorter arc.  */

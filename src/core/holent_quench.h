@@ -30,6 +30,7 @@
 #include "holent_geo.h"
 #include "holent_region.h"
 #include "holent_rt.h"
+#include "holent_tfd.h"
 
 typedef struct
 {
@@ -42,6 +43,13 @@ typedef struct
 int holent_quench_init (holent_quench_bg *q, int circle, double L,
                         double eps, double beta, double c);
 
+/* The constructor: every parameter checked as for the thermofield
+   double of the final state (holent_tfd_make without a shock; err names
+   the argument), then holent_quench_init.  */
+int holent_quench_make (holent_quench_bg *q, int circle, double L,
+                        double eps, double beta, double c, double ell,
+                        holent_err *err);
+
 /* Regulated length of the geodesic over an interval (line) or arc
  * (circle; the shorter of l and L - l is used: it gives the smaller
  * length) of length l at boundary time t.  *eta (if not NULL) receives
@@ -51,6 +59,11 @@ int holent_quench_init (holent_quench_bg *q, int circle, double L,
  * crossing equation fails (never seen).  */
 int holent_quench_length (const holent_quench_bg *q, double l, double t,
                           double *len, double *eta);
+
+/* The same for the boundary points x1, x2 (their distance; on a circle
+   modulo L, the shorter arc): HOLENT_ECOINCIDE when they coincide.  */
+int holent_quench_points_length (const holent_quench_bg *q, double x1,
+                                 double x2, double t, double *len);
 
 /* RT entropy of a region (holent_region_set on the boundary of q) at
    time t: the exact minimum over the non-crossing pairings, each

@@ -10,6 +10,7 @@
 #include <gsl/gsl_math.h>
 #include "holent_tfd.h"
 #include "holent_hrt.h"
+#include "holent_thermo.h"
 
 int
 holent_tfd_init (holent_tfd_bg *b, int circle, double L, double eps,
@@ -78,6 +79,102 @@ holent_tfd_shock_time (int circle, double L, double beta, double c,
   if (!(E > 0.0) || !(alpha > 0.0) || !isfinite (E) || !isfinite (alpha))
     return HOLENT_EDOM;
   *tw = beta / (2.0 * M_PI) * log (4.0 * m * alpha / E);
+  return HOLENT_SUCCESS;
+}
+
+/* A positive finite parameter, or the reason why not.  */
+static int
+positive (holent_err *err, int arg, double v, const char *what)
+{
+  if (isnan (v))
+    return holent_err_set (err, HOLENT_ENAN, arg, HOLENT_NOINDEX,
+                           "%s must not be NaN", what);
+  if (!(v > 0.0) || !isfinite (v))
+    return holent_err_set (err, HOLENT_EDOM, arg, HOLENT_NOINDEX,
+                           "%s must be positive and finite, got %g", what,
+                           v);
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_tfd_make (holent_tfd_bg *b, holent_tfd_info *info, int circle,
+                 double L, double eps, double beta, double c, double ell,
+                 int has_alpha,
+                 double alpha, int has_energy, double E, int has_time,
+                 double tw, holent_err *err)
+{
+  int st;
+  holent_err_clear (err);
+  if (b == NULL || info == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  if ((circle && (st = positive (err, HOLENT_TFD_ARG_L, L, "circumference")))
+      || (st = positive (err, HOLENT_TFD_ARG_EPS, eps, "cutoff"))
+      || (st = positive (err, HOLENT_TFD_ARG_BETA, beta, "beta"))
+      || (st = positive (err, HOLENT_TFD_ARG_C, c, "c"))
+      || (st = positive (err, HOLENT_TFD_ARG_ELL, ell, "ell")))
+    return st;
+  if (has_alpha && (has_energy || has_time))
+    return holent_err_set (err, HOLENT_EOPTION, HOLENT_TFD_ARG_ALPHA,
+                           HOLENT_NOINDEX,
+                           "give 'shock_alpha' or 'shock_energy' with "
+                           "'shock_time', not both");
+  if (has_energy != has_time)
+    return holent_err_set (err, HOLENT_EOPTION, has_energy
+                           ? HOLENT_TFD_ARG_ENERGY : HOLENT_TFD_ARG_TIME,
+                           HOLENT_NOINDEX,
+                           "'shock_energy' and 'shock_time' go together");
+  if (has_alpha && (isnan (alpha) || !(alpha >= 0.0) || !isfinite (alpha)))
+    return holent_err_set (err, isnan (alpha) ? HOLENT_ENAN : HOLENT_EDOM,
+                           HOLENT_TFD_ARG_ALPHA, HOLENT_NOINDEX,
+                           "must be a nonnegative finite shift, got %g",
+                           alpha);
+  if (has_energy && (isnan (E) || !(E >= 0.0) || !isfinite (E)))
+    return holent_err_set (err, isnan (E) ? HOLENT_ENAN : HOLENT_EDOM,
+                           HOLENT_TFD_ARG_ENERGY, HOLENT_NOINDEX,
+                           "must be a nonnegative finite energy, got %g", E);
+  if (has_time && !isfinite (tw))
+    return holent_err_set (err, isnan (tw) ? HOLENT_ENAN : HOLENT_EDOM,
+                           HOLENT_TFD_ARG_TIME, HOLENT_NOINDEX,
+                           "must be a finite time, got %g", tw);
+  double a = has_alpha ? alpha : 0.0, m;
+  st = holent_tfd_shock_alpha (circle, circle ? L : 1.0, beta, c,
+                               has_energy ? E : 0.0, has_time ? tw : 0.0,
+                               has_energy ? &a : &m, &m);
+  if (st)
+    return holent_err_set (err, HOLENT_ERANGE, HOLENT_TFD_ARG_TIME,
+                           HOLENT_NOINDEX,
+                           "the shift (E/(4M)) exp(2 pi tw/beta) overflows "
+                           "double precision");
+  if (!has_energy)
+    a = has_alpha ? alpha : 0.0;
+  st = holent_tfd_init (b, circle, L, eps, beta, c, a);
+  if (st)
+    return holent_err_set (err, HOLENT_EINCONSISTENT, -1, HOLENT_NOINDEX,
+                           "the parameters give no black hole (%s)",
+                           holent_strerror (st));
+  info->entropy_density = M_PI * c / (3.0 * beta);
+  info->r_plus = (circle ? L : 2.0 * M_PI) / beta;
+  info->S_BH = INFINITY;
+  info->M = INFINITY;
+  if (circle)
+    {
+      holent_thermo_state th;
+      int why;
+      st = holent_thermo_state_from (c, ell, L, HOLENT_THERMO_BETA_LR, beta,
+                                     beta, &th, &why);
+      if (st || !isfinite (th.S) || !isfinite (th.M))
+        return holent_err_set (err, HOLENT_ERANGE, HOLENT_TFD_ARG_BETA,
+                               HOLENT_NOINDEX,
+                               "the horizon entropy or energy is out of "
+                               "double precision range");
+      info->S_BH = th.S;
+      info->M = th.M;
+      info->r_plus = th.r_plus;
+    }
+  info->shock_alpha = a;
+  info->shock_energy = has_energy ? E : 0.0;
+  info->shock_time = has_time ? tw : NAN;
+  info->shock_M = m;
   return HOLENT_SUCCESS;
 }
 
@@ -420,6 +517,8 @@ holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
   mi_ctx m;
   if (dt == NULL || isnan (tmax))
     return HOLENT_EINVAL;
+  if (tmax < 0.0)
+    tmax = 100.0 * b->beta;  /* the default: far past any vanishing */
   if (!(tmax > 0.0) || !isfinite (tmax))
     return HOLENT_EDOM;
   int st = mi_setup (&m, w, b, left, right, 0);
@@ -469,4 +568,25 @@ holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
   if (m.status)
     return m.status;
   return mi_first_zero (&m, lo, hi, alpha);
+}
+
+int
+holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                       const holent_tfd_side *left,
+                       const holent_tfd_side *right, double E, double *alpha,
+                       double *t_star)
+{
+  if (b == NULL || alpha == NULL || t_star == NULL || isnan (E))
+    return HOLENT_EINVAL;
+  if (!(E >= 0.0) || !isfinite (E))
+    return HOLENT_EDOM;
+  int st = holent_tfd_mi_zero_alpha (w, b, left, right, alpha);
+  if (st)
+    return st;
+  *t_star = NAN;
+  if (E > 0.0 && *alpha > 0.0)
+    st = holent_tfd_shock_time (b->side.circle, b->side.circle ? b->side.L
+                                                               : 1.0,
+                                b->beta, b->side.c, E, *alpha, t_star);
+  return st;
 }

@@ -39,6 +39,40 @@ typedef struct
 int holent_tfd_init (holent_tfd_bg *b, int circle, double L, double eps,
                      double beta, double c, double alpha);
 
+/* Everything a thermofield-double background states beside its
+   parameters: one exterior (BTZ on a circle, planar BTZ on a line) and
+   the shock.  */
+typedef struct
+{
+  double S_BH;             /* horizon entropy of one side (Inf on a line) */
+  double entropy_density;  /* pi c/(3 beta)                               */
+  double r_plus;           /* horizon radius, units of ell                */
+  double M;                /* energy of one side (Inf on a line)          */
+  double shock_alpha;      /* the shift                                   */
+  double shock_energy;     /* E (0 without)                               */
+  double shock_time;       /* tw (NaN unless given with E)                */
+  double shock_M;          /* M of the shift formula (holent_tfd_shock_alpha) */
+} holent_tfd_info;
+
+/* Arguments of holent_tfd_make, as they are named in err->arg.  */
+enum
+{
+  HOLENT_TFD_ARG_L = 0, HOLENT_TFD_ARG_EPS, HOLENT_TFD_ARG_BETA,
+  HOLENT_TFD_ARG_C, HOLENT_TFD_ARG_ELL, HOLENT_TFD_ARG_ALPHA, HOLENT_TFD_ARG_ENERGY,
+  HOLENT_TFD_ARG_TIME, HOLENT_TFD_NARGS
+};
+
+/* The constructor of a thermofield double: checks every parameter (err
+ * names the argument and what was expected) and fills *b and *info.  The
+ * shock is given by its shift (has_alpha) or by an energy E released at
+ * left time -tw (has_energy and has_time together), or not at all
+ * (HOLENT_EOPTION for a mixture).  Thermodynamics of the exterior come
+ * from holent_thermo on a circle.  */
+int holent_tfd_make (holent_tfd_bg *b, holent_tfd_info *info, int circle,
+                     double L, double eps, double beta, double c,
+                     double ell, int has_alpha, double alpha, int has_energy, double E,
+                     int has_time, double tw, holent_err *err);
+
 /* Shock shift alpha = (E/(4M)) exp(2 pi tw/beta) of a shell of energy E
  * (>= 0) sent in at left time -tw, with M the energy of the black hole
  * above the massless BTZ, M = pi c L/(6 beta^2) on a circle; on a line E
@@ -99,7 +133,8 @@ int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
 /* The first shift dt in [0, tmax] at which the two-sided mutual
  * information I(A_L : A_R) = S(A_L) + S(A_R) - S(A_L u A_R) vanishes
  * (to a relative 1e-12 of beta); *dt = Inf when it is still positive at
- * tmax, 0 when it already vanishes.  */
+ * tmax, 0 when it already vanishes.  A negative tmax means the default,
+ * 100 beta.  */
 int holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         const holent_tfd_side *left,
                         const holent_tfd_side *right, double tmax,
@@ -111,5 +146,14 @@ int holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
 int holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
                               const holent_tfd_side *left,
                               const holent_tfd_side *right, double *alpha);
+
+/* The scrambling time: *alpha as holent_tfd_mi_zero_alpha, and *t_star the
+ * shock time tw at which a perturbation of energy E gives that shift
+ * (holent_tfd_shock_time: tw = (beta/(2 pi)) log(4 M alpha/E)); NaN when
+ * E = 0 or *alpha = 0 (no perturbation needed, or none given).  */
+int holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                           const holent_tfd_side *left,
+                           const holent_tfd_side *right, double E,
+                           double *alpha, double *t_star);
 
 #endif /* HOLENT_TFD_H */

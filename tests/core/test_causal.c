@@ -93,7 +93,13 @@ main (void)
   HT_STATUS (holent_causal_times (&bg, 0, -2.5, 0, &tb, &tl), HOLENT_SUCCESS);
   HT_CHECK (isinf (tb) && tl == 2.5, "line");
   HT_STATUS (holent_causal_times (&bg, NAN, 1, 0, &tb, &tl), HOLENT_EINVAL);
-  HT_STATUS (holent_causal_times (&bg, 0, 1, -1, &tb, &tl), HOLENT_EINVAL);
+  HT_STATUS (holent_causal_times (&bg, 0, 1, INFINITY, &tb, &tl), HOLENT_EINVAL);
+  /* a negative tol: the default 1e-9 L */
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, L, 1e-3, 1, 1, 1, 1), HOLENT_SUCCESS);
+  HT_STATUS (holent_causal_times (&bg, 1.0, 3.5 + 1e-9 * L, -1, &tb, &tl), HOLENT_SUCCESS);
+  HT_CLOSE (tb, 2.5, 1e-15);
+  HT_STATUS (holent_causal_times (&bg, 1.0, 3.5 + 2e-9 * L, -1, &tb, &tl), HOLENT_SUCCESS);
+  HT_CHECK (isinf (tb), "beyond the default tol");
   HT_STATUS (holent_causal_times (NULL, 0, 1, 0, &tb, &tl), HOLENT_EINVAL);
   return HT_DONE ();
 }

@@ -213,9 +213,33 @@ test_regions (void)
   holent_rt_free (w);
 }
 
+/* The constructor and point distances.  */
+static void
+test_make_points (void)
+{
+  holent_quench_bg q;
+  holent_err e;
+  double a, b;
+  HT_STATUS (holent_quench_make (&q, 1, 4.0, 1e-6, 1.0, 3.0, 1.0, &e),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_quench_points_length (&q, 0.5, 4.5, 0.3, &a),
+             HOLENT_ECOINCIDE);
+  /* x2 - x1 = 3 on a circle of 4 is the arc 1 */
+  HT_STATUS (holent_quench_points_length (&q, 0.5, 3.5, 0.3, &a),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_quench_length (&q, 1.0, 0.3, &b, NULL), HOLENT_SUCCESS);
+  HT_CLOSE (a, b, 1e-14);
+  HT_STATUS (holent_quench_points_length (&q, NAN, 1.0, 0.3, &a),
+             HOLENT_EINVAL);
+  HT_STATUS (holent_quench_make (&q, 1, 4.0, 1e-6, -1.0, 3.0, 1.0, &e),
+             HOLENT_EDOM);
+  HT_CHECK (e.arg == HOLENT_TFD_ARG_BETA, "arg %d", e.arg);
+}
+
 int
 main (void)
 {
+  test_make_points ();
   check_stationary (0, 0, 1.0, 2.0, 0.3);
   check_stationary (0, 0, 1.0, 2.0, 0.95);
   check_stationary (0, 0, 0.5, 3.0, 0.1);

@@ -302,14 +302,107 @@ test_regions (void)
   HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &R, 0, &res, &nc, &side, &row), HOLENT_EUNSUP);
   HT_STATUS (holent_tfd_entropy (w, &b, &E0, &R, 0, &res, &nc, &side, &row), HOLENT_SUCCESS);
   HT_STATUS (holent_tfd_mi_zero (w, &b, &E0, &R, 1, &ts), HOLENT_EEMPTY);
-  HT_STATUS (holent_tfd_mi_zero (w, &b, &Ls, &R, -1, &ts), HOLENT_EDOM);
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &Ls, &R, 0, &ts), HOLENT_EDOM);
   holent_tfd_workspace_free (w);
   HT_CHECK (holent_tfd_workspace_alloc (0) == NULL, "nmax 0");
+}
+
+/* The constructor: derived quantities against the thermodynamics of the
+   BTZ black hole (S = (pi c/3) L T, E = (pi c/6) L T^2: Cardy's formula
+   with the energy above the massless BTZ, doc/tfd_shock.md), every
+   error with the argument it names.  */
+static void
+test_make (void)
+{
+  holent_tfd_bg b;
+  holent_tfd_info in;
+  holent_err e;
+  double L = 3.0, beta = 0.7, c = 6.0, T = 1.0 / beta;
+  HT_STATUS (holent_tfd_make (&b, &in, 1, L, 1e-6, beta, c, 1.0, 0, 0, 1,
+                              1e-3, 1, 2.0, &e), HOLENT_SUCCESS);
+  HT_CLOSE (in.S_BH, M_PI * c / 3.0 * L * T, 1e-13);
+  HT_CLOSE (in.M, M_PI * c / 6.0 * L * T * T, 1e-13);
+  HT_CLOSE (in.shock_M, in.M, 1e-13);
+  HT_CLOSE (in.shock_alpha, 1e-3 / (4.0 * in.M) * exp (2 * M_PI * 2.0 / beta),
+            1e-13);
+  HT_CLOSE (b.alpha, in.shock_alpha, 1e-15);
+  HT_CHECK (in.shock_time == 2.0 && in.shock_energy == 1e-3, "shock");
+  HT_STATUS (holent_tfd_make (&b, &in, 0, 0.0, 1e-6, beta, c, 1.0, 1, 0.5,
+                              0, 0, 0, 0, &e), HOLENT_SUCCESS);
+  HT_CHECK (isinf (in.S_BH) && isnan (in.shock_time) && b.alpha == 0.5,
+            "line");
+  HT_CLOSE (in.entropy_density, M_PI * c / 3.0 * T, 1e-14);
+  struct
+  {
+    double L, eps, beta, c, ell, a, E, tw;
+    int ha, he, ht, status, arg;
+  } bad[] = {
+    { -1, 1e-6, 1, 1, 1, 0, 0, 0, 0, 0, 0, HOLENT_EDOM, HOLENT_TFD_ARG_L },
+    { 3, NAN, 1, 1, 1, 0, 0, 0, 0, 0, 0, HOLENT_ENAN, HOLENT_TFD_ARG_EPS },
+    { 3, 1e-6, INFINITY, 1, 1, 0, 0, 0, 0, 0, 0, HOLENT_EDOM,
+      HOLENT_TFD_ARG_BETA },
+    { 3, 1e-6, 1, 0, 1, 0, 0, 0, 0, 0, 0, HOLENT_EDOM, HOLENT_TFD_ARG_C },
+    { 3, 1e-6, 1, 1, -2, 0, 0, 0, 0, 0, 0, HOLENT_EDOM, HOLENT_TFD_ARG_ELL },
+    { 3, 1e-6, 1, 1, 1, -1, 0, 0, 1, 0, 0, HOLENT_EDOM,
+      HOLENT_TFD_ARG_ALPHA },
+    { 3, 1e-6, 1, 1, 1, 1, 1, 1, 1, 1, 1, HOLENT_EOPTION,
+      HOLENT_TFD_ARG_ALPHA },
+    { 3, 1e-6, 1, 1, 1, 0, 1, 0, 0, 1, 0, HOLENT_EOPTION,
+      HOLENT_TFD_ARG_ENERGY },
+    { 3, 1e-6, 1, 1, 1, 0, -1, 0, 0, 1, 1, HOLENT_EDOM,
+      HOLENT_TFD_ARG_ENERGY },
+    { 3, 1e-6, 1, 1, 1, 0, 1, NAN, 0, 1, 1, HOLENT_ENAN,
+      HOLENT_TFD_ARG_TIME },
+    { 3, 1e-6, 1, 1, 1, 0, 1, 1e4, 0, 1, 1, HOLENT_ERANGE,
+      HOLENT_TFD_ARG_TIME },
+  };
+  for (size_t k = 0; k < sizeof bad / sizeof bad[0]; k++)
+    {
+      int st = holent_tfd_make (&b, &in, 1, bad[k].L, bad[k].eps,
+                                bad[k].beta, bad[k].c, bad[k].ell, bad[k].ha,
+                                bad[k].a, bad[k].he, bad[k].E, bad[k].ht,
+                                bad[k].tw, &e);
+      HT_CHECK (st == bad[k].status && e.status == st && e.arg == bad[k].arg
+                && e.reason[0] != '\0',
+                "bad %zu: status %d arg %d (%s)", k, st, e.arg, e.reason);
+    }
+  HT_STATUS (holent_tfd_make (NULL, &in, 1, 3, 1e-6, 1, 1, 1, 0, 0, 0, 0, 0,
+                              0, &e), HOLENT_EINVAL);
+}
+
+/* Scrambling: alpha* = 2 (sinh(pi l/beta) - 1) for A_L = A_R = [0, l]
+   (doc/tfd_shock.md) and t* from the inverse of the shift formula.  */
+static void
+test_scrambling (void)
+{
+  holent_tfd_bg b;
+  holent_tfd_workspace *w = holent_tfd_workspace_alloc (4);
+  double a0[1] = { 0.0 }, b0[1] = { 2.0 }, z[1] = { 0.0 };
+  holent_tfd_side S = { 1, a0, b0, z, z };
+  double beta = 1.0, E = 1e-4, alpha, ts;
+  HT_STATUS (holent_tfd_init (&b, 0, 0.0, 1e-6, beta, 6.0, 0.0),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_scrambling (w, &b, &S, &S, E, &alpha, &ts),
+             HOLENT_SUCCESS);
+  HT_CLOSE (alpha, 2.0 * (sinh (2.0 * M_PI) - 1.0), 1e-10);
+  HT_CLOSE (ts, beta / (2 * M_PI) * log (4.0 * M_PI / beta / beta * alpha / E),
+            1e-12);
+  HT_STATUS (holent_tfd_scrambling (w, &b, &S, &S, 0.0, &alpha, &ts),
+             HOLENT_SUCCESS);
+  HT_CHECK (isnan (ts), "no energy: NaN");
+  HT_STATUS (holent_tfd_scrambling (w, &b, &S, &S, -1.0, &alpha, &ts),
+             HOLENT_EDOM);
+  /* the default tmax: 100 beta */
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &S, &S, -1.0, &ts), HOLENT_SUCCESS);
+  HT_CLOSE (ts, beta / (2 * M_PI) * acosh (sinh (2.0 * M_PI)), 1e-10);
+  holent_tfd_workspace_free (w);
 }
 
 int
 main (void)
 {
+  test_make ();
+  test_scrambling ();
   gsl_set_error_handler_off ();
   test_cross ();
   test_shift ();
