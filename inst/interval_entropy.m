@@ -71,14 +71,13 @@ function [S, branch] = interval_entropy (bg, l, varargin)
     error ("holent:background",
            "%s: BG must be a background struct made by ads3_background", fn);
   endif
-  if (! __holent_time_entropy__ ("timed", bg, {}))
-    __holent_check_bg__ (fn, bg);
+  if (nargin > 2 && ! __holent_time_entropy__ ("timed", bg, {}))
+    __holent_background__ ("check", fn, bg);   # the time path reads BG
   endif
   if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
     [S, branch] = timed (fn, bg, l, varargin);
     return;
   endif
-  __holent_check_bg__ (fn, bg);
   if (! (isnumeric (l) && isreal (l)) || islogical (l) || issparse (l)
       || ! isa (l, "double"))
     ## Slow path only for unusual input: full checks and conversion.
@@ -94,7 +93,9 @@ function [S, branch] = interval_entropy (bg, l, varargin)
       [S, ~, nshort] = __holent_interval__ (bg, l);
     endif
   catch err
-    explain_bad_length (fn, bg, l);
+    if (! strcmp (err.identifier, "holent:background"))
+      explain_bad_length (fn, bg, l);
+    endif
     __holent_rethrow__ (err, "__holent_interval__", fn);
   end_try_catch
   if (nshort > 0)
@@ -108,7 +109,6 @@ endfunction
 ## geodesic and the brane-ending ones; BRANCH is true where some geodesic
 ## ends on a brane.
 function [S, branch] = bcft_intervals (fn, bg, l, args)
-  __holent_check_bg__ (fn, bg);
   o = __holent_opts__ (fn, {"at"}, args);
   l = __holent_array__ (fn, "L", l);
   x0 = 0;

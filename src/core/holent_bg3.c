@@ -2,6 +2,7 @@
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
 #include <stddef.h>
+#include <string.h>
 #include "holent_bg3.h"
 #include "holent_thermo.h"
 
@@ -22,6 +23,13 @@ static const char *const state_names[HOLENT_BG3_NSTATE] = {
 static const char *const saddle_names[] = {
   "", "dominant", "btz", "thermal_ads"
 };
+
+/* In the order of holent_bulk.  */
+static const char *const bulk_names[] = {
+  "poincare", "global_ads", "planar_btz", "btz", "thermal_ads",
+  "rotating_btz", "planar_rotating_btz", "conical_defect"
+};
+#define NBULK (sizeof bulk_names / sizeof bulk_names[0])
 
 #define BIT(p) (1u << (p))
 #define COMMON (BIT (HOLENT_BG3_C) | BIT (HOLENT_BG3_G) | BIT (HOLENT_BG3_ELL) \
@@ -57,6 +65,21 @@ holent_bg3_saddle_name (int s)
 {
   return s >= 0 && s <= HOLENT_BG3_SADDLE_THERMAL_ADS ? saddle_names[s]
                                                       : NULL;
+}
+
+const char *
+holent_bg3_bulk_name (int b)
+{
+  return b >= 0 && (size_t) b < NBULK ? bulk_names[b] : NULL;
+}
+
+int
+holent_bg3_bulk_from_name (const char *name)
+{
+  for (size_t k = 0; name != NULL && k < NBULK; k++)
+    if (strcmp (name, bulk_names[k]) == 0)
+      return (int) k;
+  return -1;
 }
 
 static int

@@ -55,6 +55,11 @@ const char *holent_bg3_param_name (int param);
 const char *holent_bg3_state_name (int state);
 const char *holent_bg3_saddle_name (int saddle);
 
+/* The one table of AdS3 bulk names ("poincare", "btz", ...): the name of
+   BULK (NULL when out of range), and the bulk of NAME (-1 when none).  */
+const char *holent_bg3_bulk_name (int bulk);
+int holent_bg3_bulk_from_name (const char *name);
+
 /* What the user gave: bit (1u << p) of GIVEN says parameter p was given
    with VALUE[p] (the saddle's value is a holent_bg3_saddle).  */
 typedef struct

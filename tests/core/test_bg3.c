@@ -165,6 +165,10 @@ test_errors (void)
   HT_CHECK (holent_bg3_state_name (-1) == NULL, "state");
   HT_CHECK (strcmp (holent_bg3_saddle_name (HOLENT_BG3_SADDLE_THERMAL_ADS), "thermal_ads") == 0, "saddle");
   HT_CHECK (holent_bg3_saddle_name (9) == NULL, "saddle");
+  HT_CHECK (holent_bg3_bulk_from_name ("rotating_btz") == HOLENT_BULK_ROTATING_BTZ, "bulk");
+  HT_CHECK (strcmp (holent_bg3_bulk_name (HOLENT_BULK_CONICAL_DEFECT), "conical_defect") == 0, "bulk");
+  HT_CHECK (holent_bg3_bulk_from_name ("vaidya") == -1 && holent_bg3_bulk_from_name (NULL) == -1, "bulk");
+  HT_CHECK (holent_bg3_bulk_name (8) == NULL, "bulk");
   (void) b;
 }
 
