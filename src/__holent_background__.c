@@ -151,14 +151,9 @@ static void
 do_units (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
           const char *fn)
 {
-  holent_bg3_spec sp;
-  holent_err e;
   double u[3];
   holent_gw_nargs (fn, nlhs, 3, nrhs, 3, 3);
-  memset (&sp, 0, sizeof sp);
-  holent_gw_bg3_opts (prhs[2], fn, &sp);
-  if (holent_bg3_units (&sp, &u[0], &u[1], &u[2], &e))
-    refuse (fn, &sp, &e);
+  holent_gw_units (prhs[2], fn, &u[0], &u[1], &u[2]);
   for (int k = 0; k < 3; k++)
     plhs[k] = mxCreateDoubleScalar (u[k]);
 }

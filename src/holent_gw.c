@@ -130,8 +130,8 @@ bg_field (const mxArray *s, const char *fn, const char *field)
   const mxArray *f = mxGetField (s, 0, field);
   if (f == NULL)
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
-                     "BG is missing field '%s': make it with "
-                     "ads3_background", field);
+                     "BG is not a background struct made by "
+                     "ads3_background: field '%s' is missing", field);
   return f;
 }
 
@@ -228,6 +228,8 @@ holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg)
                      sp.circle ? "circle" : "line", bulk);
   /* the thermofield double is read as one of its exteriors */
   bg_word (s, fn, "state", word, sizeof word);
+  if (b == HOLENT_BULK_THERMAL_ADS && strcmp (word, "rotating") == 0)
+    sp.state = HOLENT_BG3_ROTATING;  /* rotating, below Hawking-Page */
   if (strcmp (word, holent_bg3_state_name (sp.state)) != 0
       && !(strcmp (word, "tfd") == 0 && (b == HOLENT_BULK_BTZ
                                          || b == HOLENT_BULK_PLANAR_BTZ)))
@@ -336,6 +338,31 @@ opt_num (const mxArray *a, const char *fn, const char *name)
     holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
                      "%s must be real and full, not complex or sparse", name);
   return mxGetScalar (a);
+}
+
+void
+holent_gw_units (const mxArray *o, const char *fn, double *c, double *G,
+                 double *ell)
+{
+  static const int p[] = { HOLENT_BG3_C, HOLENT_BG3_G, HOLENT_BG3_ELL };
+  holent_bg3_spec sp;
+  holent_err e;
+  memset (&sp, 0, sizeof sp);
+  if (o == NULL || !mxIsStruct (o) || mxGetNumberOfElements (o) != 1)
+    holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                     "OPTS must be a scalar struct of options");
+  for (int k = 0; k < 3; k++)
+    {
+      const char *name = holent_bg3_param_name (p[k]);
+      const mxArray *a = mxGetField (o, 0, name);
+      if (a != NULL)
+        {
+          sp.given |= 1u << p[k];
+          sp.value[p[k]] = opt_num (a, fn, name);
+        }
+    }
+  if (holent_bg3_units (&sp, c, G, ell, &e))
+    holent_gw_raise (fn, e.status, NULL, HOLENT_NOINDEX, "%s", e.reason);
 }
 
 void

@@ -72,6 +72,12 @@ void holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg);
 void holent_gw_bg3_opts (const mxArray *o, const char *fn,
                          holent_bg3_spec *sp);
 
+/* Central charge, Newton constant and AdS radius (Brown-Henneaux, in the
+   core) from the fields c, G, ell of the options struct O, each
+   optional; other fields are ignored.  */
+void holent_gw_units (const mxArray *o, const char *fn, double *c,
+                      double *G, double *ell);
+
 /* Raise the error matching a core status; index (0-based, or (size_t)-1
    when none) is reported 1-based.  */
 void holent_gw_fail (int status, const char *fn, const char *name,
