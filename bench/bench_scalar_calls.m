@@ -8,7 +8,7 @@
 ## an older checkout (doc/fast_paths.md keeps the figures).  The peer is
 ## the plain Octave closed form of the same entropy, for scale.
 function bench_scalar_calls ()
-  n = 2000;
+  n = 300;
   reps = 5;
   bg = ads3_background ("thermal", "circle", "beta", 0.7, "c", 12, "circumference", 3);
   cases = {"ads3_background (thermal, circle)", ...
