@@ -91,7 +91,10 @@ function [T_hp, info] = hawking_page (varargin)
       z = zeros (size (z + x{k}));
     endfor
   catch
-    error ("holent:size", "%s: the option values must have compatible sizes", fn);
+    given = intersect ({"beta_L", "beta_R", "T", "beta", "Omega", "circumference"},
+                       fieldnames (o));
+    error ("holent:size", "%s: the option values (%s) must have compatible sizes",
+           fn, strjoin (given, ", "));
   end_try_catch
   for k = used
     x{k} = x{k} + z;

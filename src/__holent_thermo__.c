@@ -89,6 +89,11 @@ state_fail (const char *fn, int status, int why, int pair, const char *an,
                        "T_L(%zu) = %g and T_R(%zu) = %g must be "
                        "nonnegative", k, a, k, b);
     case HOLENT_THERMO_OMEGA:
+      if (pair == HOLENT_THERMO_BETA_LR)
+        holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                         "beta_L(%zu) = %g and beta_R(%zu) = %g give "
+                         "|Omega| = 1 to double precision: extremal, no "
+                         "Hawking-Page temperature", k, a, k, b);
       holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
                        "Omega(%zu) = %g must lie in (-1, 1): |Omega| "
                        ">= 1 is extremal or beyond", k, b);
@@ -124,8 +129,9 @@ state_fail (const char *fn, int status, int why, int pair, const char *an,
                        a * L / (2 * M_PI));
     case HOLENT_THERMO_RANGE:
       holent_gw_raise (fn, HOLENT_ERANGE, NULL, HOLENT_NOINDEX,
-                       "the state of element %zu (%s = %g, %s = %g) "
-                       "overflows double precision", k, an, a, bn, b);
+                       "the state of element %zu (%s = %g, %s = %g, "
+                       "circumference = %g) overflows double precision",
+                       k, an, a, bn, b, L);
     default:
       holent_gw_raise (fn, status, an, i, NULL);
     }
