@@ -6,7 +6,7 @@
  * holent_bg3_init, packed field by field.  Warns holent:cutoff when the
  * cutoff is not small against the scales of the state.
  *
- * __holent_background__ ("check", FN, BG): return nothing when BG is a
+ * OK = __holent_background__ ("check", FN, BG): true when BG is a
  * background struct made by ads3_background (the unpacker every gateway
  * uses, for wrappers that read BG's fields before their gateway call;
  * BCFT backgrounds are left to the unpacker of __holent_bcft__).
@@ -174,7 +174,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     {
       holent_bg3 b;
       char st[16] = "";
-      holent_gw_nargs (fn, nlhs, 0, nrhs, 3, 3);
+      holent_gw_nargs (fn, nlhs, 1, nrhs, 3, 3);
       const mxArray *f = mxIsStruct (prhs[2])
                          && mxGetNumberOfElements (prhs[2]) == 1
                          ? mxGetField (prhs[2], 0, "state") : NULL;
@@ -183,6 +183,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       /* BCFT backgrounds: __holent_bcft__'s unpacker checks them */
       if (strcmp (st, "bcft") != 0 && strcmp (st, "bcft_tfd") != 0)
         holent_gw_bg3 (prhs[2], fn, &b);
+      plhs[0] = mxCreateLogicalScalar (1);
     }
   else
     holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
