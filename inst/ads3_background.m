@@ -216,6 +216,23 @@ endfunction
 %! bg = ads3_background ("heavy", "circle", "alpha", 0.5, "c", 24);
 %! assert (bg.h, 0.75, 1e-15);
 
+%!test
+%! ## Energy of the conical defect, M = -alpha^2/(8G) on the circle 2 pi ell,
+%! ## read off the metric -(r^2 + alpha^2) dt^2 + ... (Balasubramanian and
+%! ## Kraus 1999, Commun. Math. Phys. 208, 413; from memory); L0 = Lbar0 = h.
+%! bg = ads3_background ("heavy", "circle", "alpha", 0.5, "G", 0.1);
+%! assert (bg.M, -0.25 / 0.8, 1e-13);
+%! assert ([bg.L0, bg.Lbar0], [bg.h, bg.h], 1e-15);
+%! ## M = (2 pi/L)(L0 + Lbar0 - c/12) for BTZ too (btz_thermodynamics)
+%! bg = ads3_background ("rotating", "circle", "beta_L", 0.3, "beta_R", 0.5, "c", 6, "circumference", 4);
+%! assert (bg.M, (2 * pi / 4) * (bg.L0 + bg.Lbar0 - 6 / 12), 1e-12 * bg.M);
+%! assert (bg.J, bg.L0 - bg.Lbar0, 1e-12 * bg.J);
+
+## A struct edited by hand is refused by the function it is passed to.
+%!error <interval_entropy: BG.S_BH = 3 does not match> interval_entropy (setfield (ads3_background ("thermal", "circle", "beta", 1), "S_BH", 3), 1)
+%!error id=holent:background rt_entropy (setfield (ads3_background ("vacuum", "circle"), "c", 3), [0 1])
+%!error id=holent:background rt_entropy (rmfield (ads3_background ("vacuum", "line"), "L0"), [0 1])
+
 %!warning <cutoff> ads3_background ("thermal", "line", "beta", 1e-3, "cutoff", 1e-4);
 
 %!test
