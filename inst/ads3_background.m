@@ -88,7 +88,15 @@
 ## of ell, for the circle rescaled to circumference 2 pi; 0 without a horizon),
 ## @code{M}, @code{J} (energy on the circle, (2 pi/L)(L0 + Lbar0 - c/12), and
 ## angular momentum L0 - Lbar0, as in @code{btz_thermodynamics}; on a line 0
-## for the vacuum and Inf (extensive) for a thermal state).
+## for the vacuum and Inf (extensive) for a thermal state; M is the Casimir
+## energy -pi c/(6 L) for the vacuum and thermal AdS), @code{L0},
+## @code{Lbar0} (the Virasoro zero modes of the state: 0 for the vacuum and
+## thermal AdS, h for the heavy state, Inf on a thermal line).
+##
+## The struct is built and checked once, by the compiled core; every
+## function that takes it checks it again in one compiled call (its
+## parameters rebuild it, and each derived field must match), so a struct
+## edited by hand raises @code{holent:background}.
 ##
 ## @strong{Boundaries (BCFT) and end-of-the-world branes.}
 ## @code{ads3_background ("bcft", "half_line" | "interval", @dots{})} is a 2D
@@ -135,233 +143,14 @@ function bg = ads3_background (state, boundary, varargin)
     bg = __holent_bcft_background__ (fn, lower (state), boundary, varargin{:});
     return;
   endif
-  state = check_word (fn, "STATE", state, {"vacuum", "thermal", "rotating", "heavy", "tfd", "quench"});
-  boundary = check_word (fn, "BOUNDARY", boundary, {"line", "circle"});
-
   names = {"c", "G", "ell", "cutoff", "circumference", "beta", "T", ...
            "beta_L", "beta_R", "Omega", "alpha", "h", "saddle", ...
            "shock_alpha", "shock_energy", "shock_time"};
   o = __holent_opts__ (fn, names, varargin);
-
-  ## Which options belong to which state.
-  allowed.vacuum = {};
-  allowed.thermal = {"beta", "T", "saddle"};
-  allowed.rotating = {"beta", "T", "beta_L", "beta_R", "Omega", "saddle"};
-  allowed.heavy = {"alpha", "h"};
-  allowed.tfd = {"beta", "T", "shock_alpha", "shock_energy", "shock_time"};
-  allowed.quench = {"beta", "T"};
-  common = {"c", "G", "ell", "cutoff", "circumference"};
-  given = fieldnames (o);
-  for k = 1:numel (given)
-    if (! any (strcmp (given{k}, [common, allowed.(state)])))
-      error ("holent:option", "%s: option '%s' does not apply to the %s state",
-             fn, given{k}, state);
-    endif
-  endfor
-  circle = strcmp (boundary, "circle");
-  if (! circle && isfield (o, "circumference"))
-    error ("holent:option", "%s: option 'circumference' applies to a circle only", fn);
-  endif
-  if (! circle && isfield (o, "saddle"))
-    error ("holent:option", "%s: option 'saddle' applies to a circle only", fn);
-  endif
-  if (strcmp (state, "heavy") && ! circle)
-    error ("holent:boundary",
-           "%s: the heavy state (conical defect) lives on a circle, not a line", fn);
-  endif
-
-  ## Central charge, Newton constant, AdS radius (Brown-Henneaux).
-  [c, G, ell] = __holent_central_charge__ (fn, o);
-
-  cutoff = 1e-6;
-  if (isfield (o, "cutoff"))
-    cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");
-  endif
-  L = Inf;
-  if (circle)
-    L = 2 * pi;
-    if (isfield (o, "circumference"))
-      L = __holent_scalar__ (fn, "circumference", o.circumference, "positive");
-    endif
-  endif
-
-  bg = struct ("state", state, "boundary", boundary, "bulk", "", "c", c,
-               "G", G, "ell", ell, "cutoff", cutoff, "circumference", L,
-               "beta", Inf, "T", 0, "beta_L", Inf, "beta_R", Inf, "T_L", 0,
-               "T_R", 0, "Omega", 0, "alpha", 1, "h", 0, "saddle", "",
-               "horizon", false, "pure", true, "S_BH", 0,
-               "entropy_density", 0, "r_plus", 0, "r_minus", 0, "M", 0, "J", 0);
-
-  switch (state)
-    case "vacuum"
-      bg.bulk = merge (circle, "global_ads", "poincare");
-      if (circle)
-        bg.M = -pi * c / (6 * L);   # Casimir energy, -1/(8G) for L = 2 pi ell
-      endif
-      scales = L;
-
-    case {"thermal", "rotating"}
-      [bl, br] = temperatures (fn, state, o);
-      bg.beta_L = bl;
-      bg.beta_R = br;
-      bg.beta = (bl + br) / 2;
-      bg.T = 1 / bg.beta;
-      bg.T_L = 1 / bl;
-      bg.T_R = 1 / br;
-      bg.Omega = (br - bl) / (br + bl);
-      bg.pure = false;
-      scales = [L, bl, br];
-      rot = strcmp (state, "rotating");
-      if (! circle)
-        bg.bulk = merge (rot, "planar_rotating_btz", "planar_btz");
-        bg.saddle = "btz";
-      else
-        sad = "dominant";
-        if (isfield (o, "saddle"))
-          sad = check_word (fn, "saddle", o.saddle, {"dominant", "btz", "thermal_ads"});
-        endif
-        if (strcmp (sad, "dominant"))
-          ## Hawking-Page: BTZ dominates when beta_L beta_R < L^2.
-          try
-            [~, hp] = hawking_page ("circumference", L, "beta_L", bl,
-                                    "beta_R", br, "c", c, "ell", ell);
-          catch err
-            state_error (fn, o, err);
-          end_try_catch
-          sad = hp.saddle;
-        endif
-        bg.saddle = sad;
-        if (strcmp (sad, "btz"))
-          bg.bulk = merge (rot, "rotating_btz", "btz");
-        else
-          bg.bulk = "thermal_ads";
-        endif
-      endif
-      if (! strcmp (bg.bulk, "thermal_ads"))
-        bg.horizon = true;
-        bg.entropy_density = pi * c / 6 * (1 / bl + 1 / br);
-        bg.S_BH = merge (circle, bg.entropy_density * L, Inf);
-        Lr = merge (circle, L, 2 * pi);
-        bg.r_plus = Lr / 2 * (1 / bl + 1 / br);
-        bg.r_minus = Lr / 2 * (1 / bl - 1 / br);
-        if (! isfinite (bg.entropy_density) || ! (bg.S_BH > 0)
-            || (circle && ! isfinite (bg.S_BH)))
-          state_error (fn, o, struct ("identifier", "holent:domain", "message",
-                                      "the horizon entropy is out of double precision range"));
-        endif
-      endif
-      ## Energy and angular momentum (btz_thermodynamics conventions).
-      if (! circle)
-        bg.M = Inf;
-        bg.J = Inf * sign (bg.Omega);
-        if (bg.Omega == 0)
-          bg.J = 0;
-        endif
-      elseif (bg.horizon)
-        try
-          th = btz_thermodynamics ("beta_L", bl, "beta_R", br,
-                                   "circumference", L, "c", c, "ell", ell);
-        catch err
-          state_error (fn, o, err);
-        end_try_catch
-        bg.M = th.M;
-        bg.J = th.J;
-      else
-        bg.M = -pi * c / (6 * L);
-      endif
-
-    case {"tfd", "quench"}
-      bg = __holent_time_bg__ (fn, bg, o, temperatures (fn, "thermal", o));
-      scales = [L, bg.beta];
-
-    case "heavy"
-      if (isfield (o, "alpha") && isfield (o, "h"))
-        error ("holent:option", "%s: give either 'alpha' or 'h', not both", fn);
-      elseif (isfield (o, "alpha"))
-        alpha = __holent_scalar__ (fn, "alpha", o.alpha, {0, 1, "(]"});
-      elseif (isfield (o, "h"))
-        h = __holent_scalar__ (fn, "h", o.h, {0, c / 24, "[)"});
-        alpha = sqrt (1 - 24 * h / c);
-      else
-        error ("holent:option", "%s: the heavy state needs 'alpha' or 'h'", fn);
-      endif
-      bg.alpha = alpha;
-      bg.h = c / 24 * (1 - alpha^2);
-      bg.bulk = "conical_defect";
-      bg.M = (2 * pi / L) * (2 * bg.h - c / 12);   # L0 + Lbar0 - c/12
-      scales = L;
-  endswitch
-
-  if (cutoff > 1e-2 * min (scales))
-    warning ("holent:cutoff",
-             "%s: cutoff %g is not small against the smallest scale %g of the state",
-             fn, cutoff, min (scales));
-  endif
-endfunction
-
-## Re-raise ERR (from hawking_page or btz_thermodynamics, or made here)
-## under FN's name, listing the numeric options that set the state.
-function state_error (fn, o, err)
-  msg = regexprep (err.message, '^\w+: ', '');
-  given = fieldnames (o);
-  txt = {};
-  for k = 1:numel (given)
-    v = o.(given{k});
-    if (isnumeric (v) && isscalar (v))
-      txt{end+1} = sprintf ("%s = %g", given{k}, v);
-    endif
-  endfor
-  error (err.identifier, "%s: %s: %s", fn, strjoin (txt, ", "), msg);
-endfunction
-
-function w = check_word (fn, name, w, choices)
-  if (! ischar (w) || ! (isrow (w) || isempty (w)))
-    error ("holent:type", "%s: %s must be a string", fn, name);
-  endif
-  idx = find (strcmpi (w, choices));
-  if (isempty (idx))
-    error ("holent:option", "%s: unknown %s '%s' (expected one of: %s)",
-           fn, name, w, strjoin (choices, ", "));
-  endif
-  w = choices{idx};
-endfunction
-
-function [bl, br] = temperatures (fn, state, o)
-  has = @(f) isfield (o, f);
-  if (has ("beta") && has ("T"))
-    error ("holent:option", "%s: give either 'beta' or 'T', not both", fn);
-  endif
-  beta = [];
-  if (has ("beta"))
-    beta = __holent_scalar__ (fn, "beta", o.beta, "positive");
-  elseif (has ("T"))
-    beta = 1 / __holent_scalar__ (fn, "T", o.T, "positive");
-  endif
-  if (strcmp (state, "thermal"))
-    if (isempty (beta))
-      error ("holent:option", "%s: the thermal state needs 'beta' or 'T'", fn);
-    endif
-    bl = br = beta;
-    return;
-  endif
-  if (has ("beta_L") || has ("beta_R"))
-    if (! (has ("beta_L") && has ("beta_R")))
-      error ("holent:option", "%s: give both 'beta_L' and 'beta_R'", fn);
-    endif
-    if (! isempty (beta) || has ("Omega"))
-      error ("holent:option",
-             "%s: give 'beta_L' with 'beta_R', or 'beta' with 'Omega', not both", fn);
-    endif
-    bl = __holent_scalar__ (fn, "beta_L", o.beta_L, "positive");
-    br = __holent_scalar__ (fn, "beta_R", o.beta_R, "positive");
-  else
-    if (isempty (beta) || ! has ("Omega"))
-      error ("holent:option",
-             "%s: the rotating state needs 'beta_L' and 'beta_R', or 'beta' (or 'T') and 'Omega'", fn);
-    endif
-    Om = __holent_scalar__ (fn, "Omega", o.Omega, {-1, 1, "()"});
-    bl = beta * (1 - Om);
-    br = beta * (1 + Om);
+  ## Built and checked by the core (holent_bg3): parameters, saddle, M, J, ...
+  bg = __holent_background__ ("ads3", fn, state, boundary, o);
+  if (any (strcmp (bg.state, {"tfd", "quench"})))
+    bg = __holent_time_bg__ (fn, bg, o, bg.beta);
   endif
 endfunction
 
@@ -426,6 +215,23 @@ endfunction
 %! assert (bg.bulk, "conical_defect");
 %! bg = ads3_background ("heavy", "circle", "alpha", 0.5, "c", 24);
 %! assert (bg.h, 0.75, 1e-15);
+
+%!test
+%! ## Energy of the conical defect, M = -alpha^2/(8G) on the circle 2 pi ell,
+%! ## read off the metric -(r^2 + alpha^2) dt^2 + ... (Balasubramanian and
+%! ## Kraus 1999, Commun. Math. Phys. 208, 413; from memory); L0 = Lbar0 = h.
+%! bg = ads3_background ("heavy", "circle", "alpha", 0.5, "G", 0.1);
+%! assert (bg.M, -0.25 / 0.8, 1e-13);
+%! assert ([bg.L0, bg.Lbar0], [bg.h, bg.h], 1e-15);
+%! ## M = (2 pi/L)(L0 + Lbar0 - c/12) for BTZ too (btz_thermodynamics)
+%! bg = ads3_background ("rotating", "circle", "beta_L", 0.3, "beta_R", 0.5, "c", 6, "circumference", 4);
+%! assert (bg.M, (2 * pi / 4) * (bg.L0 + bg.Lbar0 - 6 / 12), 1e-12 * bg.M);
+%! assert (bg.J, bg.L0 - bg.Lbar0, 1e-12 * bg.J);
+
+## A struct edited by hand is refused by the function it is passed to.
+%!error <interval_entropy: BG.S_BH = 3 does not match> interval_entropy (setfield (ads3_background ("thermal", "circle", "beta", 1), "S_BH", 3), 1)
+%!error id=holent:background rt_entropy (setfield (ads3_background ("vacuum", "circle"), "c", 3), [0 1])
+%!error id=holent:background rt_entropy (rmfield (ads3_background ("vacuum", "line"), "L0"), [0 1])
 
 %!warning <cutoff> ads3_background ("thermal", "line", "beta", 1e-3, "cutoff", 1e-4);
 

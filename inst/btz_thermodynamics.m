@@ -97,7 +97,6 @@ function th = btz_thermodynamics (varargin)
            other, merge (strcmp (other, "Omega"), " (Omega = 0: no rotation)", ""));
   endif
 
-  [c, G, ell] = __holent_central_charge__ (fn, o);
   if (k == 4)
     a = __holent_array__ (fn, na, o.(na), "allow_inf");
     b = __holent_array__ (fn, nb, o.(nb), "allow_inf");
@@ -105,23 +104,20 @@ function th = btz_thermodynamics (varargin)
     a = __holent_array__ (fn, na, o.(na));
     b = __holent_array__ (fn, nb, o.(nb));
   endif
+  L = {};
   if (isfield (o, "circumference"))
-    L = __holent_array__ (fn, "circumference", o.circumference);
-    if (any (! (L(:) > 0)))
-      error ("holent:domain", "%s: circumference must be positive", fn);
-    endif
-  else
-    L = 2 * pi * ell;
+    L = {__holent_array__(fn, "circumference", o.circumference)};
   endif
-  sz = broadcast_size (a, b, L);
+  sz = broadcast_size (a, b, L{:});
   if (isempty (sz))
     error ("holent:size", "%s: %s, %s and circumference must have compatible sizes",
            fn, na, nb);
   endif
-  ## Scalars and arrays of the full size go to the core as they are.
-  a = expand (a, sz);  b = expand (b, sz);  Lx = expand (L, sz);
+  ## Scalars and arrays of the full size go to the core as they are; no
+  ## circumference: 2 pi ell there.
+  a = expand (a, sz);  b = expand (b, sz);  L = cellfun (@(x) expand (x, sz), L, "uniformoutput", false);
 
-  t = __holent_call__ ("__holent_thermo__", "state", pairs{k, 3}, a, b, Lx, c, ell);
+  t = __holent_thermo__ ("state", fn, pairs{k, 3}, a, b, [L{:}], o);
 
   th = struct ();
   for f = {"r_plus", "r_minus", "M", "J", "T", "Omega", "Omega_J", "T_L", ...
@@ -140,10 +136,10 @@ function th = btz_thermodynamics (varargin)
     sad(t.btz_dominates) = {"btz"};
     th.saddle = sad;
   endif
-  th.c = c;
-  th.G = G;
-  th.ell = ell;
-  th.circumference = Lx;
+  th.c = t.c;
+  th.G = t.G;
+  th.ell = t.ell;
+  th.circumference = t.circumference;
 endfunction
 
 ## The size arrays broadcast to, or [] when they do not.

@@ -57,7 +57,7 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
     [Svec, masks] = __holent_time_unions__ ("vector", fn, bg, parties, varargin);
     return;
   endif
-  __holent_check_bg__ (fn, bg);
+  __holent_background__ ("check", fn, bg);   # BG is read below
   if (! iscell (parties) || isempty (parties))
     error ("holent:type", "%s: PARTIES must be a non-empty cell array of regions (n x 2 matrices)", fn);
   endif

@@ -28,7 +28,6 @@ function C = geodesic_curve (bg, P1, P2, varargin)
   if (nargin < 3)
     print_usage ();
   endif
-  __holent_check_bg__ (fn, bg);
   P1 = __holent_array__ (fn, "P1", P1);
   P2 = __holent_array__ (fn, "P2", P2);
   if (columns (P1) != 2 || columns (P2) != 2 || ndims (P1) > 2 || ndims (P2) > 2

@@ -56,9 +56,6 @@ function len = geodesic_length (bg, x1, x2, varargin)
   o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);
   timed = numel (fieldnames (rmfield (o, intersect (fieldnames (o), {"class"})))) > 0 ...
           || __holent_time_entropy__ ("timed", bg, {});
-  if (! timed)
-    __holent_check_bg__ (fn, bg);
-  endif
   cls = 0;
   if (isfield (o, "class"))
     v = o.class;
@@ -96,7 +93,9 @@ function len = geodesic_length (bg, x1, x2, varargin)
     ## in one pass; a failure is explained below.
     len = __holent_geodesic__ (bg, x1, x2, cls);
   catch err
-    explain_bad_points (fn, bg, x1, x2);
+    if (! strcmp (err.identifier, "holent:background"))
+      explain_bad_points (fn, bg, x1, x2);
+    endif
     __holent_rethrow__ (err, "__holent_geodesic__", fn);
   end_try_catch
 endfunction

@@ -49,14 +49,12 @@ function [T_hp, info] = hawking_page (varargin)
   names = {"circumference", "Omega", "T", "beta", "beta_L", "beta_R", ...
            "c", "G", "ell"};
   o = __holent_opts__ (fn, names, varargin);
-  [c, G, ell] = __holent_central_charge__ (fn, o);
   has = @(f) isfield (o, f);
 
   if (has ("T") && has ("beta"))
     error ("holent:option", "%s: give either 'T' or 'beta', not both", fn);
   endif
-  lr = has ("beta_L") || has ("beta_R");
-  if (lr)
+  if (has ("beta_L") || has ("beta_R"))
     if (! (has ("beta_L") && has ("beta_R")))
       error ("holent:option", "%s: give both 'beta_L' and 'beta_R'", fn);
     endif
@@ -64,79 +62,63 @@ function [T_hp, info] = hawking_page (varargin)
       error ("holent:option",
              "%s: give 'beta_L' with 'beta_R', or 'T' (or 'beta') with 'Omega', not both", fn);
     endif
-    bl = __holent_array__ (fn, "beta_L", o.beta_L);
-    br = __holent_array__ (fn, "beta_R", o.beta_R);
-    if (any (! (bl(:) > 0)) || any (! (br(:) > 0)))
-      error ("holent:domain", "%s: beta_L and beta_R must be positive", fn);
-    endif
-  endif
-
-  if (has ("circumference"))
-    L = __holent_array__ (fn, "circumference", o.circumference);
+    pair = "beta_LR";
+    x = {__holent_array__(fn, "beta_L", o.beta_L), __holent_array__(fn, "beta_R", o.beta_R)};
   else
-    L = 2 * pi * ell;
-  endif
-  Om = 0;
-  if (has ("Omega"))
-    Om = __holent_array__ (fn, "Omega", o.Omega);
-  endif
-  T = [];
-  if (has ("T"))
-    T = __holent_array__ (fn, "T", o.T);
-    k = find (! (T(:) > 0), 1);
-    if (! isempty (k))
-      error ("holent:domain", "%s: T(%d) = %g must be positive", fn, k, T(k));
+    pair = "Omega";
+    x = {[], 0};
+    if (has ("Omega"))
+      x{2} = __holent_array__ (fn, "Omega", o.Omega);
     endif
-  elseif (has ("beta"))
-    beta = __holent_array__ (fn, "beta", o.beta);
-    if (any (! (beta(:) > 0)))
-      error ("holent:domain", "%s: beta must be positive", fn);
+    if (has ("T"))
+      pair = "T_Omega";
+      x{1} = __holent_array__ (fn, "T", o.T);
+    elseif (has ("beta"))
+      pair = "beta_Omega";
+      x{1} = __holent_array__ (fn, "beta", o.beta);
     endif
-    T = 1 ./ beta;
+  endif
+  L = [];
+  if (has ("circumference"))
+    x{3} = L = __holent_array__ (fn, "circumference", o.circumference);
   endif
 
+  ## Broadcast the arrays given (T or beta is absent for "Omega").
+  used = 1 + strcmp (pair, "Omega"):numel (x);
   try
-    if (lr)
-      z = zeros (size (bl + br + L));
-      bl = bl + z;  br = br + z;
-      Om = (br - bl) ./ (br + bl);
-    else
-      z = zeros (size (Om + L + merge (isempty (T), 0, T)));
-      Om = Om + z;
-    endif
+    z = 0;
+    for k = used
+      z = zeros (size (z + x{k}));
+    endfor
   catch
-    error ("holent:size", "%s: the option values must have compatible sizes", fn);
+    given = intersect ({"beta_L", "beta_R", "T", "beta", "Omega", "circumference"},
+                       fieldnames (o));
+    error ("holent:size", "%s: the option values (%s) must have compatible sizes",
+           fn, strjoin (given, ", "));
   end_try_catch
-  L = L + z;
-
-  T_hp = __holent_call__ ("__holent_thermo__", "hawking_page", Om, L);
+  for k = used
+    x{k} = x{k} + z;
+  endfor
+  if (! isempty (L))
+    L = x{3};
+  endif
+  [T_hp, info] = __holent_thermo__ ("hawking_page", fn, pair, x{1}, x{2}, L, o);
   if (nargout < 2)
     return;
   endif
-
-  if (lr)
-    th = __holent_call__ ("__holent_thermo__", "state", "beta_LR", bl, br, L, c, ell, fn);
-    Tc = th.T;
-  else
-    if (isempty (T))
-      Tc = T_hp;
-    else
-      Tc = T + z;
-    endif
-    th = __holent_call__ ("__holent_thermo__", "state", "T_Omega", Tc, Om, L, c, ell, fn);
-  endif
-  if (! lr && isempty (T))
+  if (strcmp (pair, "Omega"))
     sad = repmat ({"transition"}, size (z));
   else
     sad = repmat ({"thermal_ads"}, size (z));
-    sad(th.btz_dominates) = {"btz"};
+    sad(info.btz_dominates) = {"btz"};
   endif
   if (isscalar (z))
     sad = sad{1};
   endif
-  info = struct ("T_hp", T_hp, "beta_hp", 1 ./ T_hp, "Omega", Om,
-                 "circumference", L, "c", c, "T", Tc, "F_btz", th.F,
-                 "F_thermal_ads", th.F_thermal_ads);
+  info = struct ("T_hp", T_hp, "beta_hp", 1 ./ T_hp, "Omega", info.Omega,
+                 "circumference", info.circumference, "c", info.c,
+                 "T", info.T, "F_btz", info.F_btz,
+                 "F_thermal_ads", info.F_thermal_ads);
   info.saddle = sad;
 endfunction
 

@@ -75,7 +75,6 @@ function [S, branch] = interval_entropy (bg, l, varargin)
     [S, branch] = timed (fn, bg, l, varargin);
     return;
   endif
-  __holent_check_bg__ (fn, bg);
   if (! (isnumeric (l) && isreal (l)) || islogical (l) || issparse (l)
       || ! isa (l, "double"))
     ## Slow path only for unusual input: full checks and conversion.
@@ -91,7 +90,9 @@ function [S, branch] = interval_entropy (bg, l, varargin)
       [S, ~, nshort] = __holent_interval__ (bg, l);
     endif
   catch err
-    explain_bad_length (fn, bg, l);
+    if (! strcmp (err.identifier, "holent:background"))
+      explain_bad_length (fn, bg, l);
+    endif
     __holent_rethrow__ (err, "__holent_interval__", fn);
   end_try_catch
   if (nshort > 0)
@@ -105,7 +106,6 @@ endfunction
 ## geodesic and the brane-ending ones; BRANCH is true where some geodesic
 ## ends on a brane.
 function [S, branch] = bcft_intervals (fn, bg, l, args)
-  __holent_check_bg__ (fn, bg);
   o = __holent_opts__ (fn, {"at"}, args);
   l = __holent_array__ (fn, "L", l);
   x0 = 0;

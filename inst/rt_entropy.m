@@ -127,7 +127,6 @@ function [S, conf] = rt_entropy (bg, A, varargin)
                    "horizon", __holent_time_entropy__ ("shape", hz != 0, sz, t));
     return;
   endif
-  __holent_check_bg__ (fn, bg);
   [~, gw] = __holent_is_bcft__ (bg);
   if (iscell (A))
     ok = cellfun ("isclass", A, "double");

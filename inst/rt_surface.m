@@ -53,7 +53,6 @@ function surf = rt_surface (bg, A, varargin)
   if (nargin < 2)
     print_usage ();
   endif
-  __holent_check_bg__ (fn, bg);
   o = __holent_opts__ (fn, {"tol", "configuration"}, varargin);
   tol = 1e-3;
   if (isfield (o, "tol"))

@@ -93,7 +93,7 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
            "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
            fn);
   endif
-  __holent_check_bg__ (fn, bg);
+  __holent_background__ ("check", fn, bg);   # BG is read below
   o = __holent_opts__ (fn, {"reflected"}, varargin);
   reflected = false;
   if (isfield (o, "reflected"))

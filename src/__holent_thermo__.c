@@ -1,26 +1,32 @@
-/* TH = __holent_thermo__ ("state", PAIR, A, B, L, C, ELL [, CALLER]): BTZ
+/* TH = __holent_thermo__ ("state", FN, PAIR, A, B, L, OPTS): BTZ
  * thermodynamics of the states given by the pair PAIR ("radii",
  * "T_Omega", "T_LR", "beta_LR" or "M_J") with values A, B on circles of
- * circumference L (A, B, L of one size, or scalars: the wrapper
- * broadcasts other shapes).  TH is a struct of arrays of that size
- * (btz_dominates logical).
+ * circumference L ([]: 2 pi ell) (A, B, L of one size, or scalars: the
+ * wrapper broadcasts other shapes); c, G, ell from the options struct OPTS
+ * (fields c, G, ell, each optional; Brown-Henneaux in the core).  TH is a
+ * struct of arrays of that size (btz_dominates logical), the scalars
+ * c, G, ell, and the circumference (L, or 2 pi ell).
  *
- * T_HP = __holent_thermo__ ("hawking_page", OMEGA, L): Hawking-Page
- * temperatures (OMEGA, L of one size).
+ * [T_HP, INFO] = __holent_thermo__ ("hawking_page", FN, PAIR, A, B, L,
+ * OPTS): Hawking-Page temperatures and the comparison of the saddles at
+ * the states of PAIR ("T_Omega", "beta_Omega", "beta_LR", or "Omega": B
+ * is Omega and the comparison is made at T_HP).  INFO has fields T_hp,
+ * Omega, circumference, c, T, F_btz, F_thermal_ads, btz_dominates.
  *
- * Errors name the argument of the public function (CALLER, default
- * btz_thermodynamics; hawking_page) and the first offending element.  GPL-3.0-or-later.  */
+ * Errors name the argument of the public function FN and the first
+ * offending element.
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
 #include "core/holent_thermo.h"
 
-static const char FN[] = "__holent_thermo__";
+static const char GW[] = "__holent_thermo__";
 
 static const struct
 {
   const char *name;
-  holent_thermo_pair pair;
+  int pair;
   const char *a, *b;
 } pairs[] = {
   { "radii", HOLENT_THERMO_RADII, "r_plus", "r_minus" },
@@ -28,7 +34,10 @@ static const struct
   { "T_LR", HOLENT_THERMO_T_LR, "T_L", "T_R" },
   { "beta_LR", HOLENT_THERMO_BETA_LR, "beta_L", "beta_R" },
   { "M_J", HOLENT_THERMO_M_J, "M", "J" },
+  { "beta_Omega", HOLENT_THERMO_BETA_OMEGA, "beta", "Omega" },
+  { "Omega", -1, "", "Omega" },
 };
+#define NPAIRS (sizeof pairs / sizeof pairs[0])
 
 /* Field names of TH, in the order of the table columns below.  C_Omega
    is not among them: it equals S (doc/btz_thermodynamics.md), and the
@@ -36,14 +45,14 @@ static const struct
 static const char *fields[] = {
   "r_plus", "r_minus", "M", "J", "T", "Omega", "Omega_J", "T_L", "T_R",
   "S", "F", "C_J", "horizon_length", "L0", "Lbar0", "F_thermal_ads",
-  "btz_dominates"
+  "btz_dominates", "c", "G", "ell", "circumference"
 };
-#define NFIELDS (sizeof fields / sizeof fields[0])
+#define NCOLS 16
 
-/* Raise the error for a refused state: id by reason, message naming the
- * argument of btz_thermodynamics and the element (1-based).  */
+/* Raise the error for a refused state: identifier by reason, message
+ * naming the argument of FN and the element (1-based).  */
 static void
-state_fail (const char *P, int status, int why, const char *an,
+state_fail (const char *fn, int status, int why, int pair, const char *an,
             const char *bn, size_t i, double a, double b, double L, double c)
 {
   size_t k = i + 1;
@@ -52,128 +61,176 @@ state_fail (const char *P, int status, int why, const char *an,
     {
     case HOLENT_THERMO_NOT_FINITE:
       if (isnan (a) || isnan (b))
-        mexErrMsgIdAndTxt ("holent:nan", "%s: %s must not be NaN (element %zu)",
-                           P, isnan (a) ? an : bn, k);
-      mexErrMsgIdAndTxt ("holent:domain", "%s: %s must be finite (element %zu)",
-                         P, isfinite (a) ? bn : an, k);
-      break;
+        holent_gw_raise (fn, HOLENT_ENAN, NULL, HOLENT_NOINDEX,
+                         "%s must not be NaN (element %zu)",
+                         isnan (a) ? an : bn, k);
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "%s must be finite (element %zu)",
+                       isfinite (a) ? bn : an, k);
     case HOLENT_THERMO_PARAM:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: circumference must be positive and finite "
-                         "(element %zu)", P, k);
-      break;
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "circumference(%zu) = %g must be positive and "
+                       "finite (a circle's circumference must be positive)",
+                       k, L);
     case HOLENT_THERMO_RADIUS:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: r_plus(%zu) = %g must be positive", P, k, a);
-      break;
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "r_plus(%zu) = %g must be positive", k, a);
     case HOLENT_THERMO_INNER:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: r_minus(%zu) = %g exceeds r_plus = %g in size "
-                         "(r_plus is the outer horizon, |r_minus| <= r_plus)",
-                         P, k, b, a);
-      break;
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "r_minus(%zu) = %g exceeds r_plus = %g in size "
+                       "(r_plus is the outer horizon, |r_minus| <= r_plus)",
+                       k, b, a);
     case HOLENT_THERMO_TEMPERATURE:
-      if (strcmp (an, "T") == 0)
-        mexErrMsgIdAndTxt ("holent:domain",
-                           "%s: T(%zu) = %g must be positive (T = 0 is "
-                           "extremal: give T_L, T_R or M, J)", P, k, a);
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: T_L(%zu) = %g and T_R(%zu) = %g must be "
-                         "nonnegative", P, k, a, k, b);
-      break;
+      if (strcmp (an, "T") == 0 || pair < 0)
+        holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                         "T(%zu) = %g must be positive (T = 0 is "
+                         "extremal: give T_L, T_R or M, J)", k, a);
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "T_L(%zu) = %g and T_R(%zu) = %g must be "
+                       "nonnegative", k, a, k, b);
     case HOLENT_THERMO_OMEGA:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: Omega(%zu) = %g must lie in (-1, 1): |Omega| "
-                         ">= 1 is extremal or beyond", P, k, b);
-      break;
+      if (pair == HOLENT_THERMO_BETA_LR)
+        holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                         "beta_L(%zu) = %g and beta_R(%zu) = %g give "
+                         "|Omega| = 1 to double precision: extremal, no "
+                         "Hawking-Page temperature", k, a, k, b);
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "Omega(%zu) = %g must lie in (-1, 1): |Omega| "
+                       ">= 1 is extremal or beyond", k, b);
     case HOLENT_THERMO_BETA:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: beta_L(%zu) = %g and beta_R(%zu) = %g must be "
-                         "positive (Inf: a sector at zero temperature)",
-                         P, k, a, k, b);
-      break;
+      if (pair == HOLENT_THERMO_BETA_OMEGA)
+        holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                         "beta(%zu) = %g must be positive", k, a);
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "beta_L(%zu) = %g and beta_R(%zu) = %g must be "
+                       "positive (Inf: a sector at zero temperature)",
+                       k, a, k, b);
     case HOLENT_THERMO_MASSLESS:
-      mexErrMsgIdAndTxt ("holent:domain",
-                         "%s: %s(%zu) = %g, %s(%zu) = %g is the massless BTZ "
-                         "geometry (M = J = 0): no horizon, not a black hole",
-                         P, an, k, a, bn, k, b);
-      break;
+      holent_gw_raise (fn, HOLENT_EDOM, NULL, HOLENT_NOINDEX,
+                       "%s(%zu) = %g, %s(%zu) = %g is the massless BTZ "
+                       "geometry (M = J = 0): no horizon, not a black hole",
+                       an, k, a, bn, k, b);
     case HOLENT_THERMO_BELOW_VACUUM:
-      mexErrMsgIdAndTxt ("holent:below_vacuum",
-                         "%s: M(%zu) = %g is below the AdS3 vacuum mass "
-                         "-1/(8G) = %g: no black hole and no regular geometry",
-                         P, k, a, vac);
-      break;
+      holent_gw_raise (fn, HOLENT_EBELOWVAC, NULL, HOLENT_NOINDEX,
+                       "M(%zu) = %g is below the AdS3 vacuum mass "
+                       "-1/(8G) = %g: no black hole and no regular geometry",
+                       k, a, vac);
     case HOLENT_THERMO_CONICAL:
-      mexErrMsgIdAndTxt ("holent:conical_defect",
-                         "%s: M(%zu) = %g lies in [-1/(8G), 0) = [%g, 0), below "
-                         "the BTZ threshold: a conical defect (point "
-                         "particle; global AdS at -1/(8G)), not a black hole",
-                         P, k, a, vac);
-      break;
+      holent_gw_raise (fn, HOLENT_ECONICAL, NULL, HOLENT_NOINDEX,
+                       "M(%zu) = %g lies in [-1/(8G), 0) = [%g, 0), below "
+                       "the BTZ threshold: a conical defect (point "
+                       "particle; global AdS at -1/(8G)), not a black hole",
+                       k, a, vac);
     case HOLENT_THERMO_OVERROTATING:
-      mexErrMsgIdAndTxt ("holent:overrotating",
-                         "%s: J(%zu) = %g is over-rotating: |J| must not "
-                         "exceed M ell = %g (M L/(2 pi) on a circle of "
-                         "circumference L); no horizon", P, k, b,
-                         a * L / (2 * M_PI));
-      break;
+      holent_gw_raise (fn, HOLENT_EOVERROTATING, NULL, HOLENT_NOINDEX,
+                       "J(%zu) = %g is over-rotating: |J| must not "
+                       "exceed M ell = %g (M L/(2 pi) on a circle of "
+                       "circumference L); no horizon", k, b,
+                       a * L / (2 * M_PI));
     case HOLENT_THERMO_RANGE:
-      mexErrMsgIdAndTxt ("holent:range",
-                         "%s: the state of element %zu (%s = %g, %s = %g) "
-                         "overflows double precision", P, k, an, a, bn, b);
-      break;
+      holent_gw_raise (fn, HOLENT_ERANGE, NULL, HOLENT_NOINDEX,
+                       "the state of element %zu (%s = %g, %s = %g, "
+                       "circumference = %g) overflows double precision",
+                       k, an, a, bn, b, L);
     default:
-      holent_gw_fail (status, P, "state", i);
+      holent_gw_raise (fn, status, an, i, NULL);
     }
 }
 
-static void
-do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+/* The common inputs of both modes: pair, A, B, L of one size n (or
+   scalars), c, G, ell.  */
+typedef struct
 {
-  char pname[16], caller[40] = "btz_thermodynamics";
-  size_t na, nb, nL, k, np = sizeof pairs / sizeof pairs[0];
-  holent_gw_nargs (FN, nlhs, 1, nrhs, 7, 8);
-  if (nrhs > 7)
-    holent_gw_string (prhs[7], FN, "CALLER", caller, sizeof caller);
-  holent_gw_string (prhs[1], FN, "PAIR", pname, sizeof pname);
-  for (k = 0; k < np; k++)
-    if (strcmp (pname, pairs[k].name) == 0)
+  int k;                      /* row of pairs[] */
+  const double *a, *b, *L;    /* L NULL: 2 pi ell */
+  size_t n, step[3];
+  const mxArray *shape;       /* an input of n elements */
+  double u[3];                /* c, G, ell */
+} inputs;
+
+static void
+unpack (const char *fn, const mxArray *prhs[], inputs *in)
+{
+  char pname[16];
+  size_t na, nb, nL = 1;
+  holent_gw_string (prhs[2], fn, "PAIR", pname, sizeof pname);
+  for (in->k = 0; in->k < (int) NPAIRS; in->k++)
+    if (strcmp (pname, pairs[in->k].name) == 0)
       break;
-  if (k == np)
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown PAIR '%s'", pname);
-  const double *a = holent_gw_real (prhs[2], FN, pairs[k].a, &na);
-  const double *b = holent_gw_real (prhs[3], FN, pairs[k].b, &nb);
-  const double *L = holent_gw_real (prhs[4], FN, "circumference", &nL);
-  /* One size n, or a scalar repeated (step 0); the result takes the
-     shape of the first argument with n elements.  */
+  if (in->k == (int) NPAIRS)
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "unknown PAIR '%s'", pname);
+  const char *an = pairs[in->k].pair < 0 ? "A" : pairs[in->k].a;
+  in->a = holent_gw_real (prhs[3], fn, an, &na);
+  in->b = holent_gw_real (prhs[4], fn, pairs[in->k].b, &nb);
+  in->L = NULL;
+  if (!mxIsEmpty (prhs[5]) || !mxIsDouble (prhs[5]))
+    in->L = holent_gw_real (prhs[5], fn, "circumference", &nL);
+  if (pairs[in->k].pair < 0)
+    na = 1;  /* A is not used */
+  /* One size n, or a scalar repeated (step 0).  */
   size_t n = na > nb ? na : nb;
   n = n > nL ? n : nL;
   if (na == 0 || nb == 0 || nL == 0)
     n = 0;
   if ((na != n && na != 1) || (nb != n && nb != 1) || (nL != n && nL != 1))
-    mexErrMsgIdAndTxt ("holent:size", "%s, %s and circumference must "
-                       "have one size or be scalars", pairs[k].a,
-                       pairs[k].b);
-  const mxArray *shape = na == n ? prhs[2] : nb == n ? prhs[3] : prhs[4];
-  size_t step[3] = { na == n ? 1 : 0, nb == n ? 1 : 0, nL == n ? 1 : 0 };
-  double c = holent_gw_scalar (prhs[5], FN, "c");
-  double ell = holent_gw_scalar (prhs[6], FN, "ell");
+    holent_gw_raise (fn, HOLENT_ESIZE, NULL, HOLENT_NOINDEX,
+                     "%s, %s and circumference must have one size or be "
+                     "scalars", an, pairs[in->k].b);
+  in->n = n;
+  in->shape = nb == n ? prhs[4] : (na == n && pairs[in->k].pair >= 0)
+                                  ? prhs[3] : prhs[5];
+  in->step[0] = na == n ? 1 : 0;
+  in->step[1] = nb == n ? 1 : 0;
+  in->step[2] = nL == n ? 1 : 0;
+  holent_gw_units (prhs[6], fn, &in->u[0], &in->u[1], &in->u[2]);
+}
 
-  mxArray *s = mxCreateStructMatrix (1, 1, (int) NFIELDS, fields);
-  double *col[NFIELDS - 1];
-  for (size_t f = 0; f + 1 < NFIELDS; f++)
+static mxArray *
+like (const mxArray *shape)
+{
+  /* every element is written by the core or the array is dropped */
+  return mxCreateUninitNumericArray (mxGetNumberOfDimensions (shape),
+                                     mxGetDimensions (shape),
+                                     mxDOUBLE_CLASS, mxREAL);
+}
+
+static void
+fail (const char *fn, const inputs *in, int st, int why, size_t bad)
+{
+  double ab = pairs[in->k].pair < 0 ? 0.0 : in->a[bad * in->step[0]], bb = in->b[bad * in->step[1]];
+  double Lb = in->L ? in->L[bad * in->step[2]] : 2 * M_PI * in->u[2];
+  state_fail (fn, st, why, pairs[in->k].pair, pairs[in->k].a,
+              pairs[in->k].b, bad, ab, bb, Lb, in->u[0]);
+}
+
+static void
+do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
+          const char *fn)
+{
+  inputs in;
+  holent_gw_nargs (fn, nlhs, 1, nrhs, 7, 7);
+  unpack (fn, prhs, &in);
+  if (pairs[in.k].pair < 0 || pairs[in.k].pair == HOLENT_THERMO_BETA_OMEGA)
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "PAIR '%s' is for hawking_page", pairs[in.k].name);
+  mxArray *s = mxCreateStructMatrix (1, 1, (int) (sizeof fields
+                                                  / sizeof fields[0]),
+                                     fields);
+  double *col[NCOLS];
+  for (size_t f = 0; f < NCOLS; f++)
     {
-      /* every element is written by the core or the array is dropped */
-      mxArray *x = mxCreateUninitNumericArray (mxGetNumberOfDimensions (shape),
-                                               mxGetDimensions (shape),
-                                               mxDOUBLE_CLASS, mxREAL);
+      mxArray *x = like (in.shape);
       mxSetField (s, 0, fields[f], x);
       col[f] = mxGetPr (x);
     }
-  mxArray *dom = mxCreateLogicalArray (mxGetNumberOfDimensions (shape),
-                                       mxGetDimensions (shape));
+  mxArray *dom = mxCreateLogicalArray (mxGetNumberOfDimensions (in.shape),
+                                       mxGetDimensions (in.shape));
   mxSetField (s, 0, "btz_dominates", dom);
+  for (int u = 0; u < 3; u++)
+    mxSetField (s, 0, fields[NCOLS + 1 + u], mxCreateDoubleScalar (in.u[u]));
+  mxSetField (s, 0, "circumference", in.L ? mxDuplicateArray (prhs[5])
+                                   : mxCreateDoubleScalar (2 * M_PI * in.u[2]));
   holent_thermo_table t = {
     col[0], col[1], col[2], col[3], col[4], col[5], col[6], col[7], col[8],
     col[9], col[10], NULL, col[11], col[12], col[13], col[14], col[15],
@@ -181,74 +238,77 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   };
   size_t bad = 0;
   int why = HOLENT_THERMO_OK;
-  int st = holent_thermo_states (c, ell, pairs[k].pair, n, a, b, L, step,
-                                 &t, &bad, &why);
+  int st = holent_thermo_states (in.u[0], in.u[2],
+                                 (holent_thermo_pair) pairs[in.k].pair, in.n,
+                                 in.a, in.b, in.L, in.step, &t, &bad, &why);
   if (st)
     {
-      if (why == HOLENT_THERMO_PARAM && (!(c > 0) || !(ell > 0)
-                                         || !isfinite (c) || !isfinite (ell)))
-        {
-          mxDestroyArray (s);
-          mexErrMsgIdAndTxt ("holent:domain", "%s: c and ell must be "
-                             "positive and finite", caller);
-        }
-      double ab = a[bad * step[0]], bb = b[bad * step[1]];
-      double Lb = L[bad * step[2]];
       mxDestroyArray (s);
-      state_fail (caller, st, why, pairs[k].a, pairs[k].b, bad, ab, bb, Lb, c);
+      fail (fn, &in, st, why, bad);
     }
   plhs[0] = s;
 }
 
 static void
-do_hawking_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+do_hawking_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
+                 const char *fn)
 {
-  static const char P[] = "hawking_page";
-  size_t nO, nL, bad = 0;
-  int why = HOLENT_THERMO_OK;
-  holent_gw_nargs (FN, nlhs, 1, nrhs, 3, 3);
-  const double *Om = holent_gw_real (prhs[1], FN, "Omega", &nO);
-  const double *L = holent_gw_real (prhs[2], FN, "circumference", &nL);
-  if (nO != nL)
-    mexErrMsgIdAndTxt ("holent:size", "Omega and circumference must "
-                       "have one size");
-  plhs[0] = holent_gw_like (prhs[1]);
-  int st = holent_thermo_hawking_page (nO, Om, L, mxGetPr (plhs[0]), &bad,
-                                       &why);
-  if (st == HOLENT_SUCCESS)
-    return;
-  size_t k = bad + 1;
-  switch (why)
+  static const char *f[] = { "T_hp", "Omega", "circumference", "c", "T",
+                             "F_btz", "F_thermal_ads", "btz_dominates" };
+  inputs in;
+  holent_gw_nargs (fn, nlhs, 2, nrhs, 7, 7);
+  unpack (fn, prhs, &in);
+  if (pairs[in.k].pair >= 0 && pairs[in.k].pair != HOLENT_THERMO_T_OMEGA
+      && pairs[in.k].pair != HOLENT_THERMO_BETA_OMEGA
+      && pairs[in.k].pair != HOLENT_THERMO_BETA_LR)
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "PAIR '%s' is not for hawking_page", pairs[in.k].name);
+  mxArray *s = mxCreateStructMatrix (1, 1, 8, f);
+  double *col[7];
+  for (int j = 0; j < 7; j++)
     {
-    case HOLENT_THERMO_NOT_FINITE:
-      mexErrMsgIdAndTxt ("holent:nan", "%s: Omega must not be NaN (element "
-                         "%zu)", P, k);
-      break;
-    case HOLENT_THERMO_PARAM:
-      mexErrMsgIdAndTxt ("holent:domain", "%s: circumference(%zu) = %g must "
-                         "be positive and finite", P, k, L[bad]);
-      break;
-    case HOLENT_THERMO_OMEGA:
-      mexErrMsgIdAndTxt ("holent:domain", "%s: Omega(%zu) = %g must lie in "
-                         "(-1, 1)", P, k, Om[bad]);
-      break;
-    default:
-      holent_gw_fail (st, P, "Omega", bad);
+      mxArray *x = j == 3 ? mxCreateDoubleScalar (in.u[0]) : like (in.shape);
+      mxSetField (s, 0, f[j], x);
+      col[j] = mxGetPr (x);
     }
+  mxArray *dom = mxCreateLogicalArray (mxGetNumberOfDimensions (in.shape),
+                                       mxGetDimensions (in.shape));
+  mxSetField (s, 0, "btz_dominates", dom);
+  size_t bad = 0;
+  int why = HOLENT_THERMO_OK;
+  int st = holent_thermo_hp_compare (in.u[0], in.u[2], pairs[in.k].pair,
+                                     in.n, in.a, in.b, in.L, in.step,
+                                     col[0], col[1], col[4], col[5], col[6],
+                                     (unsigned char *) mxGetLogicals (dom),
+                                     &bad, &why);
+  if (st)
+    {
+      mxDestroyArray (s);
+      fail (fn, &in, st, why, bad);
+    }
+  /* the circumference of every point */
+  for (size_t i = 0; i < in.n; i++)
+    col[2][i] = in.L ? in.L[i * in.step[2]] : 2 * M_PI * in.u[2];
+  plhs[0] = mxDuplicateArray (mxGetField (s, 0, "T_hp"));
+  if (nlhs > 1)
+    plhs[1] = s;
+  else
+    mxDestroyArray (s);
 }
 
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  char mode[16];
+  char mode[16], fn[64];
   holent_gw_init ();
-  if (nrhs < 1)
-    mexErrMsgIdAndTxt ("holent:nargs", "expected a MODE");
-  holent_gw_string (prhs[0], FN, "MODE", mode, sizeof mode);
+  holent_gw_nargs (GW, nlhs, 2, nrhs, 2, 7);
+  holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
+  holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
   if (strcmp (mode, "state") == 0)
-    do_state (nlhs, plhs, nrhs, prhs);
+    do_state (nlhs, plhs, nrhs, prhs, fn);
   else if (strcmp (mode, "hawking_page") == 0)
-    do_hawking_page (nlhs, plhs, nrhs, prhs);
+    do_hawking_page (nlhs, plhs, nrhs, prhs, fn);
   else
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown MODE '%s'", mode);
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "unknown MODE '%s' of %s", mode, GW);
 }

@@ -4,6 +4,7 @@
 #include <stdarg.h>
 #include <stdio.h>
 #include <string.h>
+#include <strings.h>
 #include <gsl/gsl_errno.h>
 #include "holent_gw.h"
 #include "holent_gw_poll.h"
@@ -116,62 +117,288 @@ holent_gw_string (const mxArray *a, const char *fn, const char *name,
                      "%s must be a short string", name);
 }
 
+/* The unpacker of ads3_background structs: the struct's parameters go to
+   the core constructor (holent_bg3_init, the one validator), and every
+   derived field must match what it builds.  Errors are
+   holent:background naming FN and the field.  */
+
+#define BG_MAKE "make BG with ads3_background"
+
 static const mxArray *
 bg_field (const mxArray *s, const char *fn, const char *field)
 {
   const mxArray *f = mxGetField (s, 0, field);
   if (f == NULL)
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
-                     "BG is missing field '%s': make it with "
-                     "ads3_background", field);
+                     "BG is not a background struct made by "
+                     "ads3_background: field '%s' is missing", field);
   return f;
 }
 
-static const struct
+static void
+bg_word (const mxArray *s, const char *fn, const char *field, char *buf,
+         size_t n)
 {
-  const char *name;
-  holent_bulk bulk;
-} bulk_names[] = {
-  { "poincare", HOLENT_BULK_POINCARE },
-  { "global_ads", HOLENT_BULK_GLOBAL_ADS },
-  { "planar_btz", HOLENT_BULK_PLANAR_BTZ },
-  { "btz", HOLENT_BULK_BTZ },
-  { "thermal_ads", HOLENT_BULK_THERMAL_ADS },
-  { "rotating_btz", HOLENT_BULK_ROTATING_BTZ },
-  { "planar_rotating_btz", HOLENT_BULK_PLANAR_ROTATING_BTZ },
-  { "conical_defect", HOLENT_BULK_CONICAL_DEFECT },
-};
+  const mxArray *a = bg_field (s, fn, field);
+  if (!mxIsChar (a) || mxGetM (a) > 1 || mxGetN (a) + 1 > n
+      || mxGetString (a, buf, (mwSize) n) != 0)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.%s must be a short string: " BG_MAKE, field);
+}
+
+static double
+bg_num (const mxArray *s, const char *fn, const char *field)
+{
+  const mxArray *a = bg_field (s, fn, field);
+  if (!mxIsDouble (a) || mxIsComplex (a) || mxIsSparse (a)
+      || mxGetNumberOfElements (a) != 1 || isnan (mxGetPr (a)[0]))
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.%s must be a real double scalar, not NaN: " BG_MAKE,
+                     field);
+  return mxGetPr (a)[0];
+}
+
+static int
+bg_flag (const mxArray *s, const char *fn, const char *field)
+{
+  const mxArray *a = bg_field (s, fn, field);
+  double v = -1.0;
+  if (mxGetNumberOfElements (a) == 1 && !mxIsSparse (a) && !mxIsComplex (a))
+    {
+      if (mxIsLogical (a))
+        v = mxGetLogicals (a)[0] ? 1.0 : 0.0;
+      else if (mxIsDouble (a))
+        v = mxGetPr (a)[0];
+    }
+  if (!(v == 0.0 || v == 1.0))
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.%s must be true or false: " BG_MAKE, field);
+  return v == 1.0;
+}
+
+/* Stored and rebuilt values agree (rounding aside: the struct may have
+   been made from other but equivalent parameters, beta and Omega, say).  */
+static int
+bg_same (double a, double b)
+{
+  return a == b
+         || (isfinite (a) && isfinite (b)
+             && fabs (a - b) <= 1e-12 * fmax (fabs (a), fabs (b)));
+}
 
 void
-holent_gw_bg (const mxArray *s, const char *fn, holent_geo_bg *bg)
+holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg)
 {
-  char name[32];
-  size_t k, nb = sizeof bulk_names / sizeof bulk_names[0];
-  int st;
+  char bulk[32], word[32];
+  holent_bg3_spec sp;
+  holent_err e;
   if (s == NULL || !mxIsStruct (s) || mxGetNumberOfElements (s) != 1)
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
-                     "BG must be a scalar struct from ads3_background");
-  holent_gw_string (bg_field (s, fn, "bulk"), fn, "BG.bulk", name,
-                    sizeof name);
-  for (k = 0; k < nb; k++)
-    if (strcmp (name, bulk_names[k].name) == 0)
+                     "BG must be a background struct made by "
+                     "ads3_background");
+  bg_word (s, fn, "bulk", bulk, sizeof bulk);
+  int b = holent_bg3_bulk_from_name (bulk);
+  if (b < 0)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "unknown BG.bulk '%s': " BG_MAKE, bulk);
+  memset (&sp, 0, sizeof sp);
+  switch (b)
+    {
+    case HOLENT_BULK_POINCARE:
+    case HOLENT_BULK_GLOBAL_ADS:
+      sp.state = HOLENT_BG3_VACUUM;
       break;
-  if (k == nb)
+    case HOLENT_BULK_CONICAL_DEFECT:
+      sp.state = HOLENT_BG3_HEAVY;
+      break;
+    case HOLENT_BULK_ROTATING_BTZ:
+    case HOLENT_BULK_PLANAR_ROTATING_BTZ:
+      sp.state = HOLENT_BG3_ROTATING;
+      break;
+    default:
+      sp.state = HOLENT_BG3_THERMAL;
+      break;
+    }
+  sp.circle = !(b == HOLENT_BULK_POINCARE || b == HOLENT_BULK_PLANAR_BTZ
+                || b == HOLENT_BULK_PLANAR_ROTATING_BTZ);
+  bg_word (s, fn, "boundary", word, sizeof word);
+  if (strcmp (word, sp.circle ? "circle" : "line") != 0)
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
-                     "unknown BG.bulk '%s'", name);
-  st = holent_geo_bg_init (
-      bg, bulk_names[k].bulk,
-      holent_gw_scalar (bg_field (s, fn, "circumference"), fn,
-                        "BG.circumference"),
-      holent_gw_scalar (bg_field (s, fn, "cutoff"), fn, "BG.cutoff"),
-      holent_gw_scalar (bg_field (s, fn, "beta_L"), fn, "BG.beta_L"),
-      holent_gw_scalar (bg_field (s, fn, "beta_R"), fn, "BG.beta_R"),
-      holent_gw_scalar (bg_field (s, fn, "alpha"), fn, "BG.alpha"),
-      holent_gw_scalar (bg_field (s, fn, "c"), fn, "BG.c"));
-  if (st)
+                     "BG.boundary must be \"%s\" for the bulk '%s'",
+                     sp.circle ? "circle" : "line", bulk);
+  /* the thermofield double is read as one of its exteriors */
+  bg_word (s, fn, "state", word, sizeof word);
+  if (b == HOLENT_BULK_THERMAL_ADS && strcmp (word, "rotating") == 0)
+    sp.state = HOLENT_BG3_ROTATING;  /* rotating, below Hawking-Page */
+  if (strcmp (word, holent_bg3_state_name (sp.state)) != 0
+      && !(strcmp (word, "tfd") == 0 && (b == HOLENT_BULK_BTZ
+                                         || b == HOLENT_BULK_PLANAR_BTZ)))
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
-                     "BG has inconsistent parameters (%s)",
-                     holent_strerror (st));
+                     "BG.state '%s' does not fit the bulk '%s': " BG_MAKE,
+                     word, bulk);
+
+  /* the parameters */
+  static const struct { const char *field; int param; } par[] = {
+    { "c", HOLENT_BG3_C }, { "G", HOLENT_BG3_G }, { "ell", HOLENT_BG3_ELL },
+    { "cutoff", HOLENT_BG3_CUTOFF },
+    { "circumference", HOLENT_BG3_CIRCUMFERENCE },
+    { "beta_L", HOLENT_BG3_BETA_L }, { "beta_R", HOLENT_BG3_BETA_R },
+    { "alpha", HOLENT_BG3_ALPHA } };
+  double v[sizeof par / sizeof par[0]];
+  for (size_t k = 0; k < sizeof par / sizeof par[0]; k++)
+    {
+      v[k] = bg_num (s, fn, par[k].field);
+      sp.value[par[k].param] = v[k];
+    }
+  sp.given = (1u << HOLENT_BG3_C) | (1u << HOLENT_BG3_G)
+             | (1u << HOLENT_BG3_ELL) | (1u << HOLENT_BG3_CUTOFF);
+  if (sp.circle)
+    sp.given |= 1u << HOLENT_BG3_CIRCUMFERENCE;
+  switch (sp.state)
+    {
+    case HOLENT_BG3_THERMAL:
+      sp.given |= 1u << HOLENT_BG3_BETA;
+      sp.value[HOLENT_BG3_BETA] = sp.value[HOLENT_BG3_BETA_L];
+      break;
+    case HOLENT_BG3_ROTATING:
+      sp.given |= (1u << HOLENT_BG3_BETA_L) | (1u << HOLENT_BG3_BETA_R);
+      break;
+    case HOLENT_BG3_HEAVY:
+      sp.given |= 1u << HOLENT_BG3_ALPHA;
+      break;
+    default:
+      break;
+    }
+  if (sp.circle && (sp.state == HOLENT_BG3_THERMAL
+                    || sp.state == HOLENT_BG3_ROTATING))
+    {
+      sp.given |= 1u << HOLENT_BG3_SADDLE;
+      sp.value[HOLENT_BG3_SADDLE] = b == HOLENT_BULK_THERMAL_ADS
+                                    ? HOLENT_BG3_SADDLE_THERMAL_ADS
+                                    : HOLENT_BG3_SADDLE_BTZ;
+    }
+  if (holent_bg3_init (bg, &sp, &e))
+    {
+      if (e.arg >= 0)
+        holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                         "BG.%s: " BG_MAKE, e.reason);
+      holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                       "BG: %s: " BG_MAKE, e.reason);
+    }
+
+  /* every derived field as the core builds it */
+  if (!sp.circle && !isinf (v[4]))
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.circumference must be Inf on a line");
+  const struct { const char *field; double want; } der[] = {
+    { "beta_L", bg->beta_L }, { "beta_R", bg->beta_R },
+    { "alpha", bg->alpha }, { "beta", bg->beta },
+    { "T", bg->T }, { "T_L", bg->T_L }, { "T_R", bg->T_R },
+    { "Omega", bg->Omega }, { "h", bg->h }, { "S_BH", bg->S_BH },
+    { "entropy_density", bg->s_density }, { "r_plus", bg->r_plus },
+    { "r_minus", bg->r_minus }, { "M", bg->M }, { "J", bg->J },
+    { "L0", bg->L0 }, { "Lbar0", bg->Lbar0 } };
+  for (size_t k = 0; k < sizeof der / sizeof der[0]; k++)
+    {
+      double x = bg_num (s, fn, der[k].field);
+      if (!bg_same (x, der[k].want))
+        holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                         "BG.%s = %g does not match its parameters (%g): "
+                         BG_MAKE, der[k].field, x, der[k].want);
+    }
+  if (bg_flag (s, fn, "horizon") != bg->horizon
+      || bg_flag (s, fn, "pure") != bg->pure)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.horizon and BG.pure must be %s and %s for the "
+                     "bulk '%s': " BG_MAKE, bg->horizon ? "true" : "false",
+                     bg->pure ? "true" : "false", bulk);
+  bg_word (s, fn, "saddle", word, sizeof word);
+  if (strcmp (word, holent_bg3_saddle_name (bg->saddle)) != 0)
+    holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
+                     "BG.saddle must be '%s' for the bulk '%s': " BG_MAKE,
+                     holent_bg3_saddle_name (bg->saddle), bulk);
+}
+
+void
+holent_gw_bg (const mxArray *s, const char *fn, holent_geo_bg *geo)
+{
+  holent_bg3 bg;
+  holent_gw_bg3 (s, fn, &bg);
+  *geo = bg.geo;
+}
+
+/* A numeric option value as a double; holent:type naming it otherwise.  */
+static double
+opt_num (const mxArray *a, const char *fn, const char *name)
+{
+  if (!mxIsNumeric (a) || mxIsLogical (a) || mxGetNumberOfElements (a) != 1)
+    holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                     "%s must be a real numeric scalar", name);
+  if (mxIsComplex (a) || mxIsSparse (a))
+    holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                     "%s must be real and full, not complex or sparse", name);
+  return mxGetScalar (a);
+}
+
+void
+holent_gw_units (const mxArray *o, const char *fn, double *c, double *G,
+                 double *ell)
+{
+  static const int p[] = { HOLENT_BG3_C, HOLENT_BG3_G, HOLENT_BG3_ELL };
+  holent_bg3_spec sp;
+  holent_err e;
+  memset (&sp, 0, sizeof sp);
+  if (o == NULL || !mxIsStruct (o) || mxGetNumberOfElements (o) != 1)
+    holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                     "OPTS must be a scalar struct of options");
+  for (int k = 0; k < 3; k++)
+    {
+      const char *name = holent_bg3_param_name (p[k]);
+      const mxArray *a = mxGetField (o, 0, name);
+      if (a != NULL)
+        {
+          sp.given |= 1u << p[k];
+          sp.value[p[k]] = opt_num (a, fn, name);
+        }
+    }
+  if (holent_bg3_units (&sp, c, G, ell, &e))
+    holent_gw_raise (fn, e.status, NULL, HOLENT_NOINDEX, "%s", e.reason);
+}
+
+void
+holent_gw_bg3_opts (const mxArray *o, const char *fn, holent_bg3_spec *sp)
+{
+  if (o == NULL || !mxIsStruct (o) || mxGetNumberOfElements (o) != 1)
+    holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                     "OPTS must be a scalar struct of options");
+  for (int p = 0; p < HOLENT_BG3_NPARAM; p++)
+    {
+      const char *name = holent_bg3_param_name (p);
+      const mxArray *a = mxGetField (o, 0, name);
+      if (a == NULL)
+        continue;
+      sp->given |= 1u << p;
+      if (p == HOLENT_BG3_SADDLE)
+        {
+          char w[16];
+          int k;
+          if (!mxIsChar (a) || mxGetM (a) > 1 || mxGetN (a) + 1 > sizeof w
+              || mxGetString (a, w, sizeof w) != 0)
+            holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
+                             "saddle must be a short string");
+          for (k = HOLENT_BG3_SADDLE_DOMINANT;
+               k <= HOLENT_BG3_SADDLE_THERMAL_ADS; k++)
+            if (strcasecmp (w, holent_bg3_saddle_name (k)) == 0)
+              break;
+          if (k > HOLENT_BG3_SADDLE_THERMAL_ADS)
+            holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                             "unknown saddle '%s' (expected one of: "
+                             "dominant, btz, thermal_ads)", w);
+          sp->value[p] = k;
+        }
+      else if (p < HOLENT_BG3_SHOCK_ALPHA)  /* shocks: the tfd's own */
+        sp->value[p] = opt_num (a, fn, name);
+    }
 }
 
 void

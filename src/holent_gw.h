@@ -13,6 +13,7 @@
 #include "mex.h"
 #include "core/holent.h"
 #include "core/holent_geo.h"
+#include "core/holent_bg3.h"
 
 /* Switch GSL's abort()ing error handler off: call first in every
    gateway.  */
@@ -56,8 +57,26 @@ double holent_gw_scalar (const mxArray *a, const char *fn, const char *name);
 void holent_gw_string (const mxArray *a, const char *fn, const char *name,
                        char *buf, size_t bufsz);
 
-/* Unpack a background struct made by ads3_background.  */
+/* Unpack a background struct made by ads3_background: its parameters
+   are checked by the one core constructor (holent_bg3_init) and every
+   derived field must match what that builds; holent:background naming FN
+   and the field otherwise.  holent_gw_bg keeps the kernels' part.  */
 void holent_gw_bg (const mxArray *s, const char *fn, holent_geo_bg *bg);
+void holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg);
+
+/* The options struct O of ads3_background (fields named as the
+   parameters of holent_bg3.h, each optional) into *SP (given bits and
+   values; state and circle left alone); holent:type or holent:option
+   naming the option when a value is not a real numeric scalar (the
+   saddle: a known word).  */
+void holent_gw_bg3_opts (const mxArray *o, const char *fn,
+                         holent_bg3_spec *sp);
+
+/* Central charge, Newton constant and AdS radius (Brown-Henneaux, in the
+   core) from the fields c, G, ell of the options struct O, each
+   optional; other fields are ignored.  */
+void holent_gw_units (const mxArray *o, const char *fn, double *c,
+                      double *G, double *ell);
 
 /* Raise the error matching a core status; index (0-based, or (size_t)-1
    when none) is reported 1-based.  */

@@ -442,9 +442,13 @@
 %!        "__holent_rt__", {"check", bc, [0 1; 2 3]}, 2;
 %!        "__holent_ewcs__", {ads3_background("vacuum", "line"), [0 1], [2 3]}, 1;
 %!        "__holent_ineq__", {Sv, "cyclic", 3, 1, 1e-10}, 1;
-%!        "__holent_thermo__", {"state", "T_Omega", 0.5, 0.2, 2*pi, 12, 1}, 2;
-%!        "__holent_thermo__", {"state", "M_J", [1 2], [0.5 1], 2*pi, 12, 1, "btz_thermodynamics"}, 2;
-%!        "__holent_thermo__", {"hawking_page", 0.2, 2*pi}, 2;
+%!        "__holent_thermo__", {"state", "btz_thermodynamics", "T_Omega", 0.5, 0.2, 2*pi, struct("c", 12)}, 2;
+%!        "__holent_thermo__", {"state", "btz_thermodynamics", "M_J", [1 2], [0.5 1], [], struct("c", 12, "ell", 1)}, 2;
+%!        "__holent_thermo__", {"hawking_page", "hawking_page", "Omega", [], 0.2, 2*pi, struct()}, 2;
+%!        "__holent_thermo__", {"hawking_page", "hawking_page", "beta_LR", [1 2], 3, [], struct("G", 0.1)}, 2;
+%!        "__holent_background__", {"ads3", "ads3_background", "rotating", "circle", struct("beta", 1, "Omega", 0.2)}, 2;
+%!        "__holent_background__", {"check", "rt_entropy", bc}, 2;
+%!        "__holent_background__", {"units", "hawking_page", struct("c", 6, "ell", 2)}, 2;
 %!        "__holent_hd__", {"strip", bh, [0.5 1], 1}, 2;
 %!        "__holent_hd__", {"ball", bh, 0.5}, 2;
 %!        "__holent_hdbg__", {4, "tabulated", 1, 1, 1e-6, z, 1 - z.^4, 0}, 1;

@@ -40,7 +40,7 @@ function bg = __holent_bcft_background__ (fn, state, boundary, varargin)
   if (isfield (o, "beta") && isfield (o, "T"))
     error ("holent:option", "%s: give either 'beta' or 'T', not both", fn);
   endif
-  [c, G, ell] = __holent_central_charge__ (fn, o);
+  [c, G, ell] = __holent_background__ ("units", fn, o);
   cutoff = 1e-6;
   if (isfield (o, "cutoff"))
     cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");

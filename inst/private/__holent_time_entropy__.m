@@ -86,7 +86,7 @@ function varargout = __holent_time_entropy__ (fn, varargin)
     case "check"
       [f, bg] = deal (varargin{:});
       if (! __holent_time_entropy__ ("timed", bg, {}))
-        __holent_check_bg__ (f, bg);
+        __holent_background__ ("check", f, bg);
       endif
     case "shape"
       [R, sz, t] = deal (varargin{:});

@@ -22,7 +22,6 @@ function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
     return;
   endif
   [~, gw] = __holent_is_bcft__ (bg);
-  __holent_check_bg__ (fn, bg);
   [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args);
   nu = numel (unions);
   U = cell (prod (sz), nu);

@@ -82,6 +82,14 @@ to_uv (double c, double L, double R, holent_thermo_pair pair, double a,
       }
       return HOLENT_SUCCESS;
 
+    case HOLENT_THERMO_BETA_OMEGA:
+      if (!isfinite (a) || !isfinite (b))
+        return refuse (reason, HOLENT_THERMO_NOT_FINITE, HOLENT_EINVAL);
+      if (!(a > 0))
+        return refuse (reason, HOLENT_THERMO_BETA, HOLENT_EDOM);
+      return to_uv (c, L, R, HOLENT_THERMO_T_OMEGA, 1 / a, b, u, v, w,
+                    reason);
+
     case HOLENT_THERMO_T_LR:
       if (!isfinite (a) || !isfinite (b))
         return refuse (reason, HOLENT_THERMO_NOT_FINITE, HOLENT_EINVAL);
@@ -329,6 +337,63 @@ holent_thermo_hawking_page (size_t n, const double *Omega, const double *L,
         }
       /* beta^2 (1 - Omega)(1 + Omega) = L^2, factored for |Omega| near 1 */
       T_hp[i] = sqrt ((1 - Omega[i]) * (1 + Omega[i])) / L[i];
+    }
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_thermo_hp_compare (double c, double ell, int pair, size_t n,
+                          const double *a, const double *b, const double *L,
+                          const size_t *step, double *T_hp, double *Omega,
+                          double *T, double *F, double *F_thermal_ads,
+                          unsigned char *btz_dominates, size_t *bad,
+                          int *reason)
+{
+  if (reason)
+    *reason = HOLENT_THERMO_OK;
+  if (n > 0 && (b == NULL || (pair >= 0 && a == NULL)))
+    return refuse (reason, HOLENT_THERMO_PARAM, HOLENT_EINVAL);
+  const size_t sa = step ? step[0] : 1, sb = step ? step[1] : 1,
+               sL = step ? step[2] : 1;
+  for (size_t i = 0; i < n; i++)
+    {
+      holent_thermo_state st;
+      double Li = L ? L[i * sL] : 2 * M_PI * ell, om = b[i * sb], th = 0;
+      int status;
+      if (pair == HOLENT_THERMO_BETA_LR)
+        {
+          status = holent_thermo_state_from (c, ell, Li, HOLENT_THERMO_BETA_LR,
+                                             a[i * sa], om, &st, reason);
+          om = st.Omega;
+        }
+      else
+        status = holent_thermo_hawking_page (1, &om, &Li, &th, NULL, reason);
+      if (status == HOLENT_SUCCESS && pair == HOLENT_THERMO_BETA_LR)
+        status = holent_thermo_hawking_page (1, &om, &Li, &th, NULL, reason);
+      else if (status == HOLENT_SUCCESS)
+        status = holent_thermo_state_from (c, ell, Li,
+                                           pair < 0 ? HOLENT_THERMO_T_OMEGA
+                                                    : (holent_thermo_pair) pair,
+                                           pair < 0 ? th : a[i * sa], om,
+                                           &st, reason);
+      if (status)
+        {
+          if (bad)
+            *bad = i;
+          return status;
+        }
+      if (T_hp)
+        T_hp[i] = th;
+      if (Omega)
+        Omega[i] = om;
+      if (T)
+        T[i] = pair < 0 ? th : st.T;
+      if (F)
+        F[i] = st.F;
+      if (F_thermal_ads)
+        F_thermal_ads[i] = st.F_thermal_ads;
+      if (btz_dominates)
+        btz_dominates[i] = (unsigned char) st.btz_dominates;
     }
   return HOLENT_SUCCESS;
 }

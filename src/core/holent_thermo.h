@@ -24,7 +24,8 @@ typedef enum
   HOLENT_THERMO_T_OMEGA = 1,  /* a = T, b = Omega                         */
   HOLENT_THERMO_T_LR = 2,     /* a = T_L, b = T_R                         */
   HOLENT_THERMO_BETA_LR = 3,  /* a = beta_L, b = beta_R (one may be Inf)  */
-  HOLENT_THERMO_M_J = 4       /* a = M, b = J                             */
+  HOLENT_THERMO_M_J = 4,      /* a = M, b = J                             */
+  HOLENT_THERMO_BETA_OMEGA = 5 /* a = beta = 1/T, b = Omega               */
 } holent_thermo_pair;
 
 /* Why a state was refused (the status is HOLENT_EINVAL for NOT_FINITE and
@@ -100,5 +101,20 @@ int holent_thermo_states (double c, double ell, holent_thermo_pair pair,
 int holent_thermo_hawking_page (size_t n, const double *Omega,
                                 const double *L, double *T_hp, size_t *bad,
                                 int *reason);
+
+/* The comparison of hawking_page: at n points on circles L[i sL] (L
+ * NULL: 2 pi ell) the transition temperature T_hp and the BTZ state of
+ * the pair (a, b) with its boundary velocity Omega, temperature T, grand
+ * potential F, that of thermal AdS and whether BTZ dominates.  PAIR is
+ * T_OMEGA, BETA_OMEGA or BETA_LR, or -1 for the state at the transition
+ * itself (b = Omega, a unused, T = T_hp).  Any output may be NULL.  On
+ * failure *bad is the first refused point and *reason why.  */
+int holent_thermo_hp_compare (double c, double ell, int pair, size_t n,
+                              const double *a, const double *b,
+                              const double *L, const size_t *step,
+                              double *T_hp, double *Omega, double *T,
+                              double *F, double *F_thermal_ads,
+                              unsigned char *btz_dominates, size_t *bad,
+                              int *reason);
 
 #endif /* HOLENT_THERMO_H */

@@ -309,6 +309,59 @@ test_extremal_and_hp (void)
     }
 }
 
+/* hawking_page's comparison: at the transition the two grand potentials
+   tie (Hawking and Page 1983); (beta, Omega) is the state (1/beta, Omega);
+   (beta_L, beta_R) gives Omega = (beta_R - beta_L)/(beta_R + beta_L) and
+   T_hp = sqrt(1 - Omega^2)/L; every refusal.  */
+static void
+test_hp_compare (void)
+{
+  const double c = 12, ell = 1, L[3] = { 2, 3, 5 };
+  const double Om[3] = { -0.5, 0, 0.6 }, beta[3] = { 0.5, 2, 9 };
+  const double bl[3] = { 0.4, 1, 3 }, br[3] = { 0.9, 1, 2 };
+  double Th[3], O[3], T[3], F[3], Ft[3], T2[3], F2[3];
+  unsigned char dom[3];
+  size_t bad = 9;
+  int why;
+  HT_STATUS (holent_thermo_hp_compare (c, ell, -1, 3, NULL, Om, L, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_SUCCESS);
+  for (int i = 0; i < 3; i++)
+    {
+      HT_CLOSE (F[i], Ft[i], 1e-12);
+      HT_CLOSE (T[i], Th[i], 0);
+      HT_CLOSE (Th[i], sqrt (1 - Om[i] * Om[i]) / L[i], 1e-15);
+    }
+  double Tb[3] = { 1 / beta[0], 1 / beta[1], 1 / beta[2] };
+  HT_STATUS (holent_thermo_hp_compare (c, ell, HOLENT_THERMO_BETA_OMEGA, 3, beta, Om, L, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_SUCCESS);
+  HT_STATUS (holent_thermo_hp_compare (c, ell, HOLENT_THERMO_T_OMEGA, 3, Tb, Om, L, NULL, Th, O, T2, F2, Ft, NULL, &bad, &why), HOLENT_SUCCESS);
+  for (int i = 0; i < 3; i++)
+    {
+      HT_CLOSE (T[i], T2[i], 1e-14);
+      HT_CLOSE (F[i], F2[i], 1e-13);
+      /* BTZ dominates above T_hp */
+      HT_CHECK (dom[i] == (T[i] > Th[i]), "point %d", i);
+    }
+  HT_STATUS (holent_thermo_hp_compare (c, ell, HOLENT_THERMO_BETA_LR, 3, bl, br, NULL, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_SUCCESS);
+  for (int i = 0; i < 3; i++)
+    {
+      HT_CLOSE (O[i], (br[i] - bl[i]) / (br[i] + bl[i]), 1e-14);
+      HT_CLOSE (Th[i], sqrt (1 - O[i] * O[i]) / (2 * M_PI), 1e-14);
+      /* beta_L beta_R < L^2 = (2 pi)^2 */
+      HT_CHECK (dom[i] == (bl[i] * br[i] < 4 * M_PI * M_PI), "point %d", i);
+    }
+  /* refusals: pointers, beta, Omega, circumference, |Omega| = 1 by rounding */
+  HT_STATUS (holent_thermo_hp_compare (c, ell, -1, 1, NULL, NULL, L, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_EINVAL);
+  const double neg[2] = { 1, -1 }, one[2] = { 0, 1 }, Lbad[2] = { 1, 0 };
+  HT_STATUS (holent_thermo_hp_compare (c, ell, HOLENT_THERMO_BETA_OMEGA, 2, neg, Om, L, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_EDOM);
+  HT_CHECK (bad == 1 && why == HOLENT_THERMO_BETA, "bad %zu why %d", bad, why);
+  HT_STATUS (holent_thermo_hp_compare (c, ell, -1, 2, NULL, one, L, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_EDOM);
+  HT_CHECK (bad == 1 && why == HOLENT_THERMO_OMEGA, "bad %zu why %d", bad, why);
+  HT_STATUS (holent_thermo_hp_compare (c, ell, -1, 2, NULL, Om, Lbad, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_EDOM);
+  HT_CHECK (bad == 1 && why == HOLENT_THERMO_PARAM, "bad %zu why %d", bad, why);
+  const double huge[1] = { 1e308 }, two[1] = { 2 };
+  HT_STATUS (holent_thermo_hp_compare (c, ell, HOLENT_THERMO_BETA_LR, 1, huge, two, NULL, NULL, Th, O, T, F, Ft, dom, &bad, &why), HOLENT_EDOM);
+  HT_CHECK (why == HOLENT_THERMO_OMEGA, "why %d", why);
+}
+
 int
 main (void)
 {
@@ -316,5 +369,6 @@ main (void)
   test_errors ();
   test_metric ();
   test_extremal_and_hp ();
+  test_hp_compare ();
   return HT_DONE ();
 }
