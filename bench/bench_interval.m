@@ -50,7 +50,7 @@ function bench_interval ()
   m = 2000;
   t1 = per_call (@() interval_entropy (bg, 0.5), m);
   t2 = per_call (@() geodesic_length (bg, 0.1, 0.6), m);
-  t3 = per_call (@() __holent_interval__ (bg, 0.5), m);
+  t3 = per_call (@() __holent_interval__ ("entropy", "interval_entropy", bg, 0.5), m);
   t4 = per_call (@() (bg.c / 3) * log ((bg.beta / (pi * bg.cutoff)) * sinh (pi * 0.5 / bg.beta)), m);
   printf ("fixed cost of one call (median of %d): interval_entropy %.1f us, geodesic_length %.1f us,\n",
           m, 1e6 * t1, 1e6 * t2);

@@ -157,7 +157,7 @@ function rep = entropy_inequalities (Svec, varargin)
 endfunction
 
 function s = one_family (Svec, fam, m, complete, tol, names)
-  [cnt, viol, worst, masks, und] = __holent_ineq__ (Svec, fam, m, double (complete), tol);
+  [cnt, viol, worst, masks, und] = __holent_ineq__ ("eval", "entropy_inequalities", Svec, fam, m, double (complete), tol);
   s.count = cnt;
   s.violated = viol;
   s.undecided = und;

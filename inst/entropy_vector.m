@@ -15,7 +15,9 @@
 ## @var{Svec} is a column of 2^N - 1 entropies: @code{Svec(k)} is the
 ## entropy of the union of the parties whose bits are set in k (bit 0 =
 ## party 1), computed by @code{rt_entropy} with the same minimisation over
-## every RT candidate.  @var{masks} is the (2^N - 1) x N logical matrix
+## every RT candidate.  An error in one party names it
+## (@qcode{"PARTIES@{2@}"}), an overlap of two parties names both rows.
+## @var{masks} is the (2^N - 1) x N logical matrix
 ## with @code{masks(k, j)} true when party j is in subset k, i.e.
 ## @code{bitget (k, j)}.
 ##
@@ -98,41 +100,13 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
     parties{j} = full (double (a));
   endfor
 
-  ## Each party alone first: an error inside one party names it.
-  try
-    S1 = rt_entropy (bg, parties);
-  catch err
-    for j = 1:N
-      try
-        rt_entropy (bg, parties{j});
-      catch e2
-        ## rt_entropy's message, about its argument A: name the party
-        msg = regexprep (e2.message, '^rt_entropy: ', '');
-        msg = regexprep (msg, '(?<!\w)A(?!\w)', sprintf ("PARTIES{%d}", j));
-        error (e2.identifier, "%s: party %d: %s", fn, j, msg);
-      end_try_catch
-    endfor
-    rethrow (err);
-  end_try_catch
-  ## Then the whole union: an overlap names the first two parties that meet.
-  try
-    Sall = rt_entropy (bg, vertcat (parties{:}));
-  catch err
-    if (strcmp (err.identifier, "holent:overlap"))
-      for i = 1:N
-        for j = i+1:N
-          try
-            rt_entropy (bg, [parties{i}; parties{j}]);
-          catch e2
-            if (strcmp (e2.identifier, "holent:overlap"))
-              error ("holent:overlap", "%s: parties %d and %d overlap", fn, i, j);
-            endif
-          end_try_catch
-        endfor
-      endfor
-    endif
-    rethrow (err);
-  end_try_catch
+  ## Each party alone first (the core names it, PARTIES{j}), then the
+  ## parties for disjointness (naming the two rows that meet).
+  [S1, nshort] = __holent_rt__ ("entropy", fn, "PARTIES", bg, parties);
+  if (N > 1)
+    names = arrayfun (@(j) sprintf ("PARTIES{%d}", j), 1:N, "uniformoutput", false);
+    __holent_rt__ ("parties", fn, names(:), false (N, 1), bg.circumference, parties(:));
+  endif
 
   ## Unions: subset 2^(j-1) + r (r < 2^(j-1)) is subset r plus party j.
   M = 2^N - 1;
@@ -148,17 +122,21 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   single = (2 .^ (0:N-1))';
   multi = true (M, 1);
   multi(single) = false;
-  multi(M) = false;
   Svec = zeros (M, 1);
   Svec(single) = S1(:);
-  Svec(M) = Sall;
   ## In blocks, to bound the memory held by one call.
   idx = find (multi);
   blk = 4096;
   for b = 1:blk:numel (idx)
     sel = idx(b:min (b + blk - 1, numel (idx)));
-    Svec(sel) = reshape (rt_entropy (bg, U(sel)), [], 1);
+    [Svec(sel), ns] = __holent_rt__ ("entropy", fn, "a union of the parties", bg, U(sel));
+    nshort += ns;
   endfor
+  if (nshort > 0)
+    warning ("holent:cutoff",
+             "%s: some interval or gap is not longer than twice the cutoff %g",
+             fn, bg.cutoff);
+  endif
 
   if (purifier)
     ## S(X u O) = S(P \ X) (purity of the global state), S(O) = S(P).
@@ -349,12 +327,12 @@ endfunction
 %!error <party 2 must be a non-empty n x 2> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], zeros(0, 2)})
 %!error <party 1 must be a real> entropy_vector (ads3_background ("vacuum", "line"), {"ab"})
 %!error <party 1 must be a real> entropy_vector (ads3_background ("vacuum", "line"), {[0 1i]})
-%!error <parties 1 and 3 overlap> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [2 3], [0.5 1.5]})
-%!error <party 2:> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [3 2]})
+%!error <PARTIES\{1\}\(1,:\) and PARTIES\{3\}\(1,:\) overlap> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [2 3], [0.5 1.5]})
+%!error <entropy_vector: PARTIES\{2\}: row 1 must have start < end> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [3 2]})
 %!error <at most 16 parties> entropy_vector (ads3_background ("vacuum", "line"), num2cell ([(0:16)' (0:16)' + 0.5], 2))
 %!error <at most 15 parties besides> entropy_vector (ads3_background ("vacuum", "line"), num2cell ([(0:15)' (0:15)' + 0.5], 2), "purifier", true)
 %!error <mixed state without a horizon> entropy_vector (ads3_background ("thermal", "circle", "beta", 9), {[0 1]}, "purifier", true)
 %!error <true or false> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purifier", "yes")
 %!error <unknown option> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purify", true)
 %!error <true or false> entropy_vector (ads3_background ("vacuum", "line"), {[0 1]}, "purifier", 2)
-%!error <party 2: PARTIES\{2\}\(1,2\) must be a number> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [0 NaN]})
+%!error <entropy_vector: PARTIES\{2\}: row 1 must be numbers, not NaN> entropy_vector (ads3_background ("vacuum", "line"), {[0 1], [0 NaN]})

@@ -229,8 +229,8 @@ function [cb, ca] = confs_ (fn, bgs, reg, x)
     if (iscell (bgs))
       bg = bgs{k};
     endif
-    [~, ~, c] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg,
-                                 {reg(k, x(k) * (1 - 1e-6)), reg(k, x(k) * (1 + 1e-6))});
+    [~, ~, c] = __holent_rt__ ("entropy", fn, "A", bg,
+                               {reg(k, x(k) * (1 - 1e-6)), reg(k, x(k) * (1 + 1e-6))});
     cb{k} = c(1);  ca{k} = c(2);
   endfor
 endfunction

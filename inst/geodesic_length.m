@@ -53,8 +53,11 @@ function len = geodesic_length (bg, x1, x2, varargin)
            "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
            fn);
   endif
-  o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);
-  timed = numel (fieldnames (rmfield (o, intersect (fieldnames (o), {"class"})))) > 0 ...
+  o = struct ();
+  if (nargin > 3)
+    o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);
+  endif
+  timed = any (! strcmp (fieldnames (o), "class")) ...
           || __holent_time_entropy__ ("timed", bg, {});
   cls = 0;
   if (isfield (o, "class"))
@@ -88,37 +91,9 @@ function len = geodesic_length (bg, x1, x2, varargin)
     len = timed_length (fn, bg, x1, x2, cls, o);
     return;
   endif
-  try
-    ## NaN, Inf, overflow and coincident points are checked in the core
-    ## in one pass; a failure is explained below.
-    len = __holent_geodesic__ (bg, x1, x2, cls);
-  catch err
-    if (! strcmp (err.identifier, "holent:background"))
-      explain_bad_points (fn, bg, x1, x2);
-    endif
-    __holent_rethrow__ (err, "__holent_geodesic__", fn);
-  end_try_catch
-endfunction
-
-function explain_bad_points (fn, bg, x1, x2)
-  x1 = __holent_array__ (fn, "X1", x1);
-  x2 = __holent_array__ (fn, "X2", x2);
-  k = find (isinf (x2(:) - x1(:)), 1);
-  if (! isempty (k))
-    error ("holent:domain",
-           "%s: X2(%d) - X1(%d) overflows double precision: the points must be closer",
-           fn, k, k);
-  endif
-  if (strcmp (bg.boundary, "line"))
-    k = find (x1(:) == x2(:), 1);
-  else
-    k = find (mod (x2(:) - x1(:), bg.circumference) == 0, 1);
-  endif
-  if (! isempty (k))
-    error ("holent:coincident",
-           "%s: X1(%d) and X2(%d) coincide: no geodesic joins a point to itself",
-           fn, k, k);
-  endif
+  ## NaN, Inf, overflow and coincident points are checked by the core in
+  ## one pass, which explains a bad pair itself.
+  len = __holent_geodesic__ ("length", fn, bg, x1, x2, cls);
 endfunction
 
 ## Covariant lengths, two-sided lengths and the quench (doc/hrt_time.md).
@@ -230,5 +205,5 @@ endfunction
 %!error <'class' must be> geodesic_length (bgc, 1, 2, "class", "long")
 %!error <unknown option> geodesic_length (bgc, 1, 2, "klass", "shorter")
 %!error <geodesic_length: BG.bulk must be a short string> geodesic_length (setfield (bgl, "bulk", 7), 1, 2)
-%!error <geodesic_length: X2\(1\) - X1\(1\) overflows> geodesic_length (bgl, -1e308, 1e308)
+%!error <geodesic_length: X2\(1\): its distance to the first point overflows> geodesic_length (bgl, -1e308, 1e308)
 %!error <BCFT background> geodesic_length (ads3_background ("bcft", "half_line"), [0 1], [2 3])

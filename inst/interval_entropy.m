@@ -75,26 +75,17 @@ function [S, branch] = interval_entropy (bg, l, varargin)
     [S, branch] = timed (fn, bg, l, varargin);
     return;
   endif
-  if (! (isnumeric (l) && isreal (l)) || islogical (l) || issparse (l)
-      || ! isa (l, "double"))
+  if (! (isa (l, "double") && isreal (l)) || issparse (l))
     ## Slow path only for unusual input: full checks and conversion.
     l = __holent_array__ (fn, "L", l);
   endif
-  try
-    ## Range, NaN and Inf are checked in the core in the same pass as the
-    ## evaluation; a failure is explained below.
-    if (nargout > 1)
-      [S, br, nshort] = __holent_interval__ (bg, l);
-      branch = logical (br);
-    else
-      [S, ~, nshort] = __holent_interval__ (bg, l);
-    endif
-  catch err
-    if (! strcmp (err.identifier, "holent:background"))
-      explain_bad_length (fn, bg, l);
-    endif
-    __holent_rethrow__ (err, "__holent_interval__", fn);
-  end_try_catch
+  ## Range, NaN and Inf are checked by the core in the same pass as the
+  ## evaluation, which explains a bad length itself.
+  if (nargout > 1)
+    [S, branch, nshort] = __holent_interval__ ("entropy", fn, bg, l);
+  else
+    [S, ~, nshort] = __holent_interval__ ("entropy", fn, bg, l);
+  endif
   if (nshort > 0)
     warning ("holent:cutoff",
              "%s: %d interval(s) not longer than twice the cutoff %g", fn,
@@ -178,22 +169,6 @@ function [S, branch] = timed (fn, bg, l, args)
   endif
   S = __holent_time_entropy__ ("shape", S, size (l), t);
   branch = __holent_time_entropy__ ("shape", branch, size (l), t);
-endfunction
-
-function explain_bad_length (fn, bg, l)
-  l = __holent_array__ (fn, "L", l);
-  if (strcmp (bg.boundary, "line"))
-    k = find (! (l(:) > 0), 1);
-    if (! isempty (k))
-      error ("holent:domain", "%s: L(%d) = %g must be a positive length", fn, k, l(k));
-    endif
-  else
-    k = find (! (l(:) > 0 & l(:) <= bg.circumference), 1);
-    if (! isempty (k))
-      error ("holent:domain", "%s: L(%d) = %g must lie in (0, circumference = %g]",
-             fn, k, l(k), bg.circumference);
-    endif
-  endif
 endfunction
 
 %!test

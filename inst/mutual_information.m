@@ -104,8 +104,8 @@ endfunction
 
 %!error <Invalid call> mutual_information (ads3_background ("vacuum", "line"), [0 1])
 %!error <A\(1,:\) and B\(2,:\) overlap> mutual_information (ads3_background ("vacuum", "line"), [0 1], [3 4; 0.5 2])
-%!error <instance 2> mutual_information (ads3_background ("vacuum", "line"), {[0 1], [2 3]}, [2.5 4])
-%!error <rows 1 and 2 of B overlap> mutual_information (ads3_background ("vacuum", "line"), [0 1], [3 4; 3.5 5])
+%!error <A\{2\}\(1,:\) and B\(1,:\) overlap> mutual_information (ads3_background ("vacuum", "line"), {[0 1], [2 3]}, [2.5 4])
+%!error <B: rows 1 and 2 overlap> mutual_information (ads3_background ("vacuum", "line"), [0 1], [3 4; 3.5 5])
 %!error <2 regions where 3> mutual_information (ads3_background ("vacuum", "line"), {[0 1], [2 3], [4 5]}, {[7 8], [9 10]})
 %!error <cell array of regions> mutual_information (ads3_background ("vacuum", "line"), [0 1], "x")
 %!error <A is an empty cell> mutual_information (ads3_background ("vacuum", "line"), {}, [2 3])

@@ -117,7 +117,10 @@ function [S, conf] = rt_entropy (bg, A, varargin)
   if (nargin != 2 && nargin != 4)
     print_usage ();
   endif
-  o = __holent_opts__ (fn, {"t"}, varargin);
+  o = struct ();
+  if (nargin > 2)
+    o = __holent_opts__ (fn, {"t"}, varargin);
+  endif
   if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, {A}))
     t = __holent_time_entropy__ ("times", fn, o);
     [S, nc, hz] = __holent_time_entropy__ (fn, bg, A, t);
@@ -141,9 +144,9 @@ function [S, conf] = rt_entropy (bg, A, varargin)
     A = to_double (fn, A);
   endif
   if (nargout > 1)
-    [S, nshort, conf] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
+    [S, nshort, conf] = feval (gw, "entropy", fn, "A", bg, A);
   else
-    [S, nshort] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
+    [S, nshort] = feval (gw, "entropy", fn, "A", bg, A);
   endif
   if (nshort > 0)
     warning ("holent:cutoff",
@@ -262,8 +265,8 @@ endfunction
 
 %!warning <twice the cutoff> rt_entropy (ads3_background ("vacuum", "line", "cutoff", 1e-3), [0 1; 1.001 2]);
 %!error <Invalid call> rt_entropy (ads3_background ("vacuum", "line"))
-%!error <rows 1 and 2 of A overlap> rt_entropy (ads3_background ("vacuum", "line"), [0 2; 1 3])
-%!error <rows 2 and 3 of A\{2\} overlap> rt_entropy (ads3_background ("vacuum", "line"), {[0 1], [5 6; 0 2; 1 3]})
+%!error <A: rows 1 and 2 overlap> rt_entropy (ads3_background ("vacuum", "line"), [0 2; 1 3])
+%!error <A\{2\}: rows 2 and 3 overlap> rt_entropy (ads3_background ("vacuum", "line"), {[0 1], [5 6; 0 2; 1 3]})
 %!error <zero-length> rt_entropy (ads3_background ("vacuum", "line"), [1 1])
 %!error <start < end> rt_entropy (ads3_background ("vacuum", "line"), [2 1])
 %!error <longer than the circle> rt_entropy (ads3_background ("vacuum", "circle"), [0 7])

@@ -74,7 +74,7 @@ function surf = rt_surface (bg, A, varargin)
     endif
     A{k} = full (double (A{k}));
   endfor
-  [S, ~, conf] = __holent_call__ ("__holent_rt__", "entropy", fn, "A", bg, A);
+  [S, ~, conf] = __holent_rt__ ("entropy", fn, "A", bg, A);
   circle = strcmp (bg.boundary, "circle");
   surf = struct ("picture", {}, "curves", {}, "S", {}, "pairs", {}, "arcs", {},
                  "horizon", {}, "endpoints", {}, "intervals", {},

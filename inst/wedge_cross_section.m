@@ -9,8 +9,12 @@
 ## in entropy units: (length of the minimal cross section)/(4G) =
 ## (c/6) (length/ell).
 ##
-## @var{A} and @var{B} are rows @code{[start, end]}, or k x 2 matrices of k
-## pairs (a single row is repeated to match the other); @var{E} is k x 1.
+## @var{A} and @var{B} are each one interval, a row @code{[start, end]}, or
+## a cell array of such rows (the batch convention of
+## @file{doc/conventions.md}): @var{E} then has the size of the cell, and a
+## row or a one-element cell is paired with every element of the other.
+## A k x 2 matrix is one region of k intervals, not k pairs, and is
+## refused here (@code{holent:type}): E_W is of two intervals.
 ## On a line start < end; on a circle of circumference L an interval runs
 ## from start to end in the positive direction, coordinates modulo L, and
 ## must be shorter than L.  Overlapping intervals raise
@@ -19,8 +23,10 @@
 ## cutoff and is not returned).
 ##
 ## @var{E} is zero when the entanglement wedge of AB is disconnected.  The
-## phase is decided by @code{rt_entropy}: the wedge is connected when the
-## minimal surface of A u B pairs endpoints of A with endpoints of B.  In
+## phase is the core's two-interval minimisation (the one of
+## @code{rt_entropy}): the wedge is connected when the minimal surface of
+## A u B pairs endpoints of A with endpoints of B, i.e. z_L z_R > 1 (ties
+## count as disconnected).  In
 ## the connected phase, with the chord function g of the background,
 ## @example
 ## z = g(l_A) g(l_B) / (g(d_1) g(d_2)),
@@ -40,7 +46,7 @@
 ## Option @qcode{"reflected"}, true: return the reflected entropy
 ## S_R = 2 E_W (Dutta and Faulkner 2019) instead of E_W.
 ##
-## @var{info} is a k x 1 struct array with fields
+## @var{info} is a struct array of the size of @var{E} with fields
 ## @table @code
 ## @item phase
 ## @qcode{"connected"} or @qcode{"disconnected"}.
@@ -94,49 +100,22 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
            fn);
   endif
   __holent_background__ ("check", fn, bg);   # BG is read below
-  o = __holent_opts__ (fn, {"reflected"}, varargin);
   reflected = false;
-  if (isfield (o, "reflected"))
-    v = o.reflected;
-    if (! ((islogical (v) || isnumeric (v)) && isscalar (v) && isreal (v)
-           && (v == 0 || v == 1)))
-      error ("holent:option", "%s: 'reflected' must be true or false", fn);
-    endif
-    reflected = logical (v);
-  endif
-  supported = {"poincare", "global_ads", "thermal_ads", "planar_btz", ...
-               "planar_rotating_btz"};
-  if (! any (strcmp (bg.bulk, supported)))
-    error ("holent:unsupported",
-           "%s: not implemented for the '%s' bulk (supported: %s); see doc/wedge_cross_section.md",
-           fn, bg.bulk, strjoin (supported, ", "));
-  endif
-  A = pairs_arg (fn, "A", A);
-  B = pairs_arg (fn, "B", B);
-  if (rows (A) != rows (B))
-    if (rows (A) == 1)
-      A = repmat (A, rows (B), 1);
-    elseif (rows (B) == 1)
-      B = repmat (B, rows (A), 1);
-    else
-      error ("holent:size", "%s: A (%d rows) and B (%d rows) must have as many rows, or one",
-             fn, rows (A), rows (B));
+  if (nargin > 3)
+    o = __holent_opts__ (fn, {"reflected"}, varargin);
+    if (isfield (o, "reflected"))
+      reflected = __holent_bool__ (fn, "'reflected'", o.reflected);
     endif
   endif
-  k = rows (A);
-
-  [Ec, ~, zL, zR, P, G, shortest, st] = __holent_ewcs__ (bg, A, B);
-  i = find (st, 1);
-  if (! isempty (i))
-    fail (fn, bg, A, B, i, st(i), k);
-  endif
-  if (any (shortest <= 2 * bg.cutoff))
+  A = interval_arg (fn, "A", A);
+  B = interval_arg (fn, "B", B);
+  ## the core checks the pairs (naming A{k} or B{k}) and decides the phase
+  [Ec, conn, zL, zR, P, G, nshort] = __holent_ewcs__ ("pairs", fn, bg, A, B);
+  if (nshort > 0)
     warning ("holent:cutoff",
              "%s: %d pair(s) with an interval or a gap not longer than twice the cutoff %g",
-             fn, sum (shortest <= 2 * bg.cutoff), bg.cutoff);
+             fn, nshort, bg.cutoff);
   endif
-
-  conn = connected_by_rt (bg, A, B);
   EW = Ec .* conn;
   if (reflected)
     E = 2 * EW;
@@ -149,8 +128,8 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
     words = coordinates (bg);
     info = repmat (struct ("phase", "", "E_W", 0, "S_R", 0, "E_connected", 0,
                            "cross_ratio", 0, "geodesics", zeros (2),
-                           "points", zeros (2, 3), "coordinates", words), k, 1);
-    for j = 1:k
+                           "points", zeros (2, 3), "coordinates", words), size (E));
+    for j = 1:numel (E)
       info(j).phase = merge (conn(j), "connected", "disconnected");
       info(j).E_W = EW(j);
       info(j).S_R = 2 * EW(j);
@@ -166,91 +145,29 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
   endif
 endfunction
 
-function x = pairs_arg (fn, name, x)
-  x = __holent_array__ (fn, name, x);
-  if (ndims (x) != 2 || columns (x) != 2)
-    error ("holent:size", "%s: %s must be a row [start, end] or a k x 2 matrix of them, got %s",
-           fn, name, mat2str (size (x)));
-  endif
-endfunction
-
-## The phase from rt_entropy: connected when some geodesic of the minimal
-## surface of A u B joins an endpoint of A to an endpoint of B.
-function conn = connected_by_rt (bg, A, B)
-  k = rows (A);
-  conn = false (k, 1);
-  if (k == 0)
-    return;
-  endif
-  regions = arrayfun (@(j) [A(j,:); B(j,:)], (1:k).', "uniformoutput", false);
-  ## the cutoff warning of rt_entropy would name rt_entropy: ours is above
-  w = warning ("off", "holent:cutoff");
-  unwind_protect
-    [~, conf] = rt_entropy (bg, regions);
-  unwind_protect_cleanup
-    warning (w);
-  end_unwind_protect
-  circ = isfinite (bg.circumference);
-  L = bg.circumference;
-  for j = 1:k
-    ends = [A(j,:), B(j,:)];
-    pc = conf(j).pair_coords;
-    if (circ)
-      ends = mod (ends, L);
-    endif
-    side = zeros (size (pc));
-    for m = 1:numel (pc)
-      d = abs (pc(m) - ends);
-      if (circ)
-        d = min (d, L - d);
-      endif
-      [~, q] = min (d);
-      side(m) = q > 2;       # 0: an endpoint of A, 1: of B
+## Numeric input as full double (sparse and integer accepted), in a cell
+## or not; classes and shapes are the gateway's.
+function x = interval_arg (fn, name, x)
+  if (iscell (x))
+    for k = 1:numel (x)
+      x{k} = as_double (fn, sprintf ("%s{%d}", name, k), x{k});
     endfor
-    conn(j) = any (side(:,1) != side(:,2));
-  endfor
+  else
+    x = as_double (fn, name, x);
+  endif
 endfunction
 
-function fail (fn, bg, A, B, i, st, k)
-  if (k > 1)
-    at = sprintf ("(%d,:)", i);
-  else
-    at = "";
+function x = as_double (fn, name, x)
+  if (! isnumeric (x) || islogical (x))
+    error ("holent:type", "%s: %s must be a numeric row [start, end], got %s",
+           fn, name, class (x));
   endif
-  circ = isfinite (bg.circumference);
-  ## which of the two intervals is at fault (the core reports the pair)
-  len = @(r) r(2) - r(1);
-  bad = "A";
-  if (st == 5 || st == 2)           # HOLENT_EEMPTY, HOLENT_EDOM
-    la = len (A(i,:));
-    if (circ)
-      okA = abs (la) > 0 && la < bg.circumference && mod (la, bg.circumference) > 0;
-    else
-      okA = la > 0;
-    endif
-    if (okA)
-      bad = "B";
-    endif
+  if (! isreal (x))
+    error ("holent:type", "%s: %s must be real, not complex", fn, name);
   endif
-  switch (st)
-    case 2
-      if (circ)
-        error ("holent:domain", "%s: %s%s must be shorter than the circle (L = %g)",
-               fn, bad, at, bg.circumference);
-      else
-        error ("holent:domain", "%s: %s%s must have start < end", fn, bad, at);
-      endif
-    case 5
-      error ("holent:empty", "%s: %s%s has zero length", fn, bad, at);
-    case 4
-      error ("holent:overlap", "%s: A%s and B%s overlap", fn, at, at);
-    case 9
-      error ("holent:coincident",
-             "%s: A%s and B%s touch: E_W of adjacent intervals diverges with the cutoff",
-             fn, at, at);
-    otherwise
-      error ("holent:internal", "%s: unexpected core status %d for pair %d", fn, st, i);
-  endswitch
+  if (! isa (x, "double") || issparse (x))
+    x = full (double (x));
+  endif
 endfunction
 
 function s = coordinates (bg)
@@ -279,7 +196,7 @@ endfunction
 %! A = [0 1; -3 -0.5; 0 2];  B = [1.2 2; 0.5 3; 5 6];
 %! z = (A(:,2) - A(:,1)) .* (B(:,2) - B(:,1)) ./ ((B(:,1) - A(:,2)) .* (B(:,2) - A(:,1)));
 %! ref = 2 * log (1 + 2*z + 2*sqrt (z .* (z + 1))) .* (z > 1);
-%! [E, info] = wedge_cross_section (bg, A, B);
+%! [E, info] = wedge_cross_section (bg, num2cell (A, 2), num2cell (B, 2));
 %! assert (E, ref, 1e-12);
 %! assert ({info.phase}, {"connected", "connected", "disconnected"});
 %! assert ([info.cross_ratio], z.', 1e-14);
@@ -331,11 +248,16 @@ endfunction
 
 %!test
 %! bg = ads3_background ("vacuum", "line");
-%! [E, info] = wedge_cross_section (bg, zeros (0, 2), zeros (0, 2));
+%! [E, info] = wedge_cross_section (bg, cell (0, 1), cell (0, 1));
 %! assert (size (E), [0 1]);
 %! assert (size (info), [0 1]);
-%! E = wedge_cross_section (bg, [0 1], [1.1 2; 3 4; 1.01 9]);
+%! E = wedge_cross_section (bg, [0 1], {[1.1 2]; [3 4]; [1.01 9]});
 %! assert (size (E), [3 1]);
+%! ## a row, a one-element cell and integer or sparse input: one convention
+%! E1 = wedge_cross_section (bg, {[0 1]}, {[1.1 2], [3 4]});
+%! assert (size (E1), [1 2]);
+%! assert (E1, E(1:2).', 0);
+%! assert (wedge_cross_section (bg, int8 ([0 1]), sparse ([1.1 2])), E(1));
 
 %!warning <twice the cutoff> wedge_cross_section (ads3_background ("vacuum", "line", "cutoff", 1e-3), [0 1], [1.001 2]);
 %!error <Invalid call> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1])
@@ -343,15 +265,16 @@ endfunction
 %!error <not implemented for the 'rotating_btz'> wedge_cross_section (ads3_background ("rotating", "circle", "beta_L", 1, "beta_R", 2), [0 1], [2 3])
 %!error <not implemented for the 'conical_defect'> wedge_cross_section (ads3_background ("heavy", "circle", "alpha", 0.5), [0 1], [2 3])
 %!error <A and B overlap> wedge_cross_section (ads3_background ("vacuum", "line"), [0 2], [1 3])
-%!error <A\(2,:\) and B\(2,:\) overlap> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1; 0 2], [2 3; 1 3])
+%!error <B\{2\}: A and B overlap> wedge_cross_section (ads3_background ("vacuum", "line"), {[0 1], [0 2]}, {[2 3], [1 3]})
 %!error <touch> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [1 3])
 %!error <touch> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [3 2*pi])
-%!error <B must have start < end> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 2])
-%!error <A has zero length> wedge_cross_section (ads3_background ("vacuum", "line"), [1 1], [3 4])
+%!error <B: must have start < end> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 2])
+%!error <A: has zero length> wedge_cross_section (ads3_background ("vacuum", "line"), [1 1], [3 4])
 %!error <shorter than the circle> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [2 2 + 2*pi])
 %!error <overlap> wedge_cross_section (ads3_background ("vacuum", "circle"), [0 1], [2 0.5])
-%!error <k x 2> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1 2], [3 4])
-%!error <as many rows> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1; 2 3], [4 5; 6 7; 8 9])
+%!error <A: must be one interval, a real 1 x 2 row> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1 2], [3 4])
+%!error <B: must be one interval> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 4; 5 6])
+%!error <as many elements> wedge_cross_section (ads3_background ("vacuum", "line"), {[0 1], [2 3]}, {[4 5], [6 7], [8 9]})
 %!error <NaN> wedge_cross_section (ads3_background ("vacuum", "line"), [0 NaN], [3 4])
 %!error <complex> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1i], [3 4])
 %!error <'reflected' must be> wedge_cross_section (ads3_background ("vacuum", "line"), [0 1], [3 4], "reflected", "yes")

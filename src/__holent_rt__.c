@@ -8,10 +8,16 @@
  *       segments not longer than twice the cutoff, CONF (built only when
  *       asked for: it costs more than the minimisation for small regions)
  *       is a struct array of the size of S.
- *   [STATUS, ROW1, ROW2] = __holent_rt__ ("check", BG, A)
- *       normalise A only; STATUS is 0 or a core status code, ROW1/ROW2 the
- *       offending rows (1-based, 0 when none).  Never raises for A.
- * GPL-3.0-or-later.  */
+ *   __holent_rt__ ("parties", FN, NAMES, ISCELL, L, R)
+ *       check the parties of an information quantity: R an np x nel cell
+ *       of regions (party i of instance k in R{i,k}), NAMES the np party
+ *       names (a party given as a cell is named NAMES{i}{k}, ISCELL(i)
+ *       true), L the circumference (Inf: a line).  Each region is checked
+ *       alone, then the parties of each instance for disjointness;
+ *       raises on the first failure, returns true.
+ * Errors are raised by holent_gw_raise(_err) naming FN and the region;
+ * the reasons of region errors come from the core (holent_region_check).
+ * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <stdio.h>
 #include <string.h>
 #include <math.h>
@@ -36,8 +42,6 @@ typedef struct
   holent_rt_conf *conf;
   size_t *pairs;
   double *dbl;
-  char id[32];
-  char msg[512];
 } gw_state;
 
 static void
@@ -57,13 +61,13 @@ gw_release (gw_state *g)
   g->dbl = NULL;
 }
 
-/* Free everything, then raise (mexErrMsgIdAndTxt does not return).  */
+/* Free everything, then raise the core's report E about region NM.  */
 static void
-gw_raise (gw_state *g)
+gw_fail (gw_state *g, const char *fn, const holent_err *e, const char *nm)
 {
+  const char *names[1] = { nm };
   gw_release (g);
-  holent_gw_poll_end ();
-  mexErrMsgIdAndTxt (g->id, "%s", g->msg);
+  holent_gw_raise_err (fn, e, names, 1);
 }
 
 /* "A" or "A{k}" for messages.  */
@@ -76,95 +80,33 @@ region_name (char *buf, size_t sz, const char *name, int is_cell, size_t k)
     snprintf (buf, sz, "%s", name);
 }
 
-/* Check the type and shape of one region; 0 if fine (message set).  */
-static int
+/* Check the class and shape of one region (its values are the core's);
+   raises naming it.  */
+static void
 region_ok (gw_state *g, const mxArray *a, const char *fn, const char *nm)
 {
+  int st = HOLENT_SUCCESS;
+  const char *what = NULL;
   if (a == NULL || !mxIsDouble (a) || mxIsComplex (a) || mxIsSparse (a)
       || mxGetNumberOfDimensions (a) != 2)
     {
-      snprintf (g->id, sizeof g->id, "holent:type");
-      snprintf (g->msg, sizeof g->msg,
-                "%s: %s must be a real n x 2 matrix of [start, end] rows",
-                fn, nm);
-      return 0;
+      st = HOLENT_ETYPE;
+      what = "must be a real n x 2 matrix of [start, end] rows";
     }
-  if (mxGetM (a) == 0)
+  else if (mxGetM (a) == 0)
     {
-      snprintf (g->id, sizeof g->id, "holent:empty");
-      snprintf (g->msg, sizeof g->msg, "%s: %s has no intervals", fn, nm);
-      return 0;
+      st = HOLENT_EEMPTY;
+      what = "has no intervals";
     }
-  if (mxGetN (a) != 2)
+  else if (mxGetN (a) != 2)
     {
-      snprintf (g->id, sizeof g->id, "holent:type");
-      snprintf (g->msg, sizeof g->msg,
-                "%s: %s must be an n x 2 matrix of [start, end] rows, got "
-                "%zu columns", fn, nm, (size_t) mxGetN (a));
-      return 0;
+      st = HOLENT_ETYPE;
+      what = "must be an n x 2 matrix of [start, end] rows";
     }
-  const double *p = mxGetPr (a);
-  size_t n = mxGetM (a);
-  for (size_t i = 0; i < 2 * n; i++)
-    if (!isfinite (p[i]))
-      {
-        snprintf (g->id, sizeof g->id, isnan (p[i]) ? "holent:nan"
-                                                    : "holent:domain");
-        snprintf (g->msg, sizeof g->msg, "%s: %s(%zu,%zu) must be %s", fn,
-                  nm, i % n + 1, i / n + 1,
-                  isnan (p[i]) ? "a number, not NaN" : "finite");
-        return 0;
-      }
-  return 1;
-}
-
-/* Message for a failed holent_region_set.  */
-static void
-region_fail (gw_state *g, int st, const char *fn, const char *nm, int circle)
-{
-  const holent_region *r = g->reg;
-  switch (st)
+  if (st)
     {
-    case HOLENT_EOVERLAP:
-      snprintf (g->id, sizeof g->id, "holent:overlap");
-      snprintf (g->msg, sizeof g->msg,
-                "%s: rows %zu and %zu of %s overlap (intervals of a region "
-                "must be disjoint; touching ones are merged)", fn,
-                r->bad[0] + 1, r->bad[1] + 1, nm);
-      break;
-    case HOLENT_EEMPTY:
-      snprintf (g->id, sizeof g->id, "holent:empty");
-      snprintf (g->msg, sizeof g->msg,
-                "%s: row %zu of %s is a zero-length interval", fn,
-                r->bad[0] + 1, nm);
-      break;
-    case HOLENT_EDOM:
-      snprintf (g->id, sizeof g->id, "holent:domain");
-      if (circle)
-        snprintf (g->msg, sizeof g->msg,
-                  "%s: row %zu of %s is longer than the circle (end - start "
-                  "must not exceed the circumference)", fn, r->bad[0] + 1,
-                  nm);
-      else
-        snprintf (g->msg, sizeof g->msg,
-                  "%s: row %zu of %s must have start < end on a line", fn,
-                  r->bad[0] + 1, nm);
-      break;
-    case HOLENT_ETOOBIG:
-      snprintf (g->id, sizeof g->id, "holent:toobig");
-      snprintf (g->msg, sizeof g->msg, "%s: %s has too many rows", fn, nm);
-      break;
-    case HOLENT_EINVAL:
-      snprintf (g->id, sizeof g->id, "holent:domain");
-      snprintf (g->msg, sizeof g->msg,
-                "%s: row %zu of %s: end - start overflows (coordinates too "
-                "large)", fn, r->bad[0] + 1, nm);
-      break;
-    default:
-      snprintf (g->id, sizeof g->id, "holent:invalid");
-      snprintf (g->msg, sizeof g->msg, "%s: %s: %s", fn, nm,
-                holent_strerror (st));
-      break;
+      gw_release (g);
+      holent_gw_raise (fn, st, nm, HOLENT_NOINDEX, "%s", what);
     }
 }
 
@@ -217,23 +159,24 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
   char fn[64], name[32], nm[64];
   holent_geo_bg bg;
+  holent_err e;
   gw_state g = { 0 };
   holent_gw_nargs (GW, nlhs, 3, nrhs, 5, 6);
   holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
-  holent_gw_string (prhs[2], GW, "NAME", name, sizeof name);
+  holent_gw_string (prhs[2], fn, "NAME", name, sizeof name);
   holent_gw_bg (prhs[3], fn, &bg);
   holent_rt_method method = HOLENT_RT_AUTO;
   if (nrhs > 5)
     {
       char ms[8];
-      holent_gw_string (prhs[5], GW, "METHOD", ms, sizeof ms);
+      holent_gw_string (prhs[5], fn, "METHOD", ms, sizeof ms);
       if (strcmp (ms, "dp") == 0)
         method = HOLENT_RT_DP;
       else if (strcmp (ms, "fast") == 0)
         method = HOLENT_RT_FAST;
       else if (strcmp (ms, "auto") != 0)
-        mexErrMsgIdAndTxt ("holent:invalid",
-                           "METHOD must be \"auto\", \"dp\" or \"fast\"");
+        holent_gw_raise (fn, HOLENT_EINVAL, "METHOD", HOLENT_NOINDEX,
+                         "must be \"auto\", \"dp\" or \"fast\"");
     }
 
   const mxArray *A = prhs[4];
@@ -243,14 +186,43 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     {
       const mxArray *a = is_cell ? mxGetCell (A, k) : A;
       region_name (nm, sizeof nm, name, is_cell, k);
-      if (!region_ok (&g, a, fn, nm))
-        gw_raise (&g);
+      region_ok (&g, a, fn, nm);
       if (mxGetM (a) > maxrows)
         maxrows = mxGetM (a);
     }
   if (maxrows > HOLENT_REGION_NMAX)
-    mexErrMsgIdAndTxt ("holent:toobig", "%s: %s has too many rows", fn,
-                       name);
+    holent_gw_raise (fn, HOLENT_ETOOBIG, name, HOLENT_NOINDEX,
+                     "has too many rows (at most %zu)",
+                     (size_t) HOLENT_REGION_NMAX);
+
+  /* Normalise everything first: errors come before any large
+     allocation, and the workspace is sized by the largest merged region.  */
+  g.reg = holent_region_alloc (maxrows);
+  if (g.reg == NULL)
+    holent_gw_raise (fn, HOLENT_ENOMEM, name, HOLENT_NOINDEX,
+                     "out of memory for %zu rows", maxrows);
+  size_t wsn = 1;
+  for (size_t k = 0; k < ncell; k++)
+    {
+      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
+      const double *p = mxGetPr (a);
+      size_t n = mxGetM (a);
+      if (holent_region_check (g.reg, bg.circle, bg.L, n, p, p + n, &e))
+        {
+          region_name (nm, sizeof nm, name, is_cell, k);
+          gw_fail (&g, fn, &e, nm);
+        }
+      if (method == HOLENT_RT_DP && g.reg->n > HOLENT_RT_NMAX)
+        {
+          region_name (nm, sizeof nm, name, is_cell, k);
+          holent_err_set (&e, HOLENT_ETOOBIG, 0, HOLENT_NOINDEX,
+                          "has %zu intervals; the DP takes at most %zu",
+                          g.reg->n, (size_t) HOLENT_RT_NMAX);
+          gw_fail (&g, fn, &e, nm);
+        }
+      if (g.reg->n > wsn)
+        wsn = g.reg->n;
+    }
 
   if (is_cell)
     plhs[0] = mxCreateNumericArray (mxGetNumberOfDimensions (A),
@@ -271,42 +243,6 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       plhs[2] = conf;
     }
 
-  /* Normalise everything first: errors come before any large
-     allocation, and the workspace is sized by the largest merged region.  */
-  g.reg = holent_region_alloc (maxrows);
-  if (g.reg == NULL)
-    {
-      snprintf (g.id, sizeof g.id, "holent:nomem");
-      snprintf (g.msg, sizeof g.msg, "%s: out of memory for %zu rows", fn,
-                maxrows);
-      gw_raise (&g);
-    }
-  size_t wsn = 1;
-  for (size_t k = 0; k < ncell; k++)
-    {
-      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
-      const double *p = mxGetPr (a);
-      size_t n = mxGetM (a);
-      int st = holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
-      int big = method == HOLENT_RT_DP && g.reg->n > HOLENT_RT_NMAX;
-      if (st || big)
-        region_name (nm, sizeof nm, name, is_cell, k);
-      if (st)
-        {
-          region_fail (&g, st, fn, nm, bg.circle);
-          gw_raise (&g);
-        }
-      if (big)
-        {
-          snprintf (g.id, sizeof g.id, "holent:toobig");
-          snprintf (g.msg, sizeof g.msg,
-                    "%s: %s has %zu intervals; the DP takes at most %zu",
-                    fn, nm, g.reg->n, (size_t) HOLENT_RT_NMAX);
-          gw_raise (&g);
-        }
-      if (g.reg->n > wsn)
-        wsn = g.reg->n;
-    }
   /* The core spreads the regions over threads (one loop for one region
      or many); the configurations come back in buffers sized by rows.  */
   g.batch = holent_rt_batch_alloc (ncell, maxrows, wsn,
@@ -340,29 +276,22 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   if (g.batch == NULL)
     {
-      snprintf (g.id, sizeof g.id, "holent:nomem");
-      snprintf (g.msg, sizeof g.msg,
-                "%s: out of memory for a region of %zu intervals", fn, wsn);
-      gw_raise (&g);
+      gw_release (&g);
+      holent_gw_raise (fn, HOLENT_ENOMEM, name, HOLENT_NOINDEX,
+                       "out of memory for a region of %zu intervals", wsn);
     }
   double nshort = 0.0;
   size_t failed = 0;
   /* Ctrl-C and progress: per region, and inside the minimisers.  */
   int st = holent_rt_batch_run (g.batch, &bg, method, ncell, g.in, S,
                                 &nshort, g.conf, &failed, holent_gw_poll (fn));
-  if (st == HOLENT_EINTR)
-    {
-      gw_release (&g);
-      holent_gw_interrupt ();
-    }
   if (st)
     {
+      /* Ctrl-C (HOLENT_EINTR) returns to the prompt inside the raise.  */
       region_name (nm, sizeof nm, name, is_cell, failed);
-      snprintf (g.id, sizeof g.id, st == HOLENT_ENOMEM ? "holent:nomem"
-                                                       : "holent:internal");
-      snprintf (g.msg, sizeof g.msg, "%s: %s: minimisation failed (%s)", fn,
-                nm, holent_strerror (st));
-      gw_raise (&g);
+      holent_err_set (&e, st, 0, HOLENT_NOINDEX, "minimisation failed (%s)",
+                      holent_strerror (st));
+      gw_fail (&g, fn, &e, nm);
     }
   if (conf)
     for (size_t k = 0; k < ncell; k++)
@@ -374,31 +303,87 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 }
 
 static void
-do_check (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+do_parties (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  holent_geo_bg bg;
+  char fn[64];
+  holent_err e;
   gw_state g = { 0 };
-  holent_gw_nargs (GW, nlhs, 3, nrhs, 3, 3);
-  holent_gw_bg (prhs[1], GW, &bg);
-  const mxArray *a = prhs[2];
-  if (!region_ok (&g, a, GW, "A"))
-    mexErrMsgIdAndTxt (g.id, "%s", g.msg);
-  size_t n = mxGetM (a);
-  if (n > HOLENT_REGION_NMAX)
-    mexErrMsgIdAndTxt ("holent:toobig", "A has too many rows");
-  g.reg = holent_region_alloc (n);
+  holent_gw_nargs (GW, nlhs, 1, nrhs, 6, 6);
+  holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
+  const mxArray *N = prhs[2], *C = prhs[3], *R = prhs[5];
+  double L = holent_gw_scalar (prhs[4], fn, "L");
+  if (!mxIsCell (N) || !mxIsCell (R) || mxGetNumberOfDimensions (R) != 2
+      || !mxIsLogical (C)
+      || mxGetNumberOfElements (C) != mxGetNumberOfElements (N)
+      || mxGetM (R) != mxGetNumberOfElements (N) || mxGetM (R) == 0
+      || mxGetM (R) > 64)
+    holent_gw_raise (fn, HOLENT_EINVAL, "R", HOLENT_NOINDEX,
+                     "must be an np x nel cell of regions with np names");
+  size_t np = mxGetM (R), nel = mxGetN (R), total = 1;
+  char nm[64][32];
+  const char *names[64];
+  size_t rows[64];
+  int *iscl = mxCalloc (np, sizeof *iscl);
+  {
+    const mxLogical *cp = mxGetLogicals (C);
+    for (size_t i = 0; i < np; i++)
+      iscl[i] = cp[i] != 0;
+  }
+  for (size_t i = 0; i < np; i++)
+    {
+      holent_gw_string (mxGetCell (N, i), fn, "NAMES", nm[i], sizeof nm[i]);
+    }
+  /* Each region alone, named as the user wrote it.  */
+  for (size_t k = 0; k < nel; k++)
+    for (size_t i = 0; i < np; i++)
+      {
+        const mxArray *a = mxGetCell (R, i + k * np);
+        char nmk[72];
+        region_name (nmk, sizeof nmk, nm[i], iscl[i], k);
+        region_ok (&g, a, fn, nmk);
+        total += mxGetM (a);
+      }
+  g.reg = holent_region_alloc (total);
+  g.dbl = mxMalloc (2 * total * sizeof *g.dbl);
   if (g.reg == NULL)
-    mexErrMsgIdAndTxt ("holent:nomem", "out of memory");
-  const double *p = mxGetPr (a);
-  int st = holent_region_set (g.reg, bg.circle, bg.L, n, p, p + n);
-  double r1 = g.reg->bad[0] == (size_t) -1 ? 0.0 : (double) g.reg->bad[0] + 1;
-  double r2 = g.reg->bad[1] == (size_t) -1 ? 0.0 : (double) g.reg->bad[1] + 1;
+    {
+      mxFree (iscl);
+      gw_release (&g);
+      holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
+    }
+  int circle = isfinite (L);
+  for (size_t k = 0; k < nel; k++)
+    {
+      size_t n = 0;
+      char nmk[64][72];
+      for (size_t i = 0; i < np; i++)
+        {
+          const mxArray *a = mxGetCell (R, i + k * np);
+          const double *p = mxGetPr (a);
+          region_name (nmk[i], sizeof nmk[i], nm[i], iscl[i], k);
+          names[i] = nmk[i];
+          rows[i] = mxGetM (a);
+          if (holent_region_check (g.reg, circle, L, rows[i], p, p + rows[i],
+                                   &e))
+            {
+              mxFree (iscl);
+              gw_fail (&g, fn, &e, nmk[i]);
+            }
+          memcpy (g.dbl + n, p, rows[i] * sizeof (double));
+          memcpy (g.dbl + total + n, p + rows[i], rows[i] * sizeof (double));
+          n += rows[i];
+        }
+      if (np > 1
+          && holent_region_parties (g.reg, circle, L, np, rows, g.dbl,
+                                    g.dbl + total, names, &e))
+        {
+          mxFree (iscl);
+          gw_fail (&g, fn, &e, NULL);
+        }
+    }
+  mxFree (iscl);
   gw_release (&g);
-  plhs[0] = mxCreateDoubleScalar ((double) st);
-  if (nlhs > 1)
-    plhs[1] = mxCreateDoubleScalar (r1);
-  if (nlhs > 2)
-    plhs[2] = mxCreateDoubleScalar (r2);
+  plhs[0] = mxCreateLogicalScalar (1);
 }
 
 void
@@ -407,12 +392,14 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   char mode[16];
   holent_gw_init ();
   if (nrhs < 1)
-    mexErrMsgIdAndTxt ("holent:nargs", "MODE missing");
+    holent_gw_raise (GW, HOLENT_ENARGS, NULL, HOLENT_NOINDEX,
+                     "MODE missing");
   holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
   if (strcmp (mode, "entropy") == 0)
     do_entropy (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (mode, "check") == 0)
-    do_check (nlhs, plhs, nrhs, prhs);
+  else if (strcmp (mode, "parties") == 0)
+    do_parties (nlhs, plhs, nrhs, prhs);
   else
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown MODE '%s'", mode);
+    holent_gw_raise (GW, HOLENT_EINVAL, "MODE", HOLENT_NOINDEX,
+                     "unknown mode '%s'", mode);
 }

@@ -61,13 +61,13 @@
 %!test
 %! ## Errors from the gateways carry holent: identifiers.
 %! try
-%!   __holent_interval__ (1, 2);
+%!   __holent_interval__ ("entropy", "f", 1, 2);
 %!   error ("no error raised");
 %! catch err
 %!   assert (strncmp (err.identifier, "holent:", 7), err.identifier);
 %! end_try_catch
 %! try
-%!   __holent_geodesic__ (ads3_background ("vacuum", "line"), 1i, 1, 0);
+%!   __holent_geodesic__ ("length", "f", ads3_background ("vacuum", "line"), 1i, 1, 0);
 %!   error ("no error raised");
 %! catch err
 %!   assert (err.identifier, "holent:type");

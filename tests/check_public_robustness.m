@@ -435,13 +435,13 @@
 %!   Sv = [1 1 1.5 1 1.5 1.5 1.2];
 %!   btf = ads3_background ("tfd", "line", "beta", 1, "shock_alpha", 0.5);
 %!   [~, fmap] = __holent_cone__ ("prove", "contraction_proof", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0);
-%!   G = {"__holent_geodesic__", {bc, 0.1, 0.5, 0}, 1;
-%!        "__holent_interval__", {bc, [0.5 1]}, 1;
+%!   G = {"__holent_geodesic__", {"length", "f", bc, 0.1, 0.5, 0}, 3;
+%!        "__holent_interval__", {"entropy", "f", bc, [0.5 1]}, 3;
 %!        "__holent_rt__", {"entropy", "rt_entropy", "A", bc, [0 1; 2 3]}, 2;
 %!        "__holent_rt__", {"entropy", "rt_entropy", "A", bc, {[0 1], [2 3]}}, 2;
-%!        "__holent_rt__", {"check", bc, [0 1; 2 3]}, 2;
-%!        "__holent_ewcs__", {ads3_background("vacuum", "line"), [0 1], [2 3]}, 1;
-%!        "__holent_ineq__", {Sv, "cyclic", 3, 1, 1e-10}, 1;
+%!        "__holent_rt__", {"parties", "f", {"A"; "B"}, [false; false], 2 * pi, {[0 1]; [2 3]}}, 2;
+%!        "__holent_ewcs__", {"pairs", "f", ads3_background("vacuum", "line"), [0 1], [2 3]}, 3;
+%!        "__holent_ineq__", {"eval", "f", Sv, "cyclic", 3, 1, 1e-10}, 3;
 %!        "__holent_thermo__", {"state", "btz_thermodynamics", "T_Omega", 0.5, 0.2, 2*pi, struct("c", 12)}, 2;
 %!        "__holent_thermo__", {"state", "btz_thermodynamics", "M_J", [1 2], [0.5 1], [], struct("c", 12, "ell", 1)}, 2;
 %!        "__holent_thermo__", {"hawking_page", "hawking_page", "Omega", [], 0.2, 2*pi, struct()}, 2;

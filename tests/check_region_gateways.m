@@ -4,7 +4,7 @@
 ## crash (common practice for MEX code).
 
 %!test
-%! ## The gateways of rt_entropy (modes "entropy" and "check") and of
+%! ## The gateways of rt_entropy (modes "entropy" and "parties") and of
 %! ## wedge_cross_section, called directly with bad input in every slot:
 %! ## they must return or raise a holent: error, never crash.
 %! bgc = ads3_background ("thermal", "circle", "beta", 1);
@@ -22,9 +22,9 @@
 %!   x = bad{i};
 %!   args = {{"entropy", "fn", "A", bgc, x}, {"entropy", "fn", "A", bgl, x}, ...
 %!           {"entropy", "fn", "A", x, [0 1]}, {"entropy", x, "A", bgl, [0 1]}, ...
-%!           {"entropy", "fn", x, bgl, [0 1]}, {"check", bgc, x}, ...
-%!           {"check", x, [0 1]}, {x, bgl, [0 1]}, {"entropy", "fn", "A", bgl}, ...
-%!           {"check", bgl}};
+%!           {"entropy", "fn", x, bgl, [0 1]}, {"parties", "fn", {"A"}, false, 2 * pi, {x}}, ...
+%!           {"parties", "fn", {"A"}, false, x, {[0 1]}}, {x, bgl, [0 1]}, {"entropy", "fn", "A", bgl}, ...
+%!           {"parties", "fn", {"A"}, x, 2 * pi, {[0 1]}}};
 %!   for a = 1:numel (args)
 %!     try
 %!       [~, ~, ~] = __holent_rt__ (args{a}{:});
@@ -35,7 +35,7 @@
 %!   endfor
 %!   for a = {{bgl, x, [2 3]}, {bgl, [0 1], x}, {x, [0 1], [2 3]}, {bgc, x, x}}
 %!     try
-%!       [~, ~, ~, ~, ~, ~, ~, ~] = __holent_ewcs__ (a{1}{:});
+%!       [~, ~, ~, ~, ~, ~, ~] = __holent_ewcs__ ("pairs", "fn", a{1}{:});
 %!     catch err
 %!       ids{end+1} = err.identifier;
 %!     end_try_catch

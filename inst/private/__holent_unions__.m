@@ -1,6 +1,7 @@
-## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
 ## -*- texinfo -*-
-## @deftypefn {} {[@var{Sp}, @var{Su}] =} __holent_unions__ (@var{fn}, @var{bg}, @var{names}, @var{args}, @var{unions})
+## @deftypefn {} {[@var{Sp}, @var{Su}] =} __holent_unions__ (@var{fn}, @var{bg}, @var{names}, @var{args}, @var{unions}, @var{opts})
 ## The entropies an information quantity is built from: the parties
 ## @var{args} (named @var{names}) are checked and broadcast by
 ## @code{__holent_parties__}, whose single-party entropies come back in
@@ -8,12 +9,12 @@
 ## in @var{unions}@{j@} (a vector of party indices), an array of the broadcast
 ## size.  All unions go to the minimiser in one call.  Warns
 ## @code{holent:cutoff} when some interval or gap is not longer than twice
-## the cutoff.
+## the cutoff.  @var{opts}: the caller's name/value options (@qcode{"t"}).
 ## @end deftypefn
 function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
   ## Time-dependent states and regions with times (issue 12).
   o = struct ();
-  if (nargin > 5)
+  if (nargin > 5 && ! isempty (opts))
     o = __holent_opts__ (fn, {"t"}, opts);
   endif
   if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, args))
@@ -34,7 +35,7 @@ function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
   else
     what = "a union of the parties";
   endif
-  [S, ns] = __holent_call__ (gw, "entropy", fn, what, bg, U(:));
+  [S, ns] = feval (gw, "entropy", fn, what, bg, U(:));
   S = reshape (S, [], nu);
   Su = cell (nu, 1);
   for j = 1:nu
@@ -46,3 +47,23 @@ function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
              fn, bg.cutoff);
   endif
 endfunction
+
+%!test
+%! ## two intervals on the vacuum line: the union is the smaller of the
+%! ## disconnected and connected surfaces (Headrick 2010, Phys. Rev. D 82,
+%! ## 126010), (c/3) log(l/eps) per geodesic (Calabrese and Cardy 2004)
+%! bg = ads3_background ("vacuum", "line", "c", 3, "cutoff", 1e-6);
+%! [Sp, Su] = __holent_unions__ ("f", bg, {"A", "B"}, {[0 1], {[1.1 2], [5 6]}}, {[1 2]});
+%! g = @(l) log (l / 1e-6);
+%! assert (Sp{1}, g (1) * [1 1], 1e-12);
+%! assert (Su{1}, [min(g (1) + g (0.9), g (2) + g (0.1)), 2 * g(1)], 1e-12);
+
+%!test
+%! ## no options and an empty option list are the same
+%! bg = ads3_background ("vacuum", "circle");
+%! [a, b] = __holent_unions__ ("f", bg, {"A", "B"}, {[0 1], [2 3]}, {[1 2]});
+%! [c, d] = __holent_unions__ ("f", bg, {"A", "B"}, {[0 1], [2 3]}, {[1 2]}, {});
+%! assert ({a, b}, {c, d});
+
+%!warning <twice the cutoff> __holent_unions__ ("f", ads3_background ("vacuum", "line", "cutoff", 1e-3), {"A", "B"}, {[0 1], [1.001 2]}, {[1 2]});
+%!error <f: unknown option> __holent_unions__ ("f", ads3_background ("vacuum", "line"), {"A"}, {[0 1]}, {1}, {"x", 1})

@@ -170,30 +170,33 @@ holent_ewcs_geodesic_point (const holent_geo_bg *bg, double xP, double xQ,
   return HOLENT_SUCCESS;
 }
 
-/* Length of one interval [s, e]: 0 on success with *len > 0.  */
+/* Length of one interval [s, e]: 0 on success with *len > 0; E (may be
+   NULL) gets the reason, argument ARG.  */
 static int
 interval_length (int circle, double L, double tol, double s, double e,
-                 double *len)
+                 double *len, holent_err *err, int arg)
 {
   double raw = e - s;
+  if (fabs (raw) <= tol)
+    return holent_err_set (err, HOLENT_EEMPTY, arg, HOLENT_NOINDEX,
+                           "has zero length");
   if (!circle)
     {
-      if (fabs (raw) <= tol)
-        return HOLENT_EEMPTY;
       if (raw < 0.0)
-        return HOLENT_EDOM;
+        return holent_err_set (err, HOLENT_EDOM, arg, HOLENT_NOINDEX,
+                               "must have start < end on a line");
       *len = raw;
       return HOLENT_SUCCESS;
     }
-  if (fabs (raw) <= tol)
-    return HOLENT_EEMPTY;
-  if (raw >= L - tol)
-    return HOLENT_EDOM;       /* the whole circle, or more */
+  if (raw >= L - tol)  /* the whole circle, or more */
+    return holent_err_set (err, HOLENT_EDOM, arg, HOLENT_NOINDEX,
+                           "must be shorter than the circle (L = %g)", L);
   raw = fmod (raw, L);        /* end before start: wraps through 0 */
   if (raw < 0.0)
     raw += L;
   if (raw <= tol || raw >= L - tol)
-    return HOLENT_EEMPTY;
+    return holent_err_set (err, HOLENT_EEMPTY, arg, HOLENT_NOINDEX,
+                           "has zero length (modulo the circumference)");
   *len = raw;
   return HOLENT_SUCCESS;
 }
@@ -207,68 +210,146 @@ wrap (double x, double L)
   return y >= L ? 0.0 : y;
 }
 
-int
-holent_ewcs_pair (const holent_geo_bg *bg, const double A[2],
-                  const double B[2], holent_ewcs_result *res)
+/* The pair laid out for the formulas: p = (first length, gap after it,
+   second length, gap after that), x0 the start of the first interval,
+   swap when B comes first on a line.  */
+typedef struct
 {
-  int st, circle, swap = 0;
-  double L, tol, m, lA, lB, p[4], x0, lz[2], beta[2];
-  if (bg == NULL || A == NULL || B == NULL || res == NULL)
-    return HOLENT_EINVAL;
+  int circle, swap;
+  double L, x0, p[4];
+} layout;
+
+static const char *
+bulk_word (holent_bulk b)
+{
+  switch (b)
+    {
+    case HOLENT_BULK_BTZ:
+      return "btz";
+    case HOLENT_BULK_ROTATING_BTZ:
+      return "rotating_btz";
+    case HOLENT_BULK_CONICAL_DEFECT:
+      return "conical_defect";
+    default:
+      return "given";
+    }
+}
+
+/* Validate A, B (arguments 1, 2 of holent_ewcs_check; bg is 0) and lay
+   them out; the returned status is holent_ewcs_pair's, E (may be NULL)
+   gets the reason.  */
+static int
+pair_layout (const holent_geo_bg *bg, const double A[2], const double B[2],
+             layout *y, holent_err *e)
+{
+  int st;
+  double tol, m, lA, lB;
+  holent_err_clear (e);
+  if (bg == NULL || A == NULL || B == NULL)
+    return holent_err_set (e, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
   if ((st = check_bulk (bg)))
-    return st;
+    return holent_err_set (e, st, 0, HOLENT_NOINDEX,
+                           "not implemented for the '%s' bulk (supported: "
+                           "poincare, global_ads, thermal_ads, planar_btz, "
+                           "planar_rotating_btz); see "
+                           "doc/wedge_cross_section.md",
+                           bulk_word (bg->bulk));
   for (int k = 0; k < 2; k++)
-    if (!isfinite (A[k]) || !isfinite (B[k]))
-      return HOLENT_EINVAL;
-  circle = is_circle (bg);
-  L = circle ? bg->L : 0.0;
-  m = L;
+    {
+      const double *X = k ? B : A;
+      for (int j = 0; j < 2; j++)
+        if (!isfinite (X[j]))
+          {
+            holent_err_set (e, isnan (X[j]) ? HOLENT_ENAN : HOLENT_EDOM,
+                            k + 1, HOLENT_NOINDEX, "%s must be %s",
+                            j ? "the end" : "the start",
+                            isnan (X[j]) ? "a number, not NaN" : "finite");
+            return HOLENT_EINVAL;
+          }
+    }
+  y->circle = is_circle (bg);
+  y->L = y->circle ? bg->L : 0.0;
+  y->swap = 0;
+  m = y->L;
   for (int k = 0; k < 2; k++)
     {
       m = fmax (m, fabs (A[k]));
       m = fmax (m, fabs (B[k]));
     }
   tol = 16.0 * DBL_EPSILON * m;
-  if ((st = interval_length (circle, L, tol, A[0], A[1], &lA)))
+  if ((st = interval_length (y->circle, y->L, tol, A[0], A[1], &lA, e, 1)))
     return st;
-  if ((st = interval_length (circle, L, tol, B[0], B[1], &lB)))
+  if ((st = interval_length (y->circle, y->L, tol, B[0], B[1], &lB, e, 2)))
     return st;
-
-  /* p = (first length, gap after it, second length, gap after that);
-     x0 = start of the first interval.  On a line the first interval is
-     the left one and p[3] is the total span (the chord of the outer
-     geodesic).  */
-  if (!circle)
+  /* Pair errors name B, the second of the pair, and say both.  */
+  static const char overlap[] = "A and B overlap (the two intervals must be "
+                                "disjoint)";
+  static const char touch[] = "A and B touch: E_W of adjacent intervals "
+                              "diverges with the cutoff";
+  /* On a line the first interval is the left one and p[3] is the total
+     span (the chord of the outer geodesic).  */
+  if (!y->circle)
     {
-      swap = B[0] < A[0];
-      const double *F = swap ? B : A, *S = swap ? A : B;
+      y->swap = B[0] < A[0];
+      const double *F = y->swap ? B : A, *S = y->swap ? A : B;
       const double gap = S[0] - F[1];
       if (gap < -tol)
-        return HOLENT_EOVERLAP;
+        return holent_err_set (e, HOLENT_EOVERLAP, 2, HOLENT_NOINDEX,
+                               overlap);
       if (gap <= tol)
-        return HOLENT_ECOINCIDE;
-      x0 = F[0];
-      p[0] = swap ? lB : lA;
-      p[1] = gap;
-      p[2] = swap ? lA : lB;
-      p[3] = p[0] + p[1] + p[2];
+        return holent_err_set (e, HOLENT_ECOINCIDE, 2, HOLENT_NOINDEX, touch);
+      y->x0 = F[0];
+      y->p[0] = y->swap ? lB : lA;
+      y->p[1] = gap;
+      y->p[2] = y->swap ? lA : lB;
+      y->p[3] = y->p[0] + y->p[1] + y->p[2];
     }
   else
     {
+      const double L = y->L;
       double ob = wrap (B[0] - A[0], L);
       if (ob > L - tol)
         ob = 0.0;
       const double d1 = ob - lA, d2 = L - ob - lB;
       if (d1 < -tol || d2 < -tol)
-        return HOLENT_EOVERLAP;
+        return holent_err_set (e, HOLENT_EOVERLAP, 2, HOLENT_NOINDEX,
+                               overlap);
       if (d1 <= tol || d2 <= tol)
-        return HOLENT_ECOINCIDE;
-      x0 = A[0];
-      p[0] = lA;
-      p[1] = d1;
-      p[2] = lB;
-      p[3] = d2;
+        return holent_err_set (e, HOLENT_ECOINCIDE, 2, HOLENT_NOINDEX, touch);
+      y->x0 = A[0];
+      y->p[0] = lA;
+      y->p[1] = d1;
+      y->p[2] = lB;
+      y->p[3] = d2;
     }
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_ewcs_check (const holent_geo_bg *bg, const double A[2],
+                   const double B[2], holent_err *e)
+{
+  layout y;
+  holent_err tmp;
+  if (e == NULL)
+    e = &tmp;
+  pair_layout (bg, A, B, &y, e);
+  return e->status;
+}
+
+int
+holent_ewcs_pair (const holent_geo_bg *bg, const double A[2],
+                  const double B[2], holent_ewcs_result *res)
+{
+  int st;
+  double lz[2], beta[2];
+  layout y;
+  if (res == NULL)
+    return HOLENT_EINVAL;
+  if ((st = pair_layout (bg, A, B, &y, NULL)))
+    return st;
+  const int circle = y.circle, swap = y.swap;
+  const double L = y.L, x0 = y.x0, *p = y.p;
 
   /* Cross-ratios and the two points' arc-length parameters of each
      chiral half: with the boundary points a1 < a2 < b1 < b2,

@@ -74,6 +74,14 @@ typedef struct
 int holent_ewcs_pair (const holent_geo_bg *bg, const double A[2],
                       const double B[2], holent_ewcs_result *res);
 
+/* The checks of holent_ewcs_pair with the reason in E: E->arg 0 for the
+ * background (an unsupported bulk), 1 for A, 2 for B (also for an
+ * overlap or a contact of the two, the reason then names both); NaN gives
+ * HOLENT_ENAN, Inf HOLENT_EDOM.  Returns E's status (0 when the pair is
+ * valid).  */
+int holent_ewcs_check (const holent_geo_bg *bg, const double A[2],
+                       const double B[2], holent_err *e);
+
 /* The point at signed arc length s from the midpoint of the RT geodesic of
  * the t = 0 boundary points xP and xQ (towards xP), as (t, x, r) above.
  * On a circle the geodesic is the one of global AdS.  Returns

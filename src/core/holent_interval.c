@@ -130,3 +130,21 @@ holent_interval_entropy (const holent_geo_bg *bg, size_t n, const double *l,
     *n_short = nshort;
   return HOLENT_SUCCESS;
 }
+
+int
+holent_interval_check (const holent_geo_bg *bg, size_t i, double l,
+                       holent_err *e)
+{
+  holent_err_clear (e);
+  if (bg == NULL)
+    return holent_err_set (e, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  if (isnan (l))
+    return holent_err_set (e, HOLENT_ENAN, 0, i, NULL);
+  if (length_ok (bg, l))
+    return HOLENT_SUCCESS;
+  if (bg->circle)
+    return holent_err_set (e, HOLENT_EDOM, 0, i, "must lie in (0, L] with "
+                           "L = %g the circumference, got %g", bg->L, l);
+  return holent_err_set (e, HOLENT_EDOM, 0, i, "must be a positive length "
+                         "(finite), got %g", l);
+}

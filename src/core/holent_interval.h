@@ -20,4 +20,11 @@ int holent_interval_entropy (const holent_geo_bg *bg, size_t n,
                              unsigned char *branch, size_t *bad,
                              size_t *n_short);
 
+/* Why the length l = lengths[i] fails holent_interval_entropy, in E (arg
+ * 0: the lengths, index i): HOLENT_ENAN, HOLENT_EDOM (not positive, Inf,
+ * longer than the circle), or HOLENT_SUCCESS (E cleared) when l is
+ * valid.  Returns E's status.  */
+int holent_interval_check (const holent_geo_bg *bg, size_t i, double l,
+                           holent_err *e);
+
 #endif /* HOLENT_INTERVAL_H */

@@ -6,6 +6,7 @@
 #include <math.h>
 #include <stdint.h>
 #include <stdlib.h>
+#include <stdio.h>
 #include "holent_region.h"
 
 typedef struct
@@ -256,4 +257,112 @@ holent_region_set (holent_region *r, int circle, double L, size_t n,
         r->pts[2 * k + 1] = p[k].e;
       }
   return HOLENT_SUCCESS;
+}
+
+int
+holent_region_check (holent_region *r, int circle, double L, size_t n,
+                     const double *a, const double *b, holent_err *e)
+{
+  holent_err_clear (e);
+  int st = holent_region_set (r, circle, L, n, a, b);
+  if (st == HOLENT_SUCCESS || r == NULL)
+    return holent_err_set (e, st, 0, HOLENT_NOINDEX, NULL);
+  size_t i = r->bad[0], j = r->bad[1];
+  int known = i != (size_t) -1;
+  int ret = st;
+  char what[160];
+  switch (st)
+    {
+    case HOLENT_EOVERLAP:
+      snprintf (what, sizeof what, "rows %zu and %zu overlap (intervals of "
+                "a region must be disjoint; touching ones are merged)",
+                i + 1, j + 1);
+      break;
+    case HOLENT_EEMPTY:
+      if (known)
+        snprintf (what, sizeof what, "row %zu is a zero-length interval",
+                  i + 1);
+      else
+        snprintf (what, sizeof what, "has no intervals");
+      break;
+    case HOLENT_EDOM:
+      if (!known)
+        snprintf (what, sizeof what, "the circumference must be finite and "
+                  "positive");
+      else if (r->circle)
+        snprintf (what, sizeof what, "row %zu is longer than the circle "
+                  "(end - start must not exceed the circumference %g)",
+                  i + 1, r->L);
+      else
+        snprintf (what, sizeof what, "row %zu must have start < end on a "
+                  "line", i + 1);
+      break;
+    case HOLENT_ETOOBIG:
+      snprintf (what, sizeof what, "has too many rows (%zu; at most %zu)", n,
+                r->nmax);
+      break;
+    case HOLENT_EINVAL:
+      if (known && (isnan (a[i]) || isnan (b[i])))
+        {
+          ret = HOLENT_ENAN;
+          snprintf (what, sizeof what, "row %zu must be numbers, not NaN",
+                    i + 1);
+        }
+      else if (known && (!isfinite (a[i]) || !isfinite (b[i])))
+        {
+          ret = HOLENT_EDOM;
+          snprintf (what, sizeof what, "row %zu must be finite", i + 1);
+        }
+      else if (known)
+        {
+          ret = HOLENT_EDOM;
+          snprintf (what, sizeof what, "row %zu: end - start overflows "
+                    "(coordinates too large)", i + 1);
+        }
+      else
+        snprintf (what, sizeof what, "%s", holent_strerror (st));
+      break;
+    default:
+      snprintf (what, sizeof what, "%s", holent_strerror (st));
+      break;
+    }
+  /* The rows are named in the reason (and kept in r->bad): an index
+     would be shown as an element, A(i), not as a row.  */
+  return holent_err_set (e, ret, 0, HOLENT_NOINDEX, "%s", what);
+}
+
+/* Party of the union row K (rows[i] rows each); *row its row in it.  */
+static size_t
+party_of (size_t np, const size_t *rows, size_t k, size_t *row)
+{
+  size_t i = 0;
+  while (i + 1 < np && k >= rows[i])
+    k -= rows[i++];
+  *row = k;
+  return i;
+}
+
+int
+holent_region_parties (holent_region *r, int circle, double L, size_t np,
+                       const size_t *rows, const double *a, const double *b,
+                       const char *const *names, holent_err *e)
+{
+  size_t n = 0;
+  holent_err_clear (e);
+  if (rows == NULL || names == NULL)
+    return holent_err_set (e, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  for (size_t i = 0; i < np; i++)
+    n += rows[i];
+  int st = holent_region_check (r, circle, L, n, a, b, e);
+  if (st != HOLENT_EOVERLAP)
+    return st;
+  size_t j1, j2, i1 = party_of (np, rows, r->bad[0], &j1);
+  size_t i2 = party_of (np, rows, r->bad[1], &j2);
+  if (i1 == i2)  /* not reached for valid parties */
+    return holent_err_set (e, HOLENT_EOVERLAP, -1, HOLENT_NOINDEX,
+                           "rows %zu and %zu of %s overlap", j1 + 1, j2 + 1,
+                           names[i1]);
+  return holent_err_set (e, HOLENT_EOVERLAP, -1, HOLENT_NOINDEX,
+                         "%s(%zu,:) and %s(%zu,:) overlap: the parties must "
+                         "be disjoint", names[i1], j1 + 1, names[i2], j2 + 1);
 }

@@ -63,4 +63,25 @@ void holent_region_free (holent_region *r);
 int holent_region_set (holent_region *r, int circle, double L, size_t n,
                        const double *a, const double *b);
 
+/* holent_region_set, with the reason of a failure in E (may be NULL) for
+ * the caller's message: E->arg 0 (the region), E->index, E->index2 the
+ * offending rows (0-based, HOLENT_NOINDEX when none; also in r->bad) and
+ * E->reason what was expected, naming the rows 1-based (overlap naming
+ * both rows, zero length, longer than the circle, start < end, too many
+ * rows, NaN, Inf, overflow of end - start).  Returns E's status: that of
+ * holent_region_set, except HOLENT_ENAN for a NaN coordinate and
+ * HOLENT_EDOM for Inf or overflow (holent_region_set: HOLENT_EINVAL).  */
+int holent_region_check (holent_region *r, int circle, double L, size_t n,
+                         const double *a, const double *b, holent_err *e);
+
+/* The union of np parties, party i being rows[i] consecutive rows of
+ * (a, b), each party valid on its own: normalise it as holent_region_set
+ * does; two parties that overlap fill E (arg -1) with a reason naming
+ * both rows as NAMES[i](row,:) (names of the parties, for the message
+ * only).  Returns E's status.  */
+int holent_region_parties (holent_region *r, int circle, double L,
+                           size_t np, const size_t *rows, const double *a,
+                           const double *b, const char *const *names,
+                           holent_err *e);
+
 #endif /* HOLENT_REGION_H */
