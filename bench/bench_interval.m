@@ -75,17 +75,6 @@ function report (nm, n, t, tp, S, Sp)
           tp, t / tp, max (abs (S(:) - Sp(:)) ./ max (abs (Sp(:)), 1)));
 endfunction
 
-function t = per_call (f, m)
-  f ();
-  ts = zeros (m, 1);
-  for r = 1:m
-    t0 = tic ();
-    f ();
-    ts(r) = toc (t0);
-  endfor
-  t = median (ts);
-endfunction
-
 function r = ifelse_ (c, a, b)
   if (c) r = a; else r = b; endif
 endfunction

@@ -53,6 +53,15 @@ function bench_rt ()
             agree, met);
   endfor
   printf ("(medians; peer = plain Octave DP vectorised per start point, O(n^3); ratio = peer / holent)\n");
+  ## fixed cost of a call with one interval (issue 11: under 50 us)
+  m = 2000;
+  f = {@() rt_entropy (btz, [0 0.5]), @() rt_entropy (vac, [0 0.5]), ...
+       @() __holent_rt__ ("entropy", "rt_entropy", "A", btz, [0 0.5])};
+  t = cellfun (@(g) per_call (g, m), f);
+  printf ("fixed cost of one call with one interval (median of %d): rt_entropy BTZ circle %.1f us, vacuum line %.1f us,\n",
+          m, 1e6 * t(1), 1e6 * t(2));
+  printf ("  gateway alone %.1f us (target < 50 us: %s)\n", 1e6 * t(3),
+          ifelse_ (max (t(1:2)) < 50e-6, "met", "NOT met"));
 endfunction
 
 ## n intervals, one in each of n equal cells, random position and length

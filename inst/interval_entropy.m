@@ -1,17 +1,18 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
 
 ## -*- texinfo -*-
-## @deftypefn  {} {@var{S} =} interval_entropy (@var{bg}, @var{l})
-## @deftypefnx {} {[@var{S}, @var{branch}] =} interval_entropy (@var{bg}, @var{l})
-## @deftypefnx {} {[@dots{}] =} interval_entropy (@var{bg}, @var{l}, "at", @var{x0})
+## @deftypefn  {} {@var{S} =} interval_entropy (@var{bg}, @var{len})
+## @deftypefnx {} {[@var{S}, @var{branch}] =} interval_entropy (@var{bg}, @var{len})
+## @deftypefnx {} {[@dots{}] =} interval_entropy (@var{bg}, @var{len}, "at", @var{x0})
 ## @deftypefnx {} {@dots{} =} interval_entropy (@dots{}, "dt", @var{dt}, "t", @var{t}, "timelike", @var{tf})
-## Ryu-Takayanagi entropy of a single boundary interval of length @var{l}
+## Ryu-Takayanagi entropy of a single boundary interval of length @var{len}
 ## (an array; @var{S} has its size) in background @var{bg} from
 ## @code{ads3_background}.
 ##
 ## @var{S} = (c/6) * (regulated geodesic length), cutoff @code{bg.cutoff}.
-## On a line @var{l} > 0.  On a circle of circumference L, 0 < @var{l} <= L
-## and the homology constraint picks the smaller of the geodesic over the
+## On a line @var{len} > 0.  On a circle of circumference L
+## (@code{bg.circumference}) each length lies in (0, L], and the homology
+## constraint picks the smaller of the geodesic over the
 ## interval and the geodesic over its complement plus the horizon:
 ## @example
 ## S(l) = min (S_geo(l), S_geo(L - l) + S_BH)
@@ -28,8 +29,8 @@
 ## twice the cutoff, where the regulated formula has no meaning.
 ##
 ## On a BCFT background (@code{ads3_background ("bcft", @dots{})}) the
-## interval is [x0, x0 + @var{l}] with x0 set by the option
-## @qcode{"at"} (an array of the size of @var{l}, or a scalar; default 0:
+## interval is [x0, x0 + @var{len}] with x0 set by the option
+## @qcode{"at"} (an array of the size of @var{len}, or a scalar; default 0:
 ## adjacent to the boundary).  The minimum is taken over the connected
 ## geodesic, geodesics ending orthogonally on the brane(s), and the horizon
 ## where the homology needs it (@code{rt_entropy}); @var{branch} is true where
@@ -38,7 +39,7 @@
 ## temperature.
 ##
 ## @strong{Time} (@file{doc/hrt_time.md}): @qcode{"dt"} (broadcast against
-## @var{l}) makes the interval boosted: its right end sits dt later than its
+## @var{len}) makes the interval boosted: its right end sits dt later than its
 ## left end (covariant HRT entropy, with the homology constraint as above).
 ## The endpoints must be spacelike (|dt| below the distance, on a circle
 ## the circle distance), else @code{holent:timelike}, unless
@@ -49,7 +50,7 @@
 ## @qcode{"t"} (scalar or vector) is the time after a quench
 ## (@code{ads3_background ("quench", ...)}) or a shift of both endpoint
 ## times; a vector gives one result per time (the shape of @var{t} for a
-## scalar @var{l}, numel(l) x numel(t) otherwise).  On this path
+## scalar @var{len}, numel(l) x numel(t) otherwise).  On this path
 ## @var{branch} is true where the horizon is part of the surface.
 ##
 ## @seealso{ads3_background, geodesic_length, rt_entropy}

@@ -39,8 +39,8 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
                                      mxGetPr (plhs[0]), &bad);
   if (st)
     {
-      if (bad >= n1
-          || holent_geo_points_check (&bg, bad, x1[bad], x2[bad], &e) == 0)
+      (void) bad;
+      if (holent_geo_points_check (&bg, n1, x1, x2, &e) == 0)
         holent_err_set (&e, st, -1, HOLENT_NOINDEX, NULL);
       holent_gw_raise_err (fn, &e, names, 2);
     }

@@ -1,4 +1,5 @@
 ## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later.
+## SPDX-License-Identifier: GPL-3.0-or-later
 ## -*- texinfo -*-
 ## @deftypefn {} {@var{opts} =} __holent_opts__ (@var{fn}, @var{names}, @var{args})
 ## Parse name/value pairs @var{args} (a cell) against the allowed option
@@ -28,3 +29,12 @@ function opts = __holent_opts__ (fn, names, args)
     opts.(canon) = args{k+1};
   endfor
 endfunction
+
+%!test
+%! o = __holent_opts__ ("f", {"tol", "names"}, {"TOL", 1, "names", {"a"}});
+%! assert (o, struct ("tol", 1, "names", {{"a"}}));
+%!assert (__holent_opts__ ("f", {"tol"}, {}), struct ())
+%!error <f: options must come in name/value pairs> __holent_opts__ ("f", {"tol"}, {"tol"})
+%!error <f: option name 1 must be a string> __holent_opts__ ("f", {"tol"}, {1, 2})
+%!error <f: unknown option 'x' \(expected one of: tol, t\)> __holent_opts__ ("f", {"tol", "t"}, {"x", 2})
+%!error <f: option 'tol' given twice> __holent_opts__ ("f", {"tol"}, {"tol", 1, "Tol", 2})

@@ -277,10 +277,22 @@ pair_layout (const holent_geo_bg *bg, const double A[2], const double B[2],
       m = fmax (m, fabs (B[k]));
     }
   tol = 16.0 * DBL_EPSILON * m;
-  if ((st = interval_length (y->circle, y->L, tol, A[0], A[1], &lA, e, 1)))
-    return st;
-  if ((st = interval_length (y->circle, y->L, tol, B[0], B[1], &lB, e, 2)))
-    return st;
+  /* each interval on its own scale first, so that a huge B does not make
+     A look empty */
+  for (int k = 0; k < 2; k++)
+    {
+      const double *X = k ? B : A;
+      const double sk = fmax (y->L, fmax (fabs (X[0]), fabs (X[1])));
+      if (!isfinite (X[1] - X[0]))
+        {
+          holent_err_set (e, HOLENT_EDOM, k + 1, HOLENT_NOINDEX,
+                          "end - start overflows (coordinates too large)");
+          return HOLENT_EINVAL;
+        }
+      if ((st = interval_length (y->circle, y->L, 16.0 * DBL_EPSILON * sk,
+                                 X[0], X[1], k ? &lB : &lA, e, k + 1)))
+        return st;
+    }
   /* Pair errors name B, the second of the pair, and say both.  */
   static const char overlap[] = "A and B overlap (the two intervals must be "
                                 "disjoint)";

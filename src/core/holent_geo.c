@@ -192,29 +192,35 @@ holent_geo_point_lengths (const holent_geo_bg *bg, size_t n,
 }
 
 int
-holent_geo_points_check (const holent_geo_bg *bg, size_t i, double x1,
-                         double x2, holent_err *e)
+holent_geo_points_check (const holent_geo_bg *bg, size_t n,
+                         const double *x1, const double *x2, holent_err *e)
 {
   holent_err_clear (e);
-  if (bg == NULL)
+  if (bg == NULL || (n > 0 && (x1 == NULL || x2 == NULL)))
     return holent_err_set (e, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
-  const double x[2] = { x1, x2 };
   for (int k = 0; k < 2; k++)
     {
-      if (isnan (x[k]))
-        return holent_err_set (e, HOLENT_ENAN, k, i, NULL);
-      if (!isfinite (x[k]))
-        return holent_err_set (e, HOLENT_EDOM, k, i, "must be finite");
+      const double *x = k ? x2 : x1;
+      for (size_t i = 0; i < n; i++)
+        {
+          if (isnan (x[i]))
+            return holent_err_set (e, HOLENT_ENAN, k, i, NULL);
+          if (!isfinite (x[i]))
+            return holent_err_set (e, HOLENT_EDOM, k, i, "must be finite");
+        }
     }
-  const double d = x2 - x1;
-  if (!isfinite (d))
-    return holent_err_set (e, HOLENT_EDOM, 1, i, "its distance to the "
-                           "first point overflows double precision: the "
-                           "points must be closer");
-  if (d == 0.0 || (bg->circle && fmod (d, bg->L) == 0.0))
-    return holent_err_set (e, HOLENT_ECOINCIDE, 1, i, "coincides with the "
-                           "first point%s: no geodesic joins a point to "
-                           "itself", bg->circle ? " (modulo the "
-                           "circumference)" : "");
+  for (size_t i = 0; i < n; i++)
+    {
+      const double d = x2[i] - x1[i];
+      if (!isfinite (d))
+        return holent_err_set (e, HOLENT_EDOM, 1, i, "its distance to the "
+                               "first point overflows double precision: "
+                               "the points must be closer");
+      if (d == 0.0 || (bg->circle && fmod (d, bg->L) == 0.0))
+        return holent_err_set (e, HOLENT_ECOINCIDE, 1, i, "coincides with "
+                               "the first point%s: no geodesic joins a "
+                               "point to itself", bg->circle
+                               ? " (modulo the circumference)" : "");
+    }
   return HOLENT_SUCCESS;
 }

@@ -77,14 +77,15 @@ int holent_geo_point_lengths (const holent_geo_bg *bg, size_t n,
                               holent_geo_class cls, double *len,
                               size_t *bad);
 
-/* Why the pair (x1, x2) = (X1[i], X2[i]) fails holent_geo_point_lengths,
- * in E (arg 0: the first points, 1: the second ones; index i): NaN
- * (HOLENT_ENAN), Inf or an overflowing difference (HOLENT_EDOM),
- * coincident points (HOLENT_ECOINCIDE, modulo L on a circle), or
- * HOLENT_SUCCESS (E cleared) when the pair is valid.  Returns E's
- * status.  */
-int holent_geo_points_check (const holent_geo_bg *bg, size_t i, double x1,
-                             double x2, holent_err *e);
+/* Why holent_geo_point_lengths fails on the N pairs (X1[i], X2[i]), in
+ * E (arg 0: X1, 1: X2; index: the element): values first, over both
+ * arrays (NaN: HOLENT_ENAN, Inf: HOLENT_EDOM), then the pairs in order (a
+ * difference that overflows: HOLENT_EDOM; coincident points, modulo L on
+ * a circle: HOLENT_ECOINCIDE).  HOLENT_SUCCESS (E cleared) when every
+ * pair is valid.  Returns E's status.  */
+int holent_geo_points_check (const holent_geo_bg *bg, size_t n,
+                             const double *x1, const double *x2,
+                             holent_err *e);
 
 /* Inline kernels, for hot loops of other core modules.  They assume an
    initialised bg and an arc that holent_geo_arc_length accepts; no

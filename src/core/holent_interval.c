@@ -143,8 +143,8 @@ holent_interval_check (const holent_geo_bg *bg, size_t i, double l,
   if (length_ok (bg, l))
     return HOLENT_SUCCESS;
   if (bg->circle)
-    return holent_err_set (e, HOLENT_EDOM, 0, i, "must lie in (0, L] with "
-                           "L = %g the circumference, got %g", bg->L, l);
+    return holent_err_set (e, HOLENT_EDOM, 0, i, "must lie in (0, "
+                           "circumference] = (0, %g], got %g", bg->L, l);
   return holent_err_set (e, HOLENT_EDOM, 0, i, "must be a positive length "
                          "(finite), got %g", l);
 }

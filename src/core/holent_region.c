@@ -265,8 +265,10 @@ holent_region_check (holent_region *r, int circle, double L, size_t n,
 {
   holent_err_clear (e);
   int st = holent_region_set (r, circle, L, n, a, b);
-  if (st == HOLENT_SUCCESS || r == NULL)
-    return holent_err_set (e, st, 0, HOLENT_NOINDEX, NULL);
+  if (st == HOLENT_SUCCESS)
+    return HOLENT_SUCCESS;
+  if (r == NULL)
+    return holent_err_set (e, st, -1, HOLENT_NOINDEX, NULL);
   size_t i = r->bad[0], j = r->bad[1];
   int known = i != (size_t) -1;
   int ret = st;

@@ -9,6 +9,7 @@
  * along its geodesic only lengthens the cross section.  */
 #include <float.h>
 #include <math.h>
+#include <string.h>
 #include <stdlib.h>
 #include <gsl/gsl_math.h>
 #include "holent_ctest.h"
@@ -394,9 +395,38 @@ test_errors (void)
   HT_CLOSE (pt[1], 1.0, 1e-14);
 }
 
+/* The reasons of holent_ewcs_check: which argument, which words.  */
+static void
+test_reasons (void)
+{
+  holent_geo_bg bg;
+  holent_err e;
+  const double A[2] = { 0, 1 }, B[2] = { 0.5, 2 }, C[2] = { 1, 2 };
+  const double R[2] = { 3, 2 }, Z[2] = { 3, 3 }, N[2] = { NAN, 1 };
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_POINCARE, 0, 1e-6, 0, 0, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_ewcs_check (&bg, A, B, &e), HOLENT_EOVERLAP);
+  HT_CHECK (e.arg == 2 && strstr (e.reason, "A and B overlap"), "%d %s", e.arg, e.reason);
+  HT_STATUS (holent_ewcs_check (&bg, A, C, &e), HOLENT_ECOINCIDE);
+  HT_CHECK (strstr (e.reason, "touch") != NULL, "%s", e.reason);
+  HT_STATUS (holent_ewcs_check (&bg, A, R, &e), HOLENT_EDOM);
+  HT_CHECK (e.arg == 2 && strstr (e.reason, "start < end"), "%d %s", e.arg, e.reason);
+  HT_STATUS (holent_ewcs_check (&bg, Z, C, &e), HOLENT_EEMPTY);
+  HT_CHECK (e.arg == 1, "arg %d", e.arg);
+  HT_STATUS (holent_ewcs_check (&bg, N, C, &e), HOLENT_ENAN);
+  HT_STATUS (holent_ewcs_check (&bg, A, Z, NULL), HOLENT_EEMPTY);
+  HT_STATUS (holent_ewcs_check (&bg, A, (const double[2]) { 3, 4 }, &e), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, 2 * M_PI, 1e-6, 1, 1, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_ewcs_check (&bg, A, R, &e), HOLENT_EUNSUP);
+  HT_CHECK (e.arg == 0 && strstr (e.reason, "'btz'"), "%d %s", e.arg, e.reason);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, 2 * M_PI, 1e-6, 1, 1, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_ewcs_check (&bg, A, (const double[2]) { 2, 2 + 2 * M_PI }, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "shorter than the circle") != NULL, "%s", e.reason);
+}
+
 int
 main (void)
 {
+  test_reasons ();
   test_errors ();
   test_asinh ();
   test_poincare ();

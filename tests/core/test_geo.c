@@ -3,6 +3,7 @@
  * as an independent evaluation.  */
 #include <math.h>
 #include <stdlib.h>
+#include <string.h>
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_sf_trig.h>
 #include <gsl/gsl_errno.h>
@@ -185,10 +186,47 @@ test_init_range (void)
   HT_CHECK (isfinite (len), "len %g", len);
 }
 
+/* The reasons of holent_interval_check and holent_geo_points_check.  */
+static void
+test_reasons (void)
+{
+  holent_geo_bg bg;
+  holent_err e;
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, 2 * M_PI, 1e-6, 1, 1, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_interval_check (&bg, 4, 7.0, &e), HOLENT_EDOM);
+  HT_CHECK (e.arg == 0 && e.index == 4, "arg %d index %zu", e.arg, e.index);
+  HT_CHECK (strstr (e.reason, "must lie in (0, circumference]") != NULL, "%s", e.reason);
+  HT_STATUS (holent_interval_check (&bg, 0, NAN, &e), HOLENT_ENAN);
+  HT_STATUS (holent_interval_check (&bg, 0, 2 * M_PI, &e), HOLENT_SUCCESS);
+  HT_STATUS (holent_interval_check (NULL, 0, 1, &e), HOLENT_EINVAL);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { 1.0 }, (const double[1]) { 1.0 + 2 * M_PI }, &e), HOLENT_ECOINCIDE);
+  HT_CHECK (e.arg == 1 && e.index == 0, "arg %d", e.arg);
+  HT_CHECK (strstr (e.reason, "modulo the circumference") != NULL, "%s", e.reason);
+  /* values before pairs: the NaN of X1(2) is named, not the coincident
+     pair 1 */
+  HT_STATUS (holent_geo_points_check (&bg, 2, (const double[2]) { 0.5, NAN },
+                                      (const double[2]) { 0.5, 1 }, &e),
+             HOLENT_ENAN);
+  HT_CHECK (e.arg == 0 && e.index == 1, "arg %d index %zu", e.arg, e.index);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { 1.0 }, (const double[1]) { 2.0 }, &e), HOLENT_SUCCESS);
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_POINCARE, 0, 1e-6, 0, 0, 1, 3), HOLENT_SUCCESS);
+  HT_STATUS (holent_interval_check (&bg, 0, -1.0, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "positive length") != NULL, "%s", e.reason);
+  HT_STATUS (holent_interval_check (&bg, 0, INFINITY, &e), HOLENT_EDOM);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { NAN }, (const double[1]) { 1.0 }, &e), HOLENT_ENAN);
+  HT_CHECK (e.arg == 0, "arg %d", e.arg);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { 1.0 }, (const double[1]) { -INFINITY }, &e), HOLENT_EDOM);
+  HT_CHECK (e.arg == 1, "arg %d", e.arg);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { -1e308 }, (const double[1]) { 1e308 }, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "overflows") != NULL, "%s", e.reason);
+  HT_STATUS (holent_geo_points_check (&bg, 1, (const double[1]) { 3.0 }, (const double[1]) { 3.0 }, &e), HOLENT_ECOINCIDE);
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
+  test_reasons ();
   test_init_errors ();
   test_init_range ();
   test_lengths ();

@@ -3,6 +3,7 @@
 #include <float.h>
 #include <math.h>
 #include <stdlib.h>
+#include <string.h>
 #include <gsl/gsl_math.h>
 #include "holent_ctest.h"
 #include "holent_region.h"
@@ -281,10 +282,69 @@ test_tolerance (void)
   holent_region_free (q);
 }
 
+/* The reasons of holent_region_check and holent_region_parties: status,
+   argument and the rows named in words (common practice: a message says
+   what was wrong and where).  */
+static void
+test_reasons (void)
+{
+  holent_region *r = holent_region_alloc (4);
+  holent_err e;
+  const char *names[] = { "A", "B{2}" };
+  double a[4], b[4];
+  a[0] = 0; b[0] = 2; a[1] = 1; b[1] = 3;
+  HT_STATUS (holent_region_check (r, 0, 0, 2, a, b, &e), HOLENT_EOVERLAP);
+  HT_CHECK (e.arg == 0 && e.index == HOLENT_NOINDEX, "arg %d", e.arg);
+  HT_CHECK (strstr (e.reason, "rows 1 and 2 overlap") != NULL, "%s", e.reason);
+  a[1] = 5; b[1] = 5;
+  HT_STATUS (holent_region_check (r, 0, 0, 2, a, b, &e), HOLENT_EEMPTY);
+  HT_CHECK (strstr (e.reason, "row 2 is a zero-length") != NULL, "%s", e.reason);
+  b[1] = 4;
+  HT_STATUS (holent_region_check (r, 0, 0, 2, a, b, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "row 2 must have start < end") != NULL, "%s", e.reason);
+  HT_STATUS (holent_region_check (r, 1, 2.0, 1, a, b, &e), HOLENT_SUCCESS);
+  HT_CHECK (e.status == 0 && e.reason[0] == '\0', "cleared");
+  a[0] = 0; b[0] = 7;
+  HT_STATUS (holent_region_check (r, 1, 2 * M_PI, 1, a, b, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "row 1 is longer than the circle") != NULL, "%s", e.reason);
+  HT_STATUS (holent_region_check (r, 0, 0, 0, a, b, &e), HOLENT_EEMPTY);
+  HT_CHECK (strstr (e.reason, "has no intervals") != NULL, "%s", e.reason);
+  HT_STATUS (holent_region_check (r, 0, 0, 5, a, b, &e), HOLENT_ETOOBIG);
+  HT_CHECK (strstr (e.reason, "too many rows") != NULL, "%s", e.reason);
+  a[0] = NAN;
+  HT_STATUS (holent_region_check (r, 0, 0, 1, a, b, &e), HOLENT_ENAN);
+  a[0] = INFINITY;
+  HT_STATUS (holent_region_check (r, 0, 0, 1, a, b, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "finite") != NULL, "%s", e.reason);
+  a[0] = -1e308; b[0] = 1e308;
+  HT_STATUS (holent_region_check (r, 0, 0, 1, a, b, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "overflows") != NULL, "%s", e.reason);
+  HT_STATUS (holent_region_check (r, 1, -1.0, 1, a, b, &e), HOLENT_EDOM);
+  HT_STATUS (holent_region_check (r, 0, 0, 1, a, b, NULL), HOLENT_EDOM);
+  /* parties: A = {[0 1]}, B{2} = {[3 4], [0.5 2]}: row 1 of A meets row 2
+     of B{2} */
+  size_t rows[2] = { 1, 2 };
+  a[0] = 0; b[0] = 1; a[1] = 3; b[1] = 4; a[2] = 0.5; b[2] = 2;
+  HT_STATUS (holent_region_parties (r, 0, 0, 2, rows, a, b, names, &e),
+             HOLENT_EOVERLAP);
+  HT_CHECK (e.arg == -1, "arg %d", e.arg);
+  HT_CHECK (strcmp (e.reason, "A(1,:) and B{2}(2,:) overlap: the parties "
+                    "must be disjoint") == 0, "%s", e.reason);
+  /* touching parties are fine, and normalise as one region */
+  a[2] = 1; b[2] = 2;
+  HT_STATUS (holent_region_parties (r, 0, 0, 2, rows, a, b, names, &e),
+             HOLENT_SUCCESS);
+  HT_CHECK (r->n == 2, "n %zu", r->n);
+  HT_STATUS (holent_region_parties (r, 0, 0, 2, NULL, a, b, names, &e),
+             HOLENT_EINVAL);
+  holent_region_free (r);
+}
+
 int
 main (void)
 {
   srand (2026);
+  test_reasons ();
   test_alloc ();
   test_errors ();
   test_normalise ();
