@@ -57,7 +57,7 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (nargin > 3)
     o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);
   endif
-  timed = any (! strcmp (fieldnames (o), "class")) ...
+  timed = (nargin > 3 && any (! strcmp (fieldnames (o), "class"))) ...
           || __holent_time_entropy__ ("timed", bg, {});
   cls = 0;
   if (isfield (o, "class"))

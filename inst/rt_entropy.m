@@ -140,8 +140,8 @@ function [S, conf] = rt_entropy (bg, A, varargin)
     if (! all (ok(:)))
       A(! ok) = cellfun (@full, A(! ok), "uniformoutput", false);
     endif
-  else
-    A = to_double (fn, A);
+  elseif (! (isa (A, "double") && isreal (A)) || issparse (A))
+    A = to_double (fn, A);   # integer, single, sparse: their double values
   endif
   if (nargout > 1)
     [S, nshort, conf] = feval (gw, "entropy", fn, "A", bg, A);
