@@ -141,9 +141,9 @@ function [S, conf] = rt_entropy (bg, A, varargin)
     A = to_double (fn, A);
   endif
   if (nargout > 1)
-    [S, nshort, conf] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
+    [S, nshort, conf] = feval (gw, "entropy", fn, "A", bg, A);
   else
-    [S, nshort] = __holent_call__ (gw, "entropy", fn, "A", bg, A);
+    [S, nshort] = feval (gw, "entropy", fn, "A", bg, A);
   endif
   if (nshort > 0)
     warning ("holent:cutoff",

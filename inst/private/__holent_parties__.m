@@ -67,9 +67,9 @@ function [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args)
   for i = 1:np
     ## each region alone: raises with the region's name
     if (iscl(i))
-      [Sp{i}, ns] = __holent_call__ (gw, "entropy", fn, names{i}, bg, P{i});
+      [Sp{i}, ns] = feval (gw, "entropy", fn, names{i}, bg, P{i});
     else
-      [s1, ns] = __holent_call__ (gw, "entropy", fn, names{i}, bg, P{i}{1});
+      [s1, ns] = feval (gw, "entropy", fn, names{i}, bg, P{i}{1});
       Sp{i} = repmat (s1, sz);
     endif
     nshort += ns;
@@ -77,7 +77,7 @@ function [P, sz, Sp, nshort] = __holent_parties__ (fn, bg, names, args)
   ## mutual disjointness, instance by instance
   for k = 1:nel
     rows = cellfun (@(p) rows_of (p{k}), P);
-    [st, r1, r2] = __holent_call__ (gw, "check", bg, cell2mat (cellfun (@(p) p{k}, P, "uniformoutput", false)));
+    [st, r1, r2] = feval (gw, "check", fn, bg, cell2mat (cellfun (@(p) p{k}, P, "uniformoutput", false)));
     if (st != 0)
       [i1, j1] = which_party (r1, rows);
       [i2, j2] = which_party (r2, rows);

@@ -34,7 +34,7 @@ function [Sp, Su] = __holent_unions__ (fn, bg, names, args, unions, opts)
   else
     what = "a union of the parties";
   endif
-  [S, ns] = __holent_call__ (gw, "entropy", fn, what, bg, U(:));
+  [S, ns] = feval (gw, "entropy", fn, what, bg, U(:));
   S = reshape (S, [], nu);
   Su = cell (nu, 1);
   for j = 1:nu
