@@ -214,7 +214,7 @@ endfunction
 %! ## RT surface ends on the brane (olive); the region beyond it is cut off.
 %! figure ("visible", "off");
 %! bg = ads3_background ("bcft", "half_line", "tension", 0.5, "beta", 4);
-%! h = plot_rt_surface (bg, [0.3 1.2; 2.5 3]);
+%! h = plot_rt_surface (bg, [0.05 1.6; 2.4 2.9]);
 %! print (gcf, "-dpng", fullfile (tempdir (), "holent_bcft_surface_demo.png"));
 
 %!test

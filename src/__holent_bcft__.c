@@ -74,6 +74,8 @@ unpack_bg (const mxArray *s, const char *fn, holent_bcft_bg *bg)
   sp.T = NAN;
   sp.cutoff = holent_gw_scalar (field (s, fn, "cutoff"), fn, "BG.cutoff");
   sp.beta = holent_gw_scalar (field (s, fn, "beta"), fn, "BG.beta");
+  if (sp.beta == INFINITY)   /* zero temperature: no beta given */
+    sp.beta = NAN;
   sp.length = NAN;
   if (sp.kind == HOLENT_BCFT_INTERVAL)
     {
@@ -133,7 +135,12 @@ opt_numbers (const mxArray *v, const char *fn, const char *name,
     holent_gw_raise (fn, HOLENT_ETYPE, NULL, HOLENT_NOINDEX,
                      "'%s' must be real double", name);
   for (size_t k = 0; k < n && k < maxn; k++)
-    out[k] = n == 1 ? mxGetScalar (v) : mxGetPr (v)[k];
+    {
+      out[k] = n == 1 ? mxGetScalar (v) : mxGetPr (v)[k];
+      if (maxn == 1 && isnan (out[k]))   /* NaN stands for "not given" */
+        holent_gw_raise (fn, HOLENT_ENAN, NULL, HOLENT_NOINDEX,
+                         "'%s' must not be NaN", name);
+    }
   return n;
 }
 

@@ -54,7 +54,7 @@ function files = render_gallery (outdir)
     ## 7. a BCFT at finite temperature: surfaces ending on the brane
     clf (f);
     plot_rt_surface (ads3_background ("bcft", "half_line", "tension", 0.5, "beta", 4),
-                     [0.2 1.6; 2.4 2.9]);
+                     [0.05 1.6; 2.4 2.9]);
     files{end+1} = save_ (f, outdir, "bcft_half_line.png");
     ## 8. an interval BCFT in its thermal AdS saddle: one brane, the disk
     clf (f);

@@ -203,9 +203,13 @@ holent_bcft_bg_make (holent_bcft_bg *bg, const holent_bcft_spec *sp,
   if (st)
     return st;
   double eps = isnan (sp->cutoff) ? 1e-6 : sp->cutoff;
-  double beta = INFINITY;
+  double beta = INFINITY;   /* zero temperature unless given */
   if (!isnan (sp->beta))
-    beta = sp->beta;
+    {
+      if ((st = option_scalar (err, "beta", sp->beta, 1)))
+        return st;
+      beta = sp->beta;
+    }
   else if (!isnan (sp->T))
     {
       if ((st = option_scalar (err, "T", sp->T, 1)))

@@ -84,7 +84,8 @@ int holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
                          holent_bcft_saddle saddle, int *bad);
 
 /* Everything a user gives for a BCFT background (ads3_background's
- * options), NaN (or has_* = 0) where not given.  */
+ * options), NaN (or has_* = 0) where not given: the caller rejects a NaN
+ * that was given.  beta and T, when given, must be finite and positive.  */
 typedef struct
 {
   holent_bcft_kind kind;

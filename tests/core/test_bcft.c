@@ -124,6 +124,9 @@ test_make (void)
   HT_CHECK (strcmp (holent_bcft_saddle_name (&bg), "btz") == 0, "saddle");
   sp.beta = 1.0;
   HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
+  sp = spec0 (HOLENT_BCFT_HALF_LINE);
+  sp.beta = INFINITY;      /* a given beta is finite */
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EDOM);
   sp = spec0 (HOLENT_BCFT_TFD);
   HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
   HT_CHECK (strstr (err.reason, "needs 'beta'") != NULL, "%s", err.reason);
