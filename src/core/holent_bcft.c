@@ -786,6 +786,29 @@ poll_step (const holent_poll *poll, double *done, double *next, double step,
   return poll && poll->fn && poll->fn (poll->ctx, *done, total);
 }
 
+/* Least cost of pairing endpoint i with a partner k in (i, j), k - i odd:
+   the geodesic i-k, the full pairing inside it, and OUT[(k + 1) (M + 1)]
+   after it (a column of P or G); BEST the cost without a partner.  *ARG
+   gets the partner, -1 for none.  */
+static double
+best_partner (const holent_bcft_workspace *w, size_t i, size_t j,
+              const double *out, double best, int *arg)
+{
+  const double *C = w->C;
+  size_t M = w->M;
+  *arg = -1;
+  for (size_t k = i + 1; k < j; k += 2)
+    {
+      double v = C[i * M + k] + w->P[IX (i + 1, k)] + out[(k + 1) * (M + 1)];
+      if (v < best)
+        {
+          best = v;
+          *arg = (int) k;
+        }
+    }
+  return best;
+}
+
 static int
 run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
 {
@@ -805,19 +828,8 @@ run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
     for (size_t i = 0; i + len <= m; i++)
       {
         size_t j = i + len;
-        double best = INFINITY;
-        int arg = -1;
-        for (size_t k = i + 1; k < j; k += 2)
-          {
-            double v = C[i * M + k] + w->P[IX (i + 1, k)] + w->P[IX (k + 1, j)];
-            if (v < best)
-              {
-                best = v;
-                arg = (int) k;
-              }
-          }
-        w->P[IX (i, j)] = best;
-        w->Pch[IX (i, j)] = arg;
+        w->P[IX (i, j)] = best_partner (w, i, j, w->P + j, INFINITY,
+                                        w->Pch + IX (i, j));
       }
     }
   w->F[0] = 0.0;
@@ -850,21 +862,10 @@ run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
                      (double) (m - ii) * ((double) kmax + 1.0) / 2.0, total))
         return HOLENT_EINTR;
     for (size_t k = 0; k <= kmax; k++)
-      {
-        double best = k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY;
-        int arg = -1;
-        for (size_t j = ii + 1; j < m; j += 2)
-          {
-            double v = C[ii * M + j] + w->P[IX (ii + 1, j)] + w->G[IX (j + 1, k)];
-            if (v < best)
-              {
-                best = v;
-                arg = (int) j;
-              }
-          }
-        w->G[IX (ii, k)] = best;
-        w->Gch[IX (ii, k)] = arg;
-      }
+      w->G[IX (ii, k)] = best_partner (
+          w, ii, m, w->G + k,
+          k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY,
+          w->Gch + IX (ii, k));
     }
   return HOLENT_SUCCESS;
 }
