@@ -7,7 +7,6 @@
  *       the options of ads3_background (c, G, ell, cutoff, length, beta,
  *       T, tension, log_g, saddle); built, checked and derived once by
  *       the core constructor holent_bcft_bg_make, packed here.
- *   OK = __holent_bcft__ ("bgcheck", FN, BG)        raise unless BG is valid
  *   [S, NSHORT, CONF] = __holent_bcft__ ("entropy", FN, NAME, BG, A)
  *       A an n x 2 matrix or a cell of them (as __holent_rt__).
  *   [STATUS, ROW1, ROW2] = __holent_bcft__ ("check", FN, BG, A)
@@ -731,15 +730,6 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
   if (strcmp (mode, "bg") == 0)
     do_bg (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (mode, "bgcheck") == 0)
-    {
-      char fn[64];
-      holent_bcft_bg bg;
-      holent_gw_nargs (GW, nlhs, 1, nrhs, 3, 3);
-      holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
-      unpack_bg (prhs[2], fn, &bg);
-      plhs[0] = mxCreateLogicalScalar (1);
-    }
   else if (strcmp (mode, "entropy") == 0)
     do_entropy (nlhs, plhs, nrhs, prhs);
   else if (strcmp (mode, "check") == 0)
