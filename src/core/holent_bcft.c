@@ -10,6 +10,7 @@
 #include <gsl/gsl_math.h>
 #include "holent_bcft.h"
 #include "holent_geo.h"
+#include "holent_bg3.h"
 
 /* ---- geometry ---------------------------------------------------- */
 
@@ -178,28 +179,19 @@ holent_bcft_bg_make (holent_bcft_bg *bg, const holent_bcft_spec *sp,
   if (sp->kind == HOLENT_BCFT_TFD && isnan (sp->beta) && isnan (sp->T))
     return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
                            "the two-sided state needs 'beta' or 'T'");
-  /* Brown-Henneaux c = 3 ell/(2G) */
-  double ell = isnan (sp->ell) ? 1.0 : sp->ell, c = 1.0;
-  int st = option_scalar (err, "ell", ell, 1);
-  if (!st && !isnan (sp->G))
-    {
-      st = option_scalar (err, "G", sp->G, 1);
-      c = 1.5 * ell / sp->G;
-      if (!st && !isnan (sp->c))
-        {
-          st = option_scalar (err, "c", sp->c, 1);
-          if (!st && fabs (sp->c - c) > 1e-12 * c)
-            st = holent_err_set (err, HOLENT_EINCONSISTENT, -1,
-                                 HOLENT_NOINDEX, "c = %g disagrees with "
-                                 "3 ell/(2G) = %g (Brown-Henneaux)",
-                                 sp->c, c);
-        }
-    }
-  else if (!st && !isnan (sp->c))
-    {
-      st = option_scalar (err, "c", sp->c, 1);
-      c = sp->c;
-    }
+  /* Brown-Henneaux c = 3 ell/(2G): the one rule, holent_bg3's */
+  holent_bg3_spec u;
+  memset (&u, 0, sizeof u);
+  const double uv[3] = { sp->c, sp->G, sp->ell };
+  const int up[3] = { HOLENT_BG3_C, HOLENT_BG3_G, HOLENT_BG3_ELL };
+  for (int k = 0; k < 3; k++)
+    if (!isnan (uv[k]))
+      {
+        u.given |= 1u << up[k];
+        u.value[up[k]] = uv[k];
+      }
+  double c, G, ell;
+  int st = holent_bg3_units (&u, &c, &G, &ell, err);
   if (st)
     return st;
   double eps = isnan (sp->cutoff) ? 1e-6 : sp->cutoff;
@@ -291,7 +283,7 @@ holent_bcft_bg_make (holent_bcft_bg *bg, const holent_bcft_spec *sp,
       return holent_err_set (err, st, -1, HOLENT_NOINDEX, NULL);
     }
   bg->ell = ell;
-  bg->G = 1.5 * ell / c;
+  bg->G = G;
   for (int k = 0; k < 2; k++)
     bg->tension[k] = bg->T[k] / ell;
   return HOLENT_SUCCESS;
