@@ -140,7 +140,7 @@ function bg = ads3_background (state, boundary, varargin)
     print_usage ();
   endif
   if (ischar (state) && any (strcmpi (state, {"bcft", "bcft_tfd"})))
-    bg = __holent_bcft_background__ (fn, lower (state), boundary, varargin{:});
+    bg = __holent_bcft__ ("bg", fn, lower (state), boundary, varargin{:});
     return;
   endif
   names = {"c", "G", "ell", "cutoff", "circumference", "beta", "T", ...

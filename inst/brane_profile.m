@@ -30,7 +30,7 @@ function x = brane_profile (bg, z, e)
     error ("holent:domain", "%s: Z(%d) = %g must be a positive depth", fn, k, z(k));
   endif
   e = __holent_scalar__ (fn, "END", e, {0, 1, "[]"});
-  x = __holent_call__ ("__holent_bcft__", "profile", fn, bg, z / bg.ell, e) * bg.ell;
+  x = __holent_bcft__ ("profile", fn, bg, z, e);
 endfunction
 
 %!test

@@ -36,10 +36,11 @@
 ## cell array of them) in the two-sided BCFT background @var{bg}
 ## (@code{ads3_background ("bcft_tfd", ...)}; @code{page_curve}): the time
 ## at which the least entropy with geodesics through the bridge reaches the
-## island entropy; 0 when the island wins from the start.  Bracketed and
-## solved (@code{fzero}, bracketing) on the exact entropies of the core;
-## @code{conf_below}/@code{conf_above} give the geodesics through the
-## bridge and onto the brane on each side.
+## island entropy; 0 when the island wins from the start.  Found by the
+## core in closed form from its exact minimisation (@file{doc/bcft.md}:
+## S(t) = (c/3) min_k (A_k + k h(t)), so the Page time solves
+## h(t) = max_k (A_0 - A_k)/k); @code{conf_below}/@code{conf_above} give
+## the geodesics through the bridge and onto the brane on each side.
 ## @end table
 ##
 ## @var{x} has the size of the parameter arrays (NaN where there is no
@@ -82,7 +83,7 @@ function [x, info] = find_transition (kind, varargin)
           error ("holent:unsupported", "%s: the plateau needs a circle with a horizon (BG is %s)",
                  fn, bgs{k}.bulk);
         endif
-        [x(k), found(k)] = __holent_call_fn__ (fn, "__holent_transition__", "plateau", bgs{k});
+        [x(k), found(k)] = __holent_transition__ ("plateau", fn, bgs{k});
       endfor
       info.below = repmat ({"geodesic"}, size (x));
       info.above = repmat ({"complement+horizon"}, size (x));
@@ -100,7 +101,7 @@ function [x, info] = find_transition (kind, varargin)
         error ("holent:unsupported", "%s: %s transitions are available on lines and on circles without a horizon or a defect, not in %s",
                fn, kind, bg.bulk);
       endif
-      [x, found] = __holent_call_fn__ (fn, "__holent_transition__", "separation", bg, l1, l2);
+      [x, found] = __holent_transition__ ("separation", fn, bg, l1, l2);
       info.below = repmat ({"connected"}, size (x));
       info.above = repmat ({"disconnected"}, size (x));
       if (nargout > 1)
@@ -124,7 +125,7 @@ function [x, info] = find_transition (kind, varargin)
         endif
       endif
       [w, L] = sizes_ (fn, w, L, "Omega", "circumference");
-      [x, found] = __holent_call_fn__ (fn, "__holent_transition__", "hawking_page", w, L);
+      [x, found] = __holent_transition__ ("hawking_page", fn, w, L);
       info.below = repmat ({"thermal_ads"}, size (x));
       info.above = repmat ({"btz"}, size (x));
     case "strip_pair"
@@ -138,7 +139,7 @@ function [x, info] = find_transition (kind, varargin)
         __holent_rethrow__ (err, "__holent_hd__", fn);
       end_try_catch
       [l1, l2] = sizes_ (fn, l1, l2, "L1", "L2");
-      [x, found] = __holent_call_fn__ (fn, "__holent_transition__", "strip_pair", bg, l1, l2);
+      [x, found] = __holent_transition__ ("strip_pair", fn, bg, l1, l2);
       info.below = repmat ({"connected"}, size (x));
       info.above = repmat ({"disconnected"}, size (x));
     case "page_time"
@@ -161,23 +162,11 @@ function [x, info] = find_transition (kind, varargin)
           error ("holent:type", "%s: R must be a real n x 2 matrix of [start, end] rows", fn);
         endif
         r = full (double (R{k}));
-        ## S_no_island(t) - S_island grows with t (the bridge geodesics):
-        ## bracket its sign change, then Brent (fzero) on the exact values
-        g = @(t) page_ (fn, bg, r, t);
-        if (g (0) >= 0)
-          x(k) = 0;          # the island wins from the start
-        else
-          hi = 1;
-          while (g (hi) < 0 && hi < 1e6)
-            hi *= 2;
-          endwhile
-          if (g (hi) < 0)
-            x(k) = NaN;  found(k) = false;
-            continue;
-          endif
-          x(k) = fzero (g, [0, hi], optimset ("TolX", 4 * eps * hi));
-        endif
-        [~, kb, nb] = __holent_call__ ("__holent_bcft__", "page", fn, bg, r,
+        ## the core finds the Page time (the first time from which the
+        ## island configuration wins for good)
+        [~, ~, ~, ~, pg] = __holent_bcft__ ("page", fn, bg, r, 0);
+        x(k) = pg.page_time;
+        [~, kb, nb] = __holent_bcft__ ("page", fn, bg, r,
                                        x(k) * [1 - 1e-6, 1 + 1e-6] + [0 1e-9]);
         info.conf_below{k} = struct ("n_bridge", kb(1), "n_brane", nb(1));
         info.conf_above{k} = struct ("n_bridge", kb(2), "n_brane", nb(2));
@@ -191,12 +180,6 @@ function [x, info] = find_transition (kind, varargin)
   info.found = logical (found);
   info.below(! info.found) = {""};
   info.above(! info.found) = {""};
-endfunction
-
-## S_no_island - S_island of the two-sided BCFT at time t (issue 13's core).
-function d = page_ (fn, bg, r, t)
-  [~, ~, ~, Sno, pg] = __holent_call__ ("__holent_bcft__", "page", fn, bg, r, t);
-  d = Sno - pg.S_island;
 endfunction
 
 ## Broadcast two positive arrays to one size.
@@ -229,8 +212,9 @@ function [cb, ca] = confs_ (fn, bgs, reg, x)
     if (iscell (bgs))
       bg = bgs{k};
     endif
-    [~, ~, c] = __holent_rt__ ("entropy", fn, "A", bg,
-                               {reg(k, x(k) * (1 - 1e-6)), reg(k, x(k) * (1 + 1e-6))});
+    [~, gw] = __holent_is_bcft__ (bg);
+    [~, ~, c] = feval (gw, "entropy", fn, "A", bg,
+                       {reg(k, x(k) * (1 - 1e-6)), reg(k, x(k) * (1 + 1e-6))});
     cb{k} = c(1);  ca{k} = c(2);
   endfor
 endfunction

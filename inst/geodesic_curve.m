@@ -39,7 +39,7 @@ function C = geodesic_curve (bg, P1, P2, varargin)
   if (isfield (o, "tol"))
     tol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
   endif
-  C = __holent_call_fn__ (fn, "__holent_surface__", "boosted", bg, P1(:,1), P1(:,2),
+  C = __holent_surface__ ("boosted", fn, bg, P1(:,1), P1(:,2),
                           P2(:,1), P2(:,2), tol);
 endfunction
 

@@ -113,7 +113,7 @@ function [S, branch] = bcft_intervals (fn, bg, l, args)
   endif
   [l, x0] = deal (l + 0 * x0, x0 + 0 * l);
   A = arrayfun (@(a, b) [a, a + b], x0, l, "uniformoutput", false);
-  [S, nshort, conf] = __holent_call__ ("__holent_bcft__", "entropy", fn, "[at, at + L]", bg, A);
+  [S, nshort, conf] = __holent_bcft__ ("entropy", fn, "[at, at + L]", bg, A);
   branch = arrayfun (@(c) ! isempty (c.brane.endpoint), conf);
   if (nshort > 0)
     warning ("holent:cutoff",

@@ -38,7 +38,11 @@
 ## the landing points [x, z] on the brane (one side; the other is its
 ## mirror) of the island configuration: the island's edges in the bulk;
 ## @item island_endpoints
-## the boundary points those geodesics start from.
+## the boundary points those geodesics start from;
+## @item island_pairs
+## the geodesics of that configuration joining two points of R on one
+## side, as [x1, x2] rows (@code{rt_surface} draws the whole
+## configuration).
 ## @end table
 ##
 ## For R = [b, Inf] this is S = (c/3) min(log((beta/(pi eps)) cosh(2 pi t/beta)),
@@ -59,15 +63,15 @@ function [S, info] = page_curve (bg, R, t)
     error ("holent:type", "%s: R must be a real n x 2 matrix of [start, end] rows", fn);
   endif
   t = __holent_array__ (fn, "t", t);
-  [S, kb, nb, Sno, pg] = __holent_call__ ("__holent_bcft__", "page", fn, bg,
-                                          full (double (R)), t);
+  [S, kb, nb, Sno, pg] = __holent_bcft__ ("page", fn, bg, full (double (R)), t);
   if (nargout > 1)
     phase = repmat ({"no_island"}, size (t));
     phase(kb == 0 & nb > 0) = {"island"};
     info = struct ("phase", {phase}, "page_time", pg.page_time,
                    "S_island", pg.S_island, "S_no_island", Sno,
                    "n_bridge", kb, "n_brane", nb, "island", pg.island,
-                   "island_endpoints", pg.island_endpoints);
+                   "island_endpoints", pg.island_endpoints,
+                   "island_pairs", pg.island_pairs);
   endif
   if (pg.n_short > 0)
     warning ("holent:cutoff",

@@ -42,11 +42,8 @@ function [h, P, labels] = plot_phase_diagram (varargin)
     if (isfield (o, "workers"))
       w = o.workers;
     endif
-    try
-      P = parameter_scan (f, x, y, "workers", w, "uniform", false);
-    catch err
-      __holent_rethrow__ (err, "parameter_scan", fn);
-    end_try_catch
+    ## parameter_scan's own path, its messages naming this function
+    P = __holent_parameter_scan__ (fn, f, {x, y, "workers", w, "uniform", false});
   else
     [x, y, P] = deal (args{:});
     x = __holent_array__ (fn, "X", x)(:);

@@ -23,10 +23,18 @@
 ## 2e-3).  Works headless: @code{figure ("visible", "off")} then
 ## @code{print -dpng}.
 ##
+## On a BCFT background (@code{ads3_background ("bcft", ...)}) the
+## end-of-the-world branes are drawn (olive) with the bulk beyond them cut
+## off (grey), and the surfaces that end on them; the thermal AdS saddle of
+## an interval is drawn in the disk of the doubled interval (the BCFT on
+## the upper half circle), the other BCFT states in the half plane.  On the
+## two-sided @code{"bcft_tfd"} one exterior is drawn with the island
+## configuration of the radiation region (@code{page_curve}).
+##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
-## @code{horizon}, @code{defect}, @code{label}; and @code{surf}, the
-## configuration drawn (from @code{rt_surface}).
+## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label};
+## and @code{surf}, the configuration drawn (from @code{rt_surface}).
 ##
 ## @seealso{rt_surface, rt_entropy, plot_surface_profile, plot_phase_diagram}
 ## @end deftypefn
@@ -49,22 +57,24 @@ function h = plot_rt_surface (varargin)
   if (iscell (A))
     error ("holent:type", "%s: A must be one region (an n x 2 matrix), not a cell", fn);
   endif
+  ## rt_surface's own path, its messages naming this function
   r = [];
-  try
-    s = rt_surface (bg, A, "tol", tol);
-    if (ru)
-      r = rt_surface (bg, A, "tol", tol, "configuration", "runner_up");
-    endif
-  catch err
-    __holent_rethrow__ (err, "rt_surface", fn);
-  end_try_catch
+  s = __holent_rt_surface__ (fn, bg, A, {"tol", tol});
+  if (ru)
+    r = __holent_rt_surface__ (fn, bg, A, {"tol", tol, "configuration", "runner_up"});
+  endif
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
               "surface", [], "runner_up", [], "horizon", [], "defect", [],
-              "label", [], "surf", s);
+              "brane", [], "cut", [], "label", [], "surf", s);
   disk = strcmp (s.picture, "disk");
+  bcft = ! isempty (s.brane_curves);
   if (disk)
-    L = bg.circumference;
+    if (bcft)
+      L = 2 * bg.length;     # the doubled interval of the thermal AdS saddle
+    else
+      L = bg.circumference;
+    endif
     t = linspace (0, 2 * pi, 721);
     h.bulk = fill (hax, cos (t), sin (t), pal.bulk, "edgecolor", "none");
     if (isfinite (s.horizon_depth))
@@ -75,6 +85,13 @@ function h = plot_rt_surface (varargin)
       h.defect = plot (hax, 0, 0, "p", "markersize", 12,
                        "markerfacecolor", pal.defect, "color", pal.defect);
     endif
+    if (bcft)
+      ## beyond the brane (the lower half disk past the brane arc) is cut off
+      b = s.brane_curves{1};
+      h.cut = fill (hax, [b(:,1); cos(t(t >= pi))'], [b(:,2); sin(t(t >= pi))'],
+                    pal.cut, "edgecolor", "none");
+      t = t(t <= pi);        # the BCFT lives on the upper half circle
+    endif
     h.boundary = plot (hax, cos (t), sin (t), "color", pal.boundary, "linewidth", 1.2);
     for k = 1:rows (s.intervals)
       u = 2 * pi * linspace (s.intervals(k,1), s.intervals(k,2), 200) / L;
@@ -83,9 +100,19 @@ function h = plot_rt_surface (varargin)
     endfor
   else
     x = s.endpoints;
+    if (bcft)
+      x = [x; s.intervals(isfinite (s.intervals))(:); 0];
+      x = [x; cellfun(@(c) min (c(:,1)), s.brane_curves(:))];
+      if (isfinite (bg.length))
+        x(end+1) = bg.length;
+      endif
+    endif
     span = max (x) - min (x);
     xl = [min(x) - 0.2 * span, max(x) + 0.2 * span];
-    zc = max (cellfun (@(c) max (c(:,2)), s.curves));
+    zc = max ([cellfun(@(c) max (c(:,2)), s.curves), eps]);
+    if (isempty (s.curves))
+      zc = span / 2;
+    endif
     zm = 1.3 * zc;
     if (isfinite (s.horizon_depth) && s.horizon_depth < 3 * zc)
       zm = max (zm, 1.2 * s.horizon_depth);
@@ -95,14 +122,29 @@ function h = plot_rt_surface (varargin)
       zh = s.horizon_depth;
       h.horizon = fill (hax, xl([1 2 2 1]), [zh zh zm zm], pal.horizon, "edgecolor", "none");
     endif
-    h.boundary = plot (hax, xl, [0 0], "color", pal.boundary, "linewidth", 1.2);
+    xb = xl;
+    if (bcft)
+      ## beyond each brane the bulk is cut off
+      for k = 1:numel (s.brane_curves)
+        b = s.brane_curves{k};
+        xe = xl(1 + (k == 2));
+        h.cut(end+1) = fill (hax, [b(:,1); xe; xe], [b(:,2); b(end,2); 0],
+                             pal.cut, "edgecolor", "none");
+      endfor
+      xb = [0, min(xl(2), bg.length)];
+    endif
+    h.boundary = plot (hax, xb, [0 0], "color", pal.boundary, "linewidth", 1.2);
     for k = 1:rows (s.intervals)
-      h.regions(end+1) = plot (hax, s.intervals(k,:), [0 0], "color", pal.region,
-                               "linewidth", 5);
+      h.regions(end+1) = plot (hax, min (s.intervals(k,:), xl(2)), [0 0],
+                               "color", pal.region, "linewidth", 5);
     endfor
     set (hax, "ydir", "reverse", "xlim", xl, "ylim", [-0.03 * zm, zm]);
     xlabel (hax, "x");  ylabel (hax, "z");
   endif
+  for k = 1:numel (s.brane_curves)
+    c = s.brane_curves{k};
+    h.brane(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.brane, "linewidth", 2.5);
+  endfor
   if (! isempty (r))
     for k = 1:numel (r.curves)
       c = r.curves{k};
@@ -163,6 +205,35 @@ endfunction
 %!   assert (h2.axes, ax);
 %!   assert (get (ax, "ydir"), "reverse");
 %!   close (get (ax, "parent"));
+%! unwind_protect_cleanup
+%!   close (f);
+%! end_unwind_protect
+
+%!demo
+%! ## An interval next to the boundary of a BCFT at finite temperature: the
+%! ## RT surface ends on the brane (olive); the region beyond it is cut off.
+%! figure ("visible", "off");
+%! bg = ads3_background ("bcft", "half_line", "tension", 0.5, "beta", 4);
+%! h = plot_rt_surface (bg, [0.05 1.6; 2.4 2.9]);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_bcft_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bgs = {ads3_background("bcft", "half_line", "tension", 0.4), ...
+%!          ads3_background("bcft", "interval", "length", 3, "tension", 0.3, "beta", 1), ...
+%!          ads3_background("bcft", "interval", "length", 3, "tension", 0.3), ...
+%!          ads3_background("bcft_tfd", "half_line", "beta", 2, "tension", 0.6)};
+%!   regs = {[1 2], [0.2 0.9], [0.5 1], [1 Inf]};
+%!   for k = 1:numel (bgs)
+%!     clf (f);
+%!     h = plot_rt_surface (bgs{k}, regs{k});
+%!     assert (numel (h.brane), numel (h.surf.brane_curves));
+%!     assert (all (ishghandle (h.brane)));
+%!     assert (get (h.brane(1), "ydata")(:), h.surf.brane_curves{1}(:,2));
+%!     assert (numel (h.surface) >= 1);
+%!   endfor
 %! unwind_protect_cleanup
 %!   close (f);
 %! end_unwind_protect

@@ -29,15 +29,12 @@ function h = plot_surface_profile (varargin)
   endif
   [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 3, {"tol"});
   [bg, shape, sizes] = deal (args{:});
-  try
-    if (isfield (o, "tol"))
-      p = surface_profile (bg, shape, sizes, "tol", o.tol);
-    else
-      p = surface_profile (bg, shape, sizes);
-    endif
-  catch err
-    __holent_rethrow__ (err, "surface_profile", fn);
-  end_try_catch
+  ## surface_profile's own path, its messages naming this function
+  opts = {};
+  if (isfield (o, "tol"))
+    opts = {"tol", o.tol};
+  endif
+  p = __holent_surface_profile__ (fn, bg, shape, sizes, opts);
   if (isempty (p))
     error ("holent:empty", "%s: SIZES is empty: nothing to draw", fn);
   endif

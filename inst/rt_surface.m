@@ -49,61 +49,10 @@
 ## @end deftypefn
 
 function surf = rt_surface (bg, A, varargin)
-  fn = "rt_surface";
   if (nargin < 2)
     print_usage ();
   endif
-  o = __holent_opts__ (fn, {"tol", "configuration"}, varargin);
-  tol = 1e-3;
-  if (isfield (o, "tol"))
-    tol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
-  endif
-  which = "minimal";
-  if (isfield (o, "configuration"))
-    which = o.configuration;
-    if (! ischar (which) || ! any (strcmp (which, {"minimal", "runner_up"})))
-      error ("holent:option", "%s: configuration must be \"minimal\" or \"runner_up\"", fn);
-    endif
-  endif
-  if (! iscell (A))
-    A = {A};
-  endif
-  for k = 1:numel (A)
-    if (! isnumeric (A{k}) || islogical (A{k}) || ! isreal (A{k}))
-      error ("holent:type", "%s: A must be a real numeric n x 2 matrix or a cell array of them", fn);
-    endif
-    A{k} = full (double (A{k}));
-  endfor
-  [S, ~, conf] = __holent_rt__ ("entropy", fn, "A", bg, A);
-  circle = strcmp (bg.boundary, "circle");
-  surf = struct ("picture", {}, "curves", {}, "S", {}, "pairs", {}, "arcs", {},
-                 "horizon", {}, "endpoints", {}, "intervals", {},
-                 "horizon_curve", {}, "horizon_depth", {}, "defect", {});
-  for k = 1:numel (A)
-    c = conf(k);
-    s.picture = merge (circle, "disk", "half_plane");
-    s.S = S(k);
-    s.pairs = c.pairs;  s.arcs = c.arcs;  s.horizon = c.horizon;
-    if (strcmp (which, "runner_up"))
-      [s.pairs, s.arcs, s.horizon, s.S] = __holent_call_fn__ (fn, "__holent_surface__",
-        "runner", bg, c.intervals, c.pairs, c.arcs, double (c.horizon));
-    endif
-    s.endpoints = c.endpoints;  s.intervals = c.intervals;
-    s.curves = __holent_call_fn__ (fn, "__holent_surface__", "curves", bg,
-                                c.endpoints, s.pairs, s.arcs, tol);
-    s.horizon_depth = NaN;
-    s.horizon_curve = zeros (0, 2);
-    if (bg.horizon)
-      [hc, s.horizon_depth] = __holent_call_fn__ (fn, "__holent_surface__", "horizon",
-                                               bg, min (c.endpoints), max (c.endpoints), tol);
-      if (s.horizon)
-        s.horizon_curve = hc;
-      endif
-    endif
-    s.defect = strcmp (bg.bulk, "conical_defect") && bg.alpha < 1;
-    surf(k) = orderfields (s, surf);
-  endfor
-  surf = reshape (surf, size (A));
+  surf = __holent_rt_surface__ ("rt_surface", bg, A, varargin);
 endfunction
 
 %!test

@@ -56,7 +56,7 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   info.s_transition = NaN (size (w1));
   if (! isempty (w1))
     [u, ~, j] = unique ([w1(:), w2(:)], "rows");
-    st = __holent_call_fn__ (fn, "__holent_transition__", "strip_pair", bg, u(:,1), u(:,2));
+    st = __holent_transition__ ("strip_pair", fn, bg, u(:,1), u(:,2));
     info.s_transition = reshape (st(j), size (w1));
   endif
 endfunction

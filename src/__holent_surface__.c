@@ -1,15 +1,16 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* RT surfaces as curves (gateway of holent_surface).
  *
- *   C = __holent_surface__ ("curves", BG, PTS, PAIRS, ARCS, TOL)
+ *   C = __holent_surface__ ("curves", FN, BG, PTS, PAIRS, ARCS, TOL)
  *       PTS the sorted endpoints, PAIRS m x 2 (1-based), ARCS m: one
  *       k x 2 (k x 3 with the time in rotating BTZ) curve per pair.
- *   [PAIRS, ARCS, HOR, S] = __holent_surface__ ("runner", BG, IV, PAIRS, ARCS, HOR)
+ *   [PAIRS, ARCS, HOR, S] = __holent_surface__ ("runner", FN, BG, IV, PAIRS, ARCS, HOR)
  *       IV the normalised intervals [start, end] of the region.
- *   [C, DEPTH] = __holent_surface__ ("horizon", BG, XA, XB, TOL)
- *   C = __holent_surface__ ("profile", HDBG, BALL, TOP, TOL)
- *   C = __holent_surface__ ("boosted", BG, X1, T1, X2, T2, TOL)
+ *   [C, DEPTH] = __holent_surface__ ("horizon", FN, BG, XA, XB, TOL)
+ *   C = __holent_surface__ ("profile", FN, HDBG, BALL, TOP, TOL)
+ *   C = __holent_surface__ ("boosted", FN, BG, X1, T1, X2, T2, TOL)
  *       one k x 3 curve [X Y t] per element (endpoints at times T1, T2)
+ * FN, the public function's name, starts every message.
  */
 #include <math.h>
 #include <string.h>
@@ -18,7 +19,7 @@
 #include "core/holent_surface.h"
 #include "core/holent_region.h"
 
-static const char FN[] = "__holent_surface__";
+static const char GW[] = "__holent_surface__";
 
 static mxArray *
 curve_out (const holent_curve *c, int with_t)
@@ -34,17 +35,18 @@ curve_out (const holent_curve *c, int with_t)
 }
 
 static holent_surface_workspace *
-ws_new (void)
+ws_new (const char *fn)
 {
   holent_surface_workspace *w = holent_surface_alloc ();
   if (w == NULL)
-    holent_gw_fail (HOLENT_ENOMEM, FN, "workspace", (size_t) -1);
+    holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
   return w;
 }
 
 /* 0-based pair indices from an m x 2 double array of 1-based ones.  */
 static void
-get_pairs (const mxArray *a, size_t npts, size_t *out, size_t m)
+get_pairs (const char *fn, const mxArray *a, size_t npts, size_t *out,
+           size_t m)
 {
   const double *p = mxGetPr (a);
   for (size_t i = 0; i < m; i++)
@@ -52,33 +54,33 @@ get_pairs (const mxArray *a, size_t npts, size_t *out, size_t m)
       {
         double v = p[i + k * m];
         if (!(v >= 1.0 && v <= (double) npts && v == floor (v)))
-          mexErrMsgIdAndTxt ("holent:invalid", "PAIRS(%zu,%d) is not an "
-                             "endpoint index", i + 1, k + 1);
+          holent_gw_raise (fn, HOLENT_EDOM, "PAIRS", i + k * m,
+                           "must be an endpoint index");
         out[2 * i + k] = (size_t) v - 1;
       }
 }
 
 static void
-op_curves (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+op_curves (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+           const mxArray *prhs[])
 {
   holent_geo_bg bg;
   size_t npts, np, na;
-  (void) nlhs;
-  if (nrhs != 6)
-    mexErrMsgIdAndTxt ("holent:nargs", "curves needs BG, PTS, PAIRS, ARCS, TOL");
-  holent_gw_bg (prhs[1], FN, &bg);
-  const double *pts = holent_gw_real (prhs[2], FN, "PTS", &npts);
-  holent_gw_real (prhs[3], FN, "PAIRS", &np);
-  const double *arcs = holent_gw_real (prhs[4], FN, "ARCS", &na);
-  double tol = holent_gw_scalar (prhs[5], FN, "TOL");
+  holent_gw_nargs (fn, nlhs, 4, nrhs, 7, 7);
+  holent_gw_bg (prhs[2], fn, &bg);
+  const double *pts = holent_gw_real (prhs[3], fn, "PTS", &npts);
+  holent_gw_real (prhs[4], fn, "PAIRS", &np);
+  const double *arcs = holent_gw_real (prhs[5], fn, "ARCS", &na);
+  double tol = holent_gw_scalar (prhs[6], fn, "TOL");
   size_t m = na;
-  if (np != 2 * m || (m > 0 && mxGetN (prhs[3]) != 2))
-    mexErrMsgIdAndTxt ("holent:invalid", "PAIRS must be m x 2 with m = numel (ARCS)");
+  if (np != 2 * m || (m > 0 && mxGetN (prhs[4]) != 2))
+    holent_gw_raise (fn, HOLENT_ESIZE, "PAIRS", HOLENT_NOINDEX,
+                     "must be m x 2 with m = numel (ARCS)");
   size_t *pr = mxCalloc (2 * m + 1, sizeof *pr);
-  get_pairs (prhs[3], npts, pr, m);
+  get_pairs (fn, prhs[4], npts, pr, m);
   int with_t = bg.bulk == HOLENT_BULK_ROTATING_BTZ
                || bg.bulk == HOLENT_BULK_PLANAR_ROTATING_BTZ;
-  holent_surface_workspace *w = ws_new ();
+  holent_surface_workspace *w = ws_new (fn);
   mxArray *cell = mxCreateCellMatrix (1, m);
   for (size_t i = 0; i < m; i++)
     {
@@ -100,7 +102,7 @@ op_curves (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
           holent_surface_free (w);
           mxFree (pr);
           mxDestroyArray (cell);
-          holent_gw_fail (st, FN, "geodesic", i);
+          holent_gw_raise (fn, st, "geodesic", i, NULL);
         }
       mxSetCell (cell, i, curve_out (&w->cur, with_t));
     }
@@ -110,29 +112,29 @@ op_curves (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 }
 
 static void
-op_runner (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+op_runner (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+           const mxArray *prhs[])
 {
   holent_geo_bg bg;
   size_t niv, np, na;
-  (void) nlhs;
-  if (nrhs != 6)
-    mexErrMsgIdAndTxt ("holent:nargs", "runner needs BG, IV, PAIRS, ARCS, HOR");
-  holent_gw_bg (prhs[1], FN, &bg);
-  const double *iv = holent_gw_real (prhs[2], FN, "IV", &niv);
-  holent_gw_real (prhs[3], FN, "PAIRS", &np);
-  const double *amin = holent_gw_real (prhs[4], FN, "ARCS", &na);
-  double hmin = holent_gw_scalar (prhs[5], FN, "HOR");
+  holent_gw_nargs (fn, nlhs, 4, nrhs, 7, 7);
+  holent_gw_bg (prhs[2], fn, &bg);
+  const double *iv = holent_gw_real (prhs[3], fn, "IV", &niv);
+  holent_gw_real (prhs[4], fn, "PAIRS", &np);
+  const double *amin = holent_gw_real (prhs[5], fn, "ARCS", &na);
+  double hmin = holent_gw_scalar (prhs[6], fn, "HOR");
   size_t n = niv / 2;
   if (niv != 2 * n || np != 2 * na || na != n)
-    mexErrMsgIdAndTxt ("holent:invalid", "IV, PAIRS and ARCS do not match");
+    holent_gw_raise (fn, HOLENT_ESIZE, NULL, HOLENT_NOINDEX,
+                     "IV, PAIRS and ARCS do not match");
   if (n > HOLENT_SURFACE_RUNNER_NMAX)
-    mexErrMsgIdAndTxt ("holent:toobig", "the runner-up is available for at "
-                       "most %d intervals, got %zu",
-                       (int) HOLENT_SURFACE_RUNNER_NMAX, n);
+    holent_gw_raise (fn, HOLENT_ETOOBIG, NULL, HOLENT_NOINDEX,
+                     "the runner-up is available for at most %d intervals, "
+                     "got %zu", (int) HOLENT_SURFACE_RUNNER_NMAX, n);
   size_t pmin[2 * HOLENT_SURFACE_RUNNER_NMAX], pr[2 * HOLENT_SURFACE_RUNNER_NMAX];
   double arcs[HOLENT_SURFACE_RUNNER_NMAX], S = 0;
   int hor = 0;
-  get_pairs (prhs[3], 2 * n, pmin, n);
+  get_pairs (fn, prhs[4], 2 * n, pmin, n);
   holent_region *r = holent_region_alloc (n > 0 ? n : 1);
   holent_surface_workspace *w = holent_surface_alloc ();
   int st = (r == NULL || w == NULL) ? HOLENT_ENOMEM : HOLENT_SUCCESS;
@@ -146,10 +148,10 @@ op_runner (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   holent_region_free (r);
   holent_surface_free (w);
   if (st == HOLENT_EDOM)
-    mexErrMsgIdAndTxt ("holent:domain", "the region has a single RT "
-                       "candidate: there is no runner-up");
+    holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "the region has a "
+                     "single RT candidate: there is no runner-up");
   if (st)
-    holent_gw_fail (st, FN, "region", (size_t) -1);
+    holent_gw_raise (fn, st, "region", HOLENT_NOINDEX, NULL);
   mxArray *P = mxCreateDoubleMatrix (n, 2, mxREAL), *A = mxCreateDoubleMatrix (n, 1, mxREAL);
   for (size_t i = 0; i < n; i++)
     {
@@ -164,23 +166,22 @@ op_runner (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 }
 
 static void
-op_horizon (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+op_horizon (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+           const mxArray *prhs[])
 {
   holent_geo_bg bg;
   double depth;
-  (void) nlhs;
-  if (nrhs != 5)
-    mexErrMsgIdAndTxt ("holent:nargs", "horizon needs BG, XA, XB, TOL");
-  holent_gw_bg (prhs[1], FN, &bg);
-  double xa = holent_gw_scalar (prhs[2], FN, "XA");
-  double xb = holent_gw_scalar (prhs[3], FN, "XB");
-  double tol = holent_gw_scalar (prhs[4], FN, "TOL");
-  holent_surface_workspace *w = ws_new ();
+  holent_gw_nargs (fn, nlhs, 4, nrhs, 6, 6);
+  holent_gw_bg (prhs[2], fn, &bg);
+  double xa = holent_gw_scalar (prhs[3], fn, "XA");
+  double xb = holent_gw_scalar (prhs[4], fn, "XB");
+  double tol = holent_gw_scalar (prhs[5], fn, "TOL");
+  holent_surface_workspace *w = ws_new (fn);
   int st = holent_surface_horizon (w, &bg, xa, xb, tol, &depth);
   if (st)
     {
       holent_surface_free (w);
-      holent_gw_fail (st, FN, "BG", (size_t) -1);
+      holent_gw_raise (fn, st, "BG", HOLENT_NOINDEX, NULL);
     }
   plhs[0] = curve_out (&w->cur, 0);
   plhs[1] = mxCreateDoubleScalar (depth);
@@ -188,16 +189,15 @@ op_horizon (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 }
 
 static void
-op_profile (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+op_profile (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+           const mxArray *prhs[])
 {
   holent_hd_bg bg;
-  (void) nlhs;
-  if (nrhs != 5)
-    mexErrMsgIdAndTxt ("holent:nargs", "profile needs HDBG, BALL, TOP, TOL");
-  double ball = holent_gw_scalar (prhs[2], FN, "BALL");
-  double top = holent_gw_scalar (prhs[3], FN, "TOP");
-  double tol = holent_gw_scalar (prhs[4], FN, "TOL");
-  holent_gw_hd_bg (prhs[1], FN, &bg);
+  holent_gw_nargs (fn, nlhs, 4, nrhs, 6, 6);
+  double ball = holent_gw_scalar (prhs[3], fn, "BALL");
+  double top = holent_gw_scalar (prhs[4], fn, "TOP");
+  double tol = holent_gw_scalar (prhs[5], fn, "TOL");
+  holent_gw_hd_bg (prhs[2], fn, &bg);
   holent_surface_workspace *w = holent_surface_alloc ();
   int st = w == NULL ? HOLENT_ENOMEM
                      : holent_surface_profile (w, &bg, ball != 0.0, top, tol);
@@ -205,29 +205,29 @@ op_profile (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   if (st)
     {
       holent_surface_free (w);
-      holent_gw_fail (st, FN, "profile", (size_t) -1);
+      holent_gw_raise (fn, st, "profile", HOLENT_NOINDEX, NULL);
     }
   plhs[0] = curve_out (&w->cur, 0);
   holent_surface_free (w);
 }
 
 static void
-op_boosted (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
+op_boosted (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+           const mxArray *prhs[])
 {
   holent_geo_bg bg;
   size_t n[4];
-  (void) nlhs;
-  if (nrhs != 7)
-    mexErrMsgIdAndTxt ("holent:nargs", "boosted needs BG, X1, T1, X2, T2, TOL");
-  holent_gw_bg (prhs[1], FN, &bg);
-  const double *x1 = holent_gw_real (prhs[2], FN, "X1", &n[0]);
-  const double *t1 = holent_gw_real (prhs[3], FN, "T1", &n[1]);
-  const double *x2 = holent_gw_real (prhs[4], FN, "X2", &n[2]);
-  const double *t2 = holent_gw_real (prhs[5], FN, "T2", &n[3]);
-  double tol = holent_gw_scalar (prhs[6], FN, "TOL");
+  holent_gw_nargs (fn, nlhs, 4, nrhs, 8, 8);
+  holent_gw_bg (prhs[2], fn, &bg);
+  const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n[0]);
+  const double *t1 = holent_gw_real (prhs[4], fn, "T1", &n[1]);
+  const double *x2 = holent_gw_real (prhs[5], fn, "X2", &n[2]);
+  const double *t2 = holent_gw_real (prhs[6], fn, "T2", &n[3]);
+  double tol = holent_gw_scalar (prhs[7], fn, "TOL");
   if (n[1] != n[0] || n[2] != n[0] || n[3] != n[0])
-    mexErrMsgIdAndTxt ("holent:size", "X1, T1, X2 and T2 must have one size");
-  holent_surface_workspace *w = ws_new ();
+    holent_gw_raise (fn, HOLENT_ESIZE, NULL, HOLENT_NOINDEX,
+                     "X1, T1, X2 and T2 must have one size");
+  holent_surface_workspace *w = ws_new (fn);
   mxArray *cell = mxCreateCellMatrix (n[0], 1);
   for (size_t i = 0; i < n[0]; i++)
     {
@@ -245,9 +245,9 @@ op_boosted (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
           holent_surface_free (w);
           mxDestroyArray (cell);
           if (st == HOLENT_ETIMELIKE)
-            mexErrMsgIdAndTxt ("holent:timelike", "endpoints %zu are not "
-                               "spacelike separated", i + 1);
-          holent_gw_fail (st, FN, "X1", i);
+            holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "endpoints %zu "
+                             "are not spacelike separated", i + 1);
+          holent_gw_raise (fn, st, "X1", i, NULL);
         }
       mxSetCell (cell, i, curve_out (&w->cur, 1));
     }
@@ -258,20 +258,23 @@ op_boosted (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  char op[16];
+  static const char *modes[] = { "curves", "runner", "horizon", "profile",
+                                 "boosted" };
+  static void (*const ops[]) (const char *, int, mxArray **, int,
+                              const mxArray **) = {
+    op_curves, op_runner, op_horizon, op_profile, op_boosted
+  };
+  char mode[16], fn[64];
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 4, nrhs, 1, 7);
-  holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
-  if (strcmp (op, "curves") == 0)
-    op_curves (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (op, "runner") == 0)
-    op_runner (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (op, "horizon") == 0)
-    op_horizon (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (op, "profile") == 0)
-    op_profile (nlhs, plhs, nrhs, prhs);
-  else if (strcmp (op, "boosted") == 0)
-    op_boosted (nlhs, plhs, nrhs, prhs);
-  else
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);
+  holent_gw_nargs (GW, nlhs, 4, nrhs, 2, 8);
+  holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
+  holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
+  for (size_t k = 0; k < sizeof modes / sizeof modes[0]; k++)
+    if (strcmp (mode, modes[k]) == 0)
+      {
+        ops[k] (fn, nlhs, plhs, nrhs, prhs);
+        return;
+      }
+  holent_gw_raise (fn, HOLENT_EOPTION, "MODE", HOLENT_NOINDEX,
+                   "unknown mode '%s'", mode);
 }

@@ -1,109 +1,112 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Transition points (gateway of holent_transition).
  *
- *   [X, FOUND] = __holent_transition__ ("plateau", BG)
- *   [X, FOUND] = __holent_transition__ ("separation", BG, L1, L2)
- *   [X, FOUND] = __holent_transition__ ("hawking_page", OMEGA, L)
- *   [X, FOUND] = __holent_transition__ ("strip_pair", HDBG, L1, L2)
- * L1, L2 (OMEGA, L) arrays of one size; X, FOUND of that size.  */
+ *   [X, FOUND] = __holent_transition__ ("plateau", FN, BG)
+ *   [X, FOUND] = __holent_transition__ ("separation", FN, BG, L1, L2)
+ *   [X, FOUND] = __holent_transition__ ("hawking_page", FN, OMEGA, L)
+ *   [X, FOUND] = __holent_transition__ ("strip_pair", FN, HDBG, L1, L2)
+ * L1, L2 (OMEGA, L) arrays of one size; X, FOUND of that size.  FN, the
+ * public function's name, starts every message.  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
 #include "holent_gw_hd.h"
 #include "core/holent_transition.h"
 
-static const char FN[] = "__holent_transition__";
+static const char GW[] = "__holent_transition__";
+
+enum { PLATEAU, SEPARATION, HAWKING_PAGE, STRIP_PAIR };
 
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
-  char op[16];
+  static const char *modes[] = { "plateau", "separation", "hawking_page",
+                                 "strip_pair" };
+  /* inputs after MODE and FN; the names of the two arrays */
+  static const int nin[] = { 1, 3, 2, 3 };
+  static const char *an[][2] = { { NULL, NULL }, { "L1", "L2" },
+                                 { "Omega", "L" }, { "L1", "L2" } };
+  char mode[16], fn[64];
   holent_transition_result r;
-  int st = 0;
-  size_t n = 1, n2 = 1, bad = (size_t) -1;
-  (void) nlhs;
+  int st = 0, op;
+  size_t n = 1, n2 = 1, bad = HOLENT_NOINDEX;
   holent_gw_init ();
-  holent_gw_nargs (FN, nlhs, 2, nrhs, 2, 4);
-  holent_gw_string (prhs[0], FN, "OP", op, sizeof op);
+  holent_gw_nargs (GW, nlhs, 2, nrhs, 3, 5);
+  holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
+  holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
+  for (op = 0; op < 4; op++)
+    if (strcmp (mode, modes[op]) == 0)
+      break;
+  if (op == 4)
+    holent_gw_raise (fn, HOLENT_EOPTION, "MODE", HOLENT_NOINDEX,
+                     "unknown mode '%s'", mode);
+  holent_gw_nargs (fn, nlhs, 2, nrhs, 2 + nin[op], 2 + nin[op]);
   const mxArray *shape = NULL;
   const double *a = NULL, *b = NULL;
-  if (strcmp (op, "plateau") == 0)
+  if (op != PLATEAU)
     {
-      if (nrhs != 2)
-        mexErrMsgIdAndTxt ("holent:nargs", "plateau needs BG");
-    }
-  else if (strcmp (op, "separation") == 0 || strcmp (op, "strip_pair") == 0
-           || strcmp (op, "hawking_page") == 0)
-    {
-      int k = op[0] == 'h' ? 1 : 2;
-      if (nrhs != k + 2)
-        mexErrMsgIdAndTxt ("holent:nargs", "wrong number of inputs for %s", op);
-      a = holent_gw_real (prhs[k], FN, "L1", &n);
-      b = holent_gw_real (prhs[k + 1], FN, "L2", &n2);
+      int k = nrhs - 2;
+      a = holent_gw_real (prhs[k], fn, an[op][0], &n);
+      b = holent_gw_real (prhs[k + 1], fn, an[op][1], &n2);
       if (n != n2)
-        mexErrMsgIdAndTxt ("holent:size", "L1 and L2 must have one size");
+        holent_gw_raise (fn, HOLENT_ESIZE, NULL, HOLENT_NOINDEX,
+                         "%s and %s must have one size", an[op][0],
+                         an[op][1]);
       shape = prhs[k];
     }
-  else
-    mexErrMsgIdAndTxt ("holent:invalid", "unknown OP '%s'", op);
+  holent_geo_bg bg;
+  holent_hd_bg hd;
+  holent_strip_workspace *w = NULL;
+  if (op == PLATEAU || op == SEPARATION)
+    holent_gw_bg (prhs[2], fn, &bg);
+  else if (op == STRIP_PAIR)
+    {
+      holent_gw_hd_bg (prhs[2], fn, &hd);
+      w = holent_strip_workspace_alloc ();
+      if (w == NULL)
+        {
+          holent_hd_bg_free (&hd);
+          holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
+        }
+    }
   mxArray *X = shape ? holent_gw_like (shape) : mxCreateDoubleScalar (0);
   mxArray *F = shape ? holent_gw_like (shape) : mxCreateDoubleScalar (0);
   double *x = mxGetPr (X), *f = mxGetPr (F);
-  if (op[0] == 'p')
+  for (size_t i = 0; i < n && !st; i++)
     {
-      holent_geo_bg bg;
-      holent_gw_bg (prhs[1], FN, &bg);
-      st = holent_transition_plateau (&bg, &r);
-      x[0] = r.x;
-      f[0] = r.found;
-    }
-  else if (op[0] == 's' && op[1] == 'e')
-    {
-      holent_geo_bg bg;
-      holent_gw_bg (prhs[1], FN, &bg);
-      for (size_t i = 0; i < n && !st; i++)
+      switch (op)
         {
+        case PLATEAU:
+          st = holent_transition_plateau (&bg, &r);
+          break;
+        case SEPARATION:
           st = holent_transition_separation (&bg, a[i], b[i], &r);
-          x[i] = r.x;
-          f[i] = r.found;
-          bad = i;
-        }
-    }
-  else if (op[0] == 'h')
-    {
-      for (size_t i = 0; i < n && !st; i++)
-        {
+          break;
+        case HAWKING_PAGE:
           st = holent_transition_hawking_page (a[i], b[i], &r);
-          x[i] = r.x;
-          f[i] = r.found;
-          bad = i;
+          break;
+        default:
+          st = holent_transition_strip_pair (&hd, w, a[i], b[i], &r);
+          break;
         }
+      x[i] = r.x;
+      f[i] = r.found;
+      bad = i;
     }
-  else
+  if (op == STRIP_PAIR)
     {
-      holent_hd_bg bg;
-      holent_gw_hd_bg (prhs[1], FN, &bg);
-      holent_strip_workspace *w = holent_strip_workspace_alloc ();
-      if (w == NULL)
-        st = HOLENT_ENOMEM;
-      for (size_t i = 0; i < n && !st; i++)
-        {
-          st = holent_transition_strip_pair (&bg, w, a[i], b[i], &r);
-          x[i] = r.x;
-          f[i] = r.found;
-          bad = i;
-        }
       holent_strip_workspace_free (w);
-      holent_hd_bg_free (&bg);
+      holent_hd_bg_free (&hd);
     }
   if (st)
     {
       mxDestroyArray (X);
       mxDestroyArray (F);
       if (st == HOLENT_EUNSUP)
-        mexErrMsgIdAndTxt ("holent:unsupported", "this transition is not "
-                           "available for this background");
-      holent_gw_fail (st, FN, shape ? "L1" : "BG", shape ? bad : (size_t) -1);
+        holent_gw_raise (fn, st, "BG", HOLENT_NOINDEX, "this transition is "
+                         "not available for this background");
+      holent_gw_raise (fn, st, shape ? an[op][0] : "BG",
+                       shape ? bad : HOLENT_NOINDEX, NULL);
     }
   plhs[0] = X;
   if (nlhs > 1)

@@ -413,3 +413,112 @@ holent_gw_like (const mxArray *a)
   return mxCreateNumericArray (mxGetNumberOfDimensions (a),
                                mxGetDimensions (a), mxDOUBLE_CLASS, mxREAL);
 }
+
+size_t
+holent_gw_regions (const mxArray *A, const char *fn, const char *name,
+                   size_t *maxrows)
+{
+  char nm[80];
+  size_t nreg = mxIsCell (A) ? mxGetNumberOfElements (A) : 1, mr = 0;
+  if (mxIsCell (A) && nreg == 0)
+    holent_gw_raise (fn, HOLENT_EEMPTY, name, HOLENT_NOINDEX,
+                     "is an empty cell array: give a region or a non-empty "
+                     "cell of regions");
+  for (size_t k = 0; k < nreg; k++)
+    {
+      const mxArray *a = holent_gw_region (A, k);
+      holent_gw_region_name (nm, sizeof nm, name, A, k, HOLENT_NOINDEX);
+      if (a == NULL || !mxIsDouble (a) || mxIsComplex (a) || mxIsSparse (a)
+          || mxGetNumberOfDimensions (a) != 2)
+        holent_gw_raise (fn, HOLENT_ETYPE, nm, HOLENT_NOINDEX,
+                         "must be a real n x 2 matrix of [start, end] rows");
+      if (mxGetM (a) == 0)
+        holent_gw_raise (fn, HOLENT_EEMPTY, nm, HOLENT_NOINDEX,
+                         "has no intervals");
+      if (mxGetN (a) != 2)
+        holent_gw_raise (fn, HOLENT_ETYPE, nm, HOLENT_NOINDEX,
+                         "must be an n x 2 matrix of [start, end] rows, got "
+                         "%zu columns", (size_t) mxGetN (a));
+      if (mxGetM (a) > mr)
+        mr = mxGetM (a);
+    }
+  if (maxrows)
+    *maxrows = mr;
+  return nreg;
+}
+
+const mxArray *
+holent_gw_region (const mxArray *A, size_t k)
+{
+  return mxIsCell (A) ? mxGetCell (A, k) : A;
+}
+
+void
+holent_gw_region_name (char *buf, size_t sz, const char *name,
+                       const mxArray *A, size_t k, size_t row)
+{
+  int n = mxIsCell (A) ? snprintf (buf, sz, "%s{%zu}", name, k + 1)
+                       : snprintf (buf, sz, "%s", name);
+  if (row != HOLENT_NOINDEX && n >= 0 && (size_t) n < sz)
+    snprintf (buf + n, sz - (size_t) n, "(%zu,:)", row + 1);
+}
+
+mxArray *
+holent_gw_per_region (const mxArray *A)
+{
+  if (!mxIsCell (A))
+    return mxCreateDoubleScalar (0.0);
+  return mxCreateNumericArray (mxGetNumberOfDimensions (A),
+                               mxGetDimensions (A), mxDOUBLE_CLASS, mxREAL);
+}
+
+mxArray *
+holent_gw_per_region_struct (const mxArray *A, int nf, const char **fields)
+{
+  if (!mxIsCell (A))
+    return mxCreateStructMatrix (1, 1, nf, fields);
+  return mxCreateStructArray (mxGetNumberOfDimensions (A),
+                              mxGetDimensions (A), nf, fields);
+}
+
+mxArray *
+holent_gw_pairs (size_t np, const size_t *pairs, const double *pts,
+                 mxArray **coords)
+{
+  mxArray *p = mxCreateDoubleMatrix (np, 2, mxREAL);
+  double *pp = mxGetPr (p), *pc = NULL;
+  if (coords)
+    {
+      *coords = mxCreateDoubleMatrix (np, 2, mxREAL);
+      pc = mxGetPr (*coords);
+    }
+  for (size_t i = 0; i < np; i++)
+    for (size_t j = 0; j < 2; j++)
+      {
+        pp[i + j * np] = (double) pairs[2 * i + j] + 1.0;
+        if (pc)
+          pc[i + j * np] = pts[pairs[2 * i + j]];
+      }
+  return p;
+}
+
+mxArray *
+holent_gw_column (size_t n, const double *v)
+{
+  mxArray *a = mxCreateDoubleMatrix (n, 1, mxREAL);
+  if (n)
+    memcpy (mxGetPr (a), v, n * sizeof (double));
+  return a;
+}
+
+mxArray *
+holent_gw_columns (size_t n, const double *a, const double *b)
+{
+  mxArray *m = mxCreateDoubleMatrix (n, 2, mxREAL);
+  if (n)
+    {
+      memcpy (mxGetPr (m), a, n * sizeof (double));
+      memcpy (mxGetPr (m) + n, b, n * sizeof (double));
+    }
+  return m;
+}

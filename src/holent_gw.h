@@ -83,6 +83,39 @@ void holent_gw_units (const mxArray *o, const char *fn, double *c,
 void holent_gw_fail (int status, const char *fn, const char *name,
                      size_t index);
 
+/* ---- regions and configurations, shared by the minimiser gateways ---- */
+
+/* Check a region argument A: an n x 2 real double matrix or a cell array
+   of them (raises holent:type / holent:empty naming NAME or NAME{k}
+   before anything is allocated).  Returns the number of regions;
+   *maxrows (may be NULL) gets the largest row count.  */
+size_t holent_gw_regions (const mxArray *A, const char *fn, const char *name,
+                          size_t *maxrows);
+
+/* The k-th region of A (A itself when it is not a cell).  */
+const mxArray *holent_gw_region (const mxArray *A, size_t k);
+
+/* "NAME" or "NAME{k+1}" (A a cell), then "(ROW+1,:)" unless ROW is
+   HOLENT_NOINDEX: the argument named in a message.  */
+void holent_gw_region_name (char *buf, size_t sz, const char *name,
+                            const mxArray *A, size_t k, size_t row);
+
+/* An array of the size of the cell A (1 x 1 for a matrix) for one value
+   per region: doubles, or a struct array with NF FIELDS.  */
+mxArray *holent_gw_per_region (const mxArray *A);
+mxArray *holent_gw_per_region_struct (const mxArray *A, int nf,
+                                      const char **fields);
+
+/* The geodesics of a configuration: an np x 2 matrix of 1-based indices
+   into PTS (PAIRS holds 2 np 0-based ones) and, when COORDS is not NULL,
+   the np x 2 matrix of their boundary coordinates.  */
+mxArray *holent_gw_pairs (size_t np, const size_t *pairs, const double *pts,
+                          mxArray **coords);
+
+/* An n x 1 copy of V; an n x 2 matrix [A, B].  */
+mxArray *holent_gw_column (size_t n, const double *v);
+mxArray *holent_gw_columns (size_t n, const double *a, const double *b);
+
 /* A new real double array of the same dimensions as a.  */
 mxArray *holent_gw_like (const mxArray *a);
 

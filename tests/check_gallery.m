@@ -10,7 +10,7 @@
 %! out = tempname ();
 %! unwind_protect
 %!   files = render_gallery (out);
-%!   assert (numel (files), 6);
+%!   assert (numel (files), 8);
 %!   teal = [5 110 120];  amber = [230 143 31];
 %!   for k = 1:numel (files)
 %!     img = double (imread (files{k}));
@@ -21,6 +21,9 @@
 %!     if (isempty (strfind (files{k}, "phase")))
 %!       assert (near (teal), files{k});
 %!       assert (near (amber), files{k});
+%!       if (! isempty (strfind (files{k}, "bcft")))
+%!         assert (near ([92 112 51]), files{k});    # olive: the brane
+%!       endif
 %!     else
 %!       assert (near ([140 189 179]) && near ([242 204 140]), files{k});
 %!     endif

@@ -454,9 +454,9 @@
 %!        "__holent_hd__", {"ball", bh, 0.5}, 2;
 %!        "__holent_hdbg__", {4, "tabulated", 1, 1, 1e-6, z, 1 - z.^4, 0}, 1;
 %!        "__holent_cone__", {"mincut", "mincut_entropy_vector", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2;
-%!        "__holent_bcft__", {"bg", "f", "bcft", "interval", 2, 1e-6, 1, [0.1 0.2], false, 1, 1, "dominant"}, 2;
+%!        "__holent_bcft__", {"bg", "f", "bcft", "interval", "length", 2, "cutoff", 1e-6, "beta", 1, "tension", [0.1 0.2], "c", 1, "ell", 1, "saddle", "dominant"}, 2;
 %!        "__holent_bcft__", {"entropy", "rt_entropy", "A", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
-%!        "__holent_bcft__", {"check", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
+%!        "__holent_bcft__", {"check", "f", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;
 %!        "__holent_bcft__", {"page", "f", ads3_background("bcft_tfd", "half_line", "beta", 1), [1 Inf], [0 1]}, 2;
 %!        "__holent_bcft__", {"profile", "f", ads3_background("bcft", "half_line"), [0.1 0.2], 0}, 2;
 %!        "__holent_cone__", {"prove", "contraction_proof", 3, [3; 6; 5], ones(3, 1), [1; 2; 4; 7], ones(4, 1), 0}, 2;

@@ -51,6 +51,16 @@ function files = render_gallery (outdir)
           "color", [0.68 0.24 0.20], "linewidth", 2);
     hold (h.axes, "off");
     files{end+1} = save_ (f, outdir, "phase_two_intervals.png");
+    ## 7. a BCFT at finite temperature: surfaces ending on the brane
+    clf (f);
+    plot_rt_surface (ads3_background ("bcft", "half_line", "tension", 0.5, "beta", 4),
+                     [0.05 1.6; 2.4 2.9]);
+    files{end+1} = save_ (f, outdir, "bcft_half_line.png");
+    ## 8. an interval BCFT in its thermal AdS saddle: one brane, the disk
+    clf (f);
+    plot_rt_surface (ads3_background ("bcft", "interval", "length", 3, "tension", 0.4),
+                     [0.3 1.2; 1.9 2.8]);
+    files{end+1} = save_ (f, outdir, "bcft_interval_disk.png");
   unwind_protect_cleanup
     close (f);
     warning (ws);

@@ -1,6 +1,5 @@
 ## Copyright (C) 2026 The holent developers.
 ## SPDX-License-Identifier: GPL-3.0-or-later
-
 ## -*- texinfo -*-
 ## @deftypefn {} {[@var{tf}, @var{gw}] =} __holent_is_bcft__ (@var{bg})
 ## True when @var{bg} is a BCFT background (a boundary in the CFT, branes
@@ -11,15 +10,7 @@
 function [tf, gw] = __holent_is_bcft__ (bg)
   tf = (isstruct (bg) && isscalar (bg) && isfield (bg, "state")
         && ischar (bg.state) && any (strcmp (bg.state, {"bcft", "bcft_tfd"})));
-  if (nargout < 2)
-    return;
-  elseif (tf)
-    ## through __holent_call__ until __holent_bcft__ raises by
-    ## holent_gw_raise (its owner's conversion; then "__holent_bcft__")
-    gw = @(varargin) __holent_call__ ("__holent_bcft__", varargin{:});
-  else
-    gw = "__holent_rt__";
-  endif
+  gw = merge (tf, "__holent_bcft__", "__holent_rt__");
 endfunction
 
 %!assert (__holent_is_bcft__ (struct ("state", "bcft")))
@@ -27,6 +18,9 @@ endfunction
 %!assert (! __holent_is_bcft__ (struct ("state", 3)))
 %!assert (! __holent_is_bcft__ (struct ("state", {"bcft", "bcft"})))
 %!assert (! __holent_is_bcft__ (struct ("state", "vacuum")))
+%!test
+%! [~, gw] = __holent_is_bcft__ (struct ("state", "bcft"));
+%! assert (gw, "__holent_bcft__");
 %!test
 %! [~, gw] = __holent_is_bcft__ (1);
 %! assert (gw, "__holent_rt__");

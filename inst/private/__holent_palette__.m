@@ -12,6 +12,8 @@ function c = __holent_palette__ ()
   c.runner = [0.68 0.24 0.20];       # rust: the runner-up (dashed)
   c.horizon = [0.16 0.16 0.19];      # near black: inside the horizon
   c.defect = [0.42 0.22 0.50];       # plum: the conical defect
+  c.brane = [0.36 0.44 0.20];        # olive: an end-of-the-world brane
+  c.cut = [0.86 0.85 0.82];          # warm grey: beyond the brane
   c.phases = [0.55 0.74 0.70; 0.95 0.80 0.55; 0.80 0.62 0.74;
               0.68 0.75 0.88; 0.86 0.86 0.62; 0.75 0.68 0.60];
 endfunction

@@ -6,9 +6,11 @@
 #include <stdlib.h>
 #include <string.h>
 #include <float.h>
+#include <stdio.h>
 #include <gsl/gsl_math.h>
 #include "holent_bcft.h"
 #include "holent_geo.h"
+#include "holent_bg3.h"
 
 /* ---- geometry ---------------------------------------------------- */
 
@@ -90,6 +92,10 @@ holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
       bg->rho[k] = atanh (bg->T[k]);
       bg->log_g[k] = c / 6.0 * bg->rho[k];
     }
+  bg->ell = 1.0;
+  bg->G = 1.5 / c;
+  bg->tension[0] = T0;
+  bg->tension[1] = T1;
   bg->zh = isfinite (beta) ? beta / (2.0 * M_PI) : INFINITY;
   bg->z0 = INFINITY;
   bg->beta_c = NAN;
@@ -99,6 +105,7 @@ holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
     {
       bg->btz = isfinite (beta);
       bg->S_H = bg->btz ? INFINITY : 0.0;
+      bg->pure = !bg->btz;
       return set_lengths (bg);
     }
 
@@ -131,7 +138,244 @@ holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
     }
   else
     bg->z0 = length / M_PI;
+  bg->pure = !btz && !isfinite (beta);
   return set_lengths (bg);
+}
+
+/* ---- the constructor of ads3_background's BCFT states -------------- */
+
+static int
+option_scalar (holent_err *err, const char *name, double v, int positive)
+{
+  if (isnan (v))
+    return holent_err_set (err, HOLENT_ENAN, -1, HOLENT_NOINDEX,
+                           "'%s' must be a number, not NaN", name);
+  if (positive && !(v > 0.0 && isfinite (v)))
+    return holent_err_set (err, HOLENT_EDOM, -1, HOLENT_NOINDEX,
+                           "'%s' must be finite and positive", name);
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_bcft_bg_make (holent_bcft_bg *bg, const holent_bcft_spec *sp,
+                     holent_err *err)
+{
+  holent_err_clear (err);
+  if (bg == NULL || sp == NULL || (sp->nvalues > 0 && sp->values == NULL))
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  int interval = sp->kind == HOLENT_BCFT_INTERVAL;
+  const char *tname = sp->is_log_g ? "log_g" : "tension";
+  if (interval == isnan (sp->length))
+    return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
+                           "option 'length' is %s", interval
+                           ? "required on an interval"
+                           : "for an interval only");
+  if (sp->has_saddle && !interval)
+    return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
+                           "option 'saddle' applies to an interval only");
+  if (!isnan (sp->beta) && !isnan (sp->T))
+    return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
+                           "give either 'beta' or 'T', not both");
+  if (sp->kind == HOLENT_BCFT_TFD && isnan (sp->beta) && isnan (sp->T))
+    return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
+                           "the two-sided state needs 'beta' or 'T'");
+  /* Brown-Henneaux c = 3 ell/(2G): the one rule, holent_bg3's */
+  holent_bg3_spec u;
+  memset (&u, 0, sizeof u);
+  const double uv[3] = { sp->c, sp->G, sp->ell };
+  const int up[3] = { HOLENT_BG3_C, HOLENT_BG3_G, HOLENT_BG3_ELL };
+  for (int k = 0; k < 3; k++)
+    if (!isnan (uv[k]))
+      {
+        u.given |= 1u << up[k];
+        u.value[up[k]] = uv[k];
+      }
+  double c, G, ell;
+  int st = holent_bg3_units (&u, &c, &G, &ell, err);
+  if (st)
+    return st;
+  double eps = isnan (sp->cutoff) ? 1e-6 : sp->cutoff;
+  double beta = INFINITY;   /* zero temperature unless given */
+  if (!isnan (sp->beta))
+    {
+      if ((st = option_scalar (err, "beta", sp->beta, 1)))
+        return st;
+      beta = sp->beta;
+    }
+  else if (!isnan (sp->T))
+    {
+      if ((st = option_scalar (err, "T", sp->T, 1)))
+        return st;
+      beta = 1.0 / sp->T;
+    }
+  size_t want = interval ? 2 : 1;
+  if (sp->nvalues > want)
+    return holent_err_set (err, HOLENT_ESIZE, -1, HOLENT_NOINDEX,
+                           "'%s' must be %s", tname, want == 2
+                           ? "a scalar or one value per end (1 x 2)"
+                           : "a scalar");
+  double T[2] = { 0.0, 0.0 };
+  for (size_t k = 0; k < 2 && sp->nvalues > 0; k++)
+    {
+      double v = sp->values[sp->nvalues == 1 ? 0 : k];
+      if (isnan (v))
+        return holent_err_set (err, HOLENT_ENAN, -1, HOLENT_NOINDEX,
+                               "'%s' must not be NaN", tname);
+      if (sp->is_log_g)
+        {
+          if (holent_bcft_tension_of_log_g (v, c, T + k))
+            return holent_err_set (err, HOLENT_EDOM, -1, HOLENT_NOINDEX,
+                                   "'log_g' = %g is beyond double precision "
+                                   "(|T ell| rounds to 1)", v);
+        }
+      else
+        T[k] = v * ell;
+    }
+  int bad;
+  st = holent_bcft_bg_init (bg, sp->kind, interval ? sp->length : INFINITY,
+                            eps, beta, T[0], T[1], c,
+                            sp->has_saddle ? sp->saddle : HOLENT_BCFT_DOMINANT,
+                            &bad);
+  if (st == HOLENT_EINVAL && bad >= 0)
+    st = HOLENT_ENAN;
+  switch (st ? bad : -2)
+    {
+    case -2:
+      break;
+    case 0:
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX, "'length' must be "
+                             "a finite positive interval length");
+    case 1:
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX,
+                             "'cutoff' must be finite and positive");
+    case 2:
+      if (sp->kind == HOLENT_BCFT_TFD)
+        return holent_err_set (err, st, -1, HOLENT_NOINDEX, "the two-sided "
+                               "geometry needs a finite positive 'beta' "
+                               "(or 'T')");
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX, "'beta' must be "
+                             "positive (Inf: zero temperature; the BTZ "
+                             "saddle needs it finite)");
+    case 3:
+      if (sp->kind == HOLENT_BCFT_TFD)
+        return holent_err_set (err, st, -1, HOLENT_NOINDEX, "'%s' must give "
+                               "a tension in [0, 1/ell) for the two-sided "
+                               "geometry (a negative-tension brane is "
+                               "crossed by the geodesics through the "
+                               "Einstein-Rosen bridge)", tname);
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX, "'%s' must give "
+                             "|T| < 1/ell at each end (and, in a forced BTZ "
+                             "saddle, branes that do not meet: length + "
+                             "(beta/2pi)(rho0 + rho1) > 0)", tname);
+    case 4:
+      if (st == HOLENT_EUNSUP)
+        return holent_err_set (err, st, -1, HOLENT_NOINDEX, "unequal "
+                               "tensions at the two ends need the BTZ "
+                               "saddle (finite beta): the thermal AdS "
+                               "saddle has one connected brane of one "
+                               "tension");
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX, "'%s' must give "
+                             "|T| < 1/ell at each end", tname);
+    case 5:
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX,
+                             "'c' must be finite and positive");
+    default:
+      return holent_err_set (err, st, -1, HOLENT_NOINDEX, NULL);
+    }
+  bg->ell = ell;
+  bg->G = G;
+  for (int k = 0; k < 2; k++)
+    bg->tension[k] = bg->T[k] / ell;
+  return HOLENT_SUCCESS;
+}
+
+static const char *const kind_state[] = { "bcft", "bcft", "bcft_tfd" };
+static const char *const kind_boundary[] = { "half_line", "interval",
+                                             "half_line" };
+
+int
+holent_bcft_kind_of (const char *state, const char *boundary,
+                     holent_bcft_kind *kind, holent_err *err)
+{
+  holent_err_clear (err);
+  if (state == NULL || boundary == NULL || kind == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  int tfd = strcmp (state, "bcft_tfd") == 0;
+  if (!tfd && strcmp (state, "bcft") != 0)
+    return holent_err_set (err, HOLENT_EBACKGROUND, -1, HOLENT_NOINDEX,
+                           "no BCFT state '%s'", state);
+  for (int k = 0; k < 3; k++)
+    if (strcmp (state, kind_state[k]) == 0
+        && strcmp (boundary, kind_boundary[k]) == 0)
+      {
+        *kind = (holent_bcft_kind) k;
+        return HOLENT_SUCCESS;
+      }
+  return holent_err_set (err, HOLENT_EBOUNDARY, -1, HOLENT_NOINDEX,
+                         "BOUNDARY must be %s for the %s state, got '%s'",
+                         tfd ? "'half_line'" : "'half_line' or 'interval'",
+                         state, boundary);
+}
+
+int
+holent_bcft_saddle_of (const char *name, holent_bcft_saddle *s,
+                       holent_err *err)
+{
+  static const char *const names[] = { "dominant", "btz", "thermal_ads" };
+  holent_err_clear (err);
+  if (name == NULL || s == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  for (int k = 0; k < 3; k++)
+    if (strcmp (name, names[k]) == 0 || (k == 0 && name[0] == '\0'))
+      {
+        *s = (holent_bcft_saddle) k;
+        return HOLENT_SUCCESS;
+      }
+  return holent_err_set (err, HOLENT_EOPTION, -1, HOLENT_NOINDEX,
+                         "'saddle' must be 'dominant', 'btz' or "
+                         "'thermal_ads', got '%s'", name);
+}
+
+const char *
+holent_bcft_state_name (const holent_bcft_bg *bg)
+{
+  return kind_state[bg->kind];
+}
+
+const char *
+holent_bcft_boundary_name (const holent_bcft_bg *bg)
+{
+  return kind_boundary[bg->kind];
+}
+
+const char *
+holent_bcft_bulk_name (const holent_bcft_bg *bg)
+{
+  if (bg->kind == HOLENT_BCFT_TFD)
+    return "eternal_planar_btz";
+  if (bg->btz)
+    return "planar_btz";
+  return bg->kind == HOLENT_BCFT_INTERVAL ? "thermal_ads" : "poincare";
+}
+
+const char *
+holent_bcft_saddle_name (const holent_bcft_bg *bg)
+{
+  if (bg->btz)
+    return "btz";
+  return bg->kind == HOLENT_BCFT_INTERVAL ? "thermal_ads" : "";
+}
+
+const char *
+holent_bcft_profile_text (const holent_bcft_bg *bg)
+{
+  if (bg->btz)
+    return "sinh(x/zh) = -sinh(rho) z/zh from each end (x measured away "
+           "from the BCFT), zh = beta/(2 pi)";
+  if (bg->kind == HOLENT_BCFT_INTERVAL)
+    return "sinh(r) sin(pi x/length) = -sinh(rho), cosh(r) = z0/z, "
+           "z0 = length/pi: one brane joining both ends";
+  return "x = -z sinh(rho)";
 }
 
 static int
@@ -142,14 +386,6 @@ in_domain (const holent_bcft_bg *bg, double x)
   if (!(x > 0.0 && x < bg->length))
     return HOLENT_EDOM;
   return HOLENT_SUCCESS;
-}
-
-/* log cosh y without overflow.  */
-static double
-lncosh (double y)
-{
-  y = fabs (y);
-  return y + log1p (exp (-2.0 * y)) - M_LN2;
 }
 
 /* Unchecked kernel: the one-sided geodesic over a distance d.  */
@@ -249,8 +485,23 @@ holent_bcft_tension_of_log_g (double log_g, double c, double *T)
   return HOLENT_SUCCESS;
 }
 
+static int brane_x_unit (const holent_bcft_bg *bg, int end, double z,
+                         double *x);
+
 int
 holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z, double *x)
+{
+  if (bg == NULL || x == NULL)
+    return HOLENT_EINVAL;
+  /* depths and the profile in units of ell, as the Octave struct */
+  int st = brane_x_unit (bg, end, z / bg->ell, x);
+  if (!st)
+    *x *= bg->ell;
+  return st;
+}
+
+static int
+brane_x_unit (const holent_bcft_bg *bg, int end, double z, double *x)
 {
   if (bg == NULL || x == NULL || isnan (z) || (end != 0 && end != 1))
     return HOLENT_EINVAL;
@@ -285,21 +536,28 @@ holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z, double *x)
   return HOLENT_SUCCESS;
 }
 
-int
-holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1, double t1,
-                           double x2, double t2, double *len)
+double
+holent_bcft_brane_side (const holent_bcft_bg *bg, int end, double x,
+                        double z)
 {
-  if (bg == NULL || len == NULL || bg->kind != HOLENT_BCFT_TFD)
-    return HOLENT_EINVAL;
-  if (isnan (t1) || isnan (t2) || !isfinite (t1) || !isfinite (t2))
-    return HOLENT_EINVAL;
-  int st = in_domain (bg, x1);
-  if (!st)
-    st = in_domain (bg, x2);
-  if (st)
-    return st;
-  /* through the bridge: holent_tfd's length without a shock */
-  return holent_tfd_cross_length (&bg->tfd, x1, t1, x2, t2, len);
+  double xb;
+  if (bg->kind == HOLENT_BCFT_INTERVAL && !bg->btz)
+    {
+      /* sinh r sin(theta) + sinh rho, cosh r = z0/z */
+      double c = bg->z0 / z;
+      return sqrt ((c - 1.0) * (c + 1.0)) * sin (x / bg->z0)
+             + sinh (bg->rho[0]);
+    }
+  if (brane_x_unit (bg, end, z, &xb))
+    return NAN;
+  return end ? xb - x : x - xb;
+}
+
+double
+holent_bcft_mirror (const holent_bcft_bg *bg, int end, double x)
+{
+  return end && bg->kind == HOLENT_BCFT_INTERVAL && bg->btz
+         ? 2.0 * bg->length - x : -x;
 }
 
 /* ---- regions ------------------------------------------------------ */
@@ -328,10 +586,11 @@ struct holent_bcft_workspace
   size_t *pairs, *brane;
   int *bend;
   double *bx, *bz, *bpt;
+  double *ipair;           /* island configuration's pairs (coordinates) */
+  size_t n_ipair;
   /* state of the last call */
   size_t m, n, kmax, pg_m;
   int c0;
-  double pg_h0;
 };
 
 holent_bcft_workspace *
@@ -366,10 +625,11 @@ holent_bcft_workspace_alloc (size_t nmax)
   w->bx = malloc (M * sizeof (double));
   w->bz = malloc (M * sizeof (double));
   w->bpt = malloc (M * sizeof (double));
+  w->ipair = malloc (M * sizeof (double));
   if (!w->rows || !w->start || !w->end || !w->pts || !w->C || !w->lc
       || !w->rc || !w->P || !w->Pch || !w->F || !w->Fch || !w->G || !w->Gch
       || !w->A || !w->nbk || !w->pairs || !w->brane || !w->bend || !w->bx
-      || !w->bz || !w->bpt)
+      || !w->bz || !w->bpt || !w->ipair)
     {
       holent_bcft_workspace_free (w);
       return NULL;
@@ -386,7 +646,7 @@ holent_bcft_workspace_free (holent_bcft_workspace *w)
   free (w->C); free (w->lc); free (w->rc); free (w->P); free (w->Pch);
   free (w->F); free (w->Fch); free (w->G); free (w->Gch); free (w->A);
   free (w->nbk); free (w->pairs); free (w->brane); free (w->bend);
-  free (w->bx); free (w->bz); free (w->bpt);
+  free (w->bx); free (w->bz); free (w->bpt); free (w->ipair);
   free (w);
 }
 
@@ -399,30 +659,54 @@ cmp_rows (const void *p, const void *q)
   return r->row < s->row ? -1 : (r->row > s->row);
 }
 
+/* What a row of a region must be on this background.  */
+static const char *
+row_domain (const holent_bcft_bg *bg, char *buf, size_t sz)
+{
+  if (bg->kind == HOLENT_BCFT_TFD)
+    return "must lie on x > 0 (a radiation region may not touch the "
+           "boundary x = 0 of the BCFT) with start < end";
+  if (bg->kind == HOLENT_BCFT_INTERVAL)
+    {
+      snprintf (buf, sz, "must lie in the BCFT's interval [0, %g] with "
+                "start < end", bg->length);
+      return buf;
+    }
+  return "must lie on the half line x >= 0 (not past its boundary) with "
+         "start < end";
+}
+
 /* Check, sort and merge the rows; set the endpoints that need a surface
    and c0 (the region starts at the BCFT's boundary).  */
 static int
 normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
            const double *a, const double *b, int allow_inf, size_t *nshort,
-           size_t *bad)
+           holent_err *err)
 {
+  char buf[96];
   if (n == 0)
-    return HOLENT_EEMPTY;
+    return holent_err_set (err, HOLENT_EEMPTY, 0, HOLENT_NOINDEX,
+                           "has no intervals");
   if (n > w->nmax)
-    return HOLENT_ETOOBIG;
+    return holent_err_set (err, HOLENT_ETOOBIG, 0, HOLENT_NOINDEX,
+                           "has more than %zu rows", w->nmax);
   for (size_t i = 0; i < n; i++)
     {
       double ai = a[i], bi = b[i];
-      if (bad)
-        *bad = i;
-      if (isnan (ai) || isnan (bi) || ai == INFINITY
-          || (bi == INFINITY && !allow_inf))
-        return HOLENT_EINVAL;
+      if (isnan (ai) || isnan (bi))
+        return holent_err_set (err, HOLENT_ENAN, 0, i,
+                               "must be a number, not NaN");
+      if (ai == INFINITY || (bi == INFINITY && !allow_inf))
+        return holent_err_set (err, HOLENT_EDOM, 0, i, allow_inf
+                               ? "must be finite (only an end may be Inf)"
+                               : "must be finite");
       /* a radiation region (allow_inf) lies on x > 0: 0 is the boundary */
       if (ai < 0.0 || (allow_inf && ai == 0.0) || bi < ai || bi > bg->length)
-        return HOLENT_EDOM;
+        return holent_err_set (err, HOLENT_EDOM, 0, i, "%s",
+                               row_domain (bg, buf, sizeof buf));
       if (ai == bi)
-        return HOLENT_EEMPTY;
+        return holent_err_set (err, HOLENT_EEMPTY, 0, i,
+                               "is a zero-length interval");
       w->rows[i].a = ai;
       w->rows[i].b = bi;
       w->rows[i].row = i;
@@ -434,11 +718,10 @@ normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
   for (size_t i = 1; i < n; i++)
     {
       if (w->rows[i].a < w->end[k])
-        {
-          if (bad)
-            *bad = w->rows[i].row;
-          return HOLENT_EOVERLAP;
-        }
+        return holent_err_set (err, HOLENT_EOVERLAP, 0, w->rows[i].row,
+                               "overlaps another row (intervals of a region "
+                               "must be disjoint; touching ones are "
+                               "merged)");
       if (w->rows[i].a == w->end[k])   /* touching: merge */
         w->end[k] = w->rows[i].b;
       else
@@ -448,8 +731,6 @@ normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
           w->end[k] = w->rows[i].b;
         }
     }
-  if (bad)
-    *bad = (size_t) -1;
   w->n = k + 1;
   size_t m = 0;
   w->c0 = 0;
@@ -485,10 +766,39 @@ normalise (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
 /* Full non-crossing pairings of [i, j) in P; prefix F with L singles
    (parity), suffix G with exactly k R singles, k <= kmax.  Singles are
    never inside a pair (they would cross it).  */
+/* Count STEP more elementary steps; ask the poll every ~1e5.  */
 static int
-polled (const holent_poll *poll, double done, double total)
+poll_step (const holent_poll *poll, double *done, double *next, double step,
+           double total)
 {
-  return poll && poll->fn && poll->fn (poll->ctx, done, total);
+  *done += step;
+  if (*done < *next)
+    return 0;
+  *next = *done + 1e5;
+  return poll && poll->fn && poll->fn (poll->ctx, *done, total);
+}
+
+/* Least cost of pairing endpoint i with a partner k in (i, j), k - i odd:
+   the geodesic i-k, the full pairing inside it, and OUT[(k + 1) (M + 1)]
+   after it (a column of P or G); BEST the cost without a partner.  *ARG
+   gets the partner, -1 for none.  */
+static double
+best_partner (const holent_bcft_workspace *w, size_t i, size_t j,
+              const double *out, double best, int *arg)
+{
+  const double *C = w->C;
+  size_t M = w->M;
+  *arg = -1;
+  for (size_t k = i + 1; k < j; k += 2)
+    {
+      double v = C[i * M + k] + w->P[IX (i + 1, k)] + out[(k + 1) * (M + 1)];
+      if (v < best)
+        {
+          best = v;
+          *arg = (int) k;
+        }
+    }
+  return best;
 }
 
 static int
@@ -504,29 +814,14 @@ run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
     w->P[IX (i, i)] = 0.0;
   for (size_t len = 2; len <= m; len += 2)
     {
-      done += (double) (m - len + 1) * (double) len / 2.0;
-      if (done >= next)
-        {
-          if (polled (poll, done, total))
-            return HOLENT_EINTR;
-          next = done + 1e5;
-        }
+      if (poll_step (poll, &done, &next,
+                     (double) (m - len + 1) * (double) len / 2.0, total))
+        return HOLENT_EINTR;
     for (size_t i = 0; i + len <= m; i++)
       {
         size_t j = i + len;
-        double best = INFINITY;
-        int arg = -1;
-        for (size_t k = i + 1; k < j; k += 2)
-          {
-            double v = C[i * M + k] + w->P[IX (i + 1, k)] + w->P[IX (k + 1, j)];
-            if (v < best)
-              {
-                best = v;
-                arg = (int) k;
-              }
-          }
-        w->P[IX (i, j)] = best;
-        w->Pch[IX (i, j)] = arg;
+        w->P[IX (i, j)] = best_partner (w, i, j, w->P + j, INFINITY,
+                                        w->Pch + IX (i, j));
       }
     }
   w->F[0] = 0.0;
@@ -555,29 +850,14 @@ run_dp (holent_bcft_workspace *w, size_t kmax, const holent_poll *poll)
     w->G[IX (m, k)] = k ? INFINITY : 0.0;
   for (size_t ii = m; ii-- > 0;)
     {
-      done += (double) (m - ii) * ((double) kmax + 1.0) / 2.0;
-      if (done >= next)
-        {
-          if (polled (poll, done, total))
-            return HOLENT_EINTR;
-          next = done + 1e5;
-        }
+      if (poll_step (poll, &done, &next,
+                     (double) (m - ii) * ((double) kmax + 1.0) / 2.0, total))
+        return HOLENT_EINTR;
     for (size_t k = 0; k <= kmax; k++)
-      {
-        double best = k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY;
-        int arg = -1;
-        for (size_t j = ii + 1; j < m; j += 2)
-          {
-            double v = C[ii * M + j] + w->P[IX (ii + 1, j)] + w->G[IX (j + 1, k)];
-            if (v < best)
-              {
-                best = v;
-                arg = (int) j;
-              }
-          }
-        w->G[IX (ii, k)] = best;
-        w->Gch[IX (ii, k)] = arg;
-      }
+      w->G[IX (ii, k)] = best_partner (
+          w, ii, m, w->G + k,
+          k ? w->G[IX (ii + 1, k - 1)] + w->rc[ii] : INFINITY,
+          w->Gch + IX (ii, k));
     }
   return HOLENT_SUCCESS;
 }
@@ -659,28 +939,71 @@ fill_costs (holent_bcft_workspace *w, const holent_bcft_bg *bg, int right)
     }
 }
 
+/* Least F + G over the split i and parity par with exactly k right
+   singles; hor >= 0 keeps the splits whose horizon face (c0 ^ par) is in
+   the homology region (hor 1) or not (hor 0).  Ties go to the first.  */
+static double
+best_split (const holent_bcft_workspace *w, size_t k, int hor, size_t *bi,
+            int *bp)
+{
+  double best = INFINITY;
+  for (size_t i = 0; i <= w->m; i++)
+    for (int par = 0; par < 2; par++)
+      {
+        if (hor >= 0 && (w->c0 ^ par) != hor)
+          continue;
+        double v = w->F[2 * i + par] + w->G[IX (i, k)];
+        if (v < best)
+          {
+            best = v;
+            *bi = i;
+            *bp = par;
+          }
+      }
+  return best;
+}
+
+/* Shared start of the region minimisers: check, normalise, run the DP.  */
+static int
+prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
+         const double *a, const double *b, int tfd, size_t kmax, int right,
+         size_t *ns, holent_err *err, const holent_poll *poll)
+{
+  holent_err_clear (err);
+  if (w == NULL || bg == NULL || a == NULL || b == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  if ((bg->kind == HOLENT_BCFT_TFD) != tfd)
+    return holent_err_set (err, HOLENT_EUNSUP, -1, HOLENT_NOINDEX, tfd
+                           ? "BG must be a two-sided background, "
+                             "ads3_background (\"bcft_tfd\", \"half_line\", "
+                             "...)"
+                           : "BG is two-sided: use page_curve for its "
+                             "radiation regions");
+  int st = normalise (w, bg, n, a, b, tfd, ns, err);
+  if (st)
+    return st;
+  fill_costs (w, bg, right);
+  for (size_t i = 0; tfd && i < w->m; i++)
+    w->rc[i] = 0.0;
+  st = run_dp (w, kmax ? w->m : 0, poll);
+  return st ? holent_err_set (err, st, -1, HOLENT_NOINDEX, NULL) : st;
+}
+
 int
 holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                      size_t n, const double *a, const double *b,
-                     holent_bcft_result *res, size_t *bad,
+                     holent_bcft_result *res, holent_err *err,
                      const holent_poll *poll)
 {
-  if (bad)
-    *bad = (size_t) -1;
-  if (w == NULL || bg == NULL || a == NULL || b == NULL || res == NULL)
-    return HOLENT_EINVAL;
-  if (bg->kind == HOLENT_BCFT_TFD)
-    return HOLENT_EUNSUP;
   size_t ns;
-  int st = normalise (w, bg, n, a, b, 0, &ns, bad);
+  int right = bg != NULL && bg->kind == HOLENT_BCFT_INTERVAL && bg->btz;
+  if (res == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  int st = prepare (w, bg, n, a, b, 0, (size_t) right, right, &ns, err,
+                    poll);
   if (st)
     return st;
-  int right = bg->kind == HOLENT_BCFT_INTERVAL && bg->btz;
   size_t kmax = right ? w->m : 0;
-  fill_costs (w, bg, right);
-  st = run_dp (w, kmax, poll);
-  if (st)
-    return st;
   /* The face between the last L and the first R single holds the
      horizon; it lies in the homology region when c0 ^ parity.  */
   double hlen = bg->btz ? bg->S_H * 6.0 / bg->c : 0.0;
@@ -688,27 +1011,23 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   size_t bi = 0, bk = 0;
   int bp = 0, bh = 0;
   for (int hor = 0; hor < 2; hor++)      /* ties go to no horizon */
-    for (size_t i = 0; i <= w->m; i++)
-      for (int par = 0; par < 2; par++)
-        {
-          if ((w->c0 ^ par) != hor)
-            continue;
-          for (size_t k = 0; k <= kmax; k++)
-            {
-              double v = w->F[2 * i + par] + w->G[IX (i, k)]
-                         + (hor && hlen > 0.0 ? hlen : 0.0);
-              if (v < best)
-                {
-                  best = v;
-                  bi = i;
-                  bp = par;
-                  bk = k;
-                  bh = hor;
-                }
-            }
-        }
-  if (!(best < INFINITY))
-    return HOLENT_EDOM;   /* unbounded horizon (cannot happen for rows) */
+    for (size_t k = 0; k <= kmax; k++)
+      {
+        size_t i;
+        int par;
+        double v = best_split (w, k, hor, &i, &par)
+                   + (hor && hlen > 0.0 ? hlen : 0.0);
+        if (v < best)
+          {
+            best = v;
+            bi = i;
+            bp = par;
+            bk = k;
+            bh = hor;
+          }
+      }
+  if (!(best < INFINITY))   /* unbounded horizon (cannot happen for rows) */
+    return holent_err_set (err, HOLENT_EINTERNAL, -1, HOLENT_NOINDEX, NULL);
   size_t np, nb;
   reconstruct (w, bi, bp, bk, &np, &nb);
   for (size_t q = 0; q < nb; q++)
@@ -736,47 +1055,39 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
 
 /* ---- Page curve ---------------------------------------------------- */
 
+/* Cost of one bridge geodesic per side at time t: half the length of
+   holent_tfd's geodesic from (x, t) on the left to (x, t) on the right
+   (independent of x).  */
+static double
+bridge_half (const holent_bcft_bg *bg, double t)
+{
+  double len;
+  if (holent_tfd_cross_length (&bg->tfd, 0.0, t, 0.0, t, &len))
+    return INFINITY;
+  return 0.5 * len;
+}
+
 int
 holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                           size_t n, const double *a, const double *b,
-                          holent_bcft_page *pg, size_t *bad,
+                          holent_bcft_page *pg, holent_err *err,
                           const holent_poll *poll)
 {
-  if (bad)
-    *bad = (size_t) -1;
-  if (w == NULL || bg == NULL || a == NULL || b == NULL || pg == NULL)
-    return HOLENT_EINVAL;
-  if (bg->kind != HOLENT_BCFT_TFD)
-    return HOLENT_EUNSUP;
   size_t ns;
-  int st = normalise (w, bg, n, a, b, 1, &ns, bad);
+  if (pg == NULL)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  /* bridge singles cost 0 here: k h(t) is added at eval */
+  int st = prepare (w, bg, n, a, b, 1, 1, 0, &ns, err, poll);
   if (st)
     return st;
   size_t m = w->m;
-  fill_costs (w, bg, 0);
-  for (size_t i = 0; i < m; i++)   /* bridge: k h(t) is added at eval */
-    w->rc[i] = 0.0;
-  st = run_dp (w, m, poll);
-  if (st)
-    return st;
   /* A_k: best one-sided configuration with k bridge geodesics; the
      two-sided minimum is attained by a left-right symmetric one.  */
   for (size_t k = 0; k <= m; k++)
     {
-      double best = INFINITY;
       size_t bi = 0;
       int bp = 0;
-      for (size_t i = 0; i <= m; i++)
-        for (int par = 0; par < 2; par++)
-          {
-            double v = w->F[2 * i + par] + w->G[IX (i, k)];
-            if (v < best)
-              {
-                best = v;
-                bi = i;
-                bp = par;
-              }
-          }
+      double best = best_split (w, k, -1, &bi, &bp);
       w->A[k] = best;
       w->nbk[k] = 0;
       if (best < INFINITY)
@@ -788,23 +1099,29 @@ holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
             cnt += w->bend[q] == 0;
           w->nbk[k] = cnt;
           if (k == 0)
-            for (size_t q = 0; q < nb; q++)
-              {
-                w->bpt[q] = w->pts[w->brane[q]];
-                (void) brane_len (bg, w->bpt[q], 0, w->bx + q, w->bz + q);
-              }
+            {
+              for (size_t q = 0; q < nb; q++)
+                {
+                  w->bpt[q] = w->pts[w->brane[q]];
+                  (void) brane_len (bg, w->bpt[q], 0, w->bx + q, w->bz + q);
+                }
+              for (size_t q = 0; q < 2 * np; q++)
+                w->ipair[q] = w->pts[w->pairs[q]];
+              w->n_ipair = np;
+            }
         }
     }
   w->pg_m = m;
-  w->pg_h0 = log (bg->beta / (M_PI * bg->eps));
   memset (pg, 0, sizeof *pg);
   pg->m = m;
-  pg->h0 = w->pg_h0;
+  pg->h0 = bridge_half (bg, 0.0);
   pg->S_island = bg->c / 3.0 * w->A[0];
   pg->n_island = w->nbk[0];
   pg->island_x = w->bx;
   pg->island_z = w->bz;
   pg->island_pt = w->bpt;
+  pg->n_island_pairs = w->n_ipair;
+  pg->island_pairs = w->ipair;
   pg->n_short = ns;
   /* A_0 <= A_k + k h  for every k >= 1  iff  h >= max (A_0 - A_k)/k.  */
   double hp = -INFINITY;
@@ -817,7 +1134,7 @@ holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
       }
   double y = hp - pg->h0;
   pg->page_time = 0.0;
-  if (y > 0.0)   /* cosh(2 pi t/beta) = e^y */
+  if (y > 0.0)   /* h(t) = h0 + log cosh(2 pi t/beta) = hp */
     pg->page_time = bg->beta / (2.0 * M_PI)
                     * (y + log1p (sqrt (-expm1 (-2.0 * y))));
   return HOLENT_SUCCESS;
@@ -827,25 +1144,20 @@ int
 holent_bcft_page_eval (const holent_bcft_workspace *w,
                        const holent_bcft_bg *bg, size_t nt, const double *t,
                        double *S, double *kbridge, double *nbrane,
-                       double *S_noisland, size_t *bad)
+                       double *S_noisland, holent_err *err)
 {
-  if (bad)
-    *bad = (size_t) -1;
+  holent_err_clear (err);
   if (w == NULL || bg == NULL || (nt > 0 && (t == NULL || S == NULL)))
-    return HOLENT_EINVAL;
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
   if (bg->kind != HOLENT_BCFT_TFD)
-    return HOLENT_EUNSUP;
+    return holent_err_set (err, HOLENT_EUNSUP, -1, HOLENT_NOINDEX, NULL);
   size_t m = w->pg_m;
-  double k2 = 2.0 * M_PI / bg->beta;
   for (size_t i = 0; i < nt; i++)
     {
-      if (isnan (t[i]) || !isfinite (t[i]))
-        {
-          if (bad)
-            *bad = i;
-          return HOLENT_EINVAL;
-        }
-      double h = w->pg_h0 + lncosh (k2 * t[i]);
+      if (!isfinite (t[i]))
+        return holent_err_set (err, isnan (t[i]) ? HOLENT_ENAN : HOLENT_EDOM,
+                               0, i, "must be a finite time");
+      double h = bridge_half (bg, t[i]);
       double best = INFINITY;
       size_t bk = 0;
       for (size_t k = 1; k <= m; k++)

@@ -56,6 +56,11 @@ typedef struct
                         half line at beta < Inf: Inf; otherwise 0        */
   double zh;         /* horizon depth beta/(2 pi) (Inf without)          */
   double z0;         /* thermal AdS: tip depth length/pi (Inf otherwise) */
+  double ell;        /* AdS radius (bulk lengths above are in units of
+                        ell; holent_bcft_bg_init sets 1)                 */
+  double G;          /* Newton constant 3 ell/(2 c)                      */
+  double tension[2]; /* physical tensions T/ell                          */
+  int pure;          /* no horizon and zero temperature                  */
   holent_geo_bg geo; /* lengths between two points of one side: Poincare,
                         planar BTZ, or global AdS of circumference
                         2 length (the doubled interval, thermal AdS)     */
@@ -78,6 +83,55 @@ int holent_bcft_bg_init (holent_bcft_bg *bg, holent_bcft_kind kind,
                          double T0, double T1, double c,
                          holent_bcft_saddle saddle, int *bad);
 
+/* Everything a user gives for a BCFT background (ads3_background's
+ * options), NaN (or has_* = 0) where not given: the caller rejects a NaN
+ * that was given.  beta and T, when given, must be finite and positive.  */
+typedef struct
+{
+  holent_bcft_kind kind;
+  double length;          /* interval only (required there)             */
+  double cutoff;          /* default 1e-6                               */
+  double beta, T;         /* at most one; default beta = Inf            */
+  double c, G, ell;       /* Brown-Henneaux c = 3 ell/(2G); defaults
+                             ell = 1, c = 1                              */
+  const double *values;   /* tension (ell = 1 units: T ell) or log g     */
+  size_t nvalues;         /* 0 (tensionless), 1, or 2 on an interval    */
+  int is_log_g;           /* values are boundary entropies log g        */
+  int has_saddle;         /* an interval's forced saddle                */
+  holent_bcft_saddle saddle;
+} holent_bcft_spec;
+
+/* The one constructor and validator of BCFT backgrounds: derives c, G,
+ * beta, the tensions and everything of holent_bcft_bg_init from SPEC and
+ * fills *bg (with ell, G and the physical tensions T/ell).  Errors fill
+ * ERR (may be NULL) with what was expected: HOLENT_EOPTION (options that
+ * do not apply or exclude each other), HOLENT_EINCONSISTENT (c and G),
+ * HOLENT_ESIZE (number of tension values), HOLENT_ENAN, HOLENT_EDOM,
+ * HOLENT_EUNSUP as holent_bcft_bg_init.  */
+int holent_bcft_bg_make (holent_bcft_bg *bg, const holent_bcft_spec *spec,
+                         holent_err *err);
+
+/* Kind of the state/boundary names ("bcft" or "bcft_tfd"; "half_line" or
+   "interval"); HOLENT_EBOUNDARY (reason in ERR) for a boundary the state
+   does not have, HOLENT_EBACKGROUND for an unknown state.  */
+int holent_bcft_kind_of (const char *state, const char *boundary,
+                         holent_bcft_kind *kind, holent_err *err);
+
+/* Saddle of its name ("dominant", "btz", "thermal_ads"; "" is dominant);
+   HOLENT_EOPTION otherwise.  */
+int holent_bcft_saddle_of (const char *name, holent_bcft_saddle *s,
+                           holent_err *err);
+
+/* Names of a built background, for the Octave struct: state, boundary,
+   bulk ("poincare", "planar_btz", "thermal_ads", "eternal_planar_btz"),
+   saddle ("btz", "thermal_ads" or "" on a half line without horizon) and
+   the brane profile in words.  Never NULL.  */
+const char *holent_bcft_state_name (const holent_bcft_bg *bg);
+const char *holent_bcft_boundary_name (const holent_bcft_bg *bg);
+const char *holent_bcft_bulk_name (const holent_bcft_bg *bg);
+const char *holent_bcft_saddle_name (const holent_bcft_bg *bg);
+const char *holent_bcft_profile_text (const holent_bcft_bg *bg);
+
 /* Regulated length of the geodesic between boundary points x1 and x2 of
  * one side (one time slice).  HOLENT_EDOM outside the BCFT's domain
  * (x <= 0, x >= length), HOLENT_ECOINCIDE for x1 == x2.  */
@@ -93,13 +147,6 @@ int holent_bcft_pair_length (const holent_bcft_bg *bg, double x1,
 int holent_bcft_brane_length (const holent_bcft_bg *bg, double x, int end,
                               double *len, double *xb, double *zb);
 
-/* TFD only: regulated length of the geodesic through the Einstein-Rosen
- * bridge from x1 on the left at time t1 to x2 on the right at time t2,
- * both times running forward.  */
-int holent_bcft_bridge_length (const holent_bcft_bg *bg, double x1,
-                               double t1, double x2, double t2,
-                               double *len);
-
 /* Tension (ell = 1) of the brane with boundary entropy log_g:
  * T = tanh(6 log_g / c).  HOLENT_EINVAL for NaN, HOLENT_EDOM for c <= 0
  * or a log_g so large that |T| rounds to 1.  */
@@ -107,11 +154,26 @@ int holent_bcft_tension_of_log_g (double log_g, double c, double *T);
 
 /* Brane profile on the time-symmetric slice: the boundary coordinate x of
  * the brane anchored at end (0 or 1) at depth z, in the bulk coordinates of
- * doc/bcft.md.  z in (0, zh] (BTZ; the TFD continues past the horizon,
+ * doc/bcft.md (x and z in units of bg->ell, as ads3_background's zh).  z in (0, zh] (BTZ; the TFD continues past the horizon,
  * z in (0, Inf)), (0, z0/cosh rho] (thermal AdS: beyond, the brane turns
  * over to the other end), (0, Inf) (Poincare).  HOLENT_EDOM outside.  */
 int holent_bcft_brane_x (const holent_bcft_bg *bg, int end, double z,
                          double *x);
+
+/* Which side of the brane at END the point (x, z) of the time-symmetric
+ * slice lies on, in the bulk coordinates of doc/bcft.md with ell = 1
+ * (thermal AdS: x = z0 theta, z = z0/cosh r): > 0 in the bulk that
+ * remains, < 0 beyond the brane, 0 on it; NaN for a depth the brane
+ * does not reach (past the horizon).  */
+double holent_bcft_brane_side (const holent_bcft_bg *bg, int end, double x,
+                               double z);
+
+/* The boundary point whose geodesic to x is orthogonal to the brane at
+ * END: x's mirror image in the tensionless brane (-x from end 0,
+ * 2 length - x from end 1; the thermal AdS saddle: -x on the doubled
+ * circle).  The geodesic from x to the brane is the part of that
+ * geodesic from x to its landing point (doc/surfaces.md).  */
+double holent_bcft_mirror (const holent_bcft_bg *bg, int end, double x);
 
 /* ---- Regions and the exact minimiser ------------------------------- */
 
@@ -151,9 +213,10 @@ typedef struct
  * merged.  Candidates: every non-crossing set of geodesics in which each
  * endpoint pairs with another or ends on a brane, with the horizon where
  * the homology region needs it; minimised exactly (doc/bcft.md).
- * Errors: HOLENT_EINVAL (NULL, NaN, Inf; *bad = row), HOLENT_EDOM (a row
+ * Errors (ERR, may be NULL, gets the row in index and what was expected):
+ * HOLENT_EINVAL (NULL), HOLENT_ENAN (NaN), HOLENT_EDOM (Inf, a row
  * reaching past the boundary, b < a), HOLENT_EEMPTY (n == 0 or a == b),
- * HOLENT_EOVERLAP (*bad = a row overlapping an earlier one),
+ * HOLENT_EOVERLAP (index = a row overlapping an earlier one),
  * HOLENT_ETOOBIG (n above the workspace), HOLENT_EUNSUP (TFD; use the
  * Page-curve functions).  The pointers of *res stay valid until the
  * workspace is used again.  poll (may be NULL): the O(m^3) programme calls
@@ -161,7 +224,7 @@ typedef struct
  * stop.  */
 int holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                          size_t n, const double *a, const double *b,
-                         holent_bcft_result *res, size_t *bad,
+                         holent_bcft_result *res, holent_err *err,
                          const holent_poll *poll);
 
 /* ---- Page curve of a radiation region in the TFD -------------------- */
@@ -176,6 +239,8 @@ typedef struct
   const double *island_x;  /* their landing points (workspace-owned)      */
   const double *island_z;
   const double *island_pt; /* their boundary endpoints                    */
+  size_t n_island_pairs;   /* geodesics within a side in that configuration */
+  const double *island_pairs; /* their endpoints x1, x2 (2 per pair)      */
   size_t n_short;
 } holent_bcft_page;
 
@@ -189,18 +254,20 @@ typedef struct
 int holent_bcft_page_prepare (holent_bcft_workspace *w,
                               const holent_bcft_bg *bg, size_t n,
                               const double *a, const double *b,
-                              holent_bcft_page *pg, size_t *bad,
+                              holent_bcft_page *pg, holent_err *err,
                               const holent_poll *poll);
 
 /* S[i] at the boundary times t[i] (any sign; both sides run forward);
  * kbridge[i] (may be NULL): geodesics through the bridge per side in the
  * minimiser (0: island phase); nbrane[i] (may be NULL): brane endings per
  * side; S_noisland[i] (may be NULL): the least entropy with at least one
- * bridge geodesic (Inf if none exists).  Ties go to fewer bridge geodesics.  HOLENT_EINVAL for NaN t
- * (*bad = index).  Uses the workspace of the last prepare.  */
+ * bridge geodesic (Inf if none exists).  Ties go to fewer bridge
+ * geodesics.  HOLENT_ENAN / HOLENT_EDOM for a NaN or infinite t (ERR
+ * names the index).  Uses the workspace of the last prepare.  */
 int holent_bcft_page_eval (const holent_bcft_workspace *w,
                            const holent_bcft_bg *bg, size_t nt,
                            const double *t, double *S, double *kbridge,
-                           double *nbrane, double *S_noisland, size_t *bad);
+                           double *nbrane, double *S_noisland,
+                           holent_err *err);
 
 #endif /* HOLENT_BCFT_H */

@@ -647,3 +647,168 @@ done:
   gsl_odeiv2_step_free (step);
   return st;
 }
+
+/* ---- BCFT ------------------------------------------------------------ */
+
+int
+holent_surface_bcft_picture (const holent_bcft_bg *bg)
+{
+  return bg->kind == HOLENT_BCFT_INTERVAL && !bg->btz;
+}
+
+/* Picture point of the bulk point (x, z) of holent_bcft, and back.  */
+static void
+bcft_to_picture (const holent_bcft_bg *bg, double x, double z, double *px,
+                 double *py)
+{
+  if (!holent_surface_bcft_picture (bg))
+    {
+      *px = x;
+      *py = z;
+      return;
+    }
+  double R = z > 0.0 ? tanh (0.5 * acosh (bg->z0 / z)) : 1.0;
+  *px = R * cos (x / bg->z0);
+  *py = R * sin (x / bg->z0);
+}
+
+static void
+bcft_from_picture (const holent_bcft_bg *bg, double px, double py, double *x,
+                   double *z)
+{
+  if (!holent_surface_bcft_picture (bg))
+    {
+      *x = px;
+      *z = py;
+      return;
+    }
+  double R = hypot (px, py);
+  *x = bg->z0 * atan2 (py, px);
+  *z = R < 1.0 ? bg->z0 / cosh (2.0 * atanh (R)) : 0.0;
+}
+
+static int
+check_tol (double tol)
+{
+  if (isnan (tol))
+    return HOLENT_EINVAL;
+  return tol >= HOLENT_SURFACE_TOLMIN && tol <= 1.0 ? HOLENT_SUCCESS
+                                                     : HOLENT_EDOM;
+}
+
+int
+holent_surface_bcft_brane_geodesic (holent_surface_workspace *w,
+                                    const holent_bcft_bg *bg, double x,
+                                    int end, double tol)
+{
+  double len, xb, zb;
+  if (w == NULL || bg == NULL)
+    return HOLENT_EINVAL;
+  int st = check_tol (tol);
+  if (!st)
+    st = holent_bcft_brane_length (bg, x, end, &len, &xb, &zb);
+  if (st)
+    return st;
+  double y = holent_bcft_mirror (bg, end, x);
+  /* the geodesic from the smaller point, so that the arc is positive */
+  st = holent_surface_geodesic (w, &bg->geo, y < x ? y : x, y < x ? x : y,
+                                tol);
+  if (st)
+    return st;
+  holent_curve *c = &w->cur;
+  if (y < x)   /* start at x */
+    for (size_t i = 0, j = c->n - 1; i < j; i++, j--)
+      {
+        double tx = c->x[i], ty = c->y[i];
+        c->x[i] = c->x[j];
+        c->y[i] = c->y[j];
+        c->x[j] = tx;
+        c->y[j] = ty;
+      }
+  /* keep the samples on the bulk side of the brane, then land */
+  size_t k = 1;
+  for (; k < c->n; k++)
+    {
+      double bx, bz;
+      bcft_from_picture (bg, c->x[k], c->y[k], &bx, &bz);
+      if (!(bz > 0.0) || !(holent_bcft_brane_side (bg, end, bx, bz) > 0.0))
+        break;
+    }
+  c->n = k;
+  double px, py;
+  bcft_to_picture (bg, xb, zb, &px, &py);
+  return push (c, px, py, 0.0);
+}
+
+typedef struct
+{
+  const holent_bcft_bg *bg;
+  int end;
+  double zmax;
+} brane_par;
+
+/* Picture point of the brane at depth u zmax (u in [0, 1]).  */
+static void
+brane_eval (const brane_par *b, double u, double *p)
+{
+  double x = b->end ? b->bg->length : 0.0, z = u * b->zmax;
+  if (u > 0.0)
+    (void) holent_bcft_brane_x (b->bg, b->end, z * b->bg->ell, &x);
+  bcft_to_picture (b->bg, x / (u > 0.0 ? b->bg->ell : 1.0), z, p, p + 1);
+}
+
+static int
+brane_refine (holent_curve *c, const brane_par *b, double tol, double ua,
+              const double *pa, double ub, const double *pb, int depth)
+{
+  double um = 0.5 * (ua + ub), pm[2];
+  brane_eval (b, um, pm);
+  if (hypot (pm[0] - 0.5 * (pa[0] + pb[0]), pm[1] - 0.5 * (pa[1] + pb[1]))
+      > tol && depth < 40)
+    {
+      int st = brane_refine (c, b, tol, ua, pa, um, pm, depth + 1);
+      return st ? st : brane_refine (c, b, tol, um, pm, ub, pb, depth + 1);
+    }
+  return push (c, pb[0], pb[1], 0.0);
+}
+
+int
+holent_surface_bcft_brane (holent_surface_workspace *w,
+                           const holent_bcft_bg *bg, int end, double zmax,
+                           double tol)
+{
+  if (w == NULL || bg == NULL || (end != 0 && end != 1) || isnan (zmax))
+    return HOLENT_EINVAL;
+  if (end == 1 && bg->kind != HOLENT_BCFT_INTERVAL)
+    return HOLENT_EINVAL;
+  int st = check_tol (tol), disk = holent_surface_bcft_picture (bg);
+  if (st)
+    return st;
+  if (disk)   /* from x = 0 to the tip; the other half by symmetry */
+    zmax = bg->z0 / cosh (bg->rho[0]);
+  else if (!(zmax > 0.0) || !isfinite (zmax))
+    return HOLENT_EDOM;
+  else if (bg->btz && zmax > bg->zh)
+    zmax = bg->zh;
+  brane_par b = { bg, disk ? 0 : end, zmax };
+  double pa[2], pb[2];
+  const int nseg = 16;
+  w->cur.n = 0;
+  brane_eval (&b, 0.0, pa);
+  if ((st = push (&w->cur, pa[0], pa[1], 0.0)))
+    return st;
+  for (int k = 1; k <= nseg; k++)
+    {
+      brane_eval (&b, (double) k / nseg, pb);
+      st = brane_refine (&w->cur, &b, tol, (double) (k - 1) / nseg, pa,
+                         (double) k / nseg, pb, 0);
+      if (st)
+        return st;
+      memcpy (pa, pb, sizeof pa);
+    }
+  if (disk)   /* theta -> pi - theta: (X, Y) -> (-X, Y), in reverse */
+    for (size_t i = w->cur.n - 1; i-- > 0;)
+      if ((st = push (&w->cur, -w->cur.x[i], w->cur.y[i], 0.0)))
+        return st;
+  return HOLENT_SUCCESS;
+}

@@ -39,6 +39,7 @@
 #include "holent_geo.h"
 #include "holent_region.h"
 #include "holent_hd_bg.h"
+#include "holent_bcft.h"
 
 /* Smallest sampling tolerance (picture units; for profiles relative to
    the turning point's depth): below it the number of samples explodes.  */
@@ -116,5 +117,33 @@ int holent_surface_runner_up (holent_surface_workspace *w,
 int holent_surface_profile (holent_surface_workspace *w,
                             const holent_hd_bg *bg, int ball, double top,
                             double tol);
+
+/* ---- BCFT: surfaces ending on end-of-the-world branes ----------------
+ * Pictures (boundary units, ell = 1): the half plane (x, z) of
+ * holent_bcft (z = 1/r, as for a line above) for the half line, the TFD's
+ * exterior and the BTZ saddle of an interval; the disk of the doubled
+ * interval (circumference 2 length, phi = pi x/length, the Poincare disk)
+ * for its thermal AdS saddle.  Geodesics between two boundary points are
+ * holent_surface_geodesic's on bg->geo.  A geodesic ending on a brane is
+ * the part, from x to its landing point, of the geodesic from x to its
+ * mirror image (holent_bcft_mirror), which meets the brane orthogonally:
+ * sampled as that geodesic, cut at the first sample beyond the brane, and
+ * closed by the exact landing point of holent_bcft_brane_length.  */
+
+/* 1 for the disk picture (thermal AdS saddle of an interval), else 0.  */
+int holent_surface_bcft_picture (const holent_bcft_bg *bg);
+
+/* The geodesic from boundary point x to the brane at END, sampled to tol
+   into w->cur from (x, 0) (or its disk point) to the landing point.  */
+int holent_surface_bcft_brane_geodesic (holent_surface_workspace *w,
+                                        const holent_bcft_bg *bg, double x,
+                                        int end, double tol);
+
+/* The brane at END sampled to tol into w->cur from its boundary anchor:
+   in the half plane down to depth zmax (at most the horizon), in the disk
+   the whole brane from x = 0 to x = length (zmax ignored).  */
+int holent_surface_bcft_brane (holent_surface_workspace *w,
+                               const holent_bcft_bg *bg, int end,
+                               double zmax, double tol);
 
 #endif /* HOLENT_SURFACE_H */

@@ -78,6 +78,80 @@ typedef struct
   int end;
 } dist_ctx;
 
+/* The constructor of ads3_background's states: options, Brown-Henneaux
+   (Brown and Henneaux 1986, Commun. Math. Phys. 104, 207), reasons.  */
+static holent_bcft_spec
+spec0 (holent_bcft_kind kind)
+{
+  holent_bcft_spec sp = { kind, NAN, NAN, NAN, NAN, NAN, NAN, NAN,
+                          NULL, 0, 0, 0, HOLENT_BCFT_DOMINANT };
+  return sp;
+}
+
+static void
+test_make (void)
+{
+  holent_bcft_bg bg;
+  holent_err err;
+  holent_bcft_spec sp = spec0 (HOLENT_BCFT_HALF_LINE);
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_SUCCESS);
+  HT_CHECK (bg.eps == 1e-6 && bg.c == 1.0 && bg.ell == 1.0 && bg.pure, "defaults");
+  HT_CHECK (strcmp (holent_bcft_bulk_name (&bg), "poincare") == 0, "bulk");
+  sp.G = 0.75;
+  sp.ell = 2.0;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_SUCCESS);
+  HT_CLOSE (bg.c, 4.0, 1e-15);
+  sp.c = 3.0;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EINCONSISTENT);
+  HT_CHECK (strstr (err.reason, "Brown-Henneaux") != NULL, "%s", err.reason);
+  sp = spec0 (HOLENT_BCFT_INTERVAL);
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
+  HT_CHECK (strstr (err.reason, "'length'") != NULL, "%s", err.reason);
+  sp.length = 2.0;
+  double v[3] = { 0.1, 0.2, 0.3 };
+  sp.values = v;
+  sp.nvalues = 3;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_ESIZE);
+  sp.nvalues = 2;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EUNSUP);
+  HT_CHECK (strstr (err.reason, "unequal tensions") != NULL, "%s", err.reason);
+  sp.T = 2.0;
+  sp.is_log_g = 1;
+  sp.c = 6.0;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_SUCCESS);
+  HT_CLOSE (bg.beta, 0.5, 1e-15);
+  HT_CLOSE (bg.log_g[1], 0.2, 1e-14);    /* log g returned as given */
+  HT_CHECK (strcmp (holent_bcft_saddle_name (&bg), "btz") == 0, "saddle");
+  sp.beta = 1.0;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
+  sp = spec0 (HOLENT_BCFT_HALF_LINE);
+  sp.beta = INFINITY;      /* a given beta is finite */
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EDOM);
+  sp = spec0 (HOLENT_BCFT_TFD);
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
+  HT_CHECK (strstr (err.reason, "needs 'beta'") != NULL, "%s", err.reason);
+  sp.beta = 1.0;
+  sp.has_saddle = 1;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EOPTION);
+  sp.has_saddle = 0;
+  v[0] = -0.1;
+  sp.values = v;
+  sp.nvalues = 1;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_EDOM);
+  HT_CHECK (strstr (err.reason, "[0, 1/ell)") != NULL, "%s", err.reason);
+  v[0] = NAN;
+  HT_STATUS (holent_bcft_bg_make (&bg, &sp, &err), HOLENT_ENAN);
+  HT_STATUS (holent_bcft_bg_make (NULL, &sp, &err), HOLENT_EINVAL);
+  holent_bcft_kind k;
+  holent_bcft_saddle sd;
+  HT_STATUS (holent_bcft_kind_of ("bcft_tfd", "interval", &k, &err), HOLENT_EBOUNDARY);
+  HT_STATUS (holent_bcft_kind_of ("bcft", "interval", &k, &err), HOLENT_SUCCESS);
+  HT_CHECK (k == HOLENT_BCFT_INTERVAL, "kind");
+  HT_STATUS (holent_bcft_kind_of ("vacuum", "line", &k, &err), HOLENT_EBACKGROUND);
+  HT_STATUS (holent_bcft_saddle_of ("", &sd, &err), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_saddle_of ("hot", &sd, &err), HOLENT_EOPTION);
+}
+
 static double
 brane_x_of_z (const holent_bcft_bg *bg, double z, int end)
 {
@@ -193,7 +267,6 @@ test_brane_lengths (void)
   HT_STATUS (holent_bcft_pair_length (&bg, 0.0, 1.0, &len), HOLENT_EDOM);
   HT_STATUS (holent_bcft_pair_length (&bg, 2.0, 1.0, &len), HOLENT_SUCCESS);
   HT_CLOSE (len, 2 * log (1.0 / 1e-7), 1e-14);
-  HT_STATUS (holent_bcft_bridge_length (&bg, 1, 0, 1, 0, &len), HOLENT_EINVAL);
 }
 
 /* ---- brute force over configurations ---- */
@@ -293,8 +366,8 @@ test_dp_brute (void)
           b[n - 1 - k] = cuts[2 * k + 1];
         }
       holent_bcft_result r;
-      size_t bad;
-      int st = holent_bcft_entropy (w, bg, (size_t) n, a, b, &r, &bad, NULL);
+      holent_err err;
+      int st = holent_bcft_entropy (w, bg, (size_t) n, a, b, &r, &err, NULL);
       HT_STATUS (st, HOLENT_SUCCESS);
       if (st)
         continue;
@@ -338,30 +411,31 @@ test_dp_brute (void)
     }
   /* errors */
   holent_bcft_result r;
-  size_t bad;
+  holent_err err;
   double a[3] = { 1, 2, 0.5 }, b[3] = { 1.5, 3, 1.2 };
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EOVERLAP);
-  HT_CHECK (bad == 0 || bad == 2, "bad %zu", bad);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &err, NULL), HOLENT_EOVERLAP);
+  HT_CHECK (err.index == 0 || err.index == 2, "bad %zu", err.index);
   a[2] = -0.5;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EDOM);
-  HT_CHECK (bad == 2, "bad %zu", bad);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &err, NULL), HOLENT_EDOM);
+  HT_CHECK (err.index == 2, "bad %zu", err.index);
+  HT_CHECK (strstr (err.reason, "half line") != NULL, "reason %s", err.reason);
   a[2] = NAN;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &err, NULL), HOLENT_ENAN);
   a[2] = 4; b[2] = 4;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EEMPTY);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &err, NULL), HOLENT_EEMPTY);
   b[2] = INFINITY;
-  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 3, a, b, &r, &err, NULL), HOLENT_EDOM);
   b[2] = 9;
-  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 3, a, b, &r, &bad, NULL), HOLENT_EDOM);  /* past length 5 */
-  HT_STATUS (holent_bcft_entropy (w, bgs, 0, a, b, &r, &bad, NULL), HOLENT_EEMPTY);
-  HT_STATUS (holent_bcft_entropy (w, bgs, 7, a, b, &r, &bad, NULL), HOLENT_ETOOBIG);
-  HT_STATUS (holent_bcft_entropy (NULL, bgs, 3, a, b, &r, &bad, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 3, a, b, &r, &err, NULL), HOLENT_EDOM);  /* past length 5 */
+  HT_STATUS (holent_bcft_entropy (w, bgs, 0, a, b, &r, &err, NULL), HOLENT_EEMPTY);
+  HT_STATUS (holent_bcft_entropy (w, bgs, 7, a, b, &r, &err, NULL), HOLENT_ETOOBIG);
+  HT_STATUS (holent_bcft_entropy (NULL, bgs, 3, a, b, &r, &err, NULL), HOLENT_EINVAL);
   /* touching rows merge; the whole interval in the BTZ saddle is the horizon */
   double a2[2] = { 0, 2 }, b2[2] = { 2, 5 };
-  HT_STATUS (holent_bcft_entropy (w, bgs + 3, 2, a2, b2, &r, &bad, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 3, 2, a2, b2, &r, &err, NULL), HOLENT_SUCCESS);
   HT_CHECK (r.n == 1 && r.m == 0 && r.horizon, "whole interval");
   HT_CLOSE (r.S, bgs[3].S_H, 1e-14);
-  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 2, a2, b2, &r, &bad, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_entropy (w, bgs + 2, 2, a2, b2, &r, &err, NULL), HOLENT_SUCCESS);
   HT_CHECK (r.S == 0.0, "whole interval, pure state");
   HT_CHECK (holent_bcft_workspace_alloc (0) == NULL, "alloc 0");
   HT_CHECK (holent_bcft_workspace_alloc (HOLENT_BCFT_MMAX) == NULL, "alloc too big");
@@ -424,7 +498,7 @@ test_page_brute (void)
                   if (si == sj)
                     holent_bcft_pair_length (&bg, xi, xj, B.pc[i] + j);
                   else
-                    holent_bcft_bridge_length (&bg, xi, ts[it], xj, ts[it], B.pc[i] + j);
+                    holent_tfd_cross_length (&bg.tfd, xi, ts[it], xj, ts[it], B.pc[i] + j);
                 }
               holent_bcft_brane_length (&bg, xi, 0, B.lc + i, NULL, NULL);
               B.rc[i] = INFINITY;
@@ -460,7 +534,7 @@ test_page_brute (void)
   HT_STATUS (holent_bcft_tension_of_log_g (0.1, 0.0, &xp), HOLENT_EDOM);
   HT_STATUS (holent_bcft_tension_of_log_g (0.1, 3.0, &xp), HOLENT_SUCCESS);
   HT_CLOSE (2 * gsl_atanh (xp) * 3.0 / 12, 0.1, 1e-14);
-  HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL, NULL), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, NULL, NULL, NULL, NULL), HOLENT_ENAN);
   {
     double a0 = 0.0, b0 = 2.0;   /* a radiation region touching x = 0 */
     HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a0, &b0, &pg, NULL, NULL), HOLENT_EDOM);
@@ -518,6 +592,7 @@ int
 main (void)
 {
   gsl_set_error_handler_off ();
+  test_make ();
   test_init ();
   test_brane_lengths ();
   test_dp_brute ();

@@ -1,0 +1,61 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+## -*- texinfo -*-
+## @deftypefn {} {@var{prof} =} __holent_surface_profile__ (@var{fn}, @var{bg}, @var{shape}, @var{sizes}, @var{opts})
+## The work of @code{surface_profile} (see there), its messages naming
+## the public function @var{fn} that asked (@code{surface_profile} or
+## @code{plot_surface_profile}); @var{opts} the cell of option pairs.
+## @end deftypefn
+function prof = __holent_surface_profile__ (fn, bg, shape, sizes, opts)
+  try
+    __holent_hd__ ("check", bg);   # one core call checks BG
+  catch err
+    __holent_rethrow__ (err, "__holent_hd__", fn);
+  end_try_catch
+  if (! ischar (shape) || ! any (strcmp (shape, {"strip", "ball"})))
+    error ("holent:option", "%s: SHAPE must be \"strip\" or \"ball\"", fn);
+  endif
+  sizes = __holent_array__ (fn, "SIZES", sizes);
+  k = find (! (sizes(:) > 0), 1);
+  if (! isempty (k))
+    error ("holent:domain", "%s: SIZES(%d) = %g must be positive", fn, k, sizes(k));
+  endif
+  o = __holent_opts__ (fn, {"tol"}, opts);
+  rtol = 1e-3;
+  if (isfield (o, "tol"))
+    rtol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
+  endif
+  ball = strcmp (shape, "ball");
+  try
+    if (ball)
+      [~, ~, ~, top] = __holent_hd__ ("ball", bg, sizes);
+    else
+      [~, ~, ~, top] = __holent_hd__ ("strip", bg, sizes, 1);
+    endif
+  catch err
+    ## the solvers name the sizes R(k) or L(k): here they are SIZES(k)
+    err.message = regexprep (err.message, '(^|: )(R|L)\(', '$1SIZES(');
+    __holent_rethrow__ (err, "__holent_hd__", fn);
+  end_try_catch
+  prof = struct ("shape", {}, "size", {}, "top", {}, "x", {}, "z", {}, "zh", {});
+  for k = 1:numel (sizes)
+    tol = rtol * sizes(k);
+    c = __holent_surface__ ("profile", fn, bg, double (ball), top(k), tol);
+    if (! ball)
+      ## mirror the half profile: from -l/2 through the turning point
+      c = [-flipud(c(2:end,1)), flipud(c(2:end,2)); c];
+    endif
+    prof(k).shape = shape;
+    prof(k).size = sizes(k);
+    prof(k).top = top(k);
+    prof(k).x = c(:,1);
+    prof(k).z = c(:,2);
+    prof(k).zh = bg.zh;
+  endfor
+  prof = reshape (prof, size (sizes));
+endfunction
+
+%!test
+%! p = __holent_surface_profile__ ("f", ads_background (3, "vacuum"), "strip", 1, {});
+%! assert (p.top, 1 / 2, 1e-10);     # z* = l/2 for a strip in AdS3 (common practice)
+%!error <^f: SHAPE> __holent_surface_profile__ ("f", ads_background (3, "vacuum"), "disk", 1, {})
