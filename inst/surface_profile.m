@@ -30,11 +30,7 @@ function prof = surface_profile (bg, shape, sizes, varargin)
   if (nargin < 3)
     print_usage ();
   endif
-  try
-    __holent_hd__ ("check", bg);   # one core call checks BG
-  catch err
-    __holent_rethrow__ (err, "__holent_hd__", fn);
-  end_try_catch
+  __holent_hd__ ("check", fn, bg);   # one core call checks BG
   if (! ischar (shape) || ! any (strcmp (shape, {"strip", "ball"})))
     error ("holent:option", "%s: SHAPE must be \"strip\" or \"ball\"", fn);
   endif
@@ -51,9 +47,9 @@ function prof = surface_profile (bg, shape, sizes, varargin)
   ball = strcmp (shape, "ball");
   try
     if (ball)
-      [~, ~, ~, top] = __holent_hd__ ("ball", bg, sizes);
+      [~, ~, ~, top] = __holent_hd__ ("ball", fn, bg, sizes);
     else
-      [~, ~, ~, top] = __holent_hd__ ("strip", bg, sizes, 1);
+      [~, ~, ~, top] = __holent_hd__ ("strip", fn, bg, sizes, 1);
     endif
   catch err
     ## the solvers name the sizes R(k) or L(k): here they are SIZES(k)

@@ -140,7 +140,7 @@
 %! bh = ads_background (4, "tabulated", "f", @(z) 1 - z.^4, "z_max", 1.2);
 %! assert (bh.zh, 1, 1e-12);
 %! assert (bh.T, 1 / pi, 1e-9);
-%! assert (numel (bh.z), 4001);
+%! assert (numel (bh.table.samples.z), 4001);
 
 %!test
 %! ## f - 1 = O(z^d) refused whatever the sampling (10, 14, 30 samples of
@@ -153,4 +153,4 @@
 %! fail ('ads_background (4, "tabulated", "z", z, "f", 1 - 1e-3 * z.^2 - z.^4)', "vanish like z\\^4");
 %! ## a stored background is reused as it is: no refit (spline kept)
 %! bg = ads_background (4, "tabulated", "z", z, "f", 1 - z.^4);
-%! assert (isfield (bg.spline, "g2") && numel (bg.spline.g2) == 500);
+%! assert (isfield (bg.table.spline, "g2") && numel (bg.table.spline.g2) == 500);

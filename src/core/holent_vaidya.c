@@ -8,9 +8,9 @@
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_integration.h>
 #include <gsl/gsl_multiroots.h>
-#include <gsl/gsl_odeiv2.h>
 #include "holent_vaidya.h"
 #include "holent_strip.h"
+#include "holent_ode.h"
 
 #define ZEND 1e-7       /* shots stop at z = ZEND z*; asymptotics beyond  */
 #define NSTEP 20000     /* ODE steps of one shot                           */
@@ -18,15 +18,16 @@
 #define ROOT_TOL 1e-12  /* residual of the 2D root solve (relative)        */
 #define HALVE 30        /* continuation: halvings of a time step           */
 #define TSTEP 0.05      /* continuation: largest step in t per min(l, zh)  */
+#define ODE_ABS 1e-14   /* tolerances of the shots                         */
+#define ODE_REL 1e-12
 
 struct holent_vaidya_workspace
 {
-  gsl_odeiv2_step *step, *step4;   /* x: 5 components; z: 4 */
-  gsl_odeiv2_control *ctrl;
-  gsl_odeiv2_evolve *evol, *evol4;
+  holent_ode *ode, *ode4;   /* in x: 5 components; in z: 4 */
   gsl_multiroot_fsolver *root;
   gsl_integration_workspace *iw;
   holent_strip_workspace *strip;
+  const holent_poll *poll;  /* the caller's, or NULL */
 };
 
 holent_vaidya_workspace *
@@ -35,16 +36,12 @@ holent_vaidya_workspace_alloc (void)
   holent_vaidya_workspace *w = calloc (1, sizeof *w);
   if (w == NULL)
     return NULL;
-  w->step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 5);
-  w->ctrl = gsl_odeiv2_control_y_new (1e-14, 1e-12);
-  w->evol = gsl_odeiv2_evolve_alloc (5);
-  w->step4 = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 4);
-  w->evol4 = gsl_odeiv2_evolve_alloc (4);
+  w->ode = holent_ode_alloc (5, ODE_ABS, ODE_REL);
+  w->ode4 = holent_ode_alloc (4, ODE_ABS, ODE_REL);
   w->root = gsl_multiroot_fsolver_alloc (gsl_multiroot_fsolver_hybrids, 2);
   w->iw = gsl_integration_workspace_alloc (200);
   w->strip = holent_strip_workspace_alloc ();
-  if (!w->step || !w->ctrl || !w->evol || !w->root || !w->iw || !w->strip
-      || !w->step4 || !w->evol4)
+  if (!w->ode || !w->ode4 || !w->root || !w->iw || !w->strip)
     {
       holent_vaidya_workspace_free (w);
       return NULL;
@@ -57,22 +54,22 @@ holent_vaidya_workspace_free (holent_vaidya_workspace *w)
 {
   if (w == NULL)
     return;
-  if (w->step)
-    gsl_odeiv2_step_free (w->step);
-  if (w->ctrl)
-    gsl_odeiv2_control_free (w->ctrl);
-  if (w->evol)
-    gsl_odeiv2_evolve_free (w->evol);
-  if (w->step4)
-    gsl_odeiv2_step_free (w->step4);
-  if (w->evol4)
-    gsl_odeiv2_evolve_free (w->evol4);
+  holent_ode_free (w->ode);
+  holent_ode_free (w->ode4);
   if (w->root)
     gsl_multiroot_fsolver_free (w->root);
   if (w->iw)
     gsl_integration_workspace_free (w->iw);
   holent_strip_workspace_free (w->strip);
   free (w);
+}
+
+void
+holent_vaidya_workspace_set_poll (holent_vaidya_workspace *w,
+                                  const holent_poll *poll)
+{
+  if (w)
+    w->poll = poll;
 }
 
 /* ------------------------------------------------------------------ */
@@ -165,17 +162,15 @@ rhs_z (double z, const double y[], double dy[], void *p)
    (z' + f v')' = f_v v'^2/2 integrates to the jump z' -> z' - v' [f]/2,
    [f] = f(after) - f(before) = -(s_after - s_before)(1 - F(z)).  */
 static int
-cross (holent_vaidya_workspace *ws, gsl_odeiv2_system *sys, vpar *q,
-       int zpar, double x0, const double y0[5], double x1, double *xc,
-       double yc[5])
+cross (holent_ode *ode, holent_ode_fn f, vpar *q, int zpar, double x0,
+       const double y0[5], double x1, double *xc, double yc[5])
 {
-  double lo = 0, hi = x1 - x0, yt[5], err[5], v0 = y0[1];
+  double lo = 0, hi = x1 - x0, yt[5], v0 = y0[1];
   for (int it = 0; it < 80 && fabs (hi - lo) > 1e-15 * (fabs (x0) + fabs (hi)); it++)
     {
       double h = 0.5 * (lo + hi);
       memcpy (yt, y0, sizeof yt);
-      gsl_odeiv2_step_reset (ws->step);
-      if (gsl_odeiv2_step_apply (ws->step, x0, h, yt, err, NULL, NULL, sys))
+      if (holent_ode_fixed (ode, f, q, x0, h, yt))
         return HOLENT_ENOCONV;
       if ((yt[1] < 0) == (v0 < 0))
         lo = h;
@@ -183,12 +178,8 @@ cross (holent_vaidya_workspace *ws, gsl_odeiv2_system *sys, vpar *q,
         hi = h;
     }
   memcpy (yc, y0, 5 * sizeof *yc);
-  if (hi != 0)
-    {
-      gsl_odeiv2_step_reset (ws->step);
-      if (gsl_odeiv2_step_apply (ws->step, x0, hi, yc, err, NULL, NULL, sys))
-        return HOLENT_ENOCONV;
-    }
+  if (hi != 0 && holent_ode_fixed (ode, f, q, x0, hi, yc))
+    return HOLENT_ENOCONV;
   *xc = x0 + hi;
   double F, z = zpar ? *xc : yc[0];
   if (holent_hd_bg_f (q->F, z, &F, NULL))
@@ -222,67 +213,48 @@ holent_vaidya_shoot (const holent_hd_bg *F, double w,
     return HOLENT_EDOM;
   int d = F->d;
   vpar q = { F, w, zs, vs >= 0 };
-  gsl_odeiv2_system sys = { rhs, NULL, 5, &q };
   double y[5] = { zs, vs, 0, 0, -pow (zs, 2 - d) / (d - 2) }, x = 0;
   double h = 1e-3 * zs, y0[5];
   double xmax = 50 * zs;
-  gsl_odeiv2_step_reset (ws->step);
-  gsl_odeiv2_evolve_reset (ws->evol);
-  int k = 0;
+  holent_ode_reset (ws->ode);
+  int k = 0, st;
   for (; y[2] > -1; k++)
     {
       if (k > NSTEP || x > xmax || y[0] > 2 * zs)
         return HOLENT_ENOCONV;  /* does not reach the boundary */
       double x0 = x;
       memcpy (y0, y, sizeof y0);
-      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
-                                        &x, xmax, &h, y);
-      if (st == GSL_EBADFUNC && h > 1e-12 * zs)
-        {
-          h *= 0.1;
-          continue;
-        }
-      if (st)
+      if (holent_ode_step (ws->ode, rhs, &q, &x, xmax, &h, 1e-12 * zs, y))
         return HOLENT_ENOCONV;
       if (w <= 0 && ((y[1] < 0) != (y0[1] < 0)))
         {
           double xc;
-          if ((st = cross (ws, &sys, &q, 0, x0, y0, x, &xc, y)))
+          if ((st = cross (ws->ode, rhs, &q, 0, x0, y0, x, &xc, y)))
             return st;
           x = xc;
-          gsl_odeiv2_step_reset (ws->step);
-          gsl_odeiv2_evolve_reset (ws->evol);
+          holent_ode_reset (ws->ode);
         }
     }
   /* z' < -1: on in z down to ZEND z* (state x, v, v_z, K) */
   double z = y[0], yz[5] = { x, y[1], y[3] / y[2], y[4], 0 };
   double zend = ZEND * zs, hz = -1e-3 * z;
-  gsl_odeiv2_system sz = { rhs_z, NULL, 4, &q };
-  gsl_odeiv2_step_reset (ws->step4);
-  gsl_odeiv2_evolve_reset (ws->evol4);
+  holent_ode_reset (ws->ode4);
   for (; z > zend; k++)
     {
       if (k > NSTEP)
         return HOLENT_ENOCONV;
       double z0 = z;
       memcpy (y0, yz, sizeof y0);
-      int st = gsl_odeiv2_evolve_apply (ws->evol4, ws->ctrl, ws->step4, &sz,
-                                        &z, zend, &hz, yz);
-      if (st == GSL_EBADFUNC && fabs (hz) > 1e-12 * z)
-        {
-          hz *= 0.1;  /* a trial step left the domain: GSL restored y */
-          continue;
-        }
-      if (st)
+      if (holent_ode_step (ws->ode4, rhs_z, &q, &z, zend, &hz, 1e-12 * z,
+                           yz))
         return HOLENT_ENOCONV;
       if (w <= 0 && ((yz[1] < 0) != (y0[1] < 0)))
         {
           double zc;
-          if ((st = cross (ws, &sz, &q, 1, z0, y0, z, &zc, yz)))
+          if ((st = cross (ws->ode4, rhs_z, &q, 1, z0, y0, z, &zc, yz)))
             return st;
           z = zc;
-          gsl_odeiv2_step_reset (ws->step4);
-          gsl_odeiv2_evolve_reset (ws->evol4);
+          holent_ode_reset (ws->ode4);
         }
     }
   /* beyond ZEND z*: t = v + z + m z^(d+1)/(d+1), the rest of x and of the
@@ -439,6 +411,12 @@ holent_vaidya_strip (const holent_hd_bg *F, double w,
   for (size_t k = 0; k < n; k++)
     {
       double target = o[k].t;
+      if (ws->poll && ws->poll->fn
+          && ws->poll->fn (ws->poll->ctx, (double) k, (double) n))
+        {
+          free (o);
+          return HOLENT_EINTR;
+        }
       /* follow the branch to the target in steps of at most hmax (halved
          on failure, doubled on success), extrapolating linearly from the
          last two tips; a step below 1e-7 of the scale means the branch
