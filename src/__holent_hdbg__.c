@@ -93,7 +93,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       st = holent_hd_bg_tabulated (&bg, d, nz, z, f, noise, ell, G, eps, &bad);
       if (st)
         {
-          holent_hd_bg_explain (&bg, st, bad, z, &err);
+          holent_hd_bg_explain (&bg, d, st, bad, z, &err);
           holent_hd_bg_free (&bg);
           holent_gw_raise_err (fn, &err, NULL, 0);
         }
@@ -103,7 +103,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
                      "unknown kind '%s' or wrong inputs for it", kind);
   if (st)
     {
-      holent_hd_bg_explain (&bg, st, bad, NULL, &err);
+      holent_hd_bg_explain (&bg, d, st, bad, NULL, &err);
       holent_hd_bg_free (&bg);
       holent_gw_raise_err (fn, &err, NULL, 0);
     }

@@ -56,4 +56,4 @@
 %!error <f: D: must be an integer> __holent_hdbg__ ("vacuum", "f", -1e300, 1, 1, 1e-3)
 %!error <f: D: must be an integer> __holent_hdbg__ ("vacuum", "f", 2^31, 1, 1, 1e-3)
 %!error <unknown kind 'foam'> __holent_hdbg__ ("foam", "f", 4, 1, 1, 1e-3)
-%!error <shell_width: must be >= 0> __holent_hdbg__ ("vaidya", "f", 4, 1, 1, 1e-3, -1, "black_brane", "zh", 1)
+%!error <shell_width: must be .= 0 and finite> __holent_hdbg__ ("vaidya", "f", 4, 1, 1, 1e-3, -1, "black_brane", "zh", 1)

@@ -918,10 +918,9 @@ holent_hd_dimension (double d, int *out, holent_err *e)
 }
 
 int
-holent_hd_bg_explain (const holent_hd_bg *bg, int status, size_t bad,
+holent_hd_bg_explain (const holent_hd_bg *bg, int d, int status, size_t bad,
                       const double *z, holent_err *e)
 {
-  int d = bg != NULL ? bg->d : 0;
   holent_hd_why why = bg != NULL ? bg->why : HOLENT_HD_WHY_NONE;
   if (status == HOLENT_SUCCESS)
     {

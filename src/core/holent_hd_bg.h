@@ -98,10 +98,10 @@ void holent_hd_bg_free (holent_hd_bg *bg);
 int holent_hd_dimension (double d, int *out, holent_err *e);
 
 /* The reason (what was expected) why a constructor returned STATUS for
- * bg, in E: from bg->why, the index BAD of the sample it named and the
- * samples z (may be NULL).  Returns STATUS.  */
-int holent_hd_bg_explain (const holent_hd_bg *bg, int status, size_t bad,
-                          const double *z, holent_err *e);
+ * bg of dimension d, in E: from bg->why, the index BAD of the sample it
+ * named and the samples z (may be NULL).  Returns STATUS.  */
+int holent_hd_bg_explain (const holent_hd_bg *bg, int d, int status,
+                          size_t bad, const double *z, holent_err *e);
 
 /* For accuracy estimates: the tabulated background bg with 1 - f scaled
  * by 1 + rho, rho the relative accuracy of 1 - f (noise / max|1 - f|, or
