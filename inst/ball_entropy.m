@@ -163,4 +163,4 @@ endfunction
 %!error <numeric array> ball_entropy (ads_background (4, "vacuum"), "a")
 %!error <background struct> ball_entropy (struct ("a", 1), 1)
 %!error <R\(1\) = 1e\+308 gives an entropy out of double precision> ball_entropy (ads_background (4, "vacuum"), 1e308)
-%!error <BG.zh must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)
+%!error <ball_entropy: BG.zh: must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)
