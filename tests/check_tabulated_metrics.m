@@ -154,3 +154,25 @@
 %! ## a stored background is reused as it is: no refit (spline kept)
 %! bg = ads_background (4, "tabulated", "z", z, "f", 1 - z.^4);
 %! assert (isfield (bg.table.spline, "g2") && numel (bg.table.spline.g2) == 500);
+
+%!test
+%! ## charged branes f = 1 - (1+q) z^4 + q z^6 as samples (issue 14):
+%! ## balls.  Small balls obey the first law of entanglement (Blanco,
+%! ## Casini, Hung and Myers 2013, JHEP 08 (2013) 060): delta S = 2 pi
+%! ## Omega_2 R^4 e/15 with e = 3 m/(16 pi G), m = 1 + q, up to O(R^6)
+%! ## relative corrections (the z^6 term); large balls become extensive,
+%! ## delta S -> s V with V = Omega_2 R^3/3 from below (common practice:
+%! ## the surface hugs the horizon), the ratio growing with R.
+%! z = linspace (0, 1.4, 4001)';
+%! for q = [0.5 1.5]
+%!   f = 1 - (1 + q) * z.^4 + q * z.^6;
+%!   bg = ads_background (4, "tabulated", "z", z, "f", round (f * 1e10) / 1e10);
+%!   R = [0.03 0.06];
+%!   [~, info] = ball_entropy (bg, R);
+%!   fl = 2 * pi * 4 * pi * R.^4 * (3 * (1 + q) / (16 * pi)) / 15;
+%!   assert (info.delta, fl, 2 * (1 + q) * R.^2 .* fl + 1e-6 * fl);
+%!   R = [4 8 16] * bg.zh;
+%!   [~, info] = ball_entropy (bg, R);
+%!   ratio = info.delta ./ (bg.entropy_density * 4 * pi * R.^3 / 3);
+%!   assert (all (ratio < 1) && all (diff (ratio) > 0) && ratio(end) > 0.8);
+%! endfor
