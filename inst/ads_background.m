@@ -62,9 +62,16 @@
 ## this is the Einstein-gravity value, see doc/higher_dimensional.md),
 ## @code{m} and its error estimate @code{m_error}, @code{noise} (accuracy of
 ## the samples of f; 0 for analytic kinds), @code{z_max} (Inf for analytic f),
-## @code{z}, @code{f} (the samples, empty for analytic kinds) and
-## @code{spline} (the interpolant: knots @code{z}, values @code{g} and
-## second derivatives @code{g2} of (1 - f)/z^d).
+## and @code{table}: @code{table.samples} (@code{z}, @code{f}: the
+## samples, empty for analytic kinds) and @code{table.spline} (the
+## interpolant: knots @code{z}, values @code{g} and second derivatives
+## @code{g2} of (1 - f)/z^d), kept so that no later call refits.  They sit
+## two levels down so that displaying a background shows their sizes,
+## not every sample.
+##
+## The normalisation is the AdS radius @qcode{"ell"} and Newton's constant
+## @qcode{"G"} (the central charge @qcode{"c"} of AdS3 does not apply for
+## d >= 3: the error says what to give instead).
 ##
 ## @seealso{strip_entropy, ball_entropy, strip_mutual_information,
 ## entanglement_velocity, butterfly_velocity}
@@ -81,7 +88,13 @@ function bg = ads_background (d, kind, varargin)
     error ("holent:option", "%s: KIND must be one of: %s", fn, strjoin (kinds, ", "));
   endif
   kind = lower (kind);
-  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max", "shell_width"}, varargin);
+  o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max", "shell_width", "c"}, varargin);
+  if (isfield (o, "c"))
+    error ("holent:option", ["%s: option 'c' (the central charge 3 ell/(2 G) of AdS3) ", ...
+           "does not apply to AdS_(d+1), d >= 3: give the AdS radius 'ell' and ", ...
+           "Newton's constant 'G' in d+1 dimensions (entropies are Area/(4 G), ", ...
+           "the normalisation ell^(d-1)/G); for d = 2 use ads3_background"], fn);
+  endif
   own = struct ("vacuum", {{}}, "black_brane", {{"zh", "T"}},
                 "tabulated", {{"z", "f", "noise", "z_max"}},
                 "vaidya", {{"zh", "T", "z", "f", "noise", "z_max", "shell_width"}});
@@ -102,7 +115,7 @@ function bg = ads_background (d, kind, varargin)
   if (isfield (o, "cutoff"))
     cutoff = __holent_scalar__ (fn, "cutoff", o.cutoff, "positive");
   endif
-  args = {d, kind, ell, G, cutoff};
+  args = {kind, fn, d, ell, G, cutoff};
   if (strcmp (kind, "vaidya"))
     w = 0;
     if (isfield (o, "shell_width"))
@@ -156,11 +169,7 @@ function bg = ads_background (d, kind, varargin)
       endif
       args(end+1:end+3) = {z(:), f(:), noise};
   endswitch
-  try
-    bg = __holent_hdbg__ (args{:});
-  catch err
-    __holent_rethrow__ (err, "__holent_hdbg__", fn);
-  end_try_catch
+  bg = __holent_hdbg__ (args{:});
   if (bg.horizon && cutoff > 1e-2 * bg.zh)
     warning ("holent:cutoff", "%s: cutoff %g is not small against zh = %g", fn, cutoff, bg.zh);
   endif
@@ -200,6 +209,18 @@ endfunction
 %! bg = ads_background (3, "vacuum");
 %! assert (bg.energy_density, 0);
 %! assert (isinf (bg.zh) && ! bg.horizon);
+
+%!test
+%! ## a tabulated background displays compactly: the samples' sizes only
+%! z = linspace (0, 1.3, 400)';
+%! bg = ads_background (4, "tabulated", "z", z, "f", 1 - (z / 1.1).^4);
+%! txt = evalc ("disp (bg)");
+%! assert (numel (strsplit (txt, "\n")) < 60);
+%! assert (! isempty (strfind (txt, "400x1")));
+%! assert (bg.table.samples.z, z);
+%! assert (numel (bg.table.spline.g2), 400);
+
+%!error <option 'c' .*does not apply.*give the AdS radius 'ell'> ads_background (4, "vacuum", "c", 12)
 
 %!error <Invalid call> ads_background (4)
 %!error <integer from 3> ads_background (2, "vacuum")

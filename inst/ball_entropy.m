@@ -35,25 +35,11 @@ function [S, info] = ball_entropy (bg, R)
     print_usage ();
   endif
   R = __holent_array__ (fn, "R", R);
-  k = find (! (R(:) > 0), 1);
-  if (! isempty (k))
-    error ("holent:domain", "%s: R(%d) = %g must be a positive radius", fn, k, R(k));
-  endif
-  try
-    if (nargout > 1)
-      [S, fin, del, zs, reach, acc] = __holent_hd__ ("ball", bg, R);
-    else
-      [S, fin, del, zs, reach] = __holent_hd__ ("ball", bg, R);
-      acc = [];
-    endif
-  catch err
-    __holent_rethrow__ (err, "__holent_hd__", fn);
-  end_try_catch
-  k = find (! (isfinite (S(:)) & isfinite (fin(:)) & isfinite (del(:))), 1);
-  if (! isempty (k))
-    error ("holent:domain",
-           "%s: R(%d) = %g gives an entropy out of double precision range (cutoff %g): the radius must keep it finite",
-           fn, k, R(k), bg.cutoff);
+  if (nargout > 1)
+    [S, fin, del, zs, reach, acc] = __holent_hd__ ("ball", fn, bg, R);
+  else
+    [S, fin, del, zs, reach] = __holent_hd__ ("ball", fn, bg, R);
+    acc = [];
   endif
   if (any (R(:) <= 2 * bg.cutoff))
     warning ("holent:cutoff", "%s: %d ball(s) not wider than twice the cutoff %g",
@@ -172,9 +158,9 @@ endfunction
 
 %!warning <twice the cutoff> ball_entropy (ads_background (4, "vacuum", "cutoff", 1e-2), 0.015);
 %!error <Invalid call> ball_entropy (ads_background (4, "vacuum"))
-%!error <positive radius> ball_entropy (ads_background (4, "vacuum"), -1)
+%!error <R\(1\) = -1 must be positive \(a radius\)> ball_entropy (ads_background (4, "vacuum"), -1)
 %!error <NaN> ball_entropy (ads_background (4, "vacuum"), [1 NaN])
 %!error <numeric array> ball_entropy (ads_background (4, "vacuum"), "a")
 %!error <background struct> ball_entropy (struct ("a", 1), 1)
 %!error <R\(1\) = 1e\+308 gives an entropy out of double precision> ball_entropy (ads_background (4, "vacuum"), 1e308)
-%!error <BG.zh must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)
+%!error <ball_entropy: BG.zh: must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)

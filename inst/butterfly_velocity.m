@@ -25,11 +25,7 @@ function v = butterfly_velocity (bg)
   if (nargin != 1)
     print_usage ();
   endif
-  try
-    [~, v] = __holent_hd__ ("velocity", bg);
-  catch err
-    __holent_rethrow__ (err, "__holent_hd__", "butterfly_velocity");
-  end_try_catch
+  [~, v] = __holent_hd__ ("velocity", "butterfly_velocity", bg);
 endfunction
 
 %!test

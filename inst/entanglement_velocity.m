@@ -26,11 +26,7 @@ function [v, info] = entanglement_velocity (bg)
   if (nargin != 1)
     print_usage ();
   endif
-  try
-    [v, vB, zm] = __holent_hd__ ("velocity", bg);
-  catch err
-    __holent_rethrow__ (err, "__holent_hd__", "entanglement_velocity");
-  end_try_catch
+  [v, vB, zm] = __holent_hd__ ("velocity", "entanglement_velocity", bg);
   info = struct ("z_m", zm, "butterfly", vB);
 endfunction
 

@@ -133,11 +133,7 @@ function [x, info] = find_transition (kind, varargin)
         print_usage ();
       endif
       [bg, l1, l2] = deal (varargin{:});
-      try
-        __holent_hd__ ("check", bg);   # one core call checks BG
-      catch err
-        __holent_rethrow__ (err, "__holent_hd__", fn);
-      end_try_catch
+      __holent_hd__ ("check", fn, bg);   # one core call checks BG
       [l1, l2] = sizes_ (fn, l1, l2, "L1", "L2");
       [x, found] = __holent_transition__ ("strip_pair", fn, bg, l1, l2);
       info.below = repmat ({"connected"}, size (x));

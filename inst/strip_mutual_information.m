@@ -41,15 +41,12 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
   catch
     error ("holent:size", "%s: L1, S and L2 must have one common size or be scalars", fn);
   end_try_catch
-  nm = {"L1", "S", "L2"};  v = {l1, s, l2};
-  for j = 1:3
-    k = find (! (v{j}(:) > 0), 1);
-    if (! isempty (k))
-      error ("holent:domain", "%s: %s(%d) = %g must be positive", fn, nm{j}, k, v{j}(k));
-    endif
-  endfor
-  gap = @(a, b, c) gain_ (bg, a, b, c, Lp);
-  g = gap (l1, s, l2);
+  ## finite parts only, one core call: the stored background is reused,
+  ## nothing refitted; the core checks every width and names it
+  [~, F] = __holent_hd__ ("strip", fn, bg, [l1(:); l2(:); s(:); l1(:) + s(:) + l2(:)],
+                          Lp, {"L1", "L2", "S", "L1 + S + L2"});
+  F = reshape (F, numel (l1), 4);
+  g = reshape (F(:,1) + F(:,2) - F(:,3) - F(:,4), size (l1));
   I = max (0, g);
   info.connected = g > 0;
   ## the transition for each pair of widths, by root finding in the core
@@ -59,27 +56,6 @@ function [I, info] = strip_mutual_information (bg, l1, s, l2, varargin)
     st = __holent_transition__ ("strip_pair", fn, bg, u(:,1), u(:,2));
     info.s_transition = reshape (st(j), size (w1));
   endif
-endfunction
-
-function g = gain_ (bg, a, b, c, Lp)
-  ## finite parts only: the stored background is reused, nothing refitted
-  n = numel (a);
-  try
-    [~, F] = __holent_hd__ ("strip", bg, [a(:); c(:); b(:); a(:) + b(:) + c(:)], Lp);
-  catch err
-    ## name this function, and the argument behind the gateway's L(k)
-    msg = regexprep (err.message, '^(__holent_hd__: )+', '');
-    k = regexp (msg, '^L\((\d+)\)', "tokens", "once");
-    if (! isempty (k))
-      k = str2double (k{1});
-      nm = {"L1", "L2", "S", "L1 + S + L2"}{ceil (k / n)};
-      msg = sprintf ("%s(%d)%s", nm, k - n * (ceil (k / n) - 1),
-                     regexprep (msg, '^L\(\d+\)', ''));
-    endif
-    error (err.identifier, "strip_mutual_information: %s", msg);
-  end_try_catch
-  F = reshape (F, n, 4);
-  g = reshape (F(:,1) + F(:,2) - F(:,3) - F(:,4), size (a));
 endfunction
 
 function varargout = common_size_ (varargin)

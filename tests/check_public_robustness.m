@@ -61,8 +61,8 @@
 %!       "hdcut", setfield(h, "cutoff", "x"); ...
 %!       "hdell", setfield(h, "ell", [1 2]); ...
 %!       "hdG", setfield(h, "G", NaN); ...
-%!       "hdz", setfield(t, "z", flipud(t.z)); ...
-%!       "hdf", setfield(t, "f", t.f(1:end-1))};
+%!       "hdz", setfield(t, "table", setfield(t.table, "samples", setfield(t.table.samples, "z", flipud(t.table.samples.z)))); ...
+%!       "hdf", setfield(t, "table", setfield(t.table, "samples", setfield(t.table.samples, "f", t.table.samples.f(1:end-1))))};
 %!endfunction
 
 %!function F = rob_mustfail (kind, labels)
@@ -450,9 +450,9 @@
 %!        "__holent_background__", {"ads3", "ads3_background", "rotating", "circle", struct("beta", 1, "Omega", 0.2)}, 2;
 %!        "__holent_background__", {"check", "rt_entropy", bc}, 2;
 %!        "__holent_background__", {"units", "hawking_page", struct("c", 6, "ell", 2)}, 2;
-%!        "__holent_hd__", {"strip", bh, [0.5 1], 1}, 2;
-%!        "__holent_hd__", {"ball", bh, 0.5}, 2;
-%!        "__holent_hdbg__", {4, "tabulated", 1, 1, 1e-6, z, 1 - z.^4, 0}, 1;
+%!        "__holent_hd__", {"strip", "f", bh, [0.5 1], 1}, 3;
+%!        "__holent_hd__", {"ball", "f", bh, 0.5}, 3;
+%!        "__holent_hdbg__", {"tabulated", "f", 4, 1, 1, 1e-6, z, 1 - z.^4, 0}, 3;
 %!        "__holent_cone__", {"mincut", "mincut_entropy_vector", [1 2; 2 3], [1; 2], [1; 0; 2], 2}, 2;
 %!        "__holent_bcft__", {"bg", "f", "bcft", "interval", "length", 2, "cutoff", 1e-6, "beta", 1, "tension", [0.1 0.2], "c", 1, "ell", 1, "saddle", "dominant"}, 2;
 %!        "__holent_bcft__", {"entropy", "rt_entropy", "A", ads3_background("bcft", "half_line"), [0 1; 2 3]}, 2;

@@ -140,7 +140,7 @@
 %! bh = ads_background (4, "tabulated", "f", @(z) 1 - z.^4, "z_max", 1.2);
 %! assert (bh.zh, 1, 1e-12);
 %! assert (bh.T, 1 / pi, 1e-9);
-%! assert (numel (bh.z), 4001);
+%! assert (numel (bh.table.samples.z), 4001);
 
 %!test
 %! ## f - 1 = O(z^d) refused whatever the sampling (10, 14, 30 samples of
@@ -153,4 +153,59 @@
 %! fail ('ads_background (4, "tabulated", "z", z, "f", 1 - 1e-3 * z.^2 - z.^4)', "vanish like z\\^4");
 %! ## a stored background is reused as it is: no refit (spline kept)
 %! bg = ads_background (4, "tabulated", "z", z, "f", 1 - z.^4);
-%! assert (isfield (bg.spline, "g2") && numel (bg.spline.g2) == 500);
+%! assert (isfield (bg.table.spline, "g2") && numel (bg.table.spline.g2) == 500);
+
+%!test
+%! ## charged branes f = 1 - (1+q) z^4 + q z^6 as samples (issue 14):
+%! ## balls.  Small balls obey the first law of entanglement (Blanco,
+%! ## Casini, Hung and Myers 2013, JHEP 08 (2013) 060): delta S = 2 pi
+%! ## Omega_2 R^4 e/15 with e = 3 m/(16 pi G), m = 1 + q, up to O(R^6)
+%! ## relative corrections (the z^6 term); large balls become extensive,
+%! ## delta S -> s V with V = Omega_2 R^3/3 (common practice: the surface
+%! ## hugs the horizon), up to a wall term O(zh/R) relative whose sign
+%! ## depends on q (below 1 for q = 0.5, above for q = 1.5 at R = 16 zh).
+%! z = linspace (0, 1.4, 4001)';
+%! for q = [0.5 1.5]
+%!   f = 1 - (1 + q) * z.^4 + q * z.^6;
+%!   bg = ads_background (4, "tabulated", "z", z, "f", round (f * 1e10) / 1e10);
+%!   R = [0.03 0.06];
+%!   [~, info] = ball_entropy (bg, R);
+%!   fl = 2 * pi * 4 * pi * R.^4 * (3 * (1 + q) / (16 * pi)) / 15;
+%!   assert (info.delta, fl, 2 * (1 + q) * R.^2 .* fl + 1e-6 * fl);
+%!   R = [4 8 16] * bg.zh;
+%!   [~, info] = ball_entropy (bg, R);
+%!   ratio = info.delta ./ (bg.entropy_density * 4 * pi * R.^3 / 3);
+%!   assert (abs (ratio(end) - 1) < 0.06 && abs (ratio(end) - 1) < abs (ratio(1) - 1));
+%! endfor
+
+%!test
+%! ## the whole digits x grid matrix (issue 14): 6, 8, 10 significant digits
+%! ## and random noise 1e-10, 1e-8, 1e-7, each on grids of 100, 1000 and
+%! ## 10^4 points, for the brane (q = 0) and a charged brane (q = 1.5):
+%! ## m, T within their reported errors; a strip of width 1 of the brane
+%! ## against the analytic brane (checked against fzero + integral above)
+%! ## within the accuracy strip_entropy reports
+%! warning ("off", "holent:cutoff", "local");
+%! [~, ib] = strip_entropy (ads_background (4, "black_brane", "zh", 1), 1);
+%! for q = [0 1.5]
+%!   f = @(z) 1 - (1 + q) * z.^4 + q * z.^6;
+%!   Tx = abs (2*q - 4) / (4*pi);
+%!   for N = [100 1000 10000]
+%!     z = linspace (0, 1.2, N)';
+%!     for a = [6 8 10 1e-10 1e-8 1e-7]
+%!       if (a >= 1)
+%!         fv = rnd_ (f (z), a);
+%!       else
+%!         randn ("state", N + round (-log10 (a)));
+%!         fv = f (z) + a * randn (N, 1);  fv(1) = 1;
+%!       endif
+%!       bg = ads_background (4, "tabulated", "z", z, "f", fv);
+%!       assert (abs (bg.m - (1 + q)) <= 3 * bg.m_error);
+%!       assert (abs (bg.T - Tx) <= bg.T_error);
+%!       if (q == 0)
+%!         [~, it] = strip_entropy (bg, 1);
+%!         assert (abs (it.delta - ib.delta) <= 5 * it.accuracy + 1e-10);
+%!       endif
+%!     endfor
+%!   endfor
+%! endfor

@@ -87,3 +87,22 @@
 %!error <give the boundary times> strip_entropy (ads_background (4, "vaidya", "zh", 1), 1)
 %!error <needs a quench> strip_entropy (ads_background (4, "black_brane", "zh", 1), 1, "t", 1)
 %!error <shell_width must be nonnegative> ads_background (4, "vaidya", "zh", 1, "shell_width", -1)
+
+%!test
+%! ## a tabulated final state (issue 14): the brane f = 1 - z^4 given as
+%! ## samples rounded to 10 digits gives the quench of the analytic brane
+%! ## (itself checked against ode45 above) within the data's accuracy
+%! z = linspace (0, 1.3, 2001)';
+%! f = round ((1 - z.^4) * 1e10) / 1e10;
+%! bt = ads_background (4, "vaidya", "z", z, "f", f);
+%! bb = ads_background (4, "vaidya", "zh", 1);
+%! assert (bt.kind, "vaidya");
+%! assert (bt.final, "tabulated");
+%! t = [-0.1 0.2 0.5 0.9 1.5];
+%! [St, it] = strip_entropy (bt, 1, "t", t);
+%! [Sb, ib] = strip_entropy (bb, 1, "t", t);
+%! assert (it.finite, ib.finite, 1e-6);
+%! assert (it.z_star, ib.z_star, 1e-6);
+%! ## saturation: the static strip of the tabulated final state
+%! [~, is] = strip_entropy (rmfield (setfield (bt, "kind", "tabulated"), {"final", "shell_width"}), 1);
+%! assert (it.finite(end), is.finite, 1e-9);

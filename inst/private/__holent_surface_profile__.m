@@ -7,11 +7,7 @@
 ## @code{plot_surface_profile}); @var{opts} the cell of option pairs.
 ## @end deftypefn
 function prof = __holent_surface_profile__ (fn, bg, shape, sizes, opts)
-  try
-    __holent_hd__ ("check", bg);   # one core call checks BG
-  catch err
-    __holent_rethrow__ (err, "__holent_hd__", fn);
-  end_try_catch
+  __holent_hd__ ("check", fn, bg);   # one core call checks BG
   if (! ischar (shape) || ! any (strcmp (shape, {"strip", "ball"})))
     error ("holent:option", "%s: SHAPE must be \"strip\" or \"ball\"", fn);
   endif
@@ -26,17 +22,12 @@ function prof = __holent_surface_profile__ (fn, bg, shape, sizes, opts)
     rtol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
   endif
   ball = strcmp (shape, "ball");
-  try
-    if (ball)
-      [~, ~, ~, top] = __holent_hd__ ("ball", bg, sizes);
-    else
-      [~, ~, ~, top] = __holent_hd__ ("strip", bg, sizes, 1);
-    endif
-  catch err
-    ## the solvers name the sizes R(k) or L(k): here they are SIZES(k)
-    err.message = regexprep (err.message, '(^|: )(R|L)\(', '$1SIZES(');
-    __holent_rethrow__ (err, "__holent_hd__", fn);
-  end_try_catch
+  ## the solvers' messages name the sizes SIZES(k)
+  if (ball)
+    [~, ~, ~, top] = __holent_hd__ ("ball", fn, bg, sizes, {"SIZES"});
+  else
+    [~, ~, ~, top] = __holent_hd__ ("strip", fn, bg, sizes, 1, {"SIZES"});
+  endif
   prof = struct ("shape", {}, "size", {}, "top", {}, "x", {}, "z", {}, "zh", {});
   for k = 1:numel (sizes)
     tol = rtol * sizes(k);

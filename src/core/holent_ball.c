@@ -5,11 +5,11 @@
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_integration.h>
-#include <gsl/gsl_odeiv2.h>
 #include <gsl/gsl_sf_gamma.h>
 #include <gsl/gsl_sf_psi.h>
 #include "holent_ball.h"
 #include "holent_hd_size.h"
+#include "holent_ode.h"
 
 #define QAG_LIMIT 200
 #define QAG_EPSREL 1e-12
@@ -23,11 +23,18 @@
 struct holent_ball_workspace
 {
   gsl_integration_workspace *iw;
-  gsl_odeiv2_step *step;
-  gsl_odeiv2_control *ctrl;
-  gsl_odeiv2_evolve *evol;
+  holent_ode *ode;
   holent_hd_size_workspace *size;
+  const holent_poll *poll;  /* the caller's, or NULL */
 };
+
+void
+holent_ball_workspace_set_poll (holent_ball_workspace *w,
+                                const holent_poll *poll)
+{
+  if (w)
+    w->poll = poll;
+}
 
 holent_ball_workspace *
 holent_ball_workspace_alloc (void)
@@ -36,11 +43,9 @@ holent_ball_workspace_alloc (void)
   if (w == NULL)
     return NULL;
   w->iw = gsl_integration_workspace_alloc (QAG_LIMIT);
-  w->step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 3);
-  w->ctrl = gsl_odeiv2_control_y_new (1e-15, 1e-12);
-  w->evol = gsl_odeiv2_evolve_alloc (3);
+  w->ode = holent_ode_alloc (3, 1e-15, 1e-12);
   w->size = holent_hd_size_workspace_alloc ();
-  if (!w->iw || !w->step || !w->ctrl || !w->evol || !w->size)
+  if (!w->iw || !w->ode || !w->size)
     {
       holent_ball_workspace_free (w);
       return NULL;
@@ -55,12 +60,7 @@ holent_ball_workspace_free (holent_ball_workspace *w)
     return;
   if (w->iw)
     gsl_integration_workspace_free (w->iw);
-  if (w->step)
-    gsl_odeiv2_step_free (w->step);
-  if (w->ctrl)
-    gsl_odeiv2_control_free (w->ctrl);
-  if (w->evol)
-    gsl_odeiv2_evolve_free (w->evol);
+  holent_ode_free (w->ode);
   holent_hd_size_workspace_free (w->size);
   free (w);
 }
@@ -191,18 +191,11 @@ ball_polar (const holent_hd_bg *bg, holent_ball_workspace *ws, double t,
 {
   double h = 1e-2;
   bpar bp = { bg, sc };
-  gsl_odeiv2_system sys = { ball_rhs, NULL, 3, &bp };
-  gsl_odeiv2_step_reset (ws->step);
-  gsl_odeiv2_evolve_reset (ws->evol);
+  holent_ode_reset (ws->ode);
   for (int k = 0; t < ODE_T1; k++)
-    {
-      if (k > 100000)
-        return HOLENT_ENOCONV;
-      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
-                                        &t, ODE_T1, &h, y);
-      if (st)
-        return HOLENT_ENOCONV;
-    }
+    if (k > 100000
+        || holent_ode_step (ws->ode, ball_rhs, &bp, &t, ODE_T1, &h, 0, y))
+      return HOLENT_ENOCONV;
   *R = y[0];
   *J = y[2] * sc;
   return HOLENT_SUCCESS;
@@ -250,18 +243,11 @@ ball_hug (const holent_hd_bg *bg, holent_ball_workspace *ws, double z0,
   hpar hp = { bg, w0 };
   /* series at the tip: theta = -sqrt(f0) r/z0, u = u0 + f0 r^2/(2 z0) */
   double y[3] = { 0.5 * fu0 * r * r / z0, sqrt (fu0) * r / z0, 0 };
-  gsl_odeiv2_system sys = { hug_rhs, NULL, 3, &hp };
-  gsl_odeiv2_step_reset (ws->step);
-  gsl_odeiv2_evolve_reset (ws->evol);
+  holent_ode_reset (ws->ode);
   for (int k = 0; w0 * exp (y[0]) < HUG_W * zh; k++)
-    {
-      if (k > 100000 || !(r < rend))
-        return HOLENT_ENOCONV;
-      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
-                                        &r, rend, &h, y);
-      if (st)
-        return HOLENT_ENOCONV;
-    }
+    if (k > 100000 || !(r < rend)
+        || holent_ode_step (ws->ode, hug_rhs, &hp, &r, rend, &h, 0, y))
+      return HOLENT_ENOCONV;
   /* hand over to the polar variables (u >= HUG_W zh: z has its digits) */
   double u = w0 * exp (y[0]), z = zh - u;
   double th = -asin (y[1] * sqrt (u)), p[3];
@@ -352,6 +338,9 @@ holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *ws,
   for (size_t i = 0; i < n; i++)
     {
       double J = 0, cut, zt = R[i], hemi, extra;
+      if (ws->poll && ws->poll->fn
+          && ws->poll->fn (ws->poll->ctx, (double) i, (double) n))
+        return HOLENT_EINTR;
       if (R[i] > rch)
         {
           if (bad)
@@ -369,6 +358,12 @@ holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *ws,
       if ((st = hemisphere (d, bg->eps / R[i], ws, &hemi)))
         return st;
       S[i] = pref * (hemi + J);
+      if (!isfinite (S[i]) || !isfinite (pref * (cd + J)))
+        {
+          if (bad)
+            *bad = i;
+          return HOLENT_ERANGE;  /* a tiny radius or cutoff: too large */
+        }
       if (fin)
         fin[i] = pref * (cd + J);
       if (delta)

@@ -15,11 +15,17 @@ typedef struct holent_ball_workspace holent_ball_workspace;
 holent_ball_workspace *holent_ball_workspace_alloc (void);
 void holent_ball_workspace_free (holent_ball_workspace *w);
 
+/* Long batches poll POLL (may be NULL: never interrupted) once per
+   radius and return HOLENT_EINTR when it asks to stop.  */
+void holent_ball_workspace_set_poll (holent_ball_workspace *w,
+                                     const holent_poll *poll);
+
 /* Balls of radii R[i]: S at the cutoff, fin (every divergent term of the
  * hemisphere, and for even d its log(R/eps), removed), delta = fin -
  * (vacuum fin), ztip = depth of the tip.  Any output but S may be NULL.
  * EDOM with *bad = i when R[i] <= 0 or beyond the largest reachable
- * radius (*reach, may be NULL).  */
+ * radius (*reach, may be NULL); ERANGE with *bad = i when an entropy
+ * is out of double range; EINTR when the workspace's poll asks to stop.  */
 int holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *w,
                          size_t n, const double *R, double *S, double *fin,
                          double *delta, double *ztip, size_t *bad,

@@ -897,3 +897,62 @@ holent_hd_bg_fval (const holent_hd_bg *bg, double z, double wz)
     }
   return 1 - holent_hd_bg_omf (bg, z);
 }
+
+int
+holent_hd_dimension (double d, int *out, holent_err *e)
+{
+  if (out == NULL)
+    return HOLENT_EINVAL;
+  if (isnan (d))
+    return holent_err_set (e, HOLENT_ENAN, 0, HOLENT_NOINDEX,
+                           "must be an integer from 3 to %d, not NaN",
+                           HOLENT_HD_DMAX);
+  /* compared as a double first: a huge d must not reach the int cast */
+  if (d != floor (d) || d < 3 || d > HOLENT_HD_DMAX)
+    return holent_err_set (e, HOLENT_EDOM, 0, HOLENT_NOINDEX,
+                           "must be an integer from 3 to %d, got %g "
+                           "(d = 2, AdS3: use ads3_background)",
+                           HOLENT_HD_DMAX, d);
+  *out = (int) d;
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_hd_bg_explain (const holent_hd_bg *bg, int d, int status, size_t bad,
+                      const double *z, holent_err *e)
+{
+  holent_hd_why why = bg != NULL ? bg->why : HOLENT_HD_WHY_NONE;
+  if (status == HOLENT_SUCCESS)
+    {
+      holent_err_clear (e);
+      return status;
+    }
+  switch (why)
+    {
+    case HOLENT_HD_WHY_SAMPLES:
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                             "'z' and 'f' must be finite with z(1) = 0 < "
+                             "z(2) < ... (sample %zu)", bad + 1);
+    case HOLENT_HD_WHY_F0:
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                             "'f' must be 1 at z = 0 (the AdS boundary)");
+    case HOLENT_HD_WHY_BOUNDARY:
+      if (z != NULL && bad != HOLENT_NOINDEX)
+        return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                               "f - 1 must vanish like z^%d at the boundary "
+                               "(sample %zu, z = %g)", d, bad + 1, z[bad]);
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                             "f - 1 must vanish like z^%d at the boundary",
+                             d);
+    case HOLENT_HD_WHY_FEW:
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                             "too few samples near the boundary to fit f = "
+                             "1 - m z^%d + ...: give at least %d", d, d + 7);
+    case HOLENT_HD_WHY_RANGE:
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX,
+                             "the energy or entropy density of this "
+                             "background is out of double precision range");
+    default:
+      return holent_err_set (e, status, -1, HOLENT_NOINDEX, NULL);
+    }
+}

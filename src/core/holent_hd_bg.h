@@ -92,6 +92,17 @@ int holent_hd_bg_spline (holent_hd_bg *bg, int d, size_t n, const double *tz,
                          double ell, double G, double eps, size_t *bad);
 void holent_hd_bg_free (holent_hd_bg *bg);
 
+/* The dimension d from a double: EDOM (ENAN) with the reason in E (may
+ * be NULL; arg 0) unless an integer from 3 to HOLENT_HD_DMAX; no int
+ * overflow for any input.  */
+int holent_hd_dimension (double d, int *out, holent_err *e);
+
+/* The reason (what was expected) why a constructor returned STATUS for
+ * bg of dimension d, in E: from bg->why, the index BAD of the sample it
+ * named and the samples z (may be NULL).  Returns STATUS.  */
+int holent_hd_bg_explain (const holent_hd_bg *bg, int d, int status,
+                          size_t bad, const double *z, holent_err *e);
+
 /* For accuracy estimates: the tabulated background bg with 1 - f scaled
  * by 1 + rho, rho the relative accuracy of 1 - f (noise / max|1 - f|, or
  * m_err/|m| if larger); its horizon moves by the amount the data leave

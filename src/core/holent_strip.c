@@ -17,7 +17,24 @@ struct holent_strip_workspace
 {
   gsl_integration_workspace *iw;
   holent_hd_size_workspace *size;
+  const holent_poll *poll;  /* the caller's, or NULL */
 };
+
+void
+holent_strip_workspace_set_poll (holent_strip_workspace *w,
+                                 const holent_poll *poll)
+{
+  if (w)
+    w->poll = poll;
+}
+
+double
+holent_strip_divergence (const holent_hd_bg *bg, double Lperp)
+{
+  int d = bg->d;
+  return 2 * pow (bg->ell, d - 1) * pow (Lperp, d - 2)
+         / ((d - 2) * pow (bg->eps, d - 2) * 4 * bg->G);
+}
 
 holent_strip_workspace *
 holent_strip_workspace_alloc (void)
@@ -306,6 +323,9 @@ holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *ws,
   for (size_t i = 0; i < n; i++)
     {
       double jf, jc, zs, extra;
+      if (ws->poll && ws->poll->fn
+          && ws->poll->fn (ws->poll->ctx, (double) i, (double) n))
+        return HOLENT_EINTR;
       if (l[i] > rch)
         {
           if (bad)
@@ -329,6 +349,13 @@ holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *ws,
           return st;
         }
       S[i] = pref * jc;
+      if (!isfinite (S[i]) || !isfinite (pref * jf)
+          || !isfinite (pref * extra))
+        {
+          if (bad)
+            *bad = i;
+          return HOLENT_ERANGE;  /* a tiny width or cutoff: too large */
+        }
       if (fin)
         fin[i] = pref * jf;
       if (delta)

@@ -15,11 +15,22 @@ typedef struct holent_strip_workspace holent_strip_workspace;
 holent_strip_workspace *holent_strip_workspace_alloc (void);
 void holent_strip_workspace_free (holent_strip_workspace *w);
 
+/* Long batches poll POLL (may be NULL: never interrupted) once per width
+   and return HOLENT_EINTR when it asks to stop.  */
+void holent_strip_workspace_set_poll (holent_strip_workspace *w,
+                                      const holent_poll *poll);
+
+/* The area-law divergence 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G)
+   that S - fin tends to as eps -> 0.  */
+double holent_strip_divergence (const holent_hd_bg *bg, double Lperp);
+
 /* Strips of widths l[i] (transverse size Lperp): S at the cutoff,
  * fin = S - 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G) in the limit
  * eps -> 0, delta = fin - (vacuum fin of the same width), zstar.  Any
  * output but S may be NULL.  EDOM with *bad = i when l[i] <= 0 or beyond
- * the widest reachable strip (*reach, may be NULL, gets that width).  */
+ * the widest reachable strip (*reach, may be NULL, gets that width);
+ * ERANGE with *bad = i when an entropy is out of double range;
+ * EINTR when the workspace's poll asks to stop.  */
 int holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *w,
                           double Lperp, size_t n, const double *l, double *S,
                           double *fin, double *delta, double *zstar,

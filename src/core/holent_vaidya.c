@@ -8,25 +8,27 @@
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_integration.h>
 #include <gsl/gsl_multiroots.h>
-#include <gsl/gsl_odeiv2.h>
 #include "holent_vaidya.h"
 #include "holent_strip.h"
+#include "holent_ode.h"
 
 #define ZEND 1e-7       /* shots stop at z = ZEND z*; asymptotics beyond  */
 #define NSTEP 20000     /* ODE steps of one shot                           */
 #define ROOT_IT 60      /* iterations of the 2D root solve                 */
-#define ROOT_TOL 1e-12  /* residual of the 2D root solve (relative)        */
+#define ROOT_TOL 1e-11  /* residual of the 2D root solve (relative)        */
+#define NEWTON_IT 8     /* iterations of a continuation step's Newton       */
 #define HALVE 30        /* continuation: halvings of a time step           */
 #define TSTEP 0.05      /* continuation: largest step in t per min(l, zh)  */
+#define ODE_ABS 3e-14   /* tolerances of the shots                         */
+#define ODE_REL 3e-12
 
 struct holent_vaidya_workspace
 {
-  gsl_odeiv2_step *step, *step4;   /* x: 5 components; z: 4 */
-  gsl_odeiv2_control *ctrl;
-  gsl_odeiv2_evolve *evol, *evol4;
+  holent_ode *ode, *ode4;   /* in x: 5 components; in z: 4 */
   gsl_multiroot_fsolver *root;
   gsl_integration_workspace *iw;
   holent_strip_workspace *strip;
+  const holent_poll *poll;  /* the caller's, or NULL */
 };
 
 holent_vaidya_workspace *
@@ -35,16 +37,12 @@ holent_vaidya_workspace_alloc (void)
   holent_vaidya_workspace *w = calloc (1, sizeof *w);
   if (w == NULL)
     return NULL;
-  w->step = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 5);
-  w->ctrl = gsl_odeiv2_control_y_new (1e-14, 1e-12);
-  w->evol = gsl_odeiv2_evolve_alloc (5);
-  w->step4 = gsl_odeiv2_step_alloc (gsl_odeiv2_step_rk8pd, 4);
-  w->evol4 = gsl_odeiv2_evolve_alloc (4);
+  w->ode = holent_ode_alloc (5, ODE_ABS, ODE_REL);
+  w->ode4 = holent_ode_alloc (4, ODE_ABS, ODE_REL);
   w->root = gsl_multiroot_fsolver_alloc (gsl_multiroot_fsolver_hybrids, 2);
   w->iw = gsl_integration_workspace_alloc (200);
   w->strip = holent_strip_workspace_alloc ();
-  if (!w->step || !w->ctrl || !w->evol || !w->root || !w->iw || !w->strip
-      || !w->step4 || !w->evol4)
+  if (!w->ode || !w->ode4 || !w->root || !w->iw || !w->strip)
     {
       holent_vaidya_workspace_free (w);
       return NULL;
@@ -57,22 +55,22 @@ holent_vaidya_workspace_free (holent_vaidya_workspace *w)
 {
   if (w == NULL)
     return;
-  if (w->step)
-    gsl_odeiv2_step_free (w->step);
-  if (w->ctrl)
-    gsl_odeiv2_control_free (w->ctrl);
-  if (w->evol)
-    gsl_odeiv2_evolve_free (w->evol);
-  if (w->step4)
-    gsl_odeiv2_step_free (w->step4);
-  if (w->evol4)
-    gsl_odeiv2_evolve_free (w->evol4);
+  holent_ode_free (w->ode);
+  holent_ode_free (w->ode4);
   if (w->root)
     gsl_multiroot_fsolver_free (w->root);
   if (w->iw)
     gsl_integration_workspace_free (w->iw);
   holent_strip_workspace_free (w->strip);
   free (w);
+}
+
+void
+holent_vaidya_workspace_set_poll (holent_vaidya_workspace *w,
+                                  const holent_poll *poll)
+{
+  if (w)
+    w->poll = poll;
 }
 
 /* ------------------------------------------------------------------ */
@@ -165,17 +163,15 @@ rhs_z (double z, const double y[], double dy[], void *p)
    (z' + f v')' = f_v v'^2/2 integrates to the jump z' -> z' - v' [f]/2,
    [f] = f(after) - f(before) = -(s_after - s_before)(1 - F(z)).  */
 static int
-cross (holent_vaidya_workspace *ws, gsl_odeiv2_system *sys, vpar *q,
-       int zpar, double x0, const double y0[5], double x1, double *xc,
-       double yc[5])
+cross (holent_ode *ode, holent_ode_fn f, vpar *q, int zpar, double x0,
+       const double y0[5], double x1, double *xc, double yc[5])
 {
-  double lo = 0, hi = x1 - x0, yt[5], err[5], v0 = y0[1];
+  double lo = 0, hi = x1 - x0, yt[5], v0 = y0[1];
   for (int it = 0; it < 80 && fabs (hi - lo) > 1e-15 * (fabs (x0) + fabs (hi)); it++)
     {
       double h = 0.5 * (lo + hi);
       memcpy (yt, y0, sizeof yt);
-      gsl_odeiv2_step_reset (ws->step);
-      if (gsl_odeiv2_step_apply (ws->step, x0, h, yt, err, NULL, NULL, sys))
+      if (holent_ode_fixed (ode, f, q, x0, h, yt))
         return HOLENT_ENOCONV;
       if ((yt[1] < 0) == (v0 < 0))
         lo = h;
@@ -183,12 +179,8 @@ cross (holent_vaidya_workspace *ws, gsl_odeiv2_system *sys, vpar *q,
         hi = h;
     }
   memcpy (yc, y0, 5 * sizeof *yc);
-  if (hi != 0)
-    {
-      gsl_odeiv2_step_reset (ws->step);
-      if (gsl_odeiv2_step_apply (ws->step, x0, hi, yc, err, NULL, NULL, sys))
-        return HOLENT_ENOCONV;
-    }
+  if (hi != 0 && holent_ode_fixed (ode, f, q, x0, hi, yc))
+    return HOLENT_ENOCONV;
   *xc = x0 + hi;
   double F, z = zpar ? *xc : yc[0];
   if (holent_hd_bg_f (q->F, z, &F, NULL))
@@ -222,67 +214,48 @@ holent_vaidya_shoot (const holent_hd_bg *F, double w,
     return HOLENT_EDOM;
   int d = F->d;
   vpar q = { F, w, zs, vs >= 0 };
-  gsl_odeiv2_system sys = { rhs, NULL, 5, &q };
   double y[5] = { zs, vs, 0, 0, -pow (zs, 2 - d) / (d - 2) }, x = 0;
   double h = 1e-3 * zs, y0[5];
   double xmax = 50 * zs;
-  gsl_odeiv2_step_reset (ws->step);
-  gsl_odeiv2_evolve_reset (ws->evol);
-  int k = 0;
+  holent_ode_reset (ws->ode);
+  int k = 0, st;
   for (; y[2] > -1; k++)
     {
       if (k > NSTEP || x > xmax || y[0] > 2 * zs)
         return HOLENT_ENOCONV;  /* does not reach the boundary */
       double x0 = x;
       memcpy (y0, y, sizeof y0);
-      int st = gsl_odeiv2_evolve_apply (ws->evol, ws->ctrl, ws->step, &sys,
-                                        &x, xmax, &h, y);
-      if (st == GSL_EBADFUNC && h > 1e-12 * zs)
-        {
-          h *= 0.1;
-          continue;
-        }
-      if (st)
+      if (holent_ode_step (ws->ode, rhs, &q, &x, xmax, &h, 1e-12 * zs, y))
         return HOLENT_ENOCONV;
       if (w <= 0 && ((y[1] < 0) != (y0[1] < 0)))
         {
           double xc;
-          if ((st = cross (ws, &sys, &q, 0, x0, y0, x, &xc, y)))
+          if ((st = cross (ws->ode, rhs, &q, 0, x0, y0, x, &xc, y)))
             return st;
           x = xc;
-          gsl_odeiv2_step_reset (ws->step);
-          gsl_odeiv2_evolve_reset (ws->evol);
+          holent_ode_reset (ws->ode);
         }
     }
   /* z' < -1: on in z down to ZEND z* (state x, v, v_z, K) */
   double z = y[0], yz[5] = { x, y[1], y[3] / y[2], y[4], 0 };
   double zend = ZEND * zs, hz = -1e-3 * z;
-  gsl_odeiv2_system sz = { rhs_z, NULL, 4, &q };
-  gsl_odeiv2_step_reset (ws->step4);
-  gsl_odeiv2_evolve_reset (ws->evol4);
+  holent_ode_reset (ws->ode4);
   for (; z > zend; k++)
     {
       if (k > NSTEP)
         return HOLENT_ENOCONV;
       double z0 = z;
       memcpy (y0, yz, sizeof y0);
-      int st = gsl_odeiv2_evolve_apply (ws->evol4, ws->ctrl, ws->step4, &sz,
-                                        &z, zend, &hz, yz);
-      if (st == GSL_EBADFUNC && fabs (hz) > 1e-12 * z)
-        {
-          hz *= 0.1;  /* a trial step left the domain: GSL restored y */
-          continue;
-        }
-      if (st)
+      if (holent_ode_step (ws->ode4, rhs_z, &q, &z, zend, &hz, 1e-12 * z,
+                           yz))
         return HOLENT_ENOCONV;
       if (w <= 0 && ((yz[1] < 0) != (y0[1] < 0)))
         {
           double zc;
-          if ((st = cross (ws, &sz, &q, 1, z0, y0, z, &zc, yz)))
+          if ((st = cross (ws->ode4, rhs_z, &q, 1, z0, y0, z, &zc, yz)))
             return st;
           z = zc;
-          gsl_odeiv2_step_reset (ws->step4);
-          gsl_odeiv2_evolve_reset (ws->evol4);
+          holent_ode_reset (ws->ode4);
         }
     }
   /* beyond ZEND z*: t = v + z + m z^(d+1)/(d+1), the rest of x and of the
@@ -368,6 +341,178 @@ cmp_t (const void *a, const void *b)
   return (x > y) - (x < y);
 }
 
+/* residual of the tip y = (log z*, v*) at a->t; a->jfin its area */
+static int
+res2 (rpar *a, const double y[2], double r[2])
+{
+  double lh, tb;
+  if (holent_vaidya_shoot (a->F, a->w, a->ws, exp (y[0]), y[1], &lh, &tb,
+                           &a->jfin))
+    return HOLENT_ENOCONV;
+  r[0] = (2 * lh - a->l) / a->l;
+  r[1] = (tb - a->t) / a->l;
+  return isfinite (r[0]) && isfinite (r[1]) ? HOLENT_SUCCESS
+                                            : HOLENT_ENOCONV;
+}
+
+/* A branch of extremal surfaces followed in t: the tip at tc, the one
+   before (for the predictor) and the Jacobian of the residual in
+   (log z*, v*), kept from time to time (Broyden updates) so that a step
+   of the continuation costs about two shots.  */
+typedef struct
+{
+  double tc, zs, vs, jfin;
+  double tp, zp, vp;
+  double h;
+  double J[4];
+  int haveJ, alive;
+} branch;
+
+static int
+fd_jac (rpar *a, const double y[2], const double r[2], double J[4])
+{
+  double e[2] = { 1e-6, 1e-6 * a->l }, rt[2];
+  for (int k = 0; k < 2; k++)
+    {
+      double yt[2] = { y[0], y[1] };
+      yt[k] += e[k];
+      if (res2 (a, yt, rt))
+        return HOLENT_ENOCONV;
+      J[k] = (rt[0] - r[0]) / e[k];
+      J[2 + k] = (rt[1] - r[1]) / e[k];
+    }
+  return HOLENT_SUCCESS;
+}
+
+/* Newton from y with the branch's Jacobian; a stale Jacobian is renewed
+   by differences once.  On success y is the root, a->jfin its area.  */
+static int
+newton (rpar *a, branch *b, double y[2])
+{
+  double r[2], rn[2], yn[2], jy;
+  int fresh = 0;
+  if (res2 (a, y, r))
+    return HOLENT_ENOCONV;
+  jy = a->jfin;
+  double nr = fmax (fabs (r[0]), fabs (r[1]));
+  for (int it = 0; it < NEWTON_IT; it++)
+    {
+      if (nr < ROOT_TOL)
+        {
+          a->jfin = jy;
+          return HOLENT_SUCCESS;
+        }
+      if (!b->haveJ)
+        {
+          if (fd_jac (a, y, r, b->J))
+            return HOLENT_ENOCONV;
+          b->haveJ = fresh = 1;
+        }
+      double *J = b->J, det = J[0] * J[3] - J[1] * J[2];
+      if (!(fabs (det) > 0) || !isfinite (det))
+        {
+          b->haveJ = 0;
+          return HOLENT_ENOCONV;
+        }
+      double dy[2] = { -(J[3] * r[0] - J[1] * r[1]) / det,
+                       -(J[0] * r[1] - J[2] * r[0]) / det };
+      yn[0] = y[0] + dy[0];
+      yn[1] = y[1] + dy[1];
+      double nrn = INFINITY;
+      if (fabs (dy[0]) < 0.5 && res2 (a, yn, rn) == HOLENT_SUCCESS)
+        nrn = fmax (fabs (rn[0]), fabs (rn[1]));
+      if (!(nrn < nr))
+        {
+          b->haveJ = 0;   /* renew the Jacobian here, or give up */
+          if (fresh)
+            return HOLENT_ENOCONV;
+          continue;
+        }
+      /* Broyden: J += (dr - J dy) dy^T / |dy|^2 */
+      double u0 = rn[0] - r[0] - (J[0] * dy[0] + J[1] * dy[1]);
+      double u1 = rn[1] - r[1] - (J[2] * dy[0] + J[3] * dy[1]);
+      double dd = dy[0] * dy[0] + dy[1] * dy[1];
+      if (dd > 0)
+        {
+          J[0] += u0 * dy[0] / dd;
+          J[1] += u0 * dy[1] / dd;
+          J[2] += u1 * dy[0] / dd;
+          J[3] += u1 * dy[1] / dd;
+        }
+      y[0] = yn[0];
+      y[1] = yn[1];
+      r[0] = rn[0];
+      r[1] = rn[1];
+      nr = nrn;
+      jy = a->jfin;
+    }
+  return HOLENT_ENOCONV;
+}
+
+/* Follow branch b in t to target (dir +1 forward, -1 backward), in steps
+   of at most hmax (halved on failure, doubled on success), predicting
+   the tip linearly from the last two; a step below 1e-7 of the scale
+   means the branch folds back in t: it ends there (b->alive = 0).  */
+static void
+advance (const rpar *proto, branch *b, double target, int dir, double hmax,
+         double scale)
+{
+  while (b->alive && (dir > 0 ? b->tc < target : b->tc > target))
+    {
+      double tn = dir > 0 ? fmin (target, b->tc + b->h)
+                          : fmax (target, b->tc - b->h);
+      double z1 = b->zs, v1 = b->vs + (tn - b->tc);
+      if (isfinite (b->tp) && b->tc != b->tp)
+        {
+          double r = (tn - b->tc) / (b->tc - b->tp);
+          z1 = b->zs * pow (b->zs / b->zp, r);
+          v1 = b->vs + (b->vs - b->vp) * r;
+        }
+      rpar a = *proto;
+      a.t = tn;
+      double y[2] = { log (z1), v1 };
+      int st = newton (&a, b, y);
+      if (st && b->h <= 0.25 * hmax)
+        {
+          /* the robust (and costly) solver once the step is small */
+          st = solve (&a, &z1, &v1);
+          y[0] = log (z1);
+          y[1] = v1;
+        }
+      if (!st && fabs (y[0] - log (b->zs)) < 0.5)
+        {
+          b->zp = b->zs;
+          b->vp = b->vs;
+          b->tp = b->tc;
+          b->zs = exp (y[0]);
+          b->vs = y[1];
+          b->tc = tn;
+          b->jfin = a.jfin;
+          b->h = fmin (hmax, 2 * b->h);
+        }
+      else
+        {
+          b->haveJ = 0;
+          if ((b->h *= 0.5) < 1e-7 * scale)
+            b->alive = 0;
+        }
+    }
+}
+
+static void
+branch_start (branch *b, double t, double zs, double vs, double jfin,
+              double h)
+{
+  b->tc = t;
+  b->zs = zs;
+  b->vs = vs;
+  b->jfin = jfin;
+  b->tp = b->zp = b->vp = NAN;
+  b->h = h;
+  b->haveJ = 0;
+  b->alive = 1;
+}
+
 int
 holent_vaidya_strip (const holent_hd_bg *F, double w,
                      holent_vaidya_workspace *ws, double Lperp, double l,
@@ -392,7 +537,7 @@ holent_vaidya_strip (const holent_hd_bg *F, double w,
     return HOLENT_SUCCESS;
   int d = F->d, st;
   double pref = 2 * pow (F->ell, d - 1) * pow (Lperp, d - 2) / (4 * F->G);
-  double div = pref * pow (F->eps, 2 - d) / (d - 2);
+  double div = holent_strip_divergence (F, Lperp);
   /* the static surface of the final state: extremal in Vaidya too once
      it lies entirely after a thin shell, t >= r*(z_bb) = int_0^z_bb dz/F */
   double Sbb, fbb, zbb, rbb = INFINITY;
@@ -412,112 +557,139 @@ holent_vaidya_strip (const holent_hd_bg *F, double w,
         return HOLENT_ENOCONV;
     }
   tidx *o = malloc (n * sizeof *o);
-  if (o == NULL)
-    return HOLENT_ENOMEM;
+  double *tmp = malloc (6 * n * sizeof *tmp);
+  if (o == NULL || tmp == NULL)
+    {
+      free (o);
+      free (tmp);
+      return HOLENT_ENOMEM;
+    }
+  /* per sorted target: the followed (early) branch and the late one */
+  double *fA = tmp, *zA = tmp + n, *vA = tmp + 2 * n;
+  double *fL = tmp + 3 * n, *zL = tmp + 4 * n, *vL = tmp + 5 * n;
   for (size_t i = 0; i < n; i++)
     {
       o[i].t = t[i];
       o[i].i = i;
+      fA[i] = fL[i] = INFINITY;
+      zA[i] = vA[i] = zL[i] = vL[i] = NAN;
     }
   qsort (o, n, sizeof *o, cmp_t);
-  /* start in the vacuum, before the shell: z* = l/ratio, v* = t - z*
-     (exact for a thin shell) */
-  double ratio = holent_strip_ratio (d), zs = l / ratio;
+  double ratio = holent_strip_ratio (d);
   double scale = fmin (l, F->zh), hmax = TSTEP * scale;
-  double tc = fmin (o[0].t, w > 0 ? -12 * w : -1e-3 * scale);
-  double vs = tc - zs, zp = NAN, vp = NAN, tp = NAN;
-  rpar a = { F, w, l, tc, ws, 0 };
-  int have = 0, last = -1;  /* have: the branch is known at tc */
-  if (w <= 0 && tc <= 0)
+  rpar proto = { F, w, l, 0, ws, 0 };
+  branch A;
+  /* the early branch starts in the vacuum, before the shell: z* =
+     l/ratio, v* = t - z* (exact for a thin shell) */
+  double tc = fmin (o[0].t, w > 0 ? -12 * w : -1e-3 * scale), zs = l / ratio;
+  branch_start (&A, tc, zs, tc - zs, holent_strip_vacuum_j (d)
+                                     * pow (zs, 2 - d), hmax);
+  if (w > 0)
     {
-      a.jfin = holent_strip_vacuum_j (d) * pow (zs, 2 - d);
-      have = 1;
+      rpar a = proto;
+      double vs = tc - zs;
+      a.t = tc;
+      A.alive = solve (&a, &zs, &vs) == HOLENT_SUCCESS;
+      branch_start (&A, tc, zs, vs, a.jfin, hmax);
     }
-  else if ((st = solve (&a, &zs, &vs)) == HOLENT_SUCCESS)
-    have = 1;
-  double hcur = hmax;
+  st = HOLENT_SUCCESS;
+  for (size_t k = 0; k < n && A.alive; k++)
+    {
+      if (ws->poll && ws->poll->fn
+          && ws->poll->fn (ws->poll->ctx, (double) k, (double) (2 * n)))
+        {
+          st = HOLENT_EINTR;
+          break;
+        }
+      advance (&proto, &A, o[k].t, 1, hmax, scale);
+      if (A.alive)
+        {
+          fA[k] = pref * A.jfin;
+          zA[k] = A.zs;
+          vA[k] = A.vs;
+        }
+    }
+  /* the late branch: the static surface of the final state, exact from
+     t = r*(z_bb) on for a thin shell (from 12 w later for a smooth one,
+     as a guess), followed back in t until it folds or meets the early
+     branch (the swallow tail of saturation) */
+  if (!st && isfinite (fbb))
+    {
+      branch L;
+      double t0 = w > 0 ? rbb + 12 * w : rbb;
+      branch_start (&L, t0, zbb, t0 - rbb, fbb / pref, hmax);
+      if (w > 0)
+        {
+          rpar a = proto;
+          double z0 = zbb, v0 = t0 - rbb;
+          a.t = t0;
+          L.alive = solve (&a, &z0, &v0) == HOLENT_SUCCESS;
+          branch_start (&L, t0, z0, v0, a.jfin, hmax);
+        }
+      for (size_t k = n; k-- > 0 && L.alive;)
+        {
+          if (o[k].t >= t0)
+            {
+              if (w <= 0)
+                {
+                  fL[k] = fbb;
+                  zL[k] = zbb;
+                  vL[k] = o[k].t - rbb;
+                }
+              continue;
+            }
+          if (ws->poll && ws->poll->fn
+              && ws->poll->fn (ws->poll->ctx, (double) (2 * n - k),
+                               (double) (2 * n)))
+            {
+              st = HOLENT_EINTR;
+              break;
+            }
+          advance (&proto, &L, o[k].t, -1, hmax, scale);
+          if (!L.alive)
+            break;
+          fL[k] = pref * L.jfin;
+          zL[k] = L.zs;
+          vL[k] = L.vs;
+          if (isfinite (zA[k]) && fabs (zA[k] - L.zs) < 1e-6 * L.zs)
+            break;  /* the same surface: earlier on, the early branch */
+        }
+    }
+  if (st)
+    {
+      free (o);
+      free (tmp);
+      return st;
+    }
+  int last = -1;
   for (size_t k = 0; k < n; k++)
     {
-      double target = o[k].t;
-      /* follow the branch to the target in steps of at most hmax (halved
-         on failure, doubled on success), extrapolating linearly from the
-         last two tips; a step below 1e-7 of the scale means the branch
-         folds back in t: it ends there */
-      while (have && tc < target)
-        {
-          double tn = fmin (target, tc + hcur);
-          double z1 = zs, v1 = vs + (tn - tc);
-          if (isfinite (tp) && tc > tp)
-            {
-              double r = (tn - tc) / (tc - tp);
-              z1 = zs * pow (zs / zp, r);
-              v1 = vs + (vs - vp) * r;
-            }
-          rpar b = { F, w, l, tn, ws, 0 };
-          if (solve (&b, &z1, &v1) == HOLENT_SUCCESS && fabs (log (z1 / zs)) < 0.5)
-            {
-              zp = zs;  vp = vs;  tp = tc;
-              zs = z1;  vs = v1;  tc = tn;
-              a.jfin = b.jfin;
-              hcur = fmin (hmax, 2 * hcur);
-            }
-          else if ((hcur *= 0.5) < 1e-7 * scale)
-            have = 0;
-        }
-      /* the candidates at the target: the followed branch; the static
-         surface of the final state (exact for a thin shell once t >=
-         r*(z_bb)); the surface found from the static tip as a guess
-         (the late branch of a swallow tail) */
-      double fin_a = have ? pref * a.jfin : INFINITY;
-      double fin_s = INFINITY, zc = NAN, vc = NAN;
-      if (w <= 0 && target >= rbb)
-        {
-          fin_s = fbb;
-          zc = zbb;
-          vc = target - rbb;
-        }
-      else if (isfinite (fbb))
-        {
-          rpar c = { F, w, l, target, ws, 0 };
-          zc = zbb;
-          vc = target - rbb;
-          if (solve (&c, &zc, &vc) == HOLENT_SUCCESS)
-            fin_s = pref * c.jfin;
-        }
-      int same = have && isfinite (zc) && fabs (zs - zc) < 1e-6 * zc;
+      int same = isfinite (zA[k]) && isfinite (zL[k])
+                 && fabs (zA[k] - zL[k]) < 1e-6 * zL[k];
       /* the same surface twice: one candidate */
-      int pick = same ? 0 : fin_s < fin_a;
-      if (!isfinite (fin_a) && !isfinite (fin_s))
+      int pick = same ? 0 : fL[k] < fA[k];
+      if (!isfinite (fA[k]) && !isfinite (fL[k]))
         {
           if (bad)
             *bad = o[k].i;
           free (o);
+          free (tmp);
           return HOLENT_ENOCONV;
         }
-      if (!have)
-        {
-          /* the followed branch ended: follow the other one from here */
-          zs = zc;
-          vs = vc;
-          tc = target;
-          tp = NAN;
-          a.jfin = fin_s / pref;
-          hcur = hmax;
-          have = 1;
-        }
       size_t i = o[k].i;
-      double fv = pick ? fin_s : fin_a;
+      double fv = pick ? fL[k] : fA[k];
       S[i] = fv + div;
       if (finite)
         finite[i] = fv;
       if (zstar)
-        zstar[i] = pick ? zc : zs;
+        zstar[i] = pick ? zL[k] : zA[k];
       if (vstar)
-        vstar[i] = pick ? vc : vs;
+        vstar[i] = pick ? vL[k] : vA[k];
       if (jump)
         jump[i] = last >= 0 && last != pick && !same;
       last = same ? last : pick;
     }
   free (o);
+  free (tmp);
   return HOLENT_SUCCESS;
 }

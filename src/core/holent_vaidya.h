@@ -22,6 +22,11 @@ typedef struct holent_vaidya_workspace holent_vaidya_workspace;
 holent_vaidya_workspace *holent_vaidya_workspace_alloc (void);
 void holent_vaidya_workspace_free (holent_vaidya_workspace *w);
 
+/* Long scans poll POLL (may be NULL: never interrupted) once per time
+   and return HOLENT_EINTR when it asks to stop.  */
+void holent_vaidya_workspace_set_poll (holent_vaidya_workspace *w,
+                                       const holent_poll *poll);
+
 /* S(t) of a strip of width l (transverse size Lperp) at the boundary
  * times t[i] (any order) after the quench into fin with shell width w
  * (0: thin shell).  S is the finite part plus the area-law divergence

@@ -147,10 +147,40 @@ test_ball (void)
   holent_ball_workspace_free (w);
 }
 
+
+/* a poll that asks to stop at its second call */
+static int
+stop_second (void *ctx, double done, double total)
+{
+  (void) done;
+  (void) total;
+  return ++*(int *) ctx >= 2;
+}
+
+/* the poll: EINTR at the second radius */
+static void
+test_poll (void)
+{
+  holent_hd_bg bg;
+  holent_ball_workspace *w = holent_ball_workspace_alloc ();
+  int calls = 0;
+  holent_poll poll = { stop_second, &calls };
+  double R[3] = { 0.2, 0.4, 0.6 }, S[3];
+  size_t bad;
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
+  holent_ball_workspace_set_poll (w, &poll);
+  HT_STATUS (holent_ball_entropy (&bg, w, 3, R, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EINTR);
+  HT_CHECK (calls == 2, "calls %d", calls);
+  holent_ball_workspace_set_poll (w, NULL);
+  HT_STATUS (holent_ball_entropy (&bg, w, 3, R, S, NULL, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+  holent_ball_workspace_free (w);
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
+  test_poll ();
   test_closed_forms ();
   test_ball ();
   return HT_DONE ();

@@ -2,6 +2,7 @@
  * of f, and the evaluators of f against direct formulas.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
+#include <string.h>
 #include <stdlib.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
@@ -174,10 +175,50 @@ test_tabulated (void)
   HT_STATUS (holent_hd_brane_zh (4, NAN, &zh), HOLENT_EINVAL);
 }
 
+/* the dimension check and the reasons of a refused table */
+static void
+test_reasons (void)
+{
+  holent_err e;
+  int d = 0;
+  HT_STATUS (holent_hd_dimension (4, &d, &e), HOLENT_SUCCESS);
+  HT_CHECK (d == 4, "d = %d", d);
+  HT_STATUS (holent_hd_dimension (1e300, &d, &e), HOLENT_EDOM);
+  HT_CHECK (e.arg == 0 && strstr (e.reason, "integer from 3") != NULL, "%s", e.reason);
+  HT_STATUS (holent_hd_dimension (2.5, &d, NULL), HOLENT_EDOM);
+  HT_STATUS (holent_hd_dimension (NAN, &d, &e), HOLENT_ENAN);
+  HT_STATUS (holent_hd_dimension (4, NULL, &e), HOLENT_EINVAL);
+  /* f = 1 - z^3 in d = 4: not O(z^4), the reason names z^4 and a sample */
+  enum { N = 50 };
+  double z[N], f[N];
+  size_t bad = HOLENT_NOINDEX;
+  holent_hd_bg bg;
+  for (int i = 0; i < N; i++)
+    {
+      z[i] = i / (N - 1.0);
+      f[i] = 1 - z[i] * z[i] * z[i];
+    }
+  int st = holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad);
+  HT_STATUS (st, HOLENT_EDOM);
+  HT_STATUS (holent_hd_bg_explain (&bg, 4, st, bad, z, &e), HOLENT_EDOM);
+  HT_CHECK (strstr (e.reason, "like z^4") != NULL && e.status == HOLENT_EDOM, "%s", e.reason);
+  f[0] = 2;
+  st = holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad);
+  holent_hd_bg_explain (&bg, 4, st, bad, z, &e);
+  HT_CHECK (strstr (e.reason, "1 at z = 0") != NULL, "%s", e.reason);
+  z[3] = z[2];
+  st = holent_hd_bg_tabulated (&bg, 4, N, z, f, 0, 1, 1, 1e-3, &bad);
+  holent_hd_bg_explain (&bg, 4, st, bad, z, &e);
+  HT_CHECK (strstr (e.reason, "sample 4") != NULL, "%s", e.reason);
+  HT_STATUS (holent_hd_bg_explain (&bg, 4, HOLENT_SUCCESS, 0, z, &e), HOLENT_SUCCESS);
+  HT_CHECK (e.status == HOLENT_SUCCESS, "cleared");
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
+  test_reasons ();
   test_init_errors ();
   test_evaluators ();
   test_tabulated ();

@@ -243,10 +243,47 @@ test_strip (void)
   holent_strip_workspace_free (w);
 }
 
+
+/* a poll that asks to stop at its second call */
+static int
+stop_second (void *ctx, double done, double total)
+{
+  (void) done;
+  (void) total;
+  return ++*(int *) ctx >= 2;
+}
+
+/* the poll: EINTR at the second width; the divergence's closed form */
+static void
+test_poll (void)
+{
+  holent_hd_bg bg;
+  holent_strip_workspace *w = holent_strip_workspace_alloc ();
+  int calls = 0;
+  holent_poll poll = { stop_second, &calls };
+  double l[3] = { 0.5, 1, 1.5 }, S[3];
+  size_t bad;
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1.2, 0.3, 1e-3), HOLENT_SUCCESS);
+  holent_strip_workspace_set_poll (w, &poll);
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 3, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EINTR);
+  HT_CHECK (calls == 2, "calls %d", calls);
+  holent_strip_workspace_set_poll (w, NULL);
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 3, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+  /* 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G) (Ryu and Takayanagi 2006) */
+  HT_CLOSE (holent_strip_divergence (&bg, 2), 2 * pow (1.2, 3) * 4 / (2 * 1e-6 * 1.2), 1e-14);
+  /* a width so small that the entropy overflows: ERANGE naming it */
+  double tiny[2] = { 1, 1e-300 };
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, 2, tiny, S, NULL, NULL, NULL, &bad, NULL), HOLENT_ERANGE);
+  HT_CHECK (bad == 1, "bad %zu", bad);
+  holent_strip_workspace_set_poll (NULL, NULL);
+  holent_strip_workspace_free (w);
+}
+
 int
 main (void)
 {
   gsl_set_error_handler_off ();
+  test_poll ();
   test_closed_forms ();
   test_strip ();
   return HT_DONE ();

@@ -20,6 +20,15 @@ inv_f4 (double z, void *p)
   return 1 / (1 - gsl_pow_int (z, 4));
 }
 
+/* a poll that asks to stop at its second call */
+static int
+stop_second (void *ctx, double done, double total)
+{
+  (void) done;
+  (void) total;
+  return ++*(int *) ctx >= 2;
+}
+
 int
 main (void)
 {
@@ -83,6 +92,16 @@ main (void)
   HT_STATUS (holent_hd_bg_init (&V, 4, HOLENT_HD_VACUUM, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
   double t0 = 1, S0;
   HT_STATUS (holent_vaidya_strip (&V, 0, w, 1, 1, 1, &t0, &S0, NULL, NULL, NULL, NULL, NULL), HOLENT_EDOM);
+  /* the poll: EINTR at the second time */
+  {
+    int calls = 0;
+    holent_poll poll = { stop_second, &calls };
+    double tt[3] = { -1, -0.5, -0.2 }, Sp[3];
+    holent_vaidya_workspace_set_poll (w, &poll);
+    HT_STATUS (holent_vaidya_strip (&F, 0, w, 1, 0.5, 3, tt, Sp, NULL, NULL, NULL, NULL, NULL), HOLENT_EINTR);
+    HT_CHECK (calls == 2, "calls %d", calls);
+    holent_vaidya_workspace_set_poll (w, NULL);
+  }
   holent_strip_workspace_free (sw);
   holent_vaidya_workspace_free (w);
   return HT_DONE ();
