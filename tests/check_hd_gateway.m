@@ -14,7 +14,7 @@
 %!error <expected 5 to 6 inputs> __holent_hd__ ("strip", "f", bg)
 %!error <expected 3 to 3 inputs> __holent_hd__ ("velocity", "f", bg, 1)
 %!error <^f: BG: has no horizon> __holent_hd__ ("velocity", "f", ads_background (4, "vacuum"))
-%!error <expected 4 to 4 inputs> __holent_hd__ ("ball", "f", bg, 1, 1)
+%!error <expected 4 to 5 inputs> __holent_hd__ ("ball", "f", bg, 1, {"R"}, 1)
 %!error <real, full, double> __holent_hd__ ("strip", "f", bg, 1i, 1)
 %!error <real, full, double> __holent_hd__ ("strip", "f", bg, sparse (1), 1)
 %!error <real, full, double> __holent_hd__ ("strip", "f", bg, int8 (1), 1)

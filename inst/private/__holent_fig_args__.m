@@ -34,3 +34,25 @@ function [hax, args, opts, props] = __holent_fig_args__ (fn, args, nfixed, names
   opts = __holent_opts__ (fn, names, rest(mine));
   props = rest(! mine);
 endfunction
+
+%!test
+%! ## options (case-insensitive) and graphics properties are split apart
+%! [hax, a, o, p] = __holent_fig_args__ ("f", {1, "Tol", 0.1, "linewidth", 2}, 1, {"tol"});
+%! assert (isempty (hax));
+%! assert (a, {1});
+%! assert (o.tol, 0.1);
+%! assert (p, {"linewidth", 2});
+%!test
+%! ## an axes handle first is taken off the arguments
+%! hf = figure ("visible", "off");
+%! unwind_protect
+%!   ax = axes ("parent", hf);
+%!   [hax, a] = __holent_fig_args__ ("f", {ax, 3, 4}, 2, {});
+%!   assert (hax, ax);
+%!   assert (a, {3, 4});
+%! unwind_protect_cleanup
+%!   close (hf);
+%! end_unwind_protect
+%!error <f: expected 2 arguments> __holent_fig_args__ ("f", {1}, 2, {})
+%!error <name/value pairs> __holent_fig_args__ ("f", {1, "tol"}, 1, {"tol"})
+%!error <option name 1 must be a string> __holent_fig_args__ ("f", {1, 3, 4}, 1, {"tol"})

@@ -17,3 +17,22 @@ function [hax, held, pal] = __holent_fig_begin__ (hax)
   hold (hax, "on");
   pal = __holent_palette__ ();
 endfunction
+
+%!test
+%! hf = figure ("visible", "off");
+%! unwind_protect
+%!   ax = axes ("parent", hf);
+%!   plot (ax, 1:3);
+%!   [h, held, pal] = __holent_fig_begin__ (ax);
+%!   assert (h, ax);
+%!   assert (held, false);           # a plot replaces what was there
+%!   assert (ishold (ax));           # held while the caller draws
+%!   assert (isempty (get (ax, "children")));
+%!   assert (isfield (pal, "surface"));
+%!   plot (ax, 1:3);
+%!   [~, held] = __holent_fig_begin__ (ax);
+%!   assert (held, true);            # hold on stays on
+%!   assert (numel (get (ax, "children")), 1);
+%! unwind_protect_cleanup
+%!   close (hf);
+%! end_unwind_protect

@@ -17,3 +17,16 @@ function c = __holent_palette__ ()
   c.phases = [0.55 0.74 0.70; 0.95 0.80 0.55; 0.80 0.62 0.74;
               0.68 0.75 0.88; 0.86 0.86 0.62; 0.75 0.68 0.60];
 endfunction
+
+%!test
+%! c = __holent_palette__ ();
+%! f = fieldnames (c);
+%! for k = 1:numel (f)
+%!   v = c.(f{k});
+%!   assert (columns (v), 3);
+%!   assert (all (v(:) >= 0 & v(:) <= 1));   # valid RGB triples
+%! endfor
+%! ## roles drawn on top of each other must be told apart
+%! assert (norm (c.surface - c.runner) > 0.3);
+%! assert (norm (c.bulk - c.horizon) > 0.5);
+%! assert (rows (unique (c.phases, "rows")), rows (c.phases));

@@ -48,5 +48,7 @@ endfunction
 
 %!test
 %! p = __holent_surface_profile__ ("f", ads_background (3, "vacuum"), "strip", 1, {});
-%! assert (p.top, 1 / 2, 1e-10);     # z* = l/2 for a strip in AdS3 (common practice)
+%! ## AdS4 (d = 3): z* = l Gamma(1/4) / (2 sqrt(pi) Gamma(3/4)) (Ryu and
+%! ## Takayanagi 2006, JHEP 08 (2006) 045, strip of width l)
+%! assert (p.top, gamma (1/4) / (2 * sqrt (pi) * gamma (3/4)), 1e-8);
 %!error <^f: SHAPE> __holent_surface_profile__ ("f", ads_background (3, "vacuum"), "disk", 1, {})
