@@ -1,3 +1,4 @@
+# SPDX-License-Identifier: GPL-3.0-or-later
 # holent: top-level targets.  See README.md and DEVELOPERS.md.
 # make check TESTS="name ..." runs only the BIST/cross-check files and C
 # unit tests whose names contain one of the words.

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## bench_ineq (): entropy_inequalities (C enumeration) against a
 ## straightforward vectorised Octave evaluation of the same families, in
 ## one run: subadditivity over every pair of disjoint subsets and MMI over

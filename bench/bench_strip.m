@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## bench_strip (): 1000 strip widths in the d = 4 black brane (zh = 1,
 ## cutoff 1e-3), holent's strip_entropy against a plain Octave script built
 ## on integral and fzero (below), both aiming at 1e-10 relative accuracy.

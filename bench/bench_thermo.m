@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## bench_thermo (): btz_thermodynamics on 10^6 states (T, Omega) against the
 ## same closed forms written as vectorised Octave expressions, in one run.
 ## Prints both times and the ratio ours/peer (target <= 1).

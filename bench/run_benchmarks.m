@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## run_benchmarks (): run every bench/bench_*.m in turn.  Each benchmark
 ## times holent against a peer (a plain Octave implementation of the same
 ## computation) in one run and prints both times and their ratio.

@@ -1,4 +1,5 @@
 ## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
 ##
 ## This program is free software: you can redistribute it and/or modify it
 ## under the terms of the GNU General Public License as published by the

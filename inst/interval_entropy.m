@@ -1,4 +1,5 @@
-## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
 
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{S} =} interval_entropy (@var{bg}, @var{len})

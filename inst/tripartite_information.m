@@ -1,4 +1,5 @@
-## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
 
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{I3} =} tripartite_information (@var{bg}, @var{A}, @var{B}, @var{C})

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Cross-checks of ball_entropy for balls much larger than the horizon
 ## depth zh of a black brane, where the tip sits exponentially close to the
 ## horizon (zh - z_tip ~ exp(-2 k R), k = sqrt(d (d-1)/2)/zh) and the

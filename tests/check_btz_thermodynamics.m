@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Cross-checks of btz_thermodynamics and hawking_page against the BTZ
 ## metric read independently inside the tests, the laws of black hole
 ## thermodynamics, the Cardy formula and the RT entropy of the whole circle.

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Robustness of every compiled gateway: whatever it is given (wrong
 ## types, complex, sparse, empty, integer classes, logical, NaN/Inf, huge
 ## values, malformed background structs, wrong arity), a gateway must raise

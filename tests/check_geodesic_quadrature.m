@@ -1,4 +1,5 @@
-## Copyright (C) 2026 The holent developers.  GPL-3.0-or-later; see COPYING.
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
 ##
 ## Independent check of geodesic_length and interval_entropy in every AdS3
 ## background: the length of the boundary-anchored geodesic is computed here

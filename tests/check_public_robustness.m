@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Robustness of every public function (all of INDEX but holent_demo):
 ## whatever it is given, a call must either return or raise an error whose
 ## identifier starts with "holent:" (or is Octave's "Octave:invalid-fun-call"

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Cross-check of rt_entropy against an exhaustive enumeration written here,
 ## independently of the package: every non-crossing pairing of the sorted
 ## endpoints, every face of its chord diagram for the horizon or the

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Entropy inequalities and purity for rt_entropy on random region sets in
 ## every background (the fast dynamic programme; hundreds of sets each).
 ##   subadditivity and Araki-Lieb (Araki and Lieb 1970, Commun. Math. Phys.

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## rt_entropy and the information quantities against published closed
 ## forms and against the single-interval functions of the package.
 

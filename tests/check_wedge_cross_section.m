@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## Cross-checks of wedge_cross_section against published closed forms and
 ## against direct numerical minimisations written here, independently of
 ## the package, from the metric of each background.

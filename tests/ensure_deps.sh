@@ -1,4 +1,5 @@
 #!/bin/bash
+# SPDX-License-Identifier: GPL-3.0-or-later
 # Make sure the Debian packages holent builds and tests with are present.
 # As root, install what is missing; otherwise print the command and stop.
 set -u

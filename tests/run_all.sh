@@ -1,4 +1,5 @@
 #!/bin/bash
+# SPDX-License-Identifier: GPL-3.0-or-later
 # Runs every test of holent against the copy installed in PREFIX:
 #  1. C unit tests of the core (tests/core/test_*.c) under
 #     -fsanitize=address,undefined;

@@ -1,3 +1,6 @@
+## Copyright (C) 2026 The holent developers.
+## SPDX-License-Identifier: GPL-3.0-or-later
+
 ## run_tests (ROOT, RESULT): run the BIST blocks of every inst/*.m of the
 ## installed package and every cross-check file tests/check_*.m (only the
 ## names containing a word of FILTER, when given), and the BIST blocks of

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent.h: status codes and shared declarations of the holent core.
  *
  * The core is plain C11: no Octave headers, no global state, no I/O.

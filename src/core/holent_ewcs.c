@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_ewcs.c: entanglement wedge cross section of two intervals.
  * Derivation: doc/wedge_cross_section.md.  GPL-3.0-or-later.  */
 #include <float.h>

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_ewcs.h: entanglement wedge cross section E_W of two disjoint
  * boundary intervals A and B, in closed form, with the two bulk points
  * where the minimal cross section meets the RT geodesics.

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_geo.c: regulated geodesic lengths in AdS3 backgrounds.
  * Derivations: doc/ads3_geodesics.md.  GPL-3.0-or-later.  */
 #include <float.h>

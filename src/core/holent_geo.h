@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_geo.h: AdS3 backgrounds dual to 2D CFT states and the regulated
  * lengths of boundary-anchored geodesics in them.
  *

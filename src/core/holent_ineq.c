@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_ineq.c: instances of the entropy inequalities, enumerated
  * without storing them (memory O(1) beyond the entropy vector).
  * Definitions and instance sets are in holent_ineq.h.

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_ineq.h: evaluate entropy inequalities on an entropy vector.
  *
  * An entropy vector of N parties is s[k - 1] = S(subset k), k = 1 ..

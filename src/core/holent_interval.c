@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_interval.c: single-interval RT entropies (entanglement plateaux
  * on the BTZ circle), evaluated in blocks by the vectorised length kernel.
  * GPL-3.0-or-later.  */

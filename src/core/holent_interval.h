@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_interval.h: RT entropy of a single boundary interval, with the
  * homology constraint when the bulk has a horizon.  GPL-3.0-or-later.  */
 #ifndef HOLENT_INTERVAL_H

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_region.c: sorting and normalising region sets.  The RT
  * minimiser and the information quantities all go through here, so the
  * conventions (wrapping, merging, tolerances) live in one place.

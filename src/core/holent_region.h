@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_region.h: region sets (unions of boundary intervals), sorted and
  * normalised in one place for everything that works on regions.
  *

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_rt.c: RT minimisation over region sets (doc/rt_regions.md):
  * the interval DP below and the O(N^2) sweep further down
  * (doc/rt_fast.md).

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_rt.h: Ryu-Takayanagi entropy of a region made of many boundary
  * intervals, minimised over every RT candidate without enumerating them.
  *

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_thermo.c: BTZ thermodynamics, CFT data and Hawking-Page.
  * Derivations: doc/btz_thermodynamics.md.  GPL-3.0-or-later.  */
 #include <float.h>

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_thermo.h: thermodynamics of the BTZ black hole on a boundary
  * circle of circumference L, the CFT (Virasoro) data of the state, and
  * the Hawking-Page competition with thermal AdS3.

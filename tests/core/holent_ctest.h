@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* holent_ctest.h: a minimal check framework for the core's unit tests.
  * Each test program ends with  return HT_DONE ();  which prints
  * "N passed, M failed" (parsed by tests/run_all.sh).  */

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_ewcs: every error path; the closed form against
  * Takayanagi and Umemoto 2017 (arXiv:1708.09393, Nature Phys. 14, 573
  * (2018)), E_W = (c/6) log(1 + 2z + 2 sqrt(z(z+1))); and the returned

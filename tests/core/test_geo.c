@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_geo and holent_interval: every error path, and the
  * closed forms against GSL's special functions (gsl_sf_lnsinh, gsl_sf_sin)
  * as an independent evaluation.  */

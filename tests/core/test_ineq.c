@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_ineq: every error path; instance counts and worst
  * values against a brute force written here independently (every way of
  * giving each party to one of the t regions or to none, orbits

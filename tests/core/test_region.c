@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_region: normalisation (sorting, wrapping through 0,
  * merging touching intervals, the whole circle) and every error path.  */
 #include <float.h>

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_rt: both minimisers (the dynamic programme and the
  * fast sweep) against an exhaustive enumeration written here (every
  * non-crossing pairing, every face, with the regulated lengths in closed

@@ -1,3 +1,4 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_thermo: every error path and reason; the closed
  * forms against an independent reading of the BTZ metric (Banados,
  * Teitelboim and Zanelli 1992, PRL 69, 1849): horizons from the roots of
