@@ -49,11 +49,6 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (nargin < 3 || mod (nargin, 2) != 1)
     print_usage ();
   endif
-  if (__holent_is_bcft__ (bg))
-    error ("holent:unsupported",
-           "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
-           fn);
-  endif
   o = struct ();
   if (nargin > 3)
     o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);

@@ -95,11 +95,6 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
   if (nargin < 3)
     print_usage ();
   endif
-  if (__holent_is_bcft__ (bg))
-    error ("holent:unsupported",
-           "%s: BG is a BCFT background (a boundary and a brane), not supported here: use rt_entropy, interval_entropy or page_curve",
-           fn);
-  endif
   __holent_background__ ("check", fn, bg);   # BG is read below
   reflected = false;
   if (nargin > 3)

@@ -196,6 +196,15 @@ holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg)
     holent_gw_raise (fn, HOLENT_EBACKGROUND, NULL, HOLENT_NOINDEX,
                      "BG must be a background struct made by "
                      "ads3_background");
+  /* a boundary with branes has its own gateway (rt_entropy,
+     interval_entropy, page_curve): said once here for every other one */
+  const mxArray *st = mxGetField (s, 0, "state");
+  if (st != NULL && mxIsChar (st) && mxGetString (st, word, sizeof word) == 0
+      && (strcmp (word, "bcft") == 0 || strcmp (word, "bcft_tfd") == 0))
+    holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
+                     "BG is a BCFT background (a boundary and a brane), "
+                     "not supported here: use rt_entropy, "
+                     "interval_entropy or page_curve");
   bg_word (s, fn, "bulk", bulk, sizeof bulk);
   int b = holent_bg3_bulk_from_name (bulk);
   if (b < 0)
