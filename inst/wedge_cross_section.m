@@ -95,7 +95,6 @@ function [E, info] = wedge_cross_section (bg, A, B, varargin)
   if (nargin < 3)
     print_usage ();
   endif
-  __holent_background__ ("check", fn, bg);   # BG is read below
   reflected = false;
   if (nargin > 3)
     o = __holent_opts__ (fn, {"reflected"}, varargin);
