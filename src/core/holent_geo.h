@@ -92,7 +92,13 @@ int holent_geo_points_check (const holent_geo_bg *bg, size_t n,
    initialised bg and an arc that holent_geo_arc_length accepts; no
    checks.  */
 #include <math.h>
-#include <gsl/gsl_math.h>
+/* C11 alone does not define these (GSL's gsl_math.h did): */
+#ifndef M_LN2
+#define M_LN2 0.69314718055994530942
+#endif
+#ifndef M_PI
+#define M_PI 3.14159265358979323846
+#endif
 
 /* log(sinh(x)) for x > 0 without overflow.  */
 static inline double
@@ -135,7 +141,8 @@ holent_geo_len_defect_ (const holent_geo_bg *bg, double l)
      exists; the infimum over curves in the class is the path through
      the apex, length 2 log(L/(pi alpha eps)).  */
   double ph = bg->kL * l;
-  if (ph >= M_PI_2 && bg->alpha < 1.0)  /* alpha = 1: no defect, no cap */
+  /* pi/2 written out: no GSL in public headers */
+  if (ph >= 1.57079632679489661923 && bg->alpha < 1.0)  /* alpha = 1: no defect, no cap */
     return bg->pref;
   return bg->pref + 2.0 * log (sin (ph));
 }
