@@ -34,6 +34,7 @@
 #include <stdlib.h>
 #include <string.h>
 #include "holent_gw.h"
+#include "holent_gw_poll.h"
 #include "core/holent_causal.h"
 #include "core/holent_hrt.h"
 #include "core/holent_quench.h"
@@ -599,6 +600,10 @@ alloc_ws (gw_state *g, size_t nmax)
   g->te = malloc (nmax * sizeof (double));
   if (!g->reg || !g->rt || !g->tw || !g->tp || !g->ts || !g->te)
     fail (g, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, "out of memory");
+  /* the DP over many timed intervals runs long: Ctrl-C */
+  const holent_poll *poll = holent_gw_poll (g->fn);
+  holent_rt_set_poll (g->rt, poll);
+  holent_tfd_workspace_set_poll (g->tw, poll);
 }
 
 static size_t

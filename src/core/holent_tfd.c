@@ -235,6 +235,15 @@ struct holent_tfd_workspace
   size_t *pairs;
 };
 
+int
+holent_tfd_workspace_set_poll (holent_tfd_workspace *w,
+                               const holent_poll *poll)
+{
+  if (w == NULL)
+    return HOLENT_EINVAL;
+  return holent_rt_set_poll (w->rt, poll);
+}
+
 holent_tfd_workspace *
 holent_tfd_workspace_alloc (size_t nmax)
 {

@@ -104,6 +104,9 @@ typedef struct holent_tfd_workspace holent_tfd_workspace;
 /* Workspace for two-sided regions of up to nmax intervals in all.  */
 holent_tfd_workspace *holent_tfd_workspace_alloc (size_t nmax);
 void holent_tfd_workspace_free (holent_tfd_workspace *w);
+/* Long minimisations poll (Ctrl-C): see holent_rt_set_poll.  */
+int holent_tfd_workspace_set_poll (holent_tfd_workspace *w,
+                                   const holent_poll *poll);
 
 /* A side of a two-sided region: n intervals [a, b] with times ta, tb
    (n = 0: nothing on that side).  */
