@@ -3,34 +3,29 @@
 
 ## bench_thermo (): btz_thermodynamics on 10^6 states (T, Omega) against the
 ## same closed forms written as vectorised Octave expressions, in one run.
-## Prints both times and the ratio ours/peer (target <= 1).
+## Prints n, both times (medians), the ratio ours/peer (target <= 1) and
+## the largest relative difference.
 function bench_thermo ()
   n = 1e6;
-  reps = 5;
+  reps = 7;
   c = 12;  L = 3;
   T = 0.05 + 2 * rand (n, 1);
   Om = 1.98 * rand (n, 1) - 0.99;
-  th = btz_thermodynamics ("T", T, "Omega", Om, "c", c, "circumference", L);
-  p = peer (T, Om, c, L);  # warm up
-  t_ours = inf;  t_peer = inf;
-  for r = 1:reps
-    t0 = tic ();
-    th = btz_thermodynamics ("T", T, "Omega", Om, "c", c, "circumference", L);
-    t_ours = min (t_ours, toc (t0));
-    t0 = tic ();
-    p = peer (T, Om, c, L);
-    t_peer = min (t_peer, toc (t0));
-  endfor
+  ours = @() btz_thermodynamics ("T", T, "Omega", Om, "c", c,
+                                 "circumference", L);
+  [t_ours, th] = median_time (ours, reps);
+  [t_peer, p] = median_time (@() peer (T, Om, c, L), reps);
   d = 0;
   for f = setdiff (fieldnames (p), {"saddle"})'
     d = max (d, max (abs (th.(f{1}) - p.(f{1})) ./ max (abs (p.(f{1})), 1e-300)));
   endfor
-  printf ("%-28s %12s %12s %8s %12s\n", "case (10^6 states)", "holent [s]",
+  printf ("load average: %s\n", strtrim (fileread ("/proc/loadavg")));
+  printf ("%-28s %8s %12s %12s %8s %12s\n", "case", "n", "holent [s]",
           "octave [s]", "ratio", "max rel diff");
-  printf ("%-28s %12.4f %12.4f %8.2f %12.2e\n", "all fields from (T, Omega)",
-          t_ours, t_peer, t_ours / t_peer, d);
+  printf ("%-28s %8d %12.4f %12.4f %8.2f %12.2e\n",
+          "all fields from (T, Omega)", n, t_ours, t_peer, t_ours / t_peer, d);
   printf ("saddles agree: %d\n", isequal (th.saddle, p.saddle));
-  printf ("(best of %d runs each; ratio = holent / plain Octave, target <= 1)\n", reps);
+  printf ("(medians of %d runs each; ratio = holent / plain Octave, target <= 1)\n", reps);
 endfunction
 
 ## The same outputs in plain Octave (doc/btz_thermodynamics.md).

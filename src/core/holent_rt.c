@@ -313,7 +313,8 @@ fill_weights (dp *d, const holent_geo_bg *bg)
         w[t] = d->y[s + 2 * t + 1] - d->y[s];
       if (d->cost == NULL)
         {
-          holent_vmath_arc_lengths (bg, m, w, w);
+          /* ascending arcs: the very kernel of the sweep's columns */
+          holent_vmath_arc_lengths_sorted (bg, m, w, w);
           continue;
         }
       for (size_t t = 0; t < m; t++)
@@ -439,23 +440,12 @@ backtrack (const dp *d, size_t s0, size_t m0, size_t *stack, size_t *pi,
  *   T[s] = min(A[s] + T[P[s] + 1], c(y[e] - y[s]) + T[s + 1]),
  * in the order of the DP's sums, so both give the same numbers.  full
  * (if non-NULL) receives T[s] for each run of exactly cap points.  */
-/* Column e at start s (the first of its column when first): the kept
-   partner against the new point e, whose length is c.  */
+/* A new partner e of s at cost v (rare: a few per point), logged when
+   the unwinding needs it.  */
 static inline void
-sweep_step (sweep_state *st, size_t s, size_t e, double c, int first)
+sweep_take (sweep_state *st, size_t s, size_t e, double v, int first)
 {
-  double *restrict T = st->T;
-  double vnew = c + T[s + 1];
-  if (!first)
-    {
-      double vold = st->A[s] + T[st->P[s] + 1];
-      if (!(vnew < vold))  /* ties keep the earlier partner */
-        {
-          T[s] = vold;
-          return;
-        }
-    }
-  T[s] = st->A[s] = vnew;
+  st->T[s] = st->A[s] = v;
   st->P[s] = e;
   if (st->logging)
     {
@@ -472,6 +462,20 @@ sweep_step (sweep_state *st, size_t s, size_t e, double c, int first)
     }
 }
 
+/* Column e at start s, not its first: the kept partner against the new
+   point e, whose length is c.  Ties keep the earlier partner.  */
+static inline void
+sweep_step (sweep_state *st, size_t s, size_t e, double c)
+{
+  double *restrict T = st->T;
+  double vnew = c + T[s + 1];
+  double vold = st->A[s] + T[st->P[s] + 1];
+  if (__builtin_expect (vnew < vold, 0))
+    sweep_take (st, s, e, vnew, 0);
+  else
+    T[s] = vold;
+}
+
 /* The lengths of column e into c (starts e - 1, e - 3, ..., at most cap
    points from the start a on); returns their number.  */
 static size_t
@@ -482,8 +486,16 @@ sweep_column (sweep_state *st, const holent_geo_bg *bg, const double *y,
   if ((e - 1 - lo) & 1)
     lo++;
   size_t J = (e - 1 - lo) / 2 + 1;
-  for (size_t j = 0; j < J; j++)
-    st->arc[j] = uarc (y, N, e - 1 - 2 * j, e);
+  /* uarc without its branch: the starts on the second turn come first */
+  size_t jN = e - 1 >= N ? (e - 1 - N) / 2 + 1 : 0;
+  if (jN > J)
+    jN = J;
+  double *restrict arc = st->arc;
+  const double y2 = e >= N ? y[e - N] : 0.0, y1 = y[e];
+  for (size_t j = 0; j < jN; j++)
+    arc[j] = y2 - y[e - 1 - 2 * j - N];
+  for (size_t j = jN; j < J; j++)
+    arc[j] = y1 - y[e - 1 - 2 * j];
   holent_vmath_arc_lengths_sorted (bg, J, st->arc, c);  /* ascending */
   return J;
 }
@@ -510,14 +522,21 @@ sweep_run (sweep_state *st, const holent_geo_bg *bg, const double *y,
           T[e + 1] = 0.0;
           J1 = sweep_column (st, bg, y, N, a, cap, e + 1, c1);
         }
-      size_t Jm = J0 > J1 ? J0 : J1;
-      for (size_t j = 0; j < Jm; j++)
+      /* the first start of each column (the pair (e-1, e)), then both
+         columns in step, then the longer one's tail */
+      sweep_take (st, e - 1, e, c0[0] + T[e], 1);
+      if (J1 > 0)
+        sweep_take (st, e, e + 1, c1[0] + T[e + 1], 1);
+      size_t Jc = J0 < J1 ? J0 : J1, j = 1;
+      for (; j < Jc; j++)
         {
-          if (j < J0)
-            sweep_step (st, e - 1 - 2 * j, e, c0[j], j == 0);
-          if (j < J1)
-            sweep_step (st, e - 2 * j, e + 1, c1[j], j == 0);
+          sweep_step (st, e - 1 - 2 * j, e, c0[j]);
+          sweep_step (st, e - 2 * j, e + 1, c1[j]);
         }
+      for (; j < J0; j++)
+        sweep_step (st, e - 1 - 2 * j, e, c0[j]);
+      for (; j < J1; j++)
+        sweep_step (st, e - 2 * j, e + 1, c1[j]);
       if (full && e + 1 >= a + cap)
         full[e + 1 - cap] = T[e + 1 - cap];
       if (full && two && e + 2 >= a + cap)

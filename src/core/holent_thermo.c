@@ -3,6 +3,7 @@
  * Derivations: doc/btz_thermodynamics.md.  GPL-3.0-or-later.  */
 #include <float.h>
 #include <math.h>
+#include <string.h>
 #include "holent_thermo.h"
 
 #ifndef M_PI
@@ -152,25 +153,14 @@ to_uv (double c, double L, double R, holent_thermo_pair pair, double a,
     }
 }
 
-int
-holent_thermo_state_from (double c, double ell, double L,
-                          holent_thermo_pair pair, double a, double b,
-                          holent_thermo_state *st, int *reason)
+/* The state from (u, v, w) on a circle of circumference L (R = L/(2 pi)
+ * or ell), every field but the echo of the given pair.  Straight-line
+ * code (one select, no branch): the loop of holent_thermo_states
+ * vectorises it, and one state gets the very same numbers.  */
+static inline void
+derive (double c, double L, double R, double u, double v, double w,
+        holent_thermo_state *st)
 {
-  double u, v, w;
-  if (reason)
-    *reason = HOLENT_THERMO_OK;
-  if (st == NULL || isnan (c) || isnan (ell) || isnan (L))
-    return refuse (reason, HOLENT_THERMO_PARAM, HOLENT_EINVAL);
-  if (!params_ok (c, ell, L))
-    return refuse (reason, HOLENT_THERMO_PARAM, HOLENT_EDOM);
-  /* R = L/(2 pi), taken as ell itself in the default frame L = 2 pi ell so
-     that |J| = M ell is exactly extremal there */
-  const double R = L == 2 * M_PI * ell ? ell : L * (1 / (2 * M_PI));
-  int status = to_uv (c, L, R, pair, a, b, &u, &v, &w, reason);
-  if (status)
-    return status;
-
   const double e = 1 / R; /* energy unit of the circle, 2 pi/L */
   const double sum = u + v;      /* 2 r_+ > 0 */
   const double isum = 1 / sum, iL = 1 / L;
@@ -188,15 +178,12 @@ holent_thermo_state_from (double c, double ell, double L,
   st->C_Omega = st->S; /* S is linear in T at fixed Omega */
   {
     /* C_J = (pi c/6) (u + v) u v/(u^2 - u v + v^2), scaled by max(u, v)
-       where the squares could overflow */
+       where the squares could overflow (x/1 = x exactly: no scaling
+       below) */
     double big = u > v ? u : v;
-    if (big < 1e150)
-      st->C_J = M_PI * c / 6 * sum * u * v / (u * u - u * v + v * v);
-    else
-      {
-        double p = u / big, q = v / big;
-        st->C_J = M_PI * c / 6 * sum * p * q / (p * p - p * q + q * q);
-      }
+    double dv = big < 1e150 ? 1.0 : big;
+    double p = u / dv, q = v / dv;
+    st->C_J = M_PI * c / 6 * sum * p * q / (p * p - p * q + q * q);
   }
   st->horizon_length = M_PI * sum;
   st->L0 = c / 24 * (u * u + 1);
@@ -204,46 +191,166 @@ holent_thermo_state_from (double c, double ell, double L,
   st->F_thermal_ads = -e * c / 12;
   /* F < F_thermal_ads  <=>  u v > 1  <=>  beta_L beta_R < L^2 */
   st->btz_dominates = u * v > 1;
+}
 
-  /* Echo the given pair exactly (no round trip).  */
-  switch (pair)
-    {
-    case HOLENT_THERMO_RADII:
-      st->r_plus = a;
-      st->r_minus = b;
-      break;
-    case HOLENT_THERMO_T_OMEGA:
-      st->T = a;
-      st->Omega = b;
-      st->Omega_J = e * b;
-      break;
-    case HOLENT_THERMO_T_LR:
-      st->T_L = a;
-      st->T_R = b;
-      break;
-    case HOLENT_THERMO_M_J:
-      st->M = a;
-      st->J = b;
-      break;
-    default:
-      break;
-    }
+/* Echo the given pair exactly (no round trip); e = 1/R.  Selects on the
+   loop-invariant pair, so the block loop stays straight.  */
+static inline void
+echo (holent_thermo_pair pair, double a, double b, double e,
+      holent_thermo_state *st)
+{
+  const int radii = pair == HOLENT_THERMO_RADII;
+  const int tom = pair == HOLENT_THERMO_T_OMEGA;
+  const int tlr = pair == HOLENT_THERMO_T_LR;
+  const int mj = pair == HOLENT_THERMO_M_J;
+  st->r_plus = radii ? a : st->r_plus;
+  st->r_minus = radii ? b : st->r_minus;
+  st->T = tom ? a : st->T;
+  st->Omega = tom ? b : st->Omega;
+  st->Omega_J = tom ? e * b : st->Omega_J;
+  st->T_L = tlr ? a : st->T_L;
+  st->T_R = tlr ? b : st->T_R;
+  st->M = mj ? a : st->M;
+  st->J = mj ? b : st->J;
+}
 
-  const double all[] = { st->r_plus, st->r_minus, st->M, st->J, st->T,
-                         st->Omega, st->Omega_J, st->T_L, st->T_R, st->S,
-                         st->F, st->C_Omega, st->C_J, st->horizon_length,
-                         st->L0, st->Lbar0, st->F_thermal_ads };
-  for (size_t k = 0; k < sizeof all / sizeof all[0]; k++)
-    if (!isfinite (all[k]))
-      return refuse (reason, HOLENT_THERMO_RANGE, HOLENT_EDOM);
+/* 0 for a state whose every field is finite, NaN otherwise (0 x = 0
+   exactly for finite x): a test without a branch.  */
+static inline double
+nonfinite (const holent_thermo_state *st)
+{
+  return 0 * st->r_plus + 0 * st->r_minus + 0 * st->M + 0 * st->J
+         + 0 * st->T + 0 * st->Omega + 0 * st->Omega_J + 0 * st->T_L
+         + 0 * st->T_R + 0 * st->S + 0 * st->F + 0 * st->C_Omega
+         + 0 * st->C_J + 0 * st->horizon_length + 0 * st->L0
+         + 0 * st->Lbar0 + 0 * st->F_thermal_ads;
+}
+
+/* R = L/(2 pi), taken as ell itself in the default frame L = 2 pi ell so
+   that |J| = M ell is exactly extremal there.  */
+static inline double
+radius_of (double ell, double L)
+{
+  return L == 2 * M_PI * ell ? ell : L * (1 / (2 * M_PI));
+}
+
+int
+holent_thermo_state_from (double c, double ell, double L,
+                          holent_thermo_pair pair, double a, double b,
+                          holent_thermo_state *st, int *reason)
+{
+  double u, v, w;
+  if (reason)
+    *reason = HOLENT_THERMO_OK;
+  if (st == NULL || isnan (c) || isnan (ell) || isnan (L))
+    return refuse (reason, HOLENT_THERMO_PARAM, HOLENT_EINVAL);
+  if (!params_ok (c, ell, L))
+    return refuse (reason, HOLENT_THERMO_PARAM, HOLENT_EDOM);
+  const double R = radius_of (ell, L);
+  int status = to_uv (c, L, R, pair, a, b, &u, &v, &w, reason);
+  if (status)
+    return status;
+  derive (c, L, R, u, v, w, st);
+  echo (pair, a, b, 1 / R, st);
+  if (!(nonfinite (st) == 0))
+    return refuse (reason, HOLENT_THERMO_RANGE, HOLENT_EDOM);
   return HOLENT_SUCCESS;
 }
 
-#define PUT(col, val)                                                   \
+#define TH_BLOCK 256
+
+/* Columns of a block of states (structure of arrays).  */
+typedef struct
+{
+  double r_plus[TH_BLOCK], r_minus[TH_BLOCK], M[TH_BLOCK], J[TH_BLOCK],
+      T[TH_BLOCK], Omega[TH_BLOCK], Omega_J[TH_BLOCK], T_L[TH_BLOCK],
+      T_R[TH_BLOCK], S[TH_BLOCK], F[TH_BLOCK], C_J[TH_BLOCK],
+      horizon_length[TH_BLOCK], L0[TH_BLOCK], Lbar0[TH_BLOCK],
+      F_thermal_ads[TH_BLOCK], dom[TH_BLOCK], u[TH_BLOCK], v[TH_BLOCK], w[TH_BLOCK],
+      L[TH_BLOCK];
+} th_block;
+
+#define TH_PUT(col)                                                     \
   do {                                                                  \
     if (out->col)                                                       \
-      out->col[i] = (val);                                              \
+      memcpy (out->col + i0, B->col, m * sizeof (double));              \
   } while (0)
+
+/* m <= TH_BLOCK states from a[i sa], b[i sb], L[i sL] into the rows from
+   i0 of out; returns the number refused (their rows hold no promise).  */
+static long
+states_block (double c, double ell, holent_thermo_pair pair, size_t m,
+              const double *a, size_t sa, const double *b, size_t sb,
+              const double *L, size_t sL, const holent_thermo_table *out,
+              size_t i0)
+{
+  th_block blk, *B = &blk;
+  long nbad = 0;
+  for (size_t i = 0; i < m; i++)
+    {
+      const double Li = L[i * sL];
+      double u = 1, v = 1, w = 0;  /* a harmless stand-in when refused */
+      int st = !params_ok (c, ell, Li)
+               || to_uv (c, Li, radius_of (ell, Li), pair, a[i * sa],
+                         b[i * sb], &u, &v, &w, NULL);
+      nbad += st;
+      B->u[i] = st ? 1 : u;
+      B->v[i] = st ? 1 : v;
+      B->w[i] = st ? 0 : w;
+      B->L[i] = st ? 1 : Li;
+    }
+  double nf = 0;
+#pragma omp simd reduction(+ : nf)
+  for (size_t i = 0; i < m; i++)
+    {
+      holent_thermo_state s;
+      const double Li = B->L[i], R = radius_of (ell, Li);
+      derive (c, Li, R, B->u[i], B->v[i], B->w[i], &s);
+      echo (pair, a[i * sa], b[i * sb], 1 / R, &s);
+      nf += nonfinite (&s);
+      B->r_plus[i] = s.r_plus;
+      B->r_minus[i] = s.r_minus;
+      B->M[i] = s.M;
+      B->J[i] = s.J;
+      B->T[i] = s.T;
+      B->Omega[i] = s.Omega;
+      B->Omega_J[i] = s.Omega_J;
+      B->T_L[i] = s.T_L;
+      B->T_R[i] = s.T_R;
+      B->S[i] = s.S;
+      B->F[i] = s.F;
+      B->C_J[i] = s.C_J;
+      B->horizon_length[i] = s.horizon_length;
+      B->L0[i] = s.L0;
+      B->Lbar0[i] = s.Lbar0;
+      B->F_thermal_ads[i] = s.F_thermal_ads;
+      B->dom[i] = s.btz_dominates;
+    }
+  if (!(nf == 0))
+    nbad++;
+  TH_PUT (r_plus);
+  TH_PUT (r_minus);
+  TH_PUT (M);
+  TH_PUT (J);
+  TH_PUT (T);
+  TH_PUT (Omega);
+  TH_PUT (Omega_J);
+  TH_PUT (T_L);
+  TH_PUT (T_R);
+  TH_PUT (S);
+  TH_PUT (F);
+  if (out->C_Omega)
+    memcpy (out->C_Omega + i0, B->S, m * sizeof (double));
+  TH_PUT (C_J);
+  TH_PUT (horizon_length);
+  TH_PUT (L0);
+  TH_PUT (Lbar0);
+  TH_PUT (F_thermal_ads);
+  if (out->btz_dominates)
+    for (size_t i = 0; i < m; i++)
+      out->btz_dominates[i0 + i] = (unsigned char) B->dom[i];
+  return nbad;
+}
 
 int
 holent_thermo_states (double c, double ell, holent_thermo_pair pair,
@@ -262,36 +369,19 @@ holent_thermo_states (double c, double ell, holent_thermo_pair pair,
                sL = step ? step[2] : 1;
   long nbad = 0;
 
-  /* Refused states are only counted here and located afterwards, so the
-     loop has no early exit and parallelises.  */
+  /* Blocks of TH_BLOCK states: the pair to (u, v, w) one by one (refused
+     states are only counted here and located afterwards, so the loop has
+     no early exit and parallelises), then every field of the block in
+     one straight loop, then the columns that were asked for.  */
+  const long nblk = (long) ((n + TH_BLOCK - 1) / TH_BLOCK);
 #pragma omp parallel for schedule(static) reduction(+ : nbad) if (nn > 20000)
-  for (long i = 0; i < nn; i++)
+  for (long k = 0; k < nblk; k++)
     {
-      holent_thermo_state st;
-      if (holent_thermo_state_from (c, ell, L ? L[i * sL] : Ldef, pair,
-                                    a[i * sa], b[i * sb], &st, NULL))
-        {
-          nbad++;
-          continue;
-        }
-      PUT (r_plus, st.r_plus);
-      PUT (r_minus, st.r_minus);
-      PUT (M, st.M);
-      PUT (J, st.J);
-      PUT (T, st.T);
-      PUT (Omega, st.Omega);
-      PUT (Omega_J, st.Omega_J);
-      PUT (T_L, st.T_L);
-      PUT (T_R, st.T_R);
-      PUT (S, st.S);
-      PUT (F, st.F);
-      PUT (C_Omega, st.C_Omega);
-      PUT (C_J, st.C_J);
-      PUT (horizon_length, st.horizon_length);
-      PUT (L0, st.L0);
-      PUT (Lbar0, st.Lbar0);
-      PUT (F_thermal_ads, st.F_thermal_ads);
-      PUT (btz_dominates, (unsigned char) st.btz_dominates);
+      size_t i0 = (size_t) k * TH_BLOCK;
+      size_t m = n - i0 < TH_BLOCK ? n - i0 : TH_BLOCK;
+      nbad += states_block (c, ell, pair, m, a + i0 * sa, sa, b + i0 * sb,
+                            sb, L ? L + i0 * sL : &Ldef, L ? sL : 0, out,
+                            i0);
     }
 
   if (nbad > 0)

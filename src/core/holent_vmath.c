@@ -14,6 +14,7 @@
 __attribute__ ((simd ("notinbranch"))) double log (double);
 __attribute__ ((simd ("notinbranch"))) double sin (double);
 __attribute__ ((simd ("notinbranch"))) double expm1 (double);
+__attribute__ ((simd ("notinbranch"))) double exp (double);
 #if defined(__ELF__)
 #define VM_CLONES __attribute__ ((target_clones ("avx2", "default")))
 #endif
@@ -103,6 +104,68 @@ holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
 /* Above this x, expm1(-2x) rounds to -1 and log sinh x = x - log 2
    exactly (e^-38 is below half an ulp of 1).  */
 #define LNSINH_LINEAR 19.0
+/* From this x on, log(-expm1(-2x)) = log1p(-u), u = e^-2x <= e^-6, is its
+   Taylor series to u^6: the remainder u^7/7 < 1e-19, far below an ulp of
+   log sinh x >= 2.3, and the rounding of 1 - u that the log form suffers
+   (1e-16 absolute) is gone.  One exp instead of an expm1 and a log.  */
+#define LNSINH_SERIES 3.0
+
+/* First index in ascending arc[0..n) with k arc >= x0 (bisection).  */
+static size_t
+first_at_least (double k, double x0, size_t lo, size_t n, const double *arc)
+{
+  size_t hi = n;
+  while (lo < hi)
+    {
+      size_t mid = lo + (hi - lo) / 2;
+      if (k * arc[mid] >= x0)
+        hi = mid;
+      else
+        lo = mid + 1;
+    }
+  return lo;
+}
+
+VM_CLONES static void
+lnsinh_series (double k, size_t n, const double *arc, double *g)
+{
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    {
+      double x = k * arc[i], u = exp (-2.0 * x);
+      double p = 1.0 / 5 + u * (1.0 / 6);
+      p = 1.0 / 4 + u * p;
+      p = 1.0 / 3 + u * p;
+      p = 1.0 / 2 + u * p;
+      p = 1.0 + u * p;
+      g[i] = x - M_LN2 + -(u * p);
+    }
+}
+
+VM_CLONES static void
+lnsinh_full (double k, size_t n, const double *arc, double *g)
+{
+#pragma omp simd
+  for (size_t i = 0; i < n; i++)
+    g[i] = lnsinh (k * arc[i]);
+}
+
+/* g[i] = log sinh(k arc[i]) for ascending arcs: the log form below
+   LNSINH_SERIES, the series up to LNSINH_LINEAR, x - log 2 beyond.  g
+   may alias arc.  */
+static void
+lnsinh_sorted (double k, size_t n, const double *arc, double *g)
+{
+  size_t i1 = first_at_least (k, LNSINH_SERIES, 0, n, arc);
+  size_t i2 = first_at_least (k, LNSINH_LINEAR, i1, n, arc);
+  lnsinh_full (k, i1, arc, g);
+  lnsinh_series (k, i2 - i1, arc + i1, g + i1);
+#pragma omp simd
+  for (size_t i = i2; i < n; i++)
+    g[i] = k * arc[i] - M_LN2;
+}
+
+#define VM_BLOCK 512
 
 void
 holent_vmath_arc_lengths_sorted (const holent_geo_bg *bg, size_t n,
@@ -119,30 +182,25 @@ holent_vmath_arc_lengths_sorted (const holent_geo_bg *bg, size_t n,
     default:
       break;
     }
-  /* first arc in the linear range of both terms (bisection) */
-  const double k = bg->kL < bg->kR ? bg->kL : bg->kR;
-  size_t lo = 0, hi = n;
-  while (lo < hi)
-    {
-      size_t mid = lo + (hi - lo) / 2;
-      if (k * arc[mid] >= LNSINH_LINEAR)
-        hi = mid;
-      else
-        lo = mid + 1;
-    }
-  holent_vmath_arc_lengths (bg, lo, arc, len);
   const double pref = bg->pref, kL = bg->kL, kR = bg->kR;
   if (kL == kR)
     {
+      lnsinh_sorted (kL, n, arc, len);
 #pragma omp simd
-      for (size_t i = lo; i < n; i++)
-        len[i] = pref + 2.0 * (kL * arc[i] - M_LN2);
+      for (size_t i = 0; i < n; i++)
+        len[i] = pref + 2.0 * len[i];
+      return;
     }
-  else
+  /* two temperatures: blocks, each arc read before its length is put */
+  double gL[VM_BLOCK], gR[VM_BLOCK];
+  for (size_t i0 = 0; i0 < n; i0 += VM_BLOCK)
     {
+      size_t m = n - i0 < VM_BLOCK ? n - i0 : VM_BLOCK;
+      lnsinh_sorted (kL, m, arc + i0, gL);
+      lnsinh_sorted (kR, m, arc + i0, gR);
 #pragma omp simd
-      for (size_t i = lo; i < n; i++)
-        len[i] = pref + ((kL * arc[i] - M_LN2) + (kR * arc[i] - M_LN2));
+      for (size_t i = 0; i < m; i++)
+        len[i0 + i] = pref + (gL[i] + gR[i]);
     }
 }
 
@@ -167,8 +225,6 @@ point_arc (const holent_geo_bg *bg, double a, double b, double *arc)
   *arc = r;
   return r == 0.0 || r >= L ? HOLENT_ECOINCIDE : HOLENT_SUCCESS;
 }
-
-#define VM_BLOCK 512
 
 int
 holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
