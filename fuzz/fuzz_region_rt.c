@@ -168,8 +168,8 @@ LLVMFuzzerTestOneInput (const uint8_t *data, size_t size)
   size_t pairs[2 * NR];
   if (ws_dp == NULL)
     {
-      ws_dp = holent_rt_alloc_dp (NR);
-      ws_fast = holent_rt_alloc (NR);
+      ws_dp = holent_rt_workspace_alloc_dp (NR);
+      ws_fast = holent_rt_workspace_alloc (NR);
       reg = holent_region_alloc (NR);
       comp = holent_region_alloc (NR);
     }

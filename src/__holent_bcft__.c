@@ -600,7 +600,7 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   const char *name = tfd ? "R" : "A";
   size_t maxrows, nreg = holent_gw_regions (A, fn, name, &maxrows);
   holent_bcft_workspace *ws = ws_alloc (fn, name, maxrows);
-  holent_surface_workspace *sw = holent_surface_alloc ();
+  holent_surface_workspace *sw = holent_surface_workspace_alloc ();
   if (sw == NULL)
     {
       holent_bcft_workspace_free (ws);
@@ -624,7 +624,7 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
                                           poll);
       if (st)
         {
-          holent_surface_free (sw);
+          holent_surface_workspace_free (sw);
           mxDestroyArray (surf);
           region_raise (fn, name, A, k, ws, &err);
         }
@@ -700,7 +700,7 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
             mxDestroyArray (branes);
           mxDestroyArray (hc);
           mxDestroyArray (surf);
-          holent_surface_free (sw);
+          holent_surface_workspace_free (sw);
           holent_bcft_workspace_free (ws);
           holent_gw_raise (fn, st, "tol", HOLENT_NOINDEX, NULL);
         }
@@ -716,7 +716,7 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       mxSetField (surf, k, "horizon_depth", mxCreateDoubleScalar (depth));
     }
   holent_gw_poll_end ();
-  holent_surface_free (sw);
+  holent_surface_workspace_free (sw);
   holent_bcft_workspace_free (ws);
   plhs[0] = surf;
 }

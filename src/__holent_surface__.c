@@ -37,7 +37,7 @@ curve_out (const holent_curve *c, int with_t)
 static holent_surface_workspace *
 ws_new (const char *fn)
 {
-  holent_surface_workspace *w = holent_surface_alloc ();
+  holent_surface_workspace *w = holent_surface_workspace_alloc ();
   if (w == NULL)
     holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
   return w;
@@ -99,14 +99,14 @@ op_curves (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
       int st = holent_surface_geodesic (w, &bg, xa, xb, tol);
       if (st)
         {
-          holent_surface_free (w);
+          holent_surface_workspace_free (w);
           mxFree (pr);
           mxDestroyArray (cell);
           holent_gw_raise (fn, st, "geodesic", i, NULL);
         }
       mxSetCell (cell, i, curve_out (&w->cur, with_t));
     }
-  holent_surface_free (w);
+  holent_surface_workspace_free (w);
   mxFree (pr);
   plhs[0] = cell;
 }
@@ -136,7 +136,7 @@ op_runner (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
   int hor = 0;
   get_pairs (fn, prhs[4], 2 * n, pmin, n);
   holent_region *r = holent_region_alloc (n > 0 ? n : 1);
-  holent_surface_workspace *w = holent_surface_alloc ();
+  holent_surface_workspace *w = holent_surface_workspace_alloc ();
   int st = (r == NULL || w == NULL) ? HOLENT_ENOMEM : HOLENT_SUCCESS;
   if (!st)
     st = holent_region_set (r, bg.circle, bg.L, n, iv, iv + n);
@@ -146,7 +146,7 @@ op_runner (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
     st = holent_surface_runner_up (w, &bg, r, pmin, amin, hmin != 0.0, pr,
                                    arcs, &hor, &S);
   holent_region_free (r);
-  holent_surface_free (w);
+  holent_surface_workspace_free (w);
   if (st == HOLENT_EDOM)
     holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "the region has a "
                      "single RT candidate: there is no runner-up");
@@ -180,12 +180,12 @@ op_horizon (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
   int st = holent_surface_horizon (w, &bg, xa, xb, tol, &depth);
   if (st)
     {
-      holent_surface_free (w);
+      holent_surface_workspace_free (w);
       holent_gw_raise (fn, st, "BG", HOLENT_NOINDEX, NULL);
     }
   plhs[0] = curve_out (&w->cur, 0);
   plhs[1] = mxCreateDoubleScalar (depth);
-  holent_surface_free (w);
+  holent_surface_workspace_free (w);
 }
 
 static void
@@ -198,17 +198,17 @@ op_profile (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
   double top = holent_gw_scalar (prhs[4], fn, "TOP");
   double tol = holent_gw_scalar (prhs[5], fn, "TOL");
   holent_gw_hd_bg (prhs[2], fn, &bg);
-  holent_surface_workspace *w = holent_surface_alloc ();
+  holent_surface_workspace *w = holent_surface_workspace_alloc ();
   int st = w == NULL ? HOLENT_ENOMEM
                      : holent_surface_profile (w, &bg, ball != 0.0, top, tol);
   holent_hd_bg_free (&bg);
   if (st)
     {
-      holent_surface_free (w);
+      holent_surface_workspace_free (w);
       holent_gw_raise (fn, st, "profile", HOLENT_NOINDEX, NULL);
     }
   plhs[0] = curve_out (&w->cur, 0);
-  holent_surface_free (w);
+  holent_surface_workspace_free (w);
 }
 
 static void
@@ -242,7 +242,7 @@ op_boosted (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
       int st = holent_surface_geodesic_t (w, &bg, x1[i], t1[i], b, t2[i], tol);
       if (st)
         {
-          holent_surface_free (w);
+          holent_surface_workspace_free (w);
           mxDestroyArray (cell);
           if (st == HOLENT_ETIMELIKE)
             holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "endpoints %zu "
@@ -251,7 +251,7 @@ op_boosted (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
         }
       mxSetCell (cell, i, curve_out (&w->cur, 1));
     }
-  holent_surface_free (w);
+  holent_surface_workspace_free (w);
   plhs[0] = cell;
 }
 

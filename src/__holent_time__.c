@@ -65,7 +65,7 @@ static void
 release (gw_state *g)
 {
   holent_region_free (g->reg);
-  holent_rt_free (g->rt);
+  holent_rt_workspace_free (g->rt);
   holent_tfd_workspace_free (g->tw);
   free (g->tp);
   free (g->ts);
@@ -593,7 +593,7 @@ alloc_ws (gw_state *g, size_t nmax)
     fail (g, HOLENT_ETOOBIG, "A", HOLENT_NOINDEX,
            "at most %zu intervals per region", (size_t) HOLENT_RT_NMAX);
   g->reg = holent_region_alloc (nmax);
-  g->rt = holent_rt_alloc_dp (nmax);
+  g->rt = holent_rt_workspace_alloc_dp (nmax);
   g->tw = holent_tfd_workspace_alloc (nmax);
   g->tp = malloc (2 * nmax * sizeof (double));
   g->ts = malloc (nmax * sizeof (double));

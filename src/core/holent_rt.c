@@ -119,7 +119,7 @@ rt_alloc (size_t nmax, int dp)
        && sweep_alloc (&w->sw[0], 2 * N, N) && sweep_alloc (&w->sw[1], 2 * N, N);
   if (!ok)
     {
-      holent_rt_free (w);
+      holent_rt_workspace_free (w);
       return NULL;
     }
   w->nmax = nmax;
@@ -166,19 +166,19 @@ holent_rt_set_log_capacity (holent_rt_workspace *w, size_t records)
 }
 
 holent_rt_workspace *
-holent_rt_alloc (size_t nmax)
+holent_rt_workspace_alloc (size_t nmax)
 {
   return rt_alloc (nmax, 0);
 }
 
 holent_rt_workspace *
-holent_rt_alloc_dp (size_t nmax)
+holent_rt_workspace_alloc_dp (size_t nmax)
 {
   return rt_alloc (nmax, 1);
 }
 
 void
-holent_rt_free (holent_rt_workspace *w)
+holent_rt_workspace_free (holent_rt_workspace *w)
 {
   if (w == NULL)
     return;
@@ -932,7 +932,7 @@ holent_rt_batch_alloc (size_t nreg, size_t maxrows, size_t nmax, int dp)
   for (size_t t = 0; ok && t < nt; t++)
     {
       b->reg[t] = holent_region_alloc (maxrows);
-      b->ws[t] = dp ? holent_rt_alloc_dp (nmax) : holent_rt_alloc (nmax);
+      b->ws[t] = dp ? holent_rt_workspace_alloc_dp (nmax) : holent_rt_workspace_alloc (nmax);
       ok = b->reg[t] && b->ws[t];
       b->nthreads = t + 1;
     }
@@ -953,7 +953,7 @@ holent_rt_batch_free (holent_rt_batch *b)
   for (size_t t = 0; t < b->nthreads; t++)
     {
       holent_region_free (b->reg[t]);
-      holent_rt_free (b->ws[t]);
+      holent_rt_workspace_free (b->ws[t]);
     }
   free (b->reg);
   free (b->ws);

@@ -49,17 +49,17 @@ typedef struct holent_rt_workspace holent_rt_workspace;
 typedef enum
 {
   HOLENT_RT_AUTO = 0,  /* fast when the length is concave in the arc     */
-  HOLENT_RT_DP = 1,    /* the cubic DP (needs holent_rt_alloc_dp)        */
+  HOLENT_RT_DP = 1,    /* the cubic DP (needs holent_rt_workspace_alloc_dp)        */
   HOLENT_RT_FAST = 2   /* the sweep (HOLENT_EUNSUP for other costs)      */
 } holent_rt_method;
 
 /* Workspace for regions of up to nmax intervals, O(nmax) bytes, fast path
    only; NULL when nmax is 0 or on allocation failure.  */
-holent_rt_workspace *holent_rt_alloc (size_t nmax);
+holent_rt_workspace *holent_rt_workspace_alloc (size_t nmax);
 /* The same plus the tables of the cubic DP; NULL also when nmax exceeds
    HOLENT_RT_NMAX.  */
-holent_rt_workspace *holent_rt_alloc_dp (size_t nmax);
-void holent_rt_free (holent_rt_workspace *w);
+holent_rt_workspace *holent_rt_workspace_alloc_dp (size_t nmax);
+void holent_rt_workspace_free (holent_rt_workspace *w);
 
 /* The minimisers of w call poll->fn (poll->ctx, done, total) about every
    1e5 elementary steps (done and total in those steps) and return
@@ -126,7 +126,7 @@ typedef int (*holent_rt_cost) (void *ctx, size_t i, size_t j, double arc,
                                double *len);
 
 /* holent_rt_entropy with the lengths of cost, by the cubic DP (the
-   workspace must come from holent_rt_alloc_dp); the candidates, S_BH and
+   workspace must come from holent_rt_workspace_alloc_dp); the candidates, S_BH and
    the result are as there.  HOLENT_EINVAL for cost == NULL.  */
 int holent_rt_entropy_cost (holent_rt_workspace *w, const holent_geo_bg *bg,
                             const holent_region *r, holent_rt_cost cost,

@@ -10,13 +10,13 @@
 #include "holent_surface.h"
 
 holent_surface_workspace *
-holent_surface_alloc (void)
+holent_surface_workspace_alloc (void)
 {
   return calloc (1, sizeof (holent_surface_workspace));
 }
 
 void
-holent_surface_free (holent_surface_workspace *w)
+holent_surface_workspace_free (holent_surface_workspace *w)
 {
   if (w == NULL)
     return;

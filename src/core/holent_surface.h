@@ -65,8 +65,8 @@ typedef struct
   size_t *stack;
 } holent_surface_workspace;
 
-holent_surface_workspace *holent_surface_alloc (void);
-void holent_surface_free (holent_surface_workspace *w);
+holent_surface_workspace *holent_surface_workspace_alloc (void);
+void holent_surface_workspace_free (holent_surface_workspace *w);
 
 /* Picture kind of a background: 0 half plane (line), 1 disk (circle).  */
 int holent_surface_picture (const holent_geo_bg *bg);

@@ -254,7 +254,7 @@ holent_tfd_workspace_alloc (size_t nmax)
     return NULL;
   size_t N = 2 * nmax;
   w->nmax = nmax;
-  w->rt = holent_rt_alloc_dp (nmax);
+  w->rt = holent_rt_workspace_alloc_dp (nmax);
   w->reg[0] = holent_region_alloc (nmax);
   w->reg[1] = holent_region_alloc (nmax);
   w->fake = holent_region_alloc (nmax);
@@ -281,7 +281,7 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
 {
   if (w == NULL)
     return;
-  holent_rt_free (w->rt);
+  holent_rt_workspace_free (w->rt);
   holent_region_free (w->reg[0]);
   holent_region_free (w->reg[1]);
   holent_region_free (w->fake);

@@ -203,7 +203,7 @@ test_regions (void)
 {
   holent_geo_bg bg;
   holent_region *r = holent_region_alloc (8);
-  holent_rt_workspace *w = holent_rt_alloc_dp (8);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (8);
   holent_rt_result res, ref;
   double tp[16];
   size_t bi = 0, bj = 0, bad = 0;
@@ -269,7 +269,7 @@ test_regions (void)
   HT_CLOSE (res.S, ref.S, 1e-12);
   HT_STATUS (holent_hrt_entropy (NULL, &bg, r, tp, &res, NULL, NULL, &bi, &bj), HOLENT_EINVAL);
   holent_region_free (r);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
 }
 
 int

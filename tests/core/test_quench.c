@@ -182,7 +182,7 @@ test_regions (void)
 {
   holent_quench_bg q;
   holent_region *r = holent_region_alloc (4);
-  holent_rt_workspace *w = holent_rt_alloc_dp (4);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (4);
   holent_rt_result res, ref;
   HT_STATUS (holent_quench_init (&q, 0, 0, 1e-3, 1.0, 3.0), HOLENT_SUCCESS);
   double a[2] = { 0, 2.2 }, b[2] = { 2, 4 };
@@ -210,7 +210,7 @@ test_regions (void)
   HT_CHECK (res.S == 0.0, "whole circle %g", res.S);
   HT_STATUS (holent_quench_entropy (w, &q, r, NAN, &res, NULL, NULL), HOLENT_EINVAL);
   holent_region_free (r);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
 }
 
 /* The constructor and point distances.  */

@@ -177,7 +177,7 @@ test_against_enumeration (void)
                         HOLENT_BULK_BTZ, HOLENT_BULK_ROTATING_BTZ,
                         HOLENT_BULK_CONICAL_DEFECT };
   holent_region *r = holent_region_alloc (7);
-  holent_rt_workspace *w = holent_rt_alloc_dp (7);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (7);
   int nconf = 0;
   for (int method = HOLENT_RT_DP; method <= HOLENT_RT_FAST; method++)
   for (size_t ib = 0; ib < sizeof bulks / sizeof bulks[0]; ib++)
@@ -272,7 +272,7 @@ test_against_enumeration (void)
       }
   HT_CHECK (nconf > 400, "configurations compared: %d", nconf);
   holent_region_free (r);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
   gsl_rng_free (rng);
 }
 
@@ -312,13 +312,13 @@ test_errors (void)
 {
   holent_geo_bg line, circ;
   holent_rt_result res;
-  HT_CHECK (holent_rt_alloc (0) == NULL, "alloc(0)");
-  HT_CHECK (holent_rt_alloc_dp (0) == NULL, "alloc_dp(0)");
-  HT_CHECK (holent_rt_alloc_dp (HOLENT_RT_NMAX + 1) == NULL, "DP too big");
-  HT_CHECK (holent_rt_alloc ((size_t) -1 / 2) == NULL, "fast too big");
-  holent_rt_free (NULL);
-  holent_rt_workspace *w = holent_rt_alloc_dp (2);
-  holent_rt_workspace *wf = holent_rt_alloc (3);
+  HT_CHECK (holent_rt_workspace_alloc (0) == NULL, "alloc(0)");
+  HT_CHECK (holent_rt_workspace_alloc_dp (0) == NULL, "alloc_dp(0)");
+  HT_CHECK (holent_rt_workspace_alloc_dp (HOLENT_RT_NMAX + 1) == NULL, "DP too big");
+  HT_CHECK (holent_rt_workspace_alloc ((size_t) -1 / 2) == NULL, "fast too big");
+  holent_rt_workspace_free (NULL);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (2);
+  holent_rt_workspace *wf = holent_rt_workspace_alloc (3);
   holent_region *r = holent_region_alloc (3);
   holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
   holent_geo_bg_init (&circ, HOLENT_BULK_BTZ, 5, 1e-3, 1, 1, 1, 1);
@@ -340,7 +340,7 @@ test_errors (void)
                                        NULL, NULL), HOLENT_SUCCESS);
   HT_STATUS (holent_rt_set_log_capacity (wf, 0), HOLENT_EINVAL);
   HT_STATUS (holent_rt_set_log_capacity (NULL, 5), HOLENT_EINVAL);
-  holent_rt_free (wf);
+  holent_rt_workspace_free (wf);
   HT_STATUS (holent_region_set (r, 1, 6, 2, a, b), HOLENT_SUCCESS);
   HT_STATUS (holent_rt_entropy (w, &circ, r, &res, NULL, NULL), HOLENT_EINVAL);
   HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_EINVAL);
@@ -379,7 +379,7 @@ test_errors (void)
   HT_STATUS (holent_rt_entropy (w, &line, r, &res, NULL, NULL), HOLENT_SUCCESS);
   HT_CHECK (res.n_short == 1, "n_short = %zu", res.n_short);
   holent_region_free (r);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
 }
 
 /* The sweep against the DP on random regions of every bulk: the same
@@ -393,8 +393,8 @@ test_oracle (void)
   gsl_rng_set (rng, 11);
   const size_t nmax = 90;
   holent_region *r = holent_region_alloc (nmax);
-  holent_rt_workspace *w = holent_rt_alloc_dp (nmax);
-  holent_rt_workspace *ws = holent_rt_alloc (nmax);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (nmax);
+  holent_rt_workspace *ws = holent_rt_workspace_alloc (nmax);
   size_t *p1 = malloc (2 * nmax * sizeof *p1), *p2 = malloc (2 * nmax * sizeof *p2);
   double *a1 = malloc (nmax * sizeof *a1), *a2 = malloc (nmax * sizeof *a2);
   double *x = malloc (2 * nmax * sizeof *x), *a = malloc (nmax * sizeof *a),
@@ -467,8 +467,8 @@ test_oracle (void)
   free (a);
   free (b);
   holent_region_free (r);
-  holent_rt_free (w);
-  holent_rt_free (ws);
+  holent_rt_workspace_free (w);
+  holent_rt_workspace_free (ws);
   gsl_rng_free (rng);
 }
 
@@ -501,7 +501,7 @@ test_batch (void)
                                    .len = len[k] };
     }
   holent_region *r = holent_region_alloc (MR);
-  holent_rt_workspace *w = holent_rt_alloc (MR);
+  holent_rt_workspace *w = holent_rt_workspace_alloc (MR);
   for (size_t nr = 1; nr <= NR; nr += NR - 1)  /* 1 region, then 40 */
     {
       holent_rt_batch *b = holent_rt_batch_alloc (nr, MR, MR, 0);
@@ -551,7 +551,7 @@ test_batch (void)
   holent_rt_batch_free (b);
   holent_rt_batch_free (NULL);
   holent_region_free (r);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
   gsl_rng_free (rng);
 }
 
@@ -589,8 +589,8 @@ test_poll (void)
   holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0, 1e-3, 0, 0, 1, 1);
   holent_geo_bg_init (&btz, HOLENT_BULK_BTZ, 6, 1e-4, 0.8, 0.8, 1, 1);
   holent_region *rl = holent_region_alloc (n), *rc = holent_region_alloc (n);
-  holent_rt_workspace *w = holent_rt_alloc (n);
-  holent_rt_workspace *wd = holent_rt_alloc_dp (300);
+  holent_rt_workspace *w = holent_rt_workspace_alloc (n);
+  holent_rt_workspace *wd = holent_rt_workspace_alloc_dp (300);
   double *a = malloc (n * sizeof *a), *b = malloc (n * sizeof *b);
   for (size_t k = 0; k < n; k++)
     {
@@ -666,8 +666,8 @@ test_poll (void)
   free (pairs);
   holent_region_free (rl);
   holent_region_free (rc);
-  holent_rt_free (w);
-  holent_rt_free (wd);
+  holent_rt_workspace_free (w);
+  holent_rt_workspace_free (wd);
 }
 
 static void
@@ -681,7 +681,7 @@ test_large (void)
   holent_geo_bg bg;
   holent_geo_bg_init (&bg, HOLENT_BULK_BTZ, L, 1e-6, 0.3, 0.3, 1, 1);
   holent_region *r = holent_region_alloc (n), *rc = holent_region_alloc (n);
-  holent_rt_workspace *w = holent_rt_alloc (n);
+  holent_rt_workspace *w = holent_rt_workspace_alloc (n);
   double *a = malloc (n * sizeof *a), *b = malloc (n * sizeof *b);
   double *ac = malloc (n * sizeof *a), *bc = malloc (n * sizeof *b);
   for (size_t k = 0; k < n; k++)
@@ -704,7 +704,7 @@ test_large (void)
   free (bc);
   holent_region_free (r);
   holent_region_free (rc);
-  holent_rt_free (w);
+  holent_rt_workspace_free (w);
 }
 
 int

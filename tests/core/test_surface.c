@@ -9,7 +9,7 @@ int
 main (void)
 {
   holent_geo_bg bg, bc, bb;
-  holent_surface_workspace *w = holent_surface_alloc ();
+  holent_surface_workspace *w = holent_surface_workspace_alloc ();
   HT_CHECK (w != NULL, "alloc");
   HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_POINCARE, 0, 1e-6, 0, 0, 1, 1), 0);
   HT_STATUS (holent_geo_bg_init (&bc, HOLENT_BULK_GLOBAL_ADS, 2 * M_PI, 1e-6, 0, 0, 1, 1), 0);
@@ -78,7 +78,7 @@ main (void)
   HT_STATUS (holent_surface_profile (w, &hb, 1, NAN, 1e-6), HOLENT_EINVAL);
   HT_STATUS (holent_surface_profile (NULL, &hb, 1, 1, 1e-6), HOLENT_EINVAL);
 
-  holent_surface_free (w);
-  holent_surface_free (NULL);
+  holent_surface_workspace_free (w);
+  holent_surface_workspace_free (NULL);
   return HT_DONE ();
 }
