@@ -60,7 +60,6 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
     [Svec, masks] = __holent_time_unions__ ("vector", fn, bg, parties, varargin);
     return;
   endif
-  __holent_background__ ("check", fn, bg);   # BG is read below
   if (! iscell (parties) || isempty (parties))
     error ("holent:type", "%s: PARTIES must be a non-empty cell array of regions (n x 2 matrices)", fn);
   endif
@@ -80,13 +79,6 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
     error ("holent:toobig", "%s: at most %d parties%s, got %d", fn, Nmax,
            merge (purifier, " besides the purifier", ""), N);
   endif
-  if (purifier && ! bg.pure && ! bg.horizon)
-    error ("holent:mixed",
-           ["%s: BG (%s) is a mixed state without a horizon: its purifier is " ...
-            "not a boundary region and has no RT surface here; the purifier " ...
-            "is available for pure states and, as the thermofield double, " ...
-            "for backgrounds with a horizon"], fn, bg.bulk);
-  endif
   parties = parties(:).';
   for j = 1:N
     a = parties{j};
@@ -104,6 +96,14 @@ function [Svec, masks] = entropy_vector (bg, parties, varargin)
   ## Each party alone first (the core names it, PARTIES{j}), then the
   ## parties for disjointness (naming the two rows that meet).
   [S1, nshort] = __holent_rt__ ("entropy", fn, "PARTIES", bg, parties);
+  ## BG is read only now, after its gateway checked it
+  if (purifier && ! bg.pure && ! bg.horizon)
+    error ("holent:mixed",
+           ["%s: BG (%s) is a mixed state without a horizon: its purifier is " ...
+            "not a boundary region and has no RT surface here; the purifier " ...
+            "is available for pure states and, as the thermofield double, " ...
+            "for backgrounds with a horizon"], fn, bg.bulk);
+  endif
   if (N > 1)
     names = arrayfun (@(j) sprintf ("PARTIES{%d}", j), 1:N, "uniformoutput", false);
     __holent_rt__ ("parties", fn, names(:), false (N, 1), bg.circumference, parties(:));

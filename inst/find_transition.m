@@ -78,11 +78,6 @@ function [x, info] = find_transition (kind, varargin)
       endif
       x = zeros (size (bgs));  found = false (size (bgs));
       for k = 1:numel (bgs)
-        __holent_background__ ("check", fn, bgs{k});   # read below
-        if (! strcmp (bgs{k}.boundary, "circle") || ! bgs{k}.horizon)
-          error ("holent:unsupported", "%s: the plateau needs a circle with a horizon (BG is %s)",
-                 fn, bgs{k}.bulk);
-        endif
         [x(k), found(k)] = __holent_transition__ ("plateau", fn, bgs{k});
       endfor
       info.below = repmat ({"geodesic"}, size (x));
@@ -95,12 +90,7 @@ function [x, info] = find_transition (kind, varargin)
         print_usage ();
       endif
       [bg, l1, l2] = deal (varargin{:});
-      __holent_background__ ("check", fn, bg);   # read below
       [l1, l2] = sizes_ (fn, l1, l2, "L1", "L2");
-      if (strcmp (bg.boundary, "circle") && (bg.horizon || bg.alpha < 1))
-        error ("holent:unsupported", "%s: %s transitions are available on lines and on circles without a horizon or a defect, not in %s",
-               fn, kind, bg.bulk);
-      endif
       [x, found] = __holent_transition__ ("separation", fn, bg, l1, l2);
       info.below = repmat ({"connected"}, size (x));
       info.above = repmat ({"disconnected"}, size (x));

@@ -103,8 +103,23 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       mxDestroyArray (X);
       mxDestroyArray (F);
       if (st == HOLENT_EUNSUP)
-        holent_gw_raise (fn, st, "BG", HOLENT_NOINDEX, "this transition is "
-                         "not available for this background");
+        {
+          char bulk[32] = "this background";
+          const mxArray *b = mxGetField (prhs[2], 0, "bulk");
+          if (b != NULL && mxIsChar (b))
+            mxGetString (b, bulk, sizeof bulk);
+          if (op == PLATEAU)
+            holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "the plateau "
+                             "needs a circle with a horizon (BG is %s)",
+                             bulk);
+          if (op == SEPARATION)
+            holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "separation "
+                             "transitions (mutual information, wedge) are "
+                             "available on lines and on circles without a "
+                             "horizon or a defect, not in %s", bulk);
+          holent_gw_raise (fn, st, "BG", HOLENT_NOINDEX, "this transition "
+                           "is not available for this background");
+        }
       holent_gw_raise (fn, st, shape ? an[op][0] : "BG",
                        shape ? bad : HOLENT_NOINDEX, NULL);
     }
