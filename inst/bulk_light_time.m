@@ -28,13 +28,13 @@ function [tb, tl] = bulk_light_time (bg, x1, x2, varargin)
     print_usage ();
   endif
   o = __holent_opts__ (fn, {"tol"}, varargin);
-  __holent_time_entropy__ ("check", fn, bg);
-  tol = [];   # the core's default, 1e-9 times the circumference
+  tol = {};   # the core's default, 1e-9 times the circumference
   if (isfield (o, "tol"))
-    tol = __holent_scalar__ (fn, "tol", o.tol, "nonnegative");
+    tol = __holent_time_entropy__ ("double", o.tol);   # the gateway checks it
+    tol = {tol};
   endif
   [x1, x2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2"}, x1, x2);
-  [tb, tl] = __holent_time__ ("light", fn, bg, x1, x2, tol);
+  [tb, tl] = __holent_time__ ("light", fn, bg, x1, x2, tol{:});
 endfunction
 
 %!test

@@ -94,7 +94,6 @@ endfunction
 
 ## Covariant lengths, two-sided lengths and the quench (doc/hrt_time.md).
 function len = timed_length (fn, bg, x1, x2, cls, o)
-  __holent_time_entropy__ ("check", fn, bg);
   t1 = t2 = 0;
   if (isfield (o, "t1"))
     t1 = __holent_array__ (fn, "t1", o.t1);
@@ -106,7 +105,9 @@ function len = timed_length (fn, bg, x1, x2, cls, o)
   if (isfield (o, "t"))
     t = __holent_scalar__ (fn, "t", o.t, "real");
   endif
-  side = {1, 1};
+  ## [] is the right side; a side given is for a thermofield double only
+  ## (the gateway says so), as is t1 == t2 on a quench.
+  side = {[], []};
   names = {"side1", "side2"};
   for k = 1:2
     if (isfield (o, names{k}))
@@ -114,22 +115,17 @@ function len = timed_length (fn, bg, x1, x2, cls, o)
       if (! ischar (v) || ! any (strcmpi (v, {"left", "right"})))
         error ("holent:option", "%s: '%s' must be \"left\" or \"right\"", fn, names{k});
       endif
-      if (! __holent_time_entropy__ ("state", bg, "tfd"))
-        error ("holent:option", "%s: '%s' applies to a thermofield double (ads3_background (\"tfd\", ...)) only",
-               fn, names{k});
-      endif
-      side{k} = strcmpi (v, "right");
+      side{k} = double (strcmpi (v, "right"));
     endif
   endfor
   tl = __holent_time_entropy__ ("timelike", fn, o);
   [x1, x2, t1, t2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2", "t1", "t2"},
                                               x1, x2, t1 + t, t2 + t);
-  z = zeros (size (x1));
-  if (__holent_time_entropy__ ("state", bg, "quench") && any (t1(:) != t2(:)))
-    error ("holent:unsupported", "%s: on a quench both ends live at the time 't' (t1 and t2 must agree)", fn);
-  endif
-  [re, im] = __holent_time__ ("geodesic", fn, bg, x1, t1, side{1} + z, x2, t2,
-                              side{2} + z, cls, double (tl));
+  for k = find (! cellfun ("isempty", side))
+    side{k} += zeros (size (x1));
+  endfor
+  [re, im] = __holent_time__ ("geodesic", fn, bg, x1, t1, side{1}, x2, t2,
+                              side{2}, cls, double (tl));
   if (any (im(:)))
     len = complex (re, im);
   else

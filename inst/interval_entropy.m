@@ -123,10 +123,14 @@ function [S, branch] = bcft_intervals (fn, bg, l, args)
   endif
 endfunction
 
-## The time path: boosted intervals, the quench, the timelike branch.
+## The time path: boosted intervals, the quench, the timelike branch.  The
+## gateway checks BG, the lengths against the boundary and 'dt' against
+## the state, and returns the entropies (the core's, c/6 included).
 function [S, branch] = timed (fn, bg, l, args)
-  __holent_time_entropy__ ("check", fn, bg);
-  o = __holent_opts__ (fn, {"dt", "t", "timelike"}, args);
+  o = __holent_opts__ (fn, {"dt", "t", "timelike", "at"}, args);
+  if (isfield (o, "at"))
+    error ("holent:option", "%s: 'at' applies to a BCFT background only (BG from ads3_background (\"bcft\", ...))", fn);
+  endif
   l = __holent_array__ (fn, "L", l);
   dt = 0;
   if (isfield (o, "dt"))
@@ -135,40 +139,7 @@ function [S, branch] = timed (fn, bg, l, args)
   tl = __holent_time_entropy__ ("timelike", fn, o);
   t = __holent_time_entropy__ ("times", fn, o);
   [l, dt] = __holent_time_entropy__ ("broadcast", fn, {"L", "dt"}, l, dt);
-  if (isfield (bg, "boundary") && strcmp (bg.boundary, "line"))
-    bad = find (! (l(:) > 0), 1);
-  else
-    bad = find (! (l(:) > 0 & l(:) <= bg.circumference), 1);
-  endif
-  if (! isempty (bad))
-    error ("holent:domain", "%s: L(%d) = %g must be a positive length (at most the circumference on a circle)",
-           fn, bad, l(bad));
-  endif
-  n = numel (l);
-  S = zeros (n, numel (t));
-  branch = false (n, numel (t));
-  todo = true (n, 1);
-  if (tl)
-    ## Causal pairs: one geodesic on the timelike branch.
-    for j = 1:numel (t)
-      [re, im] = __holent_time__ ("geodesic", fn, bg, zeros (n, 1), t(j) * ones (n, 1),
-                                  ones (n, 1), l(:), dt(:) + t(j), ones (n, 1), 1, 1);
-      todo = (im == 0);
-      S(:,j) = bg.c / 6 * complex (re, im);
-    endfor
-  endif
-  if (any (todo))
-    A = arrayfun (@(a, b) [0, a, 0, b], l(todo), dt(todo), "uniformoutput", false);
-    if (__holent_time_entropy__ ("state", bg, "quench"))
-      if (any (dt(:) != 0))
-        error ("holent:unsupported", "%s: 'dt' is not supported on a quench: the interval lives at the time 't'", fn);
-      endif
-      A = cellfun (@(r) r(1:2), A, "uniformoutput", false);
-    endif
-    [Sr, ~, hz] = __holent_time__ ("entropy", fn, bg, A, t(:));  # BG checked above
-    S(todo,:) = Sr;
-    branch(todo,:) = hz != 0;
-  endif
+  [S, branch] = __holent_time__ ("interval", fn, bg, l(:), dt(:), t(:), double (tl));
   S = __holent_time_entropy__ ("shape", S, size (l), t);
   branch = __holent_time_entropy__ ("shape", branch, size (l), t);
 endfunction
@@ -267,6 +238,7 @@ endfunction
 %!error <timelike> interval_entropy (ads3_background ("vacuum", "line"), 1, "dt", 2)
 %!error <timelike> interval_entropy (ads3_background ("vacuum", "line"), 1, "dt", 1)
 %!error <'timelike' must be> interval_entropy (ads3_background ("vacuum", "line"), 1, "timelike", 3)
+%!error <'at' applies to a BCFT background only> interval_entropy (ads3_background ("vacuum", "line"), 1, "at", 0)
 %!error <not supported on a quench> interval_entropy (ads3_background ("quench", "line", "beta", 1), 1, "dt", 0.1)
 %!error <do not broadcast> interval_entropy (ads3_background ("vacuum", "line"), [1 2], "dt", [0 0 0])
 %!error <Invalid call> interval_entropy (ads3_background ("vacuum", "line"))

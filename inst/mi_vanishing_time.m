@@ -23,11 +23,12 @@ function t = mi_vanishing_time (bg, A, varargin)
     print_usage ();
   endif
   o = __holent_opts__ (fn, {"tmax"}, varargin);
-  tmax = [];   # the core's default, 100 beta
+  tmax = {};   # the core's default, 100 beta
   if (isfield (o, "tmax"))
-    tmax = __holent_scalar__ (fn, "tmax", o.tmax, "positive");
+    tmax = __holent_time_entropy__ ("double", o.tmax);   # the gateway checks it
+    tmax = {tmax};
   endif
-  t = __holent_time__ ("mi_zero", fn, bg, A, tmax);
+  t = __holent_time__ ("mi_zero", fn, bg, A, tmax{:});
 endfunction
 
 %!test

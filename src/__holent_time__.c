@@ -20,10 +20,15 @@
  *       of every endpoint time; the time of a quench); NAMES a cell of
  *       numel (A) names for messages (default A, A{k}).  Outputs are
  *       numel(A) x numel(T).
- *   [TB, TL] = ("light", FN, BG, X1, X2, TOL)    X1, X2 broadcast; TOL []
- *       for the core's default
- *   DT = ("mi_zero", FN, BG, A, TMAX)             A a struct (left, right),
- *       TMAX [] for the core's default
+ *   [S, BRANCH] = ("interval", FN, BG, L, DT, T, TIMELIKE)
+ *       interval_entropy's time path: L, DT equal-sized (the core checks
+ *       L against the boundary); S, BRANCH numel(L) x numel(T); S complex
+ *       where TIMELIKE (0/1) and a pair is causal (the core's timelike
+ *       entropy), BRANCH true where the horizon is part of the surface.
+ *   [TB, TL] = ("light", FN, BG, X1, X2 [, TOL])  X1, X2 broadcast; TOL
+ *       absent for the core's default
+ *   DT = ("mi_zero", FN, BG, A [, TMAX])          A a struct (left, right),
+ *       TMAX absent for the core's default
  *   [TSTAR, ALPHA] = ("scramble", FN, BG, A)      A a struct (left, right)
  *
  * Copyright (C) 2026 The holent developers.
@@ -37,6 +42,7 @@
 #include "holent_gw_poll.h"
 #include "core/holent_causal.h"
 #include "core/holent_hrt.h"
+#include "core/holent_interval.h"
 #include "core/holent_quench.h"
 #include "core/holent_tfd.h"
 
@@ -239,15 +245,16 @@ get_bg (const char *fn, const mxArray *s, time_bg *b)
 {
   char state[32] = "", bnd[16] = "";
   memset (b, 0, sizeof *b);
-  if (s == NULL || !mxIsStruct (s) || mxGetNumberOfElements (s) != 1)
-    holent_gw_raise (fn, HOLENT_EBACKGROUND, "BG", HOLENT_NOINDEX,
-                     "must be a scalar struct from ads3_background");
-  const mxArray *f = mxGetField (s, 0, "state");
-  if (f != NULL)
-    holent_gw_string (f, fn, "BG.state", state, sizeof state);
+  const mxArray *f = s != NULL && mxIsStruct (s)
+                     && mxGetNumberOfElements (s) == 1
+                     ? mxGetField (s, 0, "state") : NULL;
+  if (f != NULL && mxIsChar (f) && mxGetN (f) < sizeof state)
+    mxGetString (f, state, sizeof state);
   int tfd = strcmp (state, "tfd") == 0;
   if (!tfd && strcmp (state, "quench") != 0)
     {
+      /* every other struct (and what is not one) is the shared
+         unpacker's: it is the one check of a static background */
       b->kind = BG_STATIC;
       holent_gw_bg (s, fn, &b->geo);
       return;
@@ -354,6 +361,46 @@ real_array (const char *fn, const mxArray *a, const char *name, size_t n)
   return p;
 }
 
+/* One covariant length: X1 at T1 on side S1 to X2 at T2 on side S2 (0
+   left, 1 right; a thermofield double only); IM is pi on the timelike
+   branch.  */
+static int
+length_one (const time_bg *b, double x1, double t1, double s1, double x2,
+            double t2, double s2, int cls, int tl, double *re, double *im)
+{
+  *im = 0.0;
+  switch (b->kind)
+    {
+    case BG_TFD:
+      if (s1 != s2)
+        return s1 == 0.0
+                 ? holent_tfd_cross_length (&b->tfd, x1, t1, x2, t2, re)
+                 : holent_tfd_cross_length (&b->tfd, x2, t2, x1, t1, re);
+      return holent_hrt_length (&b->tfd.side, x1, t1, x2, t2,
+                                (holent_geo_class) cls, tl, re, im);
+    case BG_QUENCH:
+      return holent_quench_points_length (&b->quench, x1, x2, t1, re);
+    default:
+      return holent_hrt_length (&b->geo, x1, t1, x2, t2,
+                                (holent_geo_class) cls, tl, re, im);
+    }
+}
+
+/* A side option: [] when not given (the right side), else n values 0/1
+   on a thermofield double only.  */
+static const double *
+side_array (const char *fn, const time_bg *b, const mxArray *a,
+            const char *name, size_t n)
+{
+  if (mxIsEmpty (a))
+    return NULL;
+  if (b->kind != BG_TFD)
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "'%s' applies to a thermofield double "
+                     "(ads3_background (\"tfd\", ...)) only", name);
+  return real_array (fn, a, name, n);
+}
+
 static void
 do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
 {
@@ -362,46 +409,29 @@ do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
   size_t n;
   const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n);
   const double *t1 = real_array (fn, prhs[4], "t1", n);
-  const double *s1 = real_array (fn, prhs[5], "side1", n);
+  const double *s1 = side_array (fn, &b, prhs[5], "side1", n);
   const double *x2 = real_array (fn, prhs[6], "X2", n);
   const double *t2 = real_array (fn, prhs[7], "t2", n);
-  const double *s2 = real_array (fn, prhs[8], "side2", n);
+  const double *s2 = side_array (fn, &b, prhs[8], "side2", n);
   double cls = holent_gw_scalar (prhs[9], fn, "class");
   double tl = holent_gw_scalar (prhs[10], fn, "timelike");
   if (cls != 0.0 && cls != 1.0 && cls != 2.0)
     holent_gw_raise (fn, HOLENT_EOPTION, "class", HOLENT_NOINDEX,
                      "must be 0, 1 or 2");
+  if (b.kind == BG_QUENCH)
+    for (size_t i = 0; i < n; i++)
+      if (t1[i] != t2[i])
+        holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
+                         "on a quench both ends live at the time 't' (t1 "
+                         "and t2 must agree)");
   plhs[0] = holent_gw_like (prhs[3]);
   plhs[1] = holent_gw_like (prhs[3]);
   double *re = mxGetPr (plhs[0]), *im = mxGetPr (plhs[1]);
   for (size_t i = 0; i < n; i++)
     {
-      int st;
-      im[i] = 0.0;
-      switch (b.kind)
-        {
-        case BG_TFD:
-          if (s1[i] != s2[i])
-            st = s1[i] == 0.0
-                   ? holent_tfd_cross_length (&b.tfd, x1[i], t1[i], x2[i],
-                                              t2[i], &re[i])
-                   : holent_tfd_cross_length (&b.tfd, x2[i], t2[i], x1[i],
-                                              t1[i], &re[i]);
-          else
-            st = holent_hrt_length (&b.tfd.side, x1[i], t1[i], x2[i], t2[i],
-                                    (holent_geo_class) cls, tl != 0.0,
-                                    &re[i], &im[i]);
-          break;
-        case BG_QUENCH:
-          st = holent_quench_points_length (&b.quench, x1[i], x2[i], t1[i],
-                                            &re[i]);
-          break;
-        default:
-          st = holent_hrt_length (&b.geo, x1[i], t1[i], x2[i], t2[i],
-                                  (holent_geo_class) cls, tl != 0.0, &re[i],
-                                  &im[i]);
-          break;
-        }
+      int st = length_one (&b, x1[i], t1[i], s1 ? s1[i] : 1.0, x2[i], t2[i],
+                           s2 ? s2[i] : 1.0, (int) cls, tl != 0.0, &re[i],
+                           &im[i]);
       if (st == HOLENT_ETIMELIKE)
         holent_gw_raise (fn, st, "X2", i,
                          "timelike or null separated from X1(%zu) on the "
@@ -689,11 +719,124 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
     mxDestroyArray (hz);
 }
 
+/* ---- single intervals ---- */
+
+/* interval_entropy's time path: the interval [0, L(k)] with its right end
+   DT(k) later, at each shift/time T(j); TIMELIKE: causal pairs give the
+   timelike entropy.  */
+static void
+do_interval (const char *fn, int nlhs, mxArray *plhs[],
+             const mxArray *prhs[])
+{
+  static const char *const lname[] = { "L" };
+  gw_state g;
+  time_bg b;
+  holent_err err;
+  memset (&g, 0, sizeof g);
+  g.fn = fn;
+  get_bg (fn, prhs[2], &b);
+  size_t n, nt;
+  const double *l = holent_gw_real (prhs[3], fn, "L", &n);
+  const double *dt = real_array (fn, prhs[4], "dt", n);
+  const double *t = holent_gw_real (prhs[5], fn, "t", &nt);
+  int tl = holent_gw_scalar (prhs[6], fn, "timelike") != 0.0;
+  for (size_t k = 0; k < n; k++)
+    if (holent_interval_check (&b.geo, k, l[k], &err))
+      holent_gw_raise_err (fn, &err, lname, 1);
+  for (size_t k = 0; k < n; k++)
+    {
+      if (!isfinite (dt[k]))
+        holent_gw_raise (fn, isnan (dt[k]) ? HOLENT_ENAN : HOLENT_EDOM, "dt",
+                         k, "must be finite");
+      if (b.kind == BG_QUENCH && dt[k] != 0.0)
+        holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
+                         "'dt' is not supported on a quench: the interval "
+                         "lives at the time 't'");
+    }
+  for (size_t j = 0; j < nt; j++)
+    if (!isfinite (t[j]))
+      holent_gw_raise (fn, isnan (t[j]) ? HOLENT_ENAN : HOLENT_EDOM, "t", j,
+                       "must be finite");
+  alloc_ws (&g, 1);
+  mxArray *S = mxCreateDoubleMatrix (n, nt, tl ? mxCOMPLEX : mxREAL);
+  mxArray *br = mxCreateLogicalMatrix (n, nt);
+  double *sr = mxGetPr (S), *si = tl ? mxGetPi (S) : NULL;
+  mxLogical *pb = mxGetLogicals (br);
+  int any_im = 0;
+  /* one row [0, L, 0, DT] (a quench: [0, L]) */
+  mxArray *row = mxCreateDoubleMatrix (1, b.kind == BG_QUENCH ? 2 : 4,
+                                       mxREAL);
+  double *pr = mxGetPr (row);
+  for (size_t k = 0; k < n; k++)
+    {
+      char nm[32];
+      region_in r;
+      snprintf (nm, sizeof nm, "L(%zu)", k + 1);
+      pr[0] = 0.0;
+      pr[1] = l[k];
+      if (b.kind != BG_QUENCH)
+        {
+          pr[2] = 0.0;
+          pr[3] = dt[k];
+        }
+      read_region (&g, row, &b, nm, &r);
+      for (size_t j = 0; j < nt; j++)
+        {
+          size_t i = k + n * j;
+          int causal = 0;
+          if (tl && b.kind != BG_QUENCH)
+            {
+              int st = holent_hrt_timelike_entropy (&b.geo, l[k], t[j],
+                                                    dt[k], &sr[i], &si[i],
+                                                    &causal);
+              if (st)
+                {
+                  mxDestroyArray (S);
+                  mxDestroyArray (br);
+                  mxDestroyArray (row);
+                  fail (&g, st, "L", k, "%s", st == HOLENT_ETIMELIKE
+                         ? "the ends of the interval are causally related "
+                           "and have no timelike entropy (a null pair, or "
+                           "a geodesic without a timelike branch)"
+                         : holent_strerror (st));
+                }
+            }
+          if (causal)
+            {
+              any_im = 1;
+              continue;
+            }
+          size_t ncross;
+          int horizon;
+          sr[i] = entropy_one (&g, &b, &r, t[j], &ncross, &horizon);
+          if (si)
+            si[i] = 0.0;
+          pb[i] = horizon != 0;
+        }
+    }
+  mxDestroyArray (row);
+  release (&g);
+  if (tl && !any_im)
+    {
+      /* all spacelike: a real array, as without the option */
+      mxArray *R = mxCreateDoubleMatrix (n, nt, mxREAL);
+      memcpy (mxGetPr (R), sr, n * nt * sizeof (double));
+      mxDestroyArray (S);
+      S = R;
+    }
+  plhs[0] = S;
+  if (nlhs > 1)
+    plhs[1] = br;
+  else
+    mxDestroyArray (br);
+}
+
 /* ---- causality ---- */
 
 /* X1 and X2 broadcast (equal sizes, or one of them a scalar).  */
 static void
-do_light (const char *fn, mxArray *plhs[], const mxArray *prhs[])
+do_light (const char *fn, int nrhs, mxArray *plhs[],
+          const mxArray *prhs[])
 {
   time_bg b;
   get_bg (fn, prhs[2], &b);
@@ -709,8 +852,14 @@ do_light (const char *fn, mxArray *plhs[], const mxArray *prhs[])
     holent_gw_raise (fn, HOLENT_ESIZE, "X2", HOLENT_NOINDEX,
                      "must have the size of X1 or be a scalar (X1 and X2 "
                      "do not broadcast)");
-  double tol = -1.0;  /* the core's default */
-  opt_scalar (fn, prhs[5], "tol", &tol);
+  double tol = -1.0;  /* absent: the core's default */
+  if (nrhs > 5)
+    {
+      tol = holent_gw_scalar (prhs[5], fn, "tol");
+      if (!(tol >= 0.0) || isinf (tol))
+        holent_gw_raise (fn, HOLENT_EDOM, "tol", HOLENT_NOINDEX,
+                         "must be nonnegative and finite");
+    }
   plhs[0] = holent_gw_like (shape);
   plhs[1] = holent_gw_like (shape);
   double *tb = mxGetPr (plhs[0]), *tl = mxGetPr (plhs[1]);
@@ -761,8 +910,8 @@ two_sides (gw_state *g, const time_bg *b, const mxArray *a,
 }
 
 static void
-do_mi (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[],
-       int scramble)
+do_mi (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
+       const mxArray *prhs[], int scramble)
 {
   gw_state g;
   time_bg b;
@@ -770,10 +919,14 @@ do_mi (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[],
   memset (&g, 0, sizeof g);
   g.fn = fn;
   get_bg (fn, prhs[2], &b);
-  double tmax = -1.0;  /* the core's default */
-  if (!scramble && opt_scalar (fn, prhs[4], "tmax", &tmax) && !(tmax > 0.0))
-    holent_gw_raise (fn, isnan (tmax) ? HOLENT_ENAN : HOLENT_EDOM, "tmax",
-                     HOLENT_NOINDEX, "must be positive");
+  double tmax = -1.0;  /* absent: the core's default */
+  if (!scramble && nrhs > 4)
+    {
+      tmax = holent_gw_scalar (prhs[4], fn, "tmax");
+      if (!(tmax > 0.0) || isinf (tmax))
+        holent_gw_raise (fn, HOLENT_EDOM, "tmax", HOLENT_NOINDEX,
+                         "must be positive and finite");
+    }
   alloc_ws (&g, region_rows (prhs[3]) + 1);
   two_sides (&g, &b, prhs[3], sd);
   double x, ts = NAN;
@@ -821,20 +974,25 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       holent_gw_nargs (fn, nlhs, 3, nrhs, 5, 6);
       do_entropy (fn, nlhs, nrhs, plhs, prhs);
     }
+  else if (strcmp (mode, "interval") == 0)
+    {
+      holent_gw_nargs (fn, nlhs, 2, nrhs, 7, 7);
+      do_interval (fn, nlhs, plhs, prhs);
+    }
   else if (strcmp (mode, "light") == 0)
     {
-      holent_gw_nargs (fn, nlhs, 2, nrhs, 6, 6);
-      do_light (fn, plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 2, nrhs, 5, 6);
+      do_light (fn, nrhs, plhs, prhs);
     }
   else if (strcmp (mode, "mi_zero") == 0)
     {
-      holent_gw_nargs (fn, nlhs, 1, nrhs, 5, 5);
-      do_mi (fn, nlhs, plhs, prhs, 0);
+      holent_gw_nargs (fn, nlhs, 1, nrhs, 4, 5);
+      do_mi (fn, nlhs, nrhs, plhs, prhs, 0);
     }
   else if (strcmp (mode, "scramble") == 0)
     {
       holent_gw_nargs (fn, nlhs, 2, nrhs, 4, 4);
-      do_mi (fn, nlhs, plhs, prhs, 1);
+      do_mi (fn, nlhs, nrhs, plhs, prhs, 1);
     }
   else
     holent_gw_raise (fn, HOLENT_EOPTION, "MODE", HOLENT_NOINDEX,

@@ -469,8 +469,9 @@
 %!        "__holent_time__", {"geodesic", "f", btf, 0, 0, 0, 1, 0.5, 1, 0, 0}, 3;
 %!        "__holent_time__", {"entropy", "f", btf, {struct("left", [0 1], "right", [0 1 0 0.2])}, [0 1], {"A"}}, 3;
 %!        "__holent_time__", {"entropy", "f", ads3_background("quench", "line", "beta", 1), [0 1; 2 3], 1}, 3;
-%!        "__holent_time__", {"light", "f", ads3_background("heavy", "circle", "alpha", 0.5), 0, [1 2], []}, 3;
-%!        "__holent_time__", {"mi_zero", "f", btf, struct("left", [0 1], "right", [0 1]), []}, 3;
+%!        "__holent_time__", {"light", "f", ads3_background("heavy", "circle", "alpha", 0.5), 0, [1 2], 1e-6}, 3;
+%!        "__holent_time__", {"mi_zero", "f", btf, struct("left", [0 1], "right", [0 1]), 5}, 3;
+%!        "__holent_time__", {"interval", "f", btf, [0.5; 1], [0; 0.1], [0 1], 1}, 3;
 %!        "__holent_time__", {"scramble", "f", btf, struct("left", [0 1], "right", [0 1])}, 3};
 %!   bad = {};
 %!   for r = 1:rows (G)

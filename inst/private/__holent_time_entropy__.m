@@ -4,7 +4,7 @@
 ## @deftypefn  {} {@var{tf} =} __holent_time_entropy__ ("timed", @var{bg}, @var{regions})
 ## @deftypefnx {} {@var{t} =} __holent_time_entropy__ ("times", @var{fn}, @var{o})
 ## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("timelike", @var{fn}, @var{o})
-## @deftypefnx {} {} __holent_time_entropy__ ("check", @var{fn}, @var{bg})
+## @deftypefnx {} {@var{x} =} __holent_time_entropy__ ("double", @var{x})
 ## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("state", @var{bg}, @var{state})
 ## @deftypefnx {} {[@var{a}, @var{b}, @dots{}] =} __holent_time_entropy__ ("broadcast", @var{fn}, @var{names}, @var{a}, @var{b}, @dots{})
 ## @deftypefnx {} {[@var{S}, @var{ncross}, @var{horizon}] =} __holent_time_entropy__ (@var{fn}, @var{bg}, @var{A}, @var{t}, @var{names})
@@ -18,9 +18,10 @@
 ## (@code{holent:size} naming them, from the cell @var{names}, when they do
 ## not broadcast); unchanged when one is not a real double array (the
 ## gateway names it).  "state": true when @var{bg} is a background struct of
-## that state.  "check": the checks of a static @var{bg} (time-dependent
-## states are checked by their core constructor in the gateway).  The last
-## form checks @var{bg} ("check") and calls the core on the region (or cell of regions) @var{A} at each
+## that state.  "double": a numeric (not logical) @var{x} as a full double
+## (anything else unchanged, for the gateway to name).  No form reads or
+## checks @var{bg}: the gateway @code{__holent_time__} is the one check.
+## The last form calls the core on the region (or cell of regions) @var{A} at each
 ## time of @var{t}: @var{S} is numel(A) x numel(t); @var{names} (optional,
 ## a cell of numel(A) strings) names the regions in messages.  "shape": an array of
 ## the cell's size @var{sz} for one time, of the shape of @var{t} for one
@@ -83,11 +84,12 @@ function varargout = __holent_time_entropy__ (fn, varargin)
       [bg, st] = deal (varargin{:});
       varargout{1} = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
                      && ischar (bg.state) && strcmp (bg.state, st);
-    case "check"
-      [f, bg] = deal (varargin{:});
-      if (! __holent_time_entropy__ ("timed", bg, {}))
-        __holent_background__ ("check", f, bg);
+    case "double"
+      x = varargin{1};
+      if (isnumeric (x))
+        x = full (double (x));
       endif
+      varargout{1} = x;
     case "shape"
       [R, sz, t] = deal (varargin{:});
       if (numel (t) == 1)
@@ -98,7 +100,6 @@ function varargout = __holent_time_entropy__ (fn, varargin)
       varargout{1} = R;
     otherwise
       [bg, A, t] = deal (varargin{1:3});
-      __holent_time_entropy__ ("check", fn, bg);
       A = to_double (fn, A);
       [varargout{1:max (nargout, 1)}] = __holent_time__ ("entropy", fn, bg, A, t(:),
                                                          varargin{4:end});
@@ -135,6 +136,8 @@ endfunction
 %! assert (__holent_time_entropy__ ("shape", [1 2 3], [1 1], [0 1 2]'), [1 2 3]');
 %! assert (__holent_time_entropy__ ("times", "f", struct ()), 0);
 %! assert (__holent_time_entropy__ ("timelike", "f", struct ("timelike", 1)), true);
+%! assert (__holent_time_entropy__ ("double", sparse (single (2))), 2);
+%! assert (__holent_time_entropy__ ("double", true), true);
 %! [a, b] = __holent_time_entropy__ ("broadcast", "f", {"a", "b"}, [1; 2], [3 4]);
 %! assert ({a, b}, {[1 1; 2 2], [3 4; 3 4]});
 %!error <f: a \(\[1 2\]\), b \(\[1 3\]\) do not broadcast> __holent_time_entropy__ ("broadcast", "f", {"a", "b"}, [1 2], [1 2 3])

@@ -162,6 +162,25 @@ holent_hrt_length (const holent_geo_bg *bg, double x1, double t1,
 }
 
 int
+holent_hrt_timelike_entropy (const holent_geo_bg *bg, double l, double t,
+                             double dt, double *S_re, double *S_im,
+                             int *causal)
+{
+  double re, im;
+  if (S_re == NULL || S_im == NULL || causal == NULL)
+    return HOLENT_EINVAL;
+  int st = holent_hrt_length (bg, 0.0, t, l, t + dt, HOLENT_GEO_POSITIVE, 1,
+                              &re, &im);
+  *causal = st == HOLENT_SUCCESS && im != 0.0;
+  if (*causal)
+    {
+      *S_re = bg->c / 6.0 * re;
+      *S_im = bg->c / 6.0 * im;
+    }
+  return st;
+}
+
+int
 holent_hrt_lengths (const holent_geo_bg *bg, size_t n, const double *x1,
                     const double *t1, const double *x2, const double *t2,
                     holent_geo_class cls, int timelike, double *re,

@@ -46,6 +46,16 @@ int holent_hrt_length (const holent_geo_bg *bg, double x1, double t1,
                        double x2, double t2, holent_geo_class cls,
                        int timelike, double *re, double *im);
 
+/* Timelike entanglement entropy of the interval from (0, t) to (l, t +
+ * dt) (Doi, Harper, Mollabashi, Takayanagi and Taki 2023): when the
+ * endpoints are causally related, S = (c/6)(re + i im) of the one
+ * geodesic of class positive and *causal = 1; otherwise *causal = 0 and
+ * S is left alone (the HRT entropy applies).  Statuses as
+ * holent_hrt_length with timelike on.  */
+int holent_hrt_timelike_entropy (const holent_geo_bg *bg, double l, double t,
+                                 double dt, double *S_re, double *S_im,
+                                 int *causal);
+
 /* Vectorised; im may be NULL when timelike == 0.  On failure *bad is the
    first offending index.  */
 int holent_hrt_lengths (const holent_geo_bg *bg, size_t n, const double *x1,

@@ -148,6 +148,24 @@ test_timelike (void)
   HT_CLOSE (im, M_PI, 1e-15);
   HT_STATUS (holent_hrt_length (&bg, 0, 0, 3, 5, HOLENT_GEO_SHORTER, 1, &re, &im), HOLENT_SUCCESS);
   HT_CLOSE (re, 2 * log (4 / eps), 1e-12);
+  /* The same as an entropy, c = 6 here: (c/3) log(T0/eps) + i pi c/6 with
+     T0^2 = 1 - 0.6^2 (Doi et al. 2023), any start time; a spacelike pair
+     is left to the HRT entropy.  */
+  {
+    holent_geo_bg b6;
+    double sr = 7, si = 7;
+    int causal = -1;
+    HT_STATUS (holent_geo_bg_init (&b6, HOLENT_BULK_POINCARE, 0, eps, 0, 0, 0, 6), HOLENT_SUCCESS);
+    HT_STATUS (holent_hrt_timelike_entropy (&b6, 0.6, 5.0, 1.0, &sr, &si, &causal), HOLENT_SUCCESS);
+    HT_CHECK (causal == 1, "causal %d", causal);
+    HT_CLOSE (sr, 2 * log (0.8 / eps), 1e-12);
+    HT_CLOSE (si, M_PI, 1e-15);
+    sr = si = 7;
+    HT_STATUS (holent_hrt_timelike_entropy (&b6, 3.0, 0.0, 1.0, &sr, &si, &causal), HOLENT_SUCCESS);
+    HT_CHECK (causal == 0 && sr == 7 && si == 7, "spacelike pair touched S");
+    HT_STATUS (holent_hrt_timelike_entropy (&b6, 1.0, 0.0, 1.0, &sr, &si, &causal), HOLENT_ETIMELIKE);
+    HT_STATUS (holent_hrt_timelike_entropy (&b6, 1.0, 0.0, 1.0, NULL, &si, &causal), HOLENT_EINVAL);
+  }
   /* Finite temperature (Doi et al. 2023, thermal case):
      S_T = (c/3) log((beta/(pi eps)) sinh(pi T0/beta)) + i pi c/6.  */
   HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_PLANAR_BTZ, 0, eps, 2, 2, 0, 1), HOLENT_SUCCESS);
