@@ -5,7 +5,6 @@
 ## @deftypefnx {} {@var{t} =} __holent_time_entropy__ ("times", @var{fn}, @var{o})
 ## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("timelike", @var{fn}, @var{o})
 ## @deftypefnx {} {@var{x} =} __holent_time_entropy__ ("double", @var{x})
-## @deftypefnx {} {@var{tf} =} __holent_time_entropy__ ("state", @var{bg}, @var{state})
 ## @deftypefnx {} {[@var{a}, @var{b}, @dots{}] =} __holent_time_entropy__ ("broadcast", @var{fn}, @var{names}, @var{a}, @var{b}, @dots{})
 ## @deftypefnx {} {[@var{S}, @var{ncross}, @var{horizon}] =} __holent_time_entropy__ (@var{fn}, @var{bg}, @var{A}, @var{t}, @var{names})
 ## @deftypefnx {} {@var{S} =} __holent_time_entropy__ ("shape", @var{R}, @var{sz}, @var{t})
@@ -17,10 +16,10 @@
 ## as a logical.  "broadcast": the arrays expanded to their common size
 ## (@code{holent:size} naming them, from the cell @var{names}, when they do
 ## not broadcast); unchanged when one is not a real double array (the
-## gateway names it).  "state": true when @var{bg} is a background struct of
-## that state.  "double": a numeric (not logical) @var{x} as a full double
-## (anything else unchanged, for the gateway to name).  No form reads or
-## checks @var{bg}: the gateway @code{__holent_time__} is the one check.
+## gateway names it).  "double": a numeric (not logical) @var{x} as a full double
+## (anything else unchanged, for the gateway to name).  No form checks
+## @var{bg} ("timed" reads only its state's name, to pick the path): the
+## gateway @code{__holent_time__} is the one check.
 ## The last form calls the core on the region (or cell of regions) @var{A} at each
 ## time of @var{t}: @var{S} is numel(A) x numel(t); @var{names} (optional,
 ## a cell of numel(A) strings) names the regions in messages.  "shape": an array of
@@ -31,8 +30,9 @@ function varargout = __holent_time_entropy__ (fn, varargin)
   switch (fn)
     case "timed"
       [bg, regs] = deal (varargin{:});
-      tf = __holent_time_entropy__ ("state", bg, "tfd") ...
-           || __holent_time_entropy__ ("state", bg, "quench");
+      ## a dispatch on the state's name only: the gateway checks BG
+      tf = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
+           && ischar (bg.state) && any (strcmp (bg.state, {"tfd", "quench"}));
       for k = 1:numel (regs)
         r = regs{k};
         if (iscell (r))
@@ -80,10 +80,6 @@ function varargout = __holent_time_entropy__ (fn, varargin)
                strjoin (strcat (nm, " (", sz, ")"), ", "));
       end_try_catch
       varargout = cellfun (@(x) x + z, a, "uniformoutput", false);
-    case "state"
-      [bg, st] = deal (varargin{:});
-      varargout{1} = isstruct (bg) && isscalar (bg) && isfield (bg, "state") ...
-                     && ischar (bg.state) && strcmp (bg.state, st);
     case "double"
       x = varargin{1};
       if (isnumeric (x))
