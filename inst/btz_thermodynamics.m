@@ -119,23 +119,31 @@ function th = btz_thermodynamics (varargin)
   a = expand (a, sz);  b = expand (b, sz);  L = cellfun (@(x) expand (x, sz), L, "uniformoutput", false);
 
   t = __holent_thermo__ ("state", fn, pairs{k, 3}, a, b, [L{:}], o);
+  ## The pair's own fields are the inputs (the core echoes them exactly;
+  ## the gateway leaves them out to spare fresh memory, doc/fast_paths.md),
+  ## shared with the caller, not copied; so is S for C_Omega (S is linear
+  ## in T at fixed Omega) and the circumference when given.
+  if (k != 4)
+    t.(na) = full_size (a, sz);
+    t.(nb) = full_size (b, sz);
+  endif
+  t.C_Omega = t.S;
+  if (! isempty (L))
+    t.circumference = L{1};
+  endif
 
   th = struct ();
   for f = {"r_plus", "r_minus", "M", "J", "T", "Omega", "Omega_J", "T_L", ...
            "T_R", "S", "F", "C_Omega", "C_J", "horizon_length", "L0", ...
            "Lbar0", "F_thermal_ads"}
-    if (strcmp (f{1}, "C_Omega"))
-      th.C_Omega = t.S;   # S is linear in T at fixed Omega
-    else
-      th.(f{1}) = t.(f{1});
-    endif
+    th.(f{1}) = t.(f{1});
   endfor
   if (prod (sz) == 1)
     th.saddle = merge (t.btz_dominates, "btz", "thermal_ads");
   else
-    sad = repmat ({"thermal_ads"}, sz);
-    sad(t.btz_dominates) = {"btz"};
-    th.saddle = sad;
+    ## one indexing builds the cell (no cell per state filled one by one)
+    saddles = {"thermal_ads", "btz"};
+    th.saddle = reshape (saddles(1 + t.btz_dominates), sz);
   endif
   th.c = t.c;
   th.G = t.G;
@@ -160,6 +168,13 @@ function sz = broadcast_size (varargin)
       endif
     endfor
   endfor
+endfunction
+
+## X of size SZ, its elements bit for bit (repmat, not arithmetic: -0 stays).
+function x = full_size (x, sz)
+  if (! isequal (size (x), sz))
+    x = repmat (x, sz);
+  endif
 endfunction
 
 function x = expand (x, sz)

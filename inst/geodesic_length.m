@@ -49,6 +49,20 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (nargin < 3 || mod (nargin, 2) != 1)
     print_usage ();
   endif
+  ## The static fast path (a static state, no option, real full doubles
+  ## of one size) tests the state in one line: no time-path test, no
+  ## option parsing; no isfield, which copies a struct's fields in Octave 7
+  ## (doc/fast_paths.md).
+  try
+    fast = nargin == 3 && any (strcmp (bg.state, {"vacuum", "thermal", "rotating", "heavy"}));
+  catch
+    fast = false;   # not a scalar struct with a state
+  end_try_catch
+  if (fast && isa (x1, "double") && isreal (x1) && ! issparse (x1)
+      && isa (x2, "double") && isreal (x2) && ! issparse (x2) && size_equal (x1, x2))
+    len = __holent_geodesic__ ("length", fn, bg, x1, x2, 0);
+    return;
+  endif
   o = struct ();
   if (nargin > 3)
     o = __holent_opts__ (fn, {"class", "t1", "t2", "side1", "side2", "timelike", "t"}, varargin);

@@ -59,23 +59,33 @@
 
 function [S, branch] = interval_entropy (bg, l, varargin)
   fn = "interval_entropy";
-  if (nargin < 2)
-    print_usage ();
-  endif
-  if (__holent_is_bcft__ (bg))
-    [S, branch] = bcft_intervals (fn, bg, l, varargin);
-    return;
-  endif
-  if (mod (nargin, 2) != 0)
-    print_usage ();
-  endif
-  if (! (isstruct (bg) && isscalar (bg) && isfield (bg, "bulk")))
-    error ("holent:background",
-           "%s: BG must be a background struct made by ads3_background", fn);
-  endif
-  if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
-    [S, branch] = timed (fn, bg, l, varargin);
-    return;
+  ## The static fast path (a static state, no option) tests the state in
+  ## one line: no BCFT or time-path test, no option parsing; no isfield,
+  ## which copies a struct's fields in Octave 7 (doc/fast_paths.md).
+  try
+    fast = nargin == 2 && any (strcmp (bg.state, {"vacuum", "thermal", "rotating", "heavy"}));
+  catch
+    fast = false;   # not a scalar struct with a state
+  end_try_catch
+  if (! fast)
+    if (nargin < 2)
+      print_usage ();
+    endif
+    if (__holent_is_bcft__ (bg))
+      [S, branch] = bcft_intervals (fn, bg, l, varargin);
+      return;
+    endif
+    if (mod (nargin, 2) != 0)
+      print_usage ();
+    endif
+    if (! (isstruct (bg) && isscalar (bg) && isfield (bg, "bulk")))
+      error ("holent:background",
+             "%s: BG must be a background struct made by ads3_background", fn);
+    endif
+    if (nargin > 2 || __holent_time_entropy__ ("timed", bg, {}))
+      [S, branch] = timed (fn, bg, l, varargin);
+      return;
+    endif
   endif
   if (! (isa (l, "double") && isreal (l)) || issparse (l))
     ## Slow path only for unusual input: full checks and conversion.

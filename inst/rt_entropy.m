@@ -115,6 +115,25 @@
 
 function [S, conf] = rt_entropy (bg, A, varargin)
   fn = "rt_entropy";
+  ## The static fast path (a static state, one real double matrix of
+  ## intervals, no option): no BCFT or time-path test; no isfield, which
+  ## copies a struct's fields in Octave 7 (doc/fast_paths.md).
+  try
+    fast = nargin == 2 && any (strcmp (bg.state, {"vacuum", "thermal", "rotating", "heavy"}));
+  catch
+    fast = false;   # not a scalar struct with a state
+  end_try_catch
+  if (fast && isa (A, "double") && isreal (A) && ! issparse (A) && columns (A) != 4)
+    if (nargout > 1)
+      [S, nshort, conf] = __holent_rt__ ("entropy", fn, "A", bg, A);
+    else
+      [S, nshort] = __holent_rt__ ("entropy", fn, "A", bg, A);
+    endif
+    if (nshort > 0)
+      cutoff_warning (fn, nshort, bg.cutoff);
+    endif
+    return;
+  endif
   if (nargin != 2 && nargin != 4)
     print_usage ();
   endif
@@ -150,10 +169,14 @@ function [S, conf] = rt_entropy (bg, A, varargin)
     [S, nshort] = feval (gw, "entropy", fn, "A", bg, A);
   endif
   if (nshort > 0)
-    warning ("holent:cutoff",
-             "%s: %d interval(s) or gap(s) not longer than twice the cutoff %g",
-             fn, nshort, bg.cutoff);
+    cutoff_warning (fn, nshort, bg.cutoff);
   endif
+endfunction
+
+function cutoff_warning (fn, nshort, cutoff)
+  warning ("holent:cutoff",
+           "%s: %d interval(s) or gap(s) not longer than twice the cutoff %g",
+           fn, nshort, cutoff);
 endfunction
 
 function a = to_double (fn, a)

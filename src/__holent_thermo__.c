@@ -4,8 +4,11 @@
  * circumference L ([]: 2 pi ell) (A, B, L of one size, or scalars: the
  * wrapper broadcasts other shapes); c, G, ell from the options struct OPTS
  * (fields c, G, ell, each optional; Brown-Henneaux in the core).  TH is a
- * struct of arrays of that size (btz_dominates logical), the scalars
- * c, G, ell, and the circumference (L, or 2 pi ell).
+ * struct of arrays of that size (btz_dominates logical) and the scalars
+ * c, G, ell.  Not in TH, to spare fresh result memory (doc/fast_paths.md):
+ * the two fields the pair names itself (r_plus, r_minus; T, Omega; T_L,
+ * T_R; M, J: the core echoes them exactly, so they are A and B) and the
+ * circumference when L is given; the wrapper returns its own arrays.
  *
  * [T_HP, INFO] = __holent_thermo__ ("hawking_page", FN, PAIR, A, B, L,
  * OPTS): Hawking-Page temperatures and the comparison of the saddles at
@@ -19,6 +22,7 @@
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
+#include "holent_gw_array.h"
 #include "core/holent_thermo.h"
 
 static const char GW[] = "__holent_thermo__";
@@ -189,10 +193,9 @@ unpack (const char *fn, const mxArray *prhs[], inputs *in)
 static mxArray *
 like (const mxArray *shape)
 {
-  /* every element is written by the core or the array is dropped */
-  return mxCreateUninitNumericArray (mxGetNumberOfDimensions (shape),
-                                     mxGetDimensions (shape),
-                                     mxDOUBLE_CLASS, mxREAL);
+  /* every element is written by the core or the array is dropped; no
+     copy on return (holent_gw_array.h) */
+  return holent_gw_result_like (shape);
 }
 
 static void
@@ -214,12 +217,24 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
   if (pairs[in.k].pair < 0 || pairs[in.k].pair == HOLENT_THERMO_BETA_OMEGA)
     holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
                      "PAIR '%s' is for hawking_page", pairs[in.k].name);
-  mxArray *s = mxCreateStructMatrix (1, 1, (int) (sizeof fields
-                                                  / sizeof fields[0]),
-                                     fields);
+  /* The fields of the pair itself, left to the wrapper (core echo).  */
+  const char *pa = pairs[in.k].pair == HOLENT_THERMO_BETA_LR ? ""
+                                                              : pairs[in.k].a;
+  const char *pb = pairs[in.k].pair == HOLENT_THERMO_BETA_LR ? ""
+                                                              : pairs[in.k].b;
+  const char *names[sizeof fields / sizeof fields[0]];
+  int nf = 0;
+  for (size_t f = 0; f < sizeof fields / sizeof fields[0]; f++)
+    if (strcmp (fields[f], pa) && strcmp (fields[f], pb)
+        && !(in.L && strcmp (fields[f], "circumference") == 0))
+      names[nf++] = fields[f];
+  mxArray *s = mxCreateStructMatrix (1, 1, nf, names);
   double *col[NCOLS];
   for (size_t f = 0; f < NCOLS; f++)
     {
+      col[f] = NULL;
+      if (!strcmp (fields[f], pa) || !strcmp (fields[f], pb))
+        continue;
       mxArray *x = like (in.shape);
       mxSetField (s, 0, fields[f], x);
       col[f] = mxGetPr (x);
@@ -229,8 +244,9 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
   mxSetField (s, 0, "btz_dominates", dom);
   for (int u = 0; u < 3; u++)
     mxSetField (s, 0, fields[NCOLS + 1 + u], mxCreateDoubleScalar (in.u[u]));
-  mxSetField (s, 0, "circumference", in.L ? mxDuplicateArray (prhs[5])
-                                   : mxCreateDoubleScalar (2 * M_PI * in.u[2]));
+  if (!in.L)
+    mxSetField (s, 0, "circumference",
+                mxCreateDoubleScalar (2 * M_PI * in.u[2]));
   holent_thermo_table t = {
     col[0], col[1], col[2], col[3], col[4], col[5], col[6], col[7], col[8],
     col[9], col[10], NULL, col[11], col[12], col[13], col[14], col[15],

@@ -1,0 +1,27 @@
+// holent_gw_array.cc: result arrays that Octave takes over without a copy.
+// Octave 7 built without std::pmr (Debian's) copies every numeric mxArray
+// a MEX file returns into a new Octave array and frees the original: two
+// fresh blocks and a copy per result column, which for many large columns
+// (btz_thermodynamics: 14 of 10^6) costs more than the arithmetic
+// (doc/fast_paths.md).  An Octave array wrapped as an mxArray is handed
+// back as it is.  C++ because the wrapping constructor is Octave's own
+// (mxarray.h); the gateways stay plain C.
+// SPDX-License-Identifier: GPL-3.0-or-later
+#include <octave/oct.h>
+#include <octave/mxarray.h>
+
+#include "holent_gw_array.h"
+
+extern "C" mxArray *
+holent_gw_result_like (const mxArray *a)
+{
+  mwSize nd = a->get_number_of_dimensions ();
+  const mwSize *d = a->get_dimensions ();
+  dim_vector dv = dim_vector::alloc (nd < 2 ? 2 : nd);
+  dv(0) = dv(1) = 1;
+  for (mwSize k = 0; k < nd; k++)
+    dv(k) = d[k];
+  NDArray x (dv);   // elements left unset: the caller writes every one
+  // The gateways use the separate-complex API (mxGetPr): not interleaved.
+  return new mxArray (false, octave_value (x));
+}
