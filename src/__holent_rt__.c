@@ -70,16 +70,6 @@ gw_fail (gw_state *g, const char *fn, const holent_err *e, const char *nm)
   holent_gw_raise_err (fn, e, names, 1);
 }
 
-/* "A" or "A{k}" for messages.  */
-static void
-region_name (char *buf, size_t sz, const char *name, int is_cell, size_t k)
-{
-  if (is_cell)
-    snprintf (buf, sz, "%s{%zu}", name, k + 1);
-  else
-    snprintf (buf, sz, "%s", name);
-}
-
 /* Check the class and shape of one region (its values are the core's);
    raises naming it.  */
 static void
@@ -116,20 +106,10 @@ make_conf_entry (const holent_rt_conf *c, const holent_geo_bg *bg,
 {
   const holent_rt_result *res = &c->res;
   size_t m = res->m, N = 2 * c->n;
-  mxArray *pairs = mxCreateDoubleMatrix (m, 2, mxREAL);
-  mxArray *coords = mxCreateDoubleMatrix (m, 2, mxREAL);
-  mxArray *arcs = mxCreateDoubleMatrix (m, 1, mxREAL);
-  double *pp = mxGetPr (pairs), *pc = mxGetPr (coords), *pa = mxGetPr (arcs);
-  for (size_t i = 0; i < m; i++)
-    {
-      pp[i] = (double) c->pairs[2 * i] + 1.0;
-      pp[i + m] = (double) c->pairs[2 * i + 1] + 1.0;
-      pc[i] = c->pts[c->pairs[2 * i]];
-      pc[i + m] = c->pts[c->pairs[2 * i + 1]];
-      pa[i] = c->arcs[i];
-    }
-  mxArray *ep = mxCreateDoubleMatrix (N, 1, mxREAL);
-  memcpy (mxGetPr (ep), c->pts, N * sizeof (double));
+  mxArray *coords;
+  mxArray *pairs = holent_gw_pairs (m, c->pairs, c->pts, &coords);
+  mxArray *arcs = holent_gw_column (m, c->arcs);
+  mxArray *ep = holent_gw_column (N, c->pts);
   mxArray *iv = mxCreateDoubleMatrix (c->whole ? 1 : c->n, 2, mxREAL);
   double *pi = mxGetPr (iv);
   if (c->whole)
@@ -184,8 +164,8 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   size_t ncell = is_cell ? mxGetNumberOfElements (A) : 1, maxrows = 1;
   for (size_t k = 0; k < ncell; k++)
     {
-      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
-      region_name (nm, sizeof nm, name, is_cell, k);
+      const mxArray *a = holent_gw_region (A, k);
+      holent_gw_region_name (nm, sizeof nm, name, A, k, HOLENT_NOINDEX);
       region_ok (&g, a, fn, nm);
       if (mxGetM (a) > maxrows)
         maxrows = mxGetM (a);
@@ -204,17 +184,17 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   size_t wsn = 1;
   for (size_t k = 0; k < ncell; k++)
     {
-      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
+      const mxArray *a = holent_gw_region (A, k);
       const double *p = mxGetPr (a);
       size_t n = mxGetM (a);
       if (holent_region_check (g.reg, bg.circle, bg.L, n, p, p + n, &e))
         {
-          region_name (nm, sizeof nm, name, is_cell, k);
+          holent_gw_region_name (nm, sizeof nm, name, A, k, HOLENT_NOINDEX);
           gw_fail (&g, fn, &e, nm);
         }
       if (method == HOLENT_RT_DP && g.reg->n > HOLENT_RT_NMAX)
         {
-          region_name (nm, sizeof nm, name, is_cell, k);
+          holent_gw_region_name (nm, sizeof nm, name, A, k, HOLENT_NOINDEX);
           holent_err_set (&e, HOLENT_ETOOBIG, 0, HOLENT_NOINDEX,
                           "has %zu intervals; the DP takes at most %zu",
                           g.reg->n, (size_t) HOLENT_RT_NMAX);
@@ -251,7 +231,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   size_t total = 0;
   for (size_t k = 0; k < ncell; k++)
     {
-      const mxArray *a = is_cell ? mxGetCell (A, k) : A;
+      const mxArray *a = holent_gw_region (A, k);
       g.in[k].rows = mxGetM (a);
       g.in[k].start = mxGetPr (a);
       g.in[k].end = mxGetPr (a) + g.in[k].rows;
@@ -288,7 +268,7 @@ do_entropy (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   if (st)
     {
       /* Ctrl-C (HOLENT_EINTR) returns to the prompt inside the raise.  */
-      region_name (nm, sizeof nm, name, is_cell, failed);
+      holent_gw_region_name (nm, sizeof nm, name, A, failed, HOLENT_NOINDEX);
       holent_err_set (&e, st, 0, HOLENT_NOINDEX, "minimisation failed (%s)",
                       holent_strerror (st));
       gw_fail (&g, fn, &e, nm);
@@ -339,7 +319,7 @@ do_parties (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
       {
         const mxArray *a = mxGetCell (R, i + k * np);
         char nmk[72];
-        region_name (nmk, sizeof nmk, nm[i], iscl[i], k);
+        snprintf (nmk, sizeof nmk, iscl[i] ? "%s{%zu}" : "%s", nm[i], k + 1);
         region_ok (&g, a, fn, nmk);
         total += mxGetM (a);
       }
@@ -360,7 +340,8 @@ do_parties (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
         {
           const mxArray *a = mxGetCell (R, i + k * np);
           const double *p = mxGetPr (a);
-          region_name (nmk[i], sizeof nmk[i], nm[i], iscl[i], k);
+          snprintf (nmk[i], sizeof nmk[i], iscl[i] ? "%s{%zu}" : "%s", nm[i],
+                    k + 1);
           names[i] = nmk[i];
           rows[i] = mxGetM (a);
           if (holent_region_check (g.reg, circle, L, rows[i], p, p + rows[i],

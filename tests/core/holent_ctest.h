@@ -39,4 +39,14 @@ static int ht_pass, ht_fail;
 #define HT_DONE() \
   (printf ("%d passed, %d failed\n", ht_pass, ht_fail), ht_fail != 0)
 
+/* A poll (the core's holent_poll callback) that counts its calls in the
+   int at CTX and asks to stop from the second call on.  */
+static inline int
+ht_stop_second (void *ctx, double done, double total)
+{
+  (void) done;
+  (void) total;
+  return ++*(int *) ctx >= 2;
+}
+
 #endif

@@ -148,14 +148,6 @@ test_ball (void)
 }
 
 
-/* a poll that asks to stop at its second call */
-static int
-stop_second (void *ctx, double done, double total)
-{
-  (void) done;
-  (void) total;
-  return ++*(int *) ctx >= 2;
-}
 
 /* the poll: EINTR at the second radius */
 static void
@@ -164,7 +156,7 @@ test_poll (void)
   holent_hd_bg bg;
   holent_ball_workspace *w = holent_ball_workspace_alloc ();
   int calls = 0;
-  holent_poll poll = { stop_second, &calls };
+  holent_poll poll = { ht_stop_second, &calls };
   double R[3] = { 0.2, 0.4, 0.6 }, S[3];
   size_t bad;
   HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);

@@ -244,14 +244,6 @@ test_strip (void)
 }
 
 
-/* a poll that asks to stop at its second call */
-static int
-stop_second (void *ctx, double done, double total)
-{
-  (void) done;
-  (void) total;
-  return ++*(int *) ctx >= 2;
-}
 
 /* the poll: EINTR at the second width; the divergence's closed form */
 static void
@@ -260,7 +252,7 @@ test_poll (void)
   holent_hd_bg bg;
   holent_strip_workspace *w = holent_strip_workspace_alloc ();
   int calls = 0;
-  holent_poll poll = { stop_second, &calls };
+  holent_poll poll = { ht_stop_second, &calls };
   double l[3] = { 0.5, 1, 1.5 }, S[3];
   size_t bad;
   HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1.2, 0.3, 1e-3), HOLENT_SUCCESS);

@@ -20,14 +20,6 @@ inv_f4 (double z, void *p)
   return 1 / (1 - gsl_pow_int (z, 4));
 }
 
-/* a poll that asks to stop at its second call */
-static int
-stop_second (void *ctx, double done, double total)
-{
-  (void) done;
-  (void) total;
-  return ++*(int *) ctx >= 2;
-}
 
 int
 main (void)
@@ -95,7 +87,7 @@ main (void)
   /* the poll: EINTR at the second time */
   {
     int calls = 0;
-    holent_poll poll = { stop_second, &calls };
+    holent_poll poll = { ht_stop_second, &calls };
     double tt[3] = { -1, -0.5, -0.2 }, Sp[3];
     holent_vaidya_workspace_set_poll (w, &poll);
     HT_STATUS (holent_vaidya_strip (&F, 0, w, 1, 0.5, 3, tt, Sp, NULL, NULL, NULL, NULL, NULL), HOLENT_EINTR);
