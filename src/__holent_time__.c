@@ -64,6 +64,7 @@ typedef struct
   holent_region *reg;
   holent_rt_workspace *rt;
   holent_tfd_workspace *tw;
+  holent_quench_scan *qs;  /* quench: chords kept from time to time */
   double *tp, *ts, *te;
 } gw_state;
 
@@ -73,12 +74,14 @@ release (gw_state *g)
   holent_region_free (g->reg);
   holent_rt_workspace_free (g->rt);
   holent_tfd_workspace_free (g->tw);
+  holent_quench_scan_free (g->qs);
   free (g->tp);
   free (g->ts);
   free (g->te);
   g->reg = NULL;
   g->rt = NULL;
   g->tw = NULL;
+  g->qs = NULL;
   g->tp = g->ts = g->te = NULL;
 }
 
@@ -595,8 +598,8 @@ entropy_one (gw_state *g, const time_bg *b, const region_in *r, double t,
       if (st)
         fail_region (g, st, r->name[1], g->reg->bad[0], g->reg->bad[1]);
       if (b->kind == BG_QUENCH)
-        st = holent_quench_entropy (g->rt, &b->quench, g->reg, t, &res,
-                                    NULL, NULL);
+        st = holent_quench_entropy_scan (g->rt, &b->quench, g->reg, t,
+                                         g->qs, &res, NULL, NULL);
       else
         {
           size_t bad = 0, bi, bj;
@@ -630,6 +633,9 @@ alloc_ws (gw_state *g, size_t nmax)
   g->te = malloc (nmax * sizeof (double));
   if (!g->reg || !g->rt || !g->tw || !g->tp || !g->ts || !g->te)
     fail (g, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, "out of memory");
+  /* optional: without it a quench scan is only slower */
+  if (nmax <= HOLENT_QUENCH_SCAN_NMAX)
+    g->qs = holent_quench_scan_alloc (nmax);
   /* the DP over many timed intervals runs long: Ctrl-C */
   const holent_poll *poll = holent_gw_poll (g->fn);
   holent_rt_set_poll (g->rt, poll);

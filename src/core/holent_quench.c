@@ -4,6 +4,7 @@
  * Copyright (C) 2026 The holent developers.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
+#include <stdlib.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_roots.h>
@@ -62,14 +63,17 @@ typedef struct
    one evaluation.  Brent's method with a solver allocated per call was
    the whole cost of a quench scan.  */
 static int
-line_root (const cross_par *c, double hi, double *eta)
+line_root (const cross_par *c, double hi, double x0, double *eta)
 {
-  /* Start where h = lam with asinh(S E) ~ S E and w ~ 1 (E small):
-     S E + S/((C + 1) E) = lam.  */
-  double a = c->S / (c->C + 1.0), D = c->lam * c->lam - 4.0 * c->S * a;
-  double lo = 0.0;
-  double x = fmin (hi, fmax (0.0, log ((c->lam + sqrt (fmax (0.0, D)))
-                                        / (2.0 * a))));
+  double lo = 0.0, x = x0;
+  if (!(x0 > 0.0 && x0 < hi))
+    {
+      /* Start where h = lam with asinh(S E) ~ S E and w ~ 1 (E small):
+         S E + S/((C + 1) E) = lam.  */
+      double a = c->S / (c->C + 1.0), D = c->lam * c->lam - 4.0 * c->S * a;
+      x = fmin (hi, fmax (0.0, log ((c->lam + sqrt (fmax (0.0, D)))
+                                     / (2.0 * a))));
+    }
   for (int it = 0; it < 200; it++)
     {
       double E = exp (-x), SE = c->S * E, w = sqrt (1.0 + SE * SE);
@@ -79,10 +83,18 @@ line_root (const cross_par *c, double hi, double *eta)
         hi = x;
       else
         lo = x;
-      double nx = x - h / d;
+      /* Converged when the Newton step itself is below the tolerance
+         (tested before the bracket: at the root the step is 0 and would
+         otherwise fall back to bisection).  */
+      double step = h / d, nx = x - step;
+      if (fabs (step) <= 1e-14 * fmax (1.0, x))
+        {
+          *eta = nx;
+          return HOLENT_SUCCESS;
+        }
       if (!(nx > lo && nx < hi))
         nx = 0.5 * (lo + hi);
-      if (fabs (nx - x) <= 1e-14 * fmax (1.0, x) || hi - lo <= 4e-16 * hi)
+      if (hi - lo <= 4e-16 * hi)
         {
           *eta = nx;
           return HOLENT_SUCCESS;
@@ -140,7 +152,8 @@ time_sc (const holent_quench_bg *q, double t, double sc[2])
 }
 
 static int quench_len (const holent_quench_bg *q, double l, double t,
-                       const double sc[2], double *len, double *eta);
+                       const double sc[2], double eta0, double *len,
+                       double *eta);
 
 int
 holent_quench_length (const holent_quench_bg *q, double l, double t,
@@ -150,12 +163,14 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
   if (q == NULL || len == NULL || isnan (l) || !isfinite (t))
     return HOLENT_EINVAL;
   time_sc (q, t, sc);
-  return quench_len (q, l, t, sc, len, eta);
+  return quench_len (q, l, t, sc, -1.0, len, eta);
 }
 
+/* eta0 > 0: the crossing's eta at a nearby time, where the line's
+   Newton iteration starts.  */
 static int
 quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
-            double *len, double *eta)
+            double eta0, double *len, double *eta)
 {
   double e = 0.0;
   int circle = q->vac.circle;
@@ -184,7 +199,7 @@ quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
       /* Bracket: h(0) = R t < pi l/beta, and h >= 3 S/(8 C E) once
          E <= 1/2, so E = 3 S/(8 C lam) is above the root.  */
       double hi = fmax (M_LN2, log (8.0 * c.C * c.lam / (3.0 * c.S)));
-      st = line_root (&c, hi, &e);
+      st = line_root (&c, hi, eta0, &e);
     }
   else
     {
@@ -233,19 +248,101 @@ quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
   return HOLENT_SUCCESS;
 }
 
+/* One chord of a scan: its arc, its two static lengths and the last
+   crossing (eta, or -1 when none was solved).  */
+typedef struct
+{
+  double arc, vac, bh, eta;
+} q_chord;
+
+struct holent_quench_scan
+{
+  size_t cap;      /* chords held: 2 nmax x nmax (row s, pair t) */
+  q_chord *ch;
+};
+
+holent_quench_scan *
+holent_quench_scan_alloc (size_t nmax)
+{
+  if (nmax == 0 || nmax > HOLENT_QUENCH_SCAN_NMAX)
+    return NULL;
+  holent_quench_scan *s = malloc (sizeof *s);
+  if (s == NULL)
+    return NULL;
+  s->cap = 2 * nmax * nmax;
+  s->ch = malloc (s->cap * sizeof *s->ch);
+  if (s->ch == NULL)
+    {
+      free (s);
+      return NULL;
+    }
+  for (size_t k = 0; k < s->cap; k++)
+    s->ch[k].arc = NAN;
+  return s;
+}
+
+void
+holent_quench_scan_free (holent_quench_scan *s)
+{
+  if (s == NULL)
+    return;
+  free (s->ch);
+  free (s);
+}
+
 typedef struct
 {
   const holent_quench_bg *q;
   double t, sc[2];
+  q_chord *ch;     /* NULL: no scan */
+  size_t N, K;     /* endpoints, pairs per row */
 } q_ctx;
 
+/* A chord met at an earlier time keeps its static lengths; the slot is
+   keyed by the DP's (row, pair) and checked against the arc, so a
+   different region only costs a recomputation.  Each slot is written by
+   the one call that owns it (fill_weights visits each (row, pair) once),
+   so threads never share one.  */
 static int
 q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
 {
   const q_ctx *c = vctx;
-  (void) i;
-  (void) j;
-  return quench_len (c->q, arc, c->t, c->sc, len, NULL);
+  if (c->ch == NULL)
+    return quench_len (c->q, arc, c->t, c->sc, -1.0, len, NULL);
+  q_chord *h = c->ch + i * c->K + ((j + c->N - i - 1) % c->N) / 2;
+  int st;
+  if (h->arc != arc)
+    {
+      h->arc = arc;
+      h->eta = -1.0;
+      h->vac = h->bh = NAN;
+      st = quench_len (c->q, arc, -1.0, c->sc, -1.0, &h->vac, NULL);
+      if (st == HOLENT_SUCCESS)
+        st = holent_geo_arc_length (&c->q->bh, c->q->vac.circle
+                                    && arc > 0.5 * c->q->vac.L
+                                    ? c->q->vac.L - arc : arc, &h->bh);
+      if (st)
+        {
+          h->arc = NAN;
+          return st;
+        }
+    }
+  double l = c->q->vac.circle && arc > 0.5 * c->q->vac.L
+             ? c->q->vac.L - arc : arc;
+  if (c->t <= 0.0)
+    {
+      *len = h->vac;
+      return HOLENT_SUCCESS;
+    }
+  if (c->t >= 0.5 * l)
+    {
+      *len = h->bh;
+      return HOLENT_SUCCESS;
+    }
+  double e;
+  st = quench_len (c->q, arc, c->t, c->sc, h->eta, len, &e);
+  h->eta = st == HOLENT_SUCCESS ? e : -1.0;
+  return st;
 }
 
 int
@@ -269,17 +366,29 @@ holent_quench_points_length (const holent_quench_bg *q, double x1, double x2,
 }
 
 int
-holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
-                       const holent_region *r, double t,
-                       holent_rt_result *res, size_t *pairs, double *arcs)
+holent_quench_entropy_scan (holent_rt_workspace *w,
+                            const holent_quench_bg *q,
+                            const holent_region *r, double t,
+                            holent_quench_scan *scan, holent_rt_result *res,
+                            size_t *pairs, double *arcs)
 {
-  if (q == NULL || !isfinite (t))
+  if (q == NULL || r == NULL || !isfinite (t))
     return HOLENT_EINVAL;
-  q_ctx c = { q, t, { 0.0, 0.0 } };
+  q_ctx c = { q, t, { 0.0, 0.0 }, NULL, 2 * r->n, r->n };
+  if (scan != NULL && 2 * r->n * r->n <= scan->cap)
+    c.ch = scan->ch;
   time_sc (q, t, c.sc);
   /* The vacuum background sets the candidates: on the circle the state
      is pure (no horizon term) and each chord has the geodesic over its
      shorter arc.  */
   return holent_rt_entropy_cost (w, &q->vac, r, q_cost, &c, res, pairs,
                                  arcs);
+}
+
+int
+holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
+                       const holent_region *r, double t,
+                       holent_rt_result *res, size_t *pairs, double *arcs)
+{
+  return holent_quench_entropy_scan (w, q, r, t, NULL, res, pairs, arcs);
 }

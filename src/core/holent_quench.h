@@ -73,4 +73,24 @@ int holent_quench_entropy (holent_rt_workspace *w, const holent_quench_bg *q,
                            holent_rt_result *res, size_t *pairs,
                            double *arcs);
 
+/* A scan over many times of the same region: each chord's static
+   lengths (before the quench, after saturation) are computed once and
+   the crossing of the previous time starts the next one's root search.
+   Holds regions of up to nmax intervals (2 nmax^2 chords);
+   nmax <= HOLENT_QUENCH_SCAN_NMAX, else NULL.  */
+#define HOLENT_QUENCH_SCAN_NMAX 512
+typedef struct holent_quench_scan holent_quench_scan;
+holent_quench_scan *holent_quench_scan_alloc (size_t nmax);
+void holent_quench_scan_free (holent_quench_scan *s);
+
+/* holent_quench_entropy with the scan's memory (scan may be NULL; a
+   region larger than the scan holds is computed without it): the same
+   result to rounding.  */
+int holent_quench_entropy_scan (holent_rt_workspace *w,
+                                const holent_quench_bg *q,
+                                const holent_region *r, double t,
+                                holent_quench_scan *scan,
+                                holent_rt_result *res, size_t *pairs,
+                                double *arcs);
+
 #endif /* HOLENT_QUENCH_H */

@@ -236,6 +236,63 @@ test_make_points (void)
   HT_CHECK (e.arg == HOLENT_TFD_ARG_BETA, "arg %d", e.arg);
 }
 
+/* A scan's memory (static lengths kept, Newton warm-started) gives the
+   plain computation's entropy to rounding, on the line and the circle,
+   when the region changes inside one scan, and when a region is larger
+   than the scan holds.  */
+static void
+test_scan (void)
+{
+  holent_quench_bg q;
+  holent_region *r = holent_region_alloc (8);
+  holent_rt_workspace *w = holent_rt_workspace_alloc_dp (8);
+  holent_quench_scan *sc = holent_quench_scan_alloc (6);
+  holent_rt_result res, ref;
+  unsigned long seed = 12345;
+  HT_CHECK (holent_quench_scan_alloc (0) == NULL, "nmax 0");
+  HT_CHECK (holent_quench_scan_alloc (HOLENT_QUENCH_SCAN_NMAX + 1) == NULL,
+            "nmax cap");
+  double worst = 0.0;
+  for (int circle = 0; circle < 2; circle++)
+    {
+      double L = 40.0;
+      HT_STATUS (holent_quench_init (&q, circle, L, 1e-3, 1.0, 3.0),
+                 HOLENT_SUCCESS);
+      for (int reg = 0; reg < 6; reg++)
+        {
+          size_t n = 1 + (size_t) reg + (reg == 5 ? 2 : 0);  /* 8 > 6 */
+          double a[8], b[8], x = 0.0;
+          for (size_t k = 0; k < n; k++)
+            {
+              seed = seed * 6364136223846793005UL + 1442695040888963407UL;
+              x += 0.3 + (double) (seed >> 11) / 9007199254740992.0 * 3.0;
+              a[k] = x;
+              seed = seed * 6364136223846793005UL + 1442695040888963407UL;
+              x += 0.2 + (double) (seed >> 11) / 9007199254740992.0 * 3.0;
+              b[k] = x;
+            }
+          HT_STATUS (holent_region_set (r, circle, L, n, a, b),
+                     HOLENT_SUCCESS);
+          for (int k = -5; k < 400; k++)
+            {
+              double t = 0.031 * k;
+              HT_STATUS (holent_quench_entropy_scan (w, &q, r, t, sc, &res,
+                                                     NULL, NULL),
+                         HOLENT_SUCCESS);
+              HT_STATUS (holent_quench_entropy (w, &q, r, t, &ref, NULL,
+                                                NULL), HOLENT_SUCCESS);
+              double d = fabs (res.S - ref.S) / fmax (1.0, fabs (ref.S));
+              worst = d > worst ? d : worst;
+            }
+        }
+    }
+  HT_CHECK (worst <= 1e-13, "scan vs plain: worst relative %g", worst);
+  holent_quench_scan_free (sc);
+  holent_quench_scan_free (NULL);
+  holent_region_free (r);
+  holent_rt_workspace_free (w);
+}
+
 int
 main (void)
 {
@@ -250,5 +307,6 @@ main (void)
   check_stationary (1, 3.0, 2.0, 1.5, 0.2);
   test_limits ();
   test_regions ();
+  test_scan ();
   return HT_DONE ();
 }
