@@ -99,8 +99,10 @@
 ## not touch.  On a thermofield double (@code{ads3_background ("tfd", ...)})
 ## a region is a struct with fields @code{left} and @code{right} (each n x 2
 ## or n x 4, possibly empty; a plain matrix is the right side), minimised
-## over geodesics within a side and through the bridge
-## (@file{doc/tfd_shock.md}; regions on both sides need the line).  The
+## over geodesics within a side and through the bridge, on the line and on
+## the circle (the annulus of the two-sided BTZ: both homotopy classes,
+## every winding through the bridge, the horizon as homology asks;
+## @file{doc/tfd_shock.md}).  A side may be the whole circle.  The
 ## option @qcode{"t"} (scalar or vector) adds t to every endpoint time (on
 ## a thermofield double: both sides move forward) and, on a quench
 ## (@code{ads3_background ("quench", ...)}), is the boundary time after the
@@ -228,7 +230,15 @@ endfunction
 %!error <thermofield double> rt_entropy (ads3_background ("vacuum", "line"), struct ("left", [0 1]))
 %!error <sides are 'left' and 'right'> rt_entropy (ads3_background ("tfd", "line", "beta", 1), struct ("middle", [0 1]))
 %!error <own times> rt_entropy (ads3_background ("quench", "line", "beta", 1), [0 1 0 0])
-%!error <not supported> rt_entropy (ads3_background ("tfd", "circle", "beta", 1), struct ("left", [0 1], "right", [0 1]))
+%!test
+%! ## Purity of the thermofield double on a circle: S(A) = S(A^c), the
+%! ## complement taken on both sides (common practice).
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 3);
+%! A = struct ("left", [0.2 0.9; 1.5 2.1], "right", [0.1 0.7; 1.3 2.6]);
+%! Ac = struct ("left", [0.9 1.5; 2.1 3.2], "right", [0.7 1.3; 2.6 3.1]);
+%! t = [0 0.3 3];
+%! assert (rt_entropy (bg, A, "t", t), rt_entropy (bg, Ac, "t", t), 1e-12);
+%! assert (rt_entropy (bg, struct ("left", [0 3], "right", [0 3])), 0);
 %!error <has no intervals> rt_entropy (ads3_background ("tfd", "line", "beta", 1), struct ("left", zeros (0, 2)))
 %!error <NaN> rt_entropy (ads3_background ("vacuum", "line"), [0 1], "t", NaN)
 

@@ -553,10 +553,6 @@ fail_region (gw_state *g, int st, const char *nm, size_t row, size_t row2)
     case HOLENT_EDOM:
       fail (g, st, nm, row, "must have start < end (line) or end - start "
              "<= circumference (circle)");
-    case HOLENT_EUNSUP:
-      fail (g, st, nm, HOLENT_NOINDEX, "regions on both sides of a "
-             "thermofield double on a circle are not supported (use the "
-             "line, or one side)");
     default:
       fail (g, st, nm, HOLENT_NOINDEX, "%s", holent_strerror (st));
     }

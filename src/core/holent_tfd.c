@@ -186,21 +186,15 @@ lncosh (double x)
   return x + log1p (exp (-2.0 * x)) - M_LN2;
 }
 
-int
-holent_tfd_cross_length (const holent_tfd_bg *b, double xL, double tL,
-                         double xR, double tR, double *len)
+/* The bridge geodesic for a lifted separation dx = xR - xL (no
+   reduction: on a circle each winding class has its own dx).  */
+static int
+cross_len (const holent_tfd_bg *b, double dx, double tL, double tR,
+           double *len)
 {
-  if (b == NULL || len == NULL)
+  double k = M_PI / b->beta, T = tL + tR;
+  if (!isfinite (dx) || !isfinite (T))
     return HOLENT_EINVAL;
-  if (!isfinite (xL) || !isfinite (tL) || !isfinite (xR) || !isfinite (tR)
-      || !isfinite (xR - xL) || !isfinite (tL + tR))
-    return HOLENT_EINVAL;
-  double dx = xR - xL, k = M_PI / b->beta, T = tL + tR;
-  if (b->side.circle)
-    {
-      /* Shortest winding: the length grows with |dx|.  */
-      dx = remainder (dx, b->side.L);
-    }
   /* log of sqrt(cosh cosh), then add the shock term in log space.  */
   double g = 0.5 * (lncosh (k * (T + dx)) + lncosh (k * (T - dx)));
   if (b->alpha > 0.0)
@@ -210,6 +204,38 @@ holent_tfd_cross_length (const holent_tfd_bg *b, double xL, double tL,
     }
   *len = b->side.pref + 2.0 * g;
   return isfinite (*len) ? HOLENT_SUCCESS : HOLENT_EDOM;
+}
+
+int
+holent_tfd_cross_length (const holent_tfd_bg *b, double xL, double tL,
+                         double xR, double tR, double *len)
+{
+  if (b == NULL || len == NULL)
+    return HOLENT_EINVAL;
+  if (!isfinite (xL) || !isfinite (tL) || !isfinite (xR) || !isfinite (tR)
+      || !isfinite (xR - xL))
+    return HOLENT_EINVAL;
+  double dx = xR - xL;
+  /* Shortest winding: the length grows with |dx|.  */
+  if (b->side.circle)
+    dx = remainder (dx, b->side.L);
+  return cross_len (b, dx, tL, tR, len);
+}
+
+int
+holent_tfd_cross_length_winding (const holent_tfd_bg *b, double xL,
+                                 double tL, double xR, double tR,
+                                 long winding, double *len)
+{
+  if (b == NULL || len == NULL)
+    return HOLENT_EINVAL;
+  if (!isfinite (xL) || !isfinite (tL) || !isfinite (xR) || !isfinite (tR)
+      || !isfinite (xR - xL))
+    return HOLENT_EINVAL;
+  if (winding != 0 && !b->side.circle)
+    return HOLENT_EDOM;
+  return cross_len (b, (xR - xL) + (double) winding * b->side.L, tL, tR,
+                    len);
 }
 
 int
@@ -230,9 +256,11 @@ struct holent_tfd_workspace
   holent_region *reg[2], *fake;
   double *tp[2];       /* endpoint times of each side              */
   double *x, *t;       /* combined endpoints in the bridge order   */
+  double *lift;        /* multiples of L added to x (circle)       */
   int *side;
   double *fa, *fb;     /* rows of the stand-in region              */
   size_t *pairs;
+  holent_poll poll;    /* between the cuts of the annulus          */
 };
 
 int
@@ -241,6 +269,8 @@ holent_tfd_workspace_set_poll (holent_tfd_workspace *w,
 {
   if (w == NULL)
     return HOLENT_EINVAL;
+  w->poll.fn = poll ? poll->fn : NULL;
+  w->poll.ctx = poll ? poll->ctx : NULL;
   return holent_rt_set_poll (w->rt, poll);
 }
 
@@ -262,13 +292,14 @@ holent_tfd_workspace_alloc (size_t nmax)
   w->tp[1] = malloc (N * sizeof (double));
   w->x = malloc (N * sizeof (double));
   w->t = malloc (N * sizeof (double));
+  w->lift = malloc (N * sizeof (double));
   w->side = malloc (N * sizeof (int));
   w->fa = malloc (nmax * sizeof (double));
   w->fb = malloc (nmax * sizeof (double));
   w->pairs = malloc (N * sizeof (size_t));
   if (!w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
-      || !w->tp[1] || !w->x || !w->t || !w->side || !w->fa || !w->fb
-      || !w->pairs)
+      || !w->tp[1] || !w->x || !w->t || !w->lift || !w->side || !w->fa
+      || !w->fb || !w->pairs)
     {
       holent_tfd_workspace_free (w);
       return NULL;
@@ -289,6 +320,7 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w->tp[1]);
   free (w->x);
   free (w->t);
+  free (w->lift);
   free (w->side);
   free (w->fa);
   free (w->fb);
@@ -299,25 +331,40 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
 typedef struct
 {
   const holent_tfd_bg *b;
-  const double *x, *t;
+  const double *x, *t, *lift;
   const int *side;
 } tfd_ctx;
 
-/* Lengths for the minimiser: within a side, or through the bridge.  */
+/* Lengths for the minimiser over the bridge order (right ascending, then
+   left descending; coordinates x + lift L): within a side, the geodesic
+   over the arc between the two lifted points (the one that does not
+   cross a cut); through the bridge, the winding of the lifted
+   separation.  */
 static int
 tfd_cost (void *vctx, size_t i, size_t j, double arc, double *len)
 {
   const tfd_ctx *c = vctx;
+  double im, L = c->b->side.L;
   (void) arc;
   if (c->side[i] == c->side[j])
-    return holent_tfd_side_length (c->b, c->x[i], c->t[i], c->x[j],
-                                   c->t[j], HOLENT_GEO_SHORTER, len);
-  size_t l = c->side[i] == 0 ? i : j, r = c->side[i] == 0 ? j : i;
-  return holent_tfd_cross_length (c->b, c->x[l], c->t[l], c->x[r], c->t[r],
-                                  len);
+    {
+      /* lo has the smaller lifted x: first on the right, last on the
+         left.  */
+      size_t lo = (i < j) == (c->side[i] == 1) ? i : j, hi = i + j - lo;
+      return holent_hrt_length (&c->b->side, c->x[lo], c->t[lo], c->x[hi],
+                                c->t[hi], c->b->side.circle
+                                ? HOLENT_GEO_POSITIVE : HOLENT_GEO_SHORTER,
+                                0, len, &im);
+    }
+  size_t l = c->side[i] == 0 ? i : j, r = i + j - l;
+  double dx = c->x[r] - c->x[l];
+  if (c->b->side.circle)
+    dx += (c->lift[r] - c->lift[l]) * L;
+  return cross_len (c->b, dx, c->t[l], c->t[r], len);
 }
 
-/* Normalise one side into w->reg[s] and w->tp[s].  */
+/* Normalise one side into w->reg[s] and w->tp[s]; a whole circle has no
+   endpoints and so no times.  */
 static int
 set_side (holent_tfd_workspace *w, const holent_tfd_bg *b, int s,
           const holent_tfd_side *in, double dt, size_t *bad_row)
@@ -331,6 +378,8 @@ set_side (holent_tfd_workspace *w, const holent_tfd_bg *b, int s,
       *bad_row = r->bad[0];
       return st;
     }
+  if (r->whole)
+    return HOLENT_SUCCESS;
   st = holent_hrt_region_times (r, in->n, in->ta, in->tb, w->tp[s], &bad);
   if (st)
     {
@@ -339,6 +388,216 @@ set_side (holent_tfd_workspace *w, const holent_tfd_bg *b, int s,
     }
   for (size_t i = 0; i < 2 * r->n; i++)
     w->tp[s][i] += dt;
+  /* Each side must be achronal.  */
+  for (size_t i = 0; i < 2 * r->n; i++)
+    for (size_t j = i + 1; j < 2 * r->n; j++)
+      if (!holent_hrt_spacelike (&b->side, r->pts[i], w->tp[s][i],
+                                 r->pts[j], w->tp[s][j]))
+        return HOLENT_ETIMELIKE;
+  return HOLENT_SUCCESS;
+}
+
+/* Point k of the bridge order: side s, sorted endpoint i, lifted by m.  */
+static void
+put_point (holent_tfd_workspace *w, size_t k, int s, size_t i, double m)
+{
+  w->x[k] = w->reg[s]->pts[i];
+  w->t[k] = w->tp[s][i];
+  w->side[k] = s;
+  w->lift[k] = m;
+}
+
+/* The stand-in region: n intervals on a line, so the minimiser runs its
+   linear case (every non-crossing pairing) over the bridge order.  */
+static int
+set_fake (holent_tfd_workspace *w, size_t n, holent_geo_bg *line,
+          double c)
+{
+  for (size_t k = 0; k < n; k++)
+    {
+      w->fa[k] = 2.0 * k;
+      w->fb[k] = 2.0 * k + 1.0;
+    }
+  int st = holent_region_set (w->fake, 0, 0.0, n, w->fa, w->fb);
+  if (st)
+    return st;
+  return holent_geo_bg_init (line, HOLENT_BULK_POINCARE, 0.0, 1e-3, 0, 0, 1,
+                             c);
+}
+
+/* Geodesics through the bridge among the minimiser's pairs.  */
+static size_t
+count_cross (const holent_tfd_workspace *w, size_t n)
+{
+  size_t k, nc = 0;
+  for (k = 0; k < n; k++)
+    nc += w->side[w->pairs[2 * k]] != w->side[w->pairs[2 * k + 1]];
+  return nc;
+}
+
+/* The one-sided values of side s on the annulus (lengths): sig[0] the
+   best candidate whose horizon face lies outside A_s, sig[1] the best
+   whose face lies in A_s (which is sig[0] of the complement: the same
+   endpoints with the other parity).  The whole circle: Inf and 0 (it is
+   itself homologous to the horizon).  */
+static int
+side_sigmas (holent_tfd_workspace *w, const holent_tfd_bg *b, int s,
+             double sig[2], double *count, double *lcount)
+{
+  const holent_region *r = w->reg[s];
+  *count = 1.0;
+  *lcount = 0.0;
+  if (r->whole)
+    {
+      sig[0] = INFINITY;
+      sig[1] = 0.0;
+      return HOLENT_SUCCESS;
+    }
+  holent_geo_bg g = b->side;
+  g.S_BH = INFINITY;  /* never the horizon: the face outside A */
+  holent_region comp = *r;
+  comp.start0 = !r->start0;
+  for (int h = 0; h < 2; h++)
+    {
+      holent_rt_result res;
+      size_t bi, bj;
+      int st = holent_hrt_entropy (w->rt, &g, h ? &comp : r, w->tp[s], &res,
+                                   NULL, NULL, &bi, &bj);
+      if (st)
+        return st;
+      sig[h] = res.length;
+    }
+  return holent_rt_count (&b->side, r->n, count, lcount);
+}
+
+/* log(e^a + e^b).  */
+static double
+log_add (double a, double b)
+{
+  double m = fmax (a, b);
+  return m + log1p (exp (-fabs (a - b)));
+}
+
+/* The annulus (both sides of a circle; doc/tfd_shock.md, section 3).  */
+static int
+annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                 holent_rt_result *res, size_t *ncross, int *bad_side)
+{
+  const double c6 = b->side.c / 6.0, SBH = b->side.S_BH, Lc = b->side.L;
+  double sig[2][2], cnt[2], lcnt[2];
+  for (int s = 0; s < 2; s++)
+    {
+      int st = side_sigmas (w, b, s, sig[s], &cnt[s], &lcnt[s]);
+      if (st)
+        {
+          *bad_side = s;
+          return st;
+        }
+    }
+  /* No bridge: each side's face of the hole in or out of A_s; the
+     horizon exactly when one (not both) is in: Z2 homology.  */
+  const double len[4] = { sig[0][0] + sig[1][0], sig[0][1] + sig[1][1],
+                          sig[0][0] + sig[1][1], sig[0][1] + sig[1][0] };
+  int hbest = 0;
+  double best = INFINITY;
+  for (int h = 0; h < 4; h++)
+    {
+      double S = c6 * len[h] + (h >= 2 ? SBH : 0.0);
+      if (S < best)
+        {
+          best = S;
+          hbest = h;
+        }
+    }
+  const holent_region *R = w->reg[1], *Lr = w->reg[0];
+  const size_t nr = 2 * R->n, nl = 2 * Lr->n;
+  res->S = best;
+  res->length = len[hbest];
+  res->horizon = hbest >= 2;
+  res->m = (nr + nl) / 2;
+  res->candidates = cnt[0] * cnt[1];
+  res->log_candidates = lcnt[0] + lcnt[1];
+  res->n_short = 0;
+  for (int s = 0; s < 2; s++)
+    {
+      const holent_region *r = w->reg[s];
+      size_t np = 2 * r->n;
+      for (size_t i = 0; i < np; i++)
+        res->n_short += (i + 1 < np ? r->pts[i + 1] : r->pts[0] + Lc)
+                        - r->pts[i] <= 2.0 * b->side.eps;
+    }
+  if (nr == 0 || nl == 0)
+    return HOLENT_SUCCESS;
+
+  /* Cut along a bridge (rb, lb): the rest is a disk whose boundary, in
+     the bridge order, is the right circle from rb up to rb + L and the
+     left circle from lb + L down to lb.  rb and lb must be of the same
+     kind (both starts or both ends) for the faces beside the cut to agree
+     with A.  */
+  holent_geo_bg line;
+  const size_t n1 = (nr + nl) / 2 - 1;
+  int st = set_fake (w, n1, &line, b->side.c);
+  if (st)
+    return st;
+  tfd_ctx c = { b, w->x, w->t, w->lift, w->side };
+  const double total = (double) nr * (double) nl;
+  for (size_t i = 0; i < nr; i++)
+    {
+      if (w->poll.fn && w->poll.fn (w->poll.ctx, (double) i * nl, total))
+        return HOLENT_EINTR;
+      int kind_r = ((i & 1) == 0) == (R->start0 != 0);
+      for (size_t j = 0; j < nl; j++)
+        {
+          int kind_l = ((j & 1) == 0) == (Lr->start0 != 0);
+          if (kind_r != kind_l)
+            continue;
+          /* The shortest winding (and the other one at a tie): an
+             optimum always has a bridge of |dx| <= L/2, section 3.  */
+          double d0 = Lr->pts[j] - R->pts[i];
+          double m0 = -nearbyint (d0 / Lc);
+          for (int alt = 0; alt < 2; alt++)
+            {
+              double m = m0, dd = d0 + m0 * Lc;
+              if (alt)
+                {
+                  m = m0 + (dd > 0.0 ? -1.0 : 1.0);
+                  dd = d0 + m * Lc;
+                  if (fabs (dd) > 0.5 * Lc * (1.0 + 1e-9))
+                    continue;
+                }
+              double lb;
+              st = cross_len (b, -dd, w->tp[0][j], w->tp[1][i], &lb);
+              if (st)
+                return st;
+              size_t k = 0;
+              for (size_t p = i + 1; p < nr; p++)
+                put_point (w, k++, 1, p, 0.0);
+              for (size_t p = 0; p < i; p++)
+                put_point (w, k++, 1, p, 1.0);
+              for (size_t p = j; p-- > 0;)
+                put_point (w, k++, 0, p, m + 1.0);
+              for (size_t p = nl; p-- > j + 1;)
+                put_point (w, k++, 0, p, m);
+              holent_rt_result r1;
+              st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost,
+                                           &c, &r1, w->pairs, NULL);
+              if (st)
+                return st;
+              res->candidates += r1.candidates;
+              res->log_candidates = log_add (res->log_candidates,
+                                             r1.log_candidates);
+              double S = c6 * (lb + r1.length);
+              if (S < res->S)
+                {
+                  res->S = S;
+                  res->length = lb + r1.length;
+                  res->horizon = 0;
+                  if (ncross)
+                    *ncross = 1 + count_cross (w, n1);
+                }
+            }
+        }
+    }
   return HOLENT_SUCCESS;
 }
 
@@ -391,49 +650,21 @@ holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       return st;
     }
   if (b->side.circle)
-    return HOLENT_EUNSUP;
+    return annulus_entropy (w, b, res, ncross, bad_side);
 
-  /* Bridge order: right ascending, then left descending.  */
+  /* The line: bridge order, right ascending, then left descending.  */
   size_t N = 0;
   const holent_region *R = w->reg[1], *Lr = w->reg[0];
-  for (size_t i = 0; i < 2 * R->n; i++, N++)
-    {
-      w->x[N] = R->pts[i];
-      w->t[N] = w->tp[1][i];
-      w->side[N] = 1;
-    }
-  for (size_t i = 2 * Lr->n; i-- > 0; N++)
-    {
-      w->x[N] = Lr->pts[i];
-      w->t[N] = w->tp[0][i];
-      w->side[N] = 0;
-    }
-  /* Each side must be achronal.  */
-  for (size_t i = 0; i < N; i++)
-    for (size_t j = i + 1; j < N && w->side[j] == w->side[i]; j++)
-      if (!holent_hrt_spacelike (&b->side, w->x[i], w->t[i], w->x[j],
-                                 w->t[j]))
-        {
-          *bad_side = w->side[i];
-          return HOLENT_ETIMELIKE;
-        }
-  /* A stand-in region on a line with the same number of endpoints, so
-     the minimiser runs its linear case over our order.  */
+  for (size_t i = 0; i < 2 * R->n; i++)
+    put_point (w, N++, 1, i, 0.0);
+  for (size_t i = 2 * Lr->n; i-- > 0;)
+    put_point (w, N++, 0, i, 0.0);
   size_t n = N / 2;
-  for (size_t k = 0; k < n; k++)
-    {
-      w->fa[k] = 2.0 * k;
-      w->fb[k] = 2.0 * k + 1.0;
-    }
-  int st = holent_region_set (w->fake, 0, 0.0, n, w->fa, w->fb);
-  if (st)
-    return st;
   holent_geo_bg line;
-  st = holent_geo_bg_init (&line, HOLENT_BULK_POINCARE, 0.0, 1e-3, 0, 0, 1,
-                           b->side.c);
+  int st = set_fake (w, n, &line, b->side.c);
   if (st)
     return st;
-  tfd_ctx c = { b, w->x, w->t, w->side };
+  tfd_ctx c = { b, w->x, w->t, w->lift, w->side };
   st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost, &c, res,
                                ncross ? w->pairs : NULL, NULL);
   if (st)
@@ -443,8 +674,7 @@ holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
     res->n_short += w->side[i] == w->side[i + 1]
                     && fabs (w->x[i + 1] - w->x[i]) <= 2.0 * b->side.eps;
   if (ncross)
-    for (size_t k = 0; k < n; k++)
-      *ncross += w->side[w->pairs[2 * k]] != w->side[w->pairs[2 * k + 1]];
+    *ncross = count_cross (w, n);
   return HOLENT_SUCCESS;
 }
 

@@ -88,9 +88,18 @@ int holent_tfd_shock_time (int circle, double L, double beta, double c,
                            double E, double alpha, double *tw);
 
 /* Length of the geodesic through the bridge between the left point
-   (xL, tL) and the right point (xR, tR).  */
+   (xL, tL) and the right point (xR, tR); on a circle the shortest
+   winding.  */
 int holent_tfd_cross_length (const holent_tfd_bg *b, double xL, double tL,
                              double xR, double tR, double *len);
+
+/* The same geodesic in the winding class dx = xR - xL + winding L (on
+   the circle every class is a geodesic of its own, the covering space
+   being the planar two-sided BTZ; doc/tfd_shock.md).  HOLENT_EDOM for a
+   nonzero winding on the line.  */
+int holent_tfd_cross_length_winding (const holent_tfd_bg *b, double xL,
+                                     double tL, double xR, double tR,
+                                     long winding, double *len);
 
 /* Length between two points of one side (side 0 left, 1 right): the
    covariant BTZ length (holent_hrt_length, class cls), untouched by the
@@ -117,16 +126,25 @@ typedef struct
 } holent_tfd_side;
 
 /* Entropy of A_L u A_R at the times given, shifted by dt on both sides:
- * the exact minimum over the non-crossing pairings of the endpoints in the
+ * the exact minimum over every candidate (doc/tfd_shock.md, section 3).
+ * On the line: the non-crossing pairings of the endpoints in the
  * boundary order of the bridge slice (right side ascending, then left
  * side descending), each pair joined within a side or through the
- * bridge.  On the line that is every candidate (the horizon is not
- * compact).  On a circle a one-sided region is the BTZ one, with the
- * horizon as homology asks; regions on both sides of a circle give
- * HOLENT_EUNSUP.  res->horizon flags the horizon, res->m the number of
- * geodesics, *ncross (if not NULL) those through the bridge.  Errors:
- * those of holent_region_set for each side (*bad_side 0 left, 1 right,
- * *bad_row the row), HOLENT_ETIMELIKE for a causal pair on one side.  */
+ * bridge (the horizon is not compact).  On a circle the slice is an
+ * annulus: either no geodesic crosses the bridge (each side's one-sided
+ * candidates, both homotopy classes, the horizon as the Z2 homology of
+ * the annulus asks), or an even number do; cutting along one of them
+ * (every left-right pair of endpoints of the same kind, its winding the
+ * shortest one: an optimum always has such a bridge) leaves a disk on
+ * which the line's dynamic programme runs over lifted coordinates.
+ * O(nL nR N^3) for N endpoints in all.  A side may be the whole circle
+ * (one row of length L, times ignored).  res->horizon flags the horizon,
+ * res->m the number of geodesics, res->candidates the configurations the
+ * minimum was taken over (counted with multiplicity over the cuts),
+ * *ncross (if not NULL) the geodesics through the bridge.  Errors: those
+ * of holent_region_set for each side (*bad_side 0 left, 1 right,
+ * *bad_row the row), HOLENT_ETIMELIKE for a causal pair on one side,
+ * HOLENT_EINTR when the poll asks to stop.  */
 int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         const holent_tfd_side *left,
                         const holent_tfd_side *right, double dt,

@@ -131,6 +131,150 @@ extremal_length (ex_par *e)
   return minimise (over_v, e, xb - 0.1, xb + 0.1, xb);
 }
 
+/* Two-sided BTZ on a circle of circumference L is the planar one with
+   x ~ x + L (Banados, Henneaux, Teitelboim and Zanelli 1993, PRD 48,
+   1506): the bridge geodesic of winding n joins the left point to the
+   image x_R + n L of the right one, at the embedding distance
+   acosh(-X.Y) (FG cutoff: agrees with the regulated length to O(eps^2)).
+   The left point sits at x = 0 (a boost of the X0-X1 plane), so the
+   inner product has no cancellation.  */
+static void
+test_winding (void)
+{
+  holent_tfd_bg b;
+  const double eps = 1e-6, L = 3.0;
+  static const double cases[][4] = {
+    /* beta, xR, tL, tR */
+    { 2.0, 0.4, 0.3, 0.1 }, { 1.0, 2.9, -0.2, 0.7 }, { 4.0, 1.5, 0.0, 0.0 },
+    { 0.7, 0.1, 1.1, -0.4 }
+  };
+  for (size_t k = 0; k < 4; k++)
+    {
+      const double *c = cases[k], R = 2 * M_PI / c[0];
+      HT_STATUS (holent_tfd_init (&b, 1, L, eps, c[0], 1.0, 0.0),
+                 HOLENT_SUCCESS);
+      for (long n = -2; n <= 2; n++)
+        {
+          double X[4], Y[4], len;
+          kr_boundary (R, eps, 0, 0.0, c[2], X);
+          kr_boundary (R, eps, 1, c[1] + n * L, c[3], Y);
+          HT_STATUS (holent_tfd_cross_length_winding (&b, 0.0, c[2], c[1],
+                                                      c[3], n, &len),
+                     HOLENT_SUCCESS);
+          double emb = kr_dist (X, Y);
+          HT_CHECK (fabs (len - emb) < 1e-9 * emb,
+                    "case %zu winding %ld: %.15g vs %.15g", k, n, len, emb);
+          /* a common shift of x changes nothing */
+          double l2;
+          HT_STATUS (holent_tfd_cross_length_winding (&b, 1.7, c[2],
+                                                      c[1] + 1.7, c[3], n,
+                                                      &l2),
+                     HOLENT_SUCCESS);
+          HT_CLOSE (l2, len, 1e-12);
+        }
+    }
+  double len;
+  HT_STATUS (holent_tfd_init (&b, 0, 0.0, eps, 1.0, 1.0, 0.0),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_cross_length_winding (&b, 0, 0, 1, 0, 1, &len),
+             HOLENT_EDOM);
+  HT_STATUS (holent_tfd_cross_length_winding (&b, 0, 0, 1, 0, 0, &len),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_cross_length_winding (&b, 0, NAN, 1, 0, 0, &len),
+             HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_cross_length_winding (NULL, 0, 0, 1, 0, 0, &len),
+             HOLENT_EINVAL);
+}
+
+static int
+stop_now (void *ctx, double done, double total)
+{
+  (void) ctx;
+  (void) done;
+  (void) total;
+  return 1;
+}
+
+/* The annulus (both sides of the circle): purity of the thermofield
+   double, S(A) = S(A^c) with the complement on both sides, and S(A_L u
+   whole right) = S(A_L^c) one-sided (common practice); the whole of both
+   sides: 0; the poll; Hartman-Maldacena growth while l << L.  */
+static void
+test_annulus (void)
+{
+  holent_tfd_bg b;
+  holent_tfd_workspace *w = holent_tfd_workspace_alloc (6);
+  holent_rt_result r1, r2;
+  size_t nc;
+  const double L = 5.0, eps = 1e-3;
+  HT_STATUS (holent_tfd_init (&b, 1, L, eps, 1.3, 3.0, 0.4), HOLENT_SUCCESS);
+  double la[2] = { 0.3, 2.0 }, lb[2] = { 1.1, 4.2 };
+  double ra[2] = { 0.9, 3.1 }, rb[2] = { 2.5, 4.4 };
+  double lca[2] = { 1.1, 4.2 }, lcb[2] = { 2.0, 5.3 };
+  double rca[2] = { 2.5, 4.4 }, rcb[2] = { 3.1, 5.9 };
+  double tl[2] = { 0.05, -0.1 }, tlb[2] = { 0.2, 0.0 };
+  double tr[2] = { 0.1, 0.0 }, trb[2] = { -0.1, 0.15 };
+  /* complement rows carry the times of their endpoints */
+  double tlc[2] = { 0.2, 0.0 }, tlcb[2] = { -0.1, 0.05 };
+  double trc[2] = { -0.1, 0.15 }, trcb[2] = { 0.0, 0.1 };
+  holent_tfd_side A_L = { 2, la, lb, tl, tlb }, A_R = { 2, ra, rb, tr, trb };
+  holent_tfd_side C_L = { 2, lca, lcb, tlc, tlcb };
+  holent_tfd_side C_R = { 2, rca, rcb, trc, trcb };
+  for (double t = 0.0; t < 3.0; t += 0.4)
+    {
+      HT_STATUS (holent_tfd_entropy (w, &b, &A_L, &A_R, t, &r1, &nc, NULL,
+                                     NULL), HOLENT_SUCCESS);
+      HT_STATUS (holent_tfd_entropy (w, &b, &C_L, &C_R, t, &r2, NULL, NULL,
+                                     NULL), HOLENT_SUCCESS);
+      HT_CLOSE (r1.S, r2.S, 1e-12);
+      HT_CHECK (r1.m == 4 && r1.candidates > 0, "m %zu", r1.m);
+    }
+  double wa[1] = { 0.0 }, wb[1] = { L }, z[1] = { 0.0 };
+  holent_tfd_side W = { 1, wa, wb, z, z };
+  holent_tfd_side one_L = { 1, la, lb, tl, tlb };
+  double ca[1] = { 1.1 }, cb[1] = { 0.3 + L }, cta[1] = { 0.2 },
+    ctb[1] = { 0.05 };
+  holent_tfd_side comp_L = { 1, ca, cb, cta, ctb };
+  holent_tfd_side E0 = { 0, NULL, NULL, NULL, NULL };
+  HT_STATUS (holent_tfd_entropy (w, &b, &one_L, &W, 0.3, &r1, &nc, NULL,
+                                 NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_entropy (w, &b, &comp_L, &E0, 0.3, &r2, NULL, NULL,
+                                 NULL), HOLENT_SUCCESS);
+  HT_CLOSE (r1.S, r2.S, 1e-12);
+  HT_CHECK (nc == 0, "no bridge to a whole side");
+  HT_STATUS (holent_tfd_entropy (w, &b, &W, &W, 0.0, &r1, &nc, NULL, NULL),
+             HOLENT_SUCCESS);
+  HT_CHECK (r1.S == 0.0 && !r1.horizon, "whole u whole: %g", r1.S);
+  HT_STATUS (holent_tfd_entropy (w, &b, &W, &E0, 0.0, &r1, &nc, NULL, NULL),
+             HOLENT_SUCCESS);
+  HT_CLOSE (r1.S, b.side.S_BH, 1e-14);
+  /* Hartman and Maldacena 2013 while l << L: the line's values.  */
+  HT_STATUS (holent_tfd_init (&b, 1, 40.0, eps, 1.0, 3.0, 0.0),
+             HOLENT_SUCCESS);
+  double a0[1] = { 0.0 }, b0[1] = { 2.0 };
+  holent_tfd_side I = { 1, a0, b0, z, z };
+  for (double t = 0; t < 2; t += 0.25)
+    {
+      HT_STATUS (holent_tfd_entropy (w, &b, &I, &I, t, &r1, &nc, NULL, NULL),
+                 HOLENT_SUCCESS);
+      double conn = 2 * log (1.0 / (M_PI * eps) * cosh (2 * M_PI * t));
+      double disc = 2 * log (1.0 / (M_PI * eps) * sinh (2 * M_PI));
+      HT_CLOSE (r1.S, fmin (conn, disc), 1e-12);
+      HT_CHECK (nc == (conn < disc ? 2u : 0u), "ncross %zu at t %g", nc, t);
+    }
+  double ts;
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &I, &I, 10.0, &ts), HOLENT_SUCCESS);
+  HT_CLOSE (ts, acosh (sinh (2 * M_PI)) / (2 * M_PI), 1e-10);
+  holent_poll stop = { stop_now, NULL };
+  HT_STATUS (holent_tfd_workspace_set_poll (w, &stop), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_entropy (w, &b, &I, &I, 0.0, &r1, &nc, NULL, NULL),
+             HOLENT_EINTR);
+  HT_STATUS (holent_tfd_workspace_set_poll (w, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_entropy (w, &b, &I, &I, 0.0, &r1, &nc, NULL, NULL),
+             HOLENT_SUCCESS);
+  holent_tfd_workspace_free (w);
+}
+
 static void
 test_cross (void)
 {
@@ -299,7 +443,9 @@ test_regions (void)
   HT_STATUS (holent_tfd_entropy (w, &b, &Ov, &R, 0, &res, &nc, &side, &row), HOLENT_EOVERLAP);
   HT_CHECK (side == 0, "side %d", side);
   HT_STATUS (holent_tfd_init (&b, 1, 5.0, eps, beta, 3.0, 0.0), HOLENT_SUCCESS);
-  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &R, 0, &res, &nc, &side, &row), HOLENT_EUNSUP);
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &R, 0, &res, &nc, &side, &row), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_entropy (w, &b, &Ls, &Bad, 0, &res, &nc, &side, &row), HOLENT_ETIMELIKE);
+  HT_CHECK (side == 1, "side %d", side);
   HT_STATUS (holent_tfd_entropy (w, &b, &E0, &R, 0, &res, &nc, &side, &row), HOLENT_SUCCESS);
   HT_STATUS (holent_tfd_mi_zero (w, &b, &E0, &R, 1, &ts), HOLENT_EEMPTY);
   HT_STATUS (holent_tfd_mi_zero (w, &b, &Ls, &R, 0, &ts), HOLENT_EDOM);
@@ -405,6 +551,8 @@ main (void)
   test_scrambling ();
   gsl_set_error_handler_off ();
   test_cross ();
+  test_winding ();
+  test_annulus ();
   test_shift ();
   test_regions ();
   return HT_DONE ();

@@ -1,0 +1,247 @@
+## SPDX-License-Identifier: GPL-3.0-or-later
+## Two-sided regions on the thermofield double on a circle (the annulus of
+## the two-sided BTZ black hole): the dynamic programme of the core against
+## a brute force written here from scratch, purity, the large-L limit, the
+## linear growth and saturation, and the information quantities built on it.
+##
+## The brute force does not share the core's formulation: every perfect
+## matching of the endpoints (crossing ones too), each pair joined by the
+## best geodesic of each parity of crossings with a reference path (from a
+## point of A^c on the left boundary to one of A^c on the right), over a
+## range of windings, with lengths from the embedding of the two-sided BTZ
+## in R^{2,2} (Banados, Henneaux, Teitelboim and Zanelli 1993, PRD 48,
+## 1506: cosh d = -X.Y, the circle an identification x ~ x + L), the
+## horizon loop (length R L, the translation length of that
+## identification) added as the Z2 homology of the annulus asks (an even
+## number of crossings with the reference path in all; common practice).
+
+## Regulated length from boundary null vectors: d = log(2 (-n.m)) + 2 log(1/eps)
+## for the cutoff r = 1/eps (the large-r limit of acosh(-X.Y)).
+%!function n = bvec (R, side, x, t)
+%!   ## Right exterior: X = (r/R)(cosh Rx, sinh Rx) and sqrt(r^2/R^2 - 1)(sinh Rt,
+%!   ## cosh Rt) with the metric diag(-1, 1, -1, 1); the left exterior at forward
+%!   ## time t flips the cosh Rt component (Kruskal u, v exchanged).
+%!   n = [cosh(R * x), sinh(R * x), sinh(R * t), (2 * side - 1) * cosh(R * t)] / R;
+%!endfunction
+
+%!function d = emb_len (R, eps, p, q)
+%!   ## p, q = [side, x, t].  Isometries first bring the pair to a symmetric
+%!   ## position (the boost x -> x - x0 in the X0-X1 plane; the Killing
+%!   ## time, which moves a right time forward and a left one back), so
+%!   ## the inner product has no cancellation between large terms.
+%!   x0 = (p(2) + q(2)) / 2;
+%!   if (p(1) == q(1))
+%!     t0 = (p(3) + q(3)) / 2;
+%!     p(3) -= t0; q(3) -= t0;
+%!   else
+%!     s = (p(3) - q(3)) / 2 * (2 * p(1) - 1);   # half of tR - tL
+%!     p(3) -= s * (2 * p(1) - 1); q(3) -= s * (2 * q(1) - 1);
+%!   endif
+%!   p(2) -= x0; q(2) -= x0;
+%!   n = bvec (R, p(1), p(2), p(3));
+%!   m = bvec (R, q(1), q(2), q(3));
+%!   ip = -n(1) * m(1) + n(2) * m(2) - n(3) * m(3) + n(4) * m(4);
+%!   d = log (2 * (-ip)) - 2 * log (eps);
+%!endfunction
+
+## Shocked bridge (Shenker and Stanford 2014, JHEP 03 (2014) 067, the
+## x-dependent form of doc/tfd_shock.md section 2, checked in
+## tests/core/test_tfd.c by extremising over the crossing point).
+%!function d = shock_len (beta, eps, alpha, xl, tl, xr, tr)
+%!   k = pi / beta; T = tl + tr; dx = xr - xl;
+%!   d = 2 * log ((beta / (pi * eps)) * (sqrt (cosh (k * (T + dx)) * cosh (k * (T - dx))) ...
+%!                                         + alpha / 2 * exp (k * (tl - tr))));
+%!endfunction
+
+## Parity of the crossings of the lifted curve from (s1, a) to (s2, b) with
+## every lift of the reference path from (left, pL + kL) to (right, pR + kL).
+%!function par = crossings (s1, a, s2, b, pL, pR, L)
+%!   K = -12:12;
+%!   if (s1 == s2)
+%!     p = merge (s1 == 1, pR, pL) + K * L;
+%!     par = mod (sum (p > min (a, b) & p < max (a, b)), 2);
+%!   else
+%!     if (s1 == 1)               # order as (left a, right b)
+%!       [a, b] = deal (b, a);
+%!     endif
+%!     par = mod (sum (sign (a - pL - K * L) .* sign (b - pR - K * L) < 0), 2);
+%!   endif
+%!endfunction
+
+%!function S = brute_entropy (bg, A, dt)
+%!   beta = bg.beta; L = bg.circumference; eps = bg.cutoff; R = 2 * pi / beta;
+%!   alpha = bg.shock_alpha;
+%!   P = zeros (0, 3);            # [side, x, t]
+%!   gaps = cell (1, 2);
+%!   nm = {"left", "right"};
+%!   for s = 0:1
+%!     M = A.(nm{s + 1});
+%!     P = [P; s * ones(rows (M), 1), M(:, 1), M(:, 3) + dt; ...
+%!             s * ones(rows (M), 1), M(:, 2), M(:, 4) + dt];
+%!     ## a point of A^c: the middle of the gap after the first interval
+%!     e = mod (M(1, 2), L); st = sort (mod (M(:, 1), L));
+%!     nxt = st(find (st > e, 1)); if (isempty (nxt)) nxt = st(1) + L; endif
+%!     gaps{s + 1} = (e + nxt) / 2;
+%!   endfor
+%!   pL = gaps{1}; pR = gaps{2};
+%!   N = rows (P);
+%!   P(:, 2) = mod (P(:, 2), L);
+%!   W = Inf (N, N, 2);           # best length of each parity
+%!   for i = 1:N
+%!     for j = i + 1:N
+%!       for w = -2:2
+%!         a = P(i, 2); b = P(j, 2) + w * L;
+%!         if (P(i, 1) == P(j, 1))
+%!           if (abs (a - b) < 1e-14 || abs (w) > 1) continue; endif
+%!           d = emb_len (R, eps, P(i, :), [P(j, 1), b, P(j, 3)]);
+%!         else
+%!           q = [P(j, 1), b, P(j, 3)];
+%!           if (P(i, 1) == 0)
+%!             l = P(i, :); r = q;
+%!           else
+%!             l = q; r = P(i, :);
+%!           endif
+%!           if (alpha > 0)
+%!             d = shock_len (beta, eps, alpha, l(2), l(3), r(2), r(3));
+%!           else
+%!             d = emb_len (R, eps, P(i, :), q);
+%!           endif
+%!         endif
+%!         par = crossings (P(i, 1), a, P(j, 1), b, pL, pR, L);
+%!         W(i, j, par + 1) = min (W(i, j, par + 1), real (d));
+%!       endfor
+%!     endfor
+%!   endfor
+%!   ## every perfect matching; best total of each parity
+%!   best = match_best (W, 1:N);
+%!   hor = R * L;                  # closed geodesic of the identification
+%!   S = bg.c / 6 * min (best(1), best(2) + hor);
+%!endfunction
+
+%!function b = match_best (W, idx)
+%!   if (isempty (idx))
+%!     b = [0, Inf];
+%!     return;
+%!   endif
+%!   i = idx(1); b = [Inf, Inf];
+%!   for k = 2:numel (idx)
+%!     j = idx(k);
+%!     rest = match_best (W, idx([2:k-1, k+1:end]));
+%!     for p = 0:1
+%!       for q = 0:1
+%!         v = W(i, j, p + 1) + rest(q + 1);
+%!         b(mod (p + q, 2) + 1) = min (b(mod (p + q, 2) + 1), v);
+%!       endfor
+%!     endfor
+%!   endfor
+%!endfunction
+
+## n disjoint random intervals on a circle, times small enough to keep each
+## side achronal, a random rotation (rows may wrap).
+%!function M = rand_side (n, L)
+%!   x = sort (rand (2 * n, 1)) * L;
+%!   while (min (diff ([x; x(1) + L])) < 0.02 * L)
+%!     x = sort (rand (2 * n, 1)) * L;
+%!   endwhile
+%!   sep = min (diff ([x; x(1) + L]));
+%!   t = (rand (2 * n, 1) - 0.5) * 0.9 * sep;
+%!   M = [x(1:2:end), x(2:2:end), t(1:2:end), t(2:2:end)];
+%!   if (rand () < 0.5)           # the complement's rows: one wraps through L
+%!     M = [x(2:2:end), [x(3:2:end); x(1) + L], t(2:2:end), [t(3:2:end); t(1)]];
+%!   endif
+%!   M(:, 1:2) = M(:, 1:2) + rand () * L;
+%!endfunction
+
+%!test
+%! ## The core's minimum against the brute force, with and without shocks.
+%! rand ("seed", 7);
+%! worst = 0; nbridge = 0; nhor = 0; ntot = 0;
+%! for trial = 1:150
+%!   ## every third a short circle, where the horizon is cheap
+%!   beta = 0.5 + 2 * rand (); L = merge (mod (trial, 3), 1 + 6 * rand (), 0.3 + rand ());
+%!   alpha = (rand () < 0.4) * 3 * rand ();
+%!   bg = ads3_background ("tfd", "circle", "beta", beta, "circumference", L, ...
+%!                         "c", 3, "shock_alpha", alpha);
+%!   nl = 1 + (rand () < 0.35); nr = 1 + (rand () < 0.5);
+%!   A = struct ("left", rand_side (nl, L), "right", rand_side (nr, L));
+%!   dt = 1.5 * beta * rand () ^ 2;
+%!   [S, conf] = rt_entropy (bg, A, "t", dt);
+%!   Sb = brute_entropy (bg, A, dt);
+%!   worst = max (worst, abs (S - Sb) / abs (Sb));
+%!   nbridge += conf.crossings > 0; nhor += conf.horizon; ntot++;
+%! endfor
+%! assert (worst < 1e-12);
+%! ## both kinds of minimiser occur
+%! assert (nbridge >= 20 && nhor >= 4 && ntot - nbridge >= 60);
+
+%!test
+%! ## Purity of the TFD (common practice): S(A) = S(A^c) with the complement
+%! ## on both sides; S(A_L u whole right) = S(A_L^c on the left alone);
+%! ## S(whole left u whole right) = 0.
+%! rand ("seed", 3);
+%! for k = 1:30
+%!   beta = 0.5 + rand (); L = 2 + 4 * rand ();
+%!   bg = ads3_background ("tfd", "circle", "beta", beta, "circumference", L, ...
+%!                         "shock_alpha", (k > 20) * rand ());
+%!   x = sort (rand (4, 1)) * L; y = sort (rand (4, 1)) * L;
+%!   A = struct ("left", [x(1) x(2); x(3) x(4)], "right", [y(1) y(2); y(3) y(4)]);
+%!   Ac = struct ("left", [x(2) x(3); x(4) x(1) + L], "right", [y(2) y(3); y(4) y(1) + L]);
+%!   t = 3 * rand ();
+%!   assert (rt_entropy (bg, A, "t", t), rt_entropy (bg, Ac, "t", t), 1e-11);
+%!   B = struct ("left", [x(1) x(2)], "right", [0 L]);
+%!   assert (rt_entropy (bg, B, "t", t), ...
+%!           rt_entropy (bg, struct ("left", [x(2) x(1) + L]), "t", t), 1e-11);
+%! endfor
+%! assert (rt_entropy (bg, struct ("left", [0 L], "right", [0 L])), 0);
+
+%!test
+%! ## Large L: the circle approaches the line (the bridge windings and the
+%! ## other class move off to infinity).
+%! bl = ads3_background ("tfd", "line", "beta", 1);
+%! bc = ads3_background ("tfd", "circle", "beta", 1, "circumference", 80);
+%! A = struct ("left", [0 2; 3 3.5], "right", [0.5 2.2; 4 5]);
+%! t = [0 0.3 0.7 1.5 3];
+%! assert (rt_entropy (bc, A, "t", t), rt_entropy (bl, A, "t", t), 1e-9);
+
+%!test
+%! ## Hartman and Maldacena 2013 (JHEP 05 (2013) 014): A_L = A_R = [0, l]
+%! ## with l small against L: S = (2c/3) min(log((beta/(pi eps)) cosh(2 pi
+%! ## t/beta)), log((beta/(pi eps)) sinh(pi l/beta))), two geodesics through
+%! ## the bridge until they are longer than the two within the sides: the
+%! ## linear growth at the rate 4 s_th (s_th = pi c/(3 beta)) and saturation.
+%! beta = 1; L = 10; l = 2; eps = 1e-3; c = 3;
+%! bg = ads3_background ("tfd", "circle", "beta", beta, "circumference", L, "cutoff", eps, "c", c);
+%! t = linspace (0, 2, 17);
+%! S = rt_entropy (bg, struct ("left", [0 l], "right", [0 l]), "t", t);
+%! conn = 2 * c / 3 * log (beta / (pi * eps) * cosh (2 * pi * t / beta));
+%! disc = 2 * c / 3 * log (beta / (pi * eps) * sinh (pi * l / beta));
+%! assert (S, min (conn, disc), 1e-12);
+%! ## the slope before saturation (t ~ 1.0) against 4 s_th, up to tanh
+%! k = find (t >= 0.5 & t <= 0.9);
+%! sl = diff (S(k)) ./ diff (t(k));
+%! assert (sl, 4 * pi * c / (3 * beta) * ones (size (sl)), 2e-2 * 4 * pi * c / 3);
+%! assert (mi_vanishing_time (bg, struct ("left", [0 l], "right", [0 l])), ...
+%!         beta / (2 * pi) * acosh (sinh (pi * l / beta)), 1e-10);
+
+%!test
+%! ## Intervals longer than half the circle: saturation at 2 S(A) one-sided,
+%! ## S(A) = min(geodesic, geodesic of A^c + S_BH) (common practice).
+%! beta = 1; L = 4; l = 3.2; eps = 1e-3; c = 3;
+%! bg = ads3_background ("tfd", "circle", "beta", beta, "circumference", L, "cutoff", eps, "c", c);
+%! A = struct ("left", [0 l], "right", [0 l]);
+%! S1 = rt_entropy (bg, struct ("right", [0 l]));
+%! SAc = rt_entropy (bg, struct ("right", [l L]));
+%! S = rt_entropy (bg, A, "t", [0 5]);
+%! ## late: no bridge, and the pure-state value 2 S(A^c) (no horizon needed)
+%! assert (S(2), min (2 * S1, 2 * SAc), 1e-12);
+%! assert (S(2) < 2 * S1);
+%! I = mutual_information (bg, struct ("left", [0 l]), struct ("right", [0 l]), "t", [0 5]);
+%! assert (I(2) > 0);            # saturation below S(A_L) + S(A_R)
+
+%!test
+%! ## Scrambling on the circle: alpha* = 2 (sinh(pi l/beta) - 1) as on the
+%! ## line (Shenker and Stanford 2014) while l is small against L.
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 30, ...
+%!                       "shock_energy", 1e-4, "shock_time", 0);
+%! [ts, a] = scrambling_time (bg, struct ("left", [0 1], "right", [0 1]));
+%! assert (a, 2 * (sinh (pi) - 1), 1e-9);
