@@ -35,7 +35,10 @@
 ## from the left boundary at time -t_w: alpha = (E/(4M)) exp(2 pi t_w/beta),
 ## M = pi c L/(6 beta^2) the black hole's energy; on a line E and M are
 ## densities).  Regions are structs with fields @code{left} and
-## @code{right}; a plain matrix is the right side.  @file{doc/tfd_shock.md}.
+## @code{right}; a plain matrix is the right side.  On a circle the slice
+## through the bridge is an annulus: two-sided regions are minimised over
+## both classes within a side, every winding through the bridge and the
+## horizon as homology asks.  @file{doc/tfd_shock.md}.
 ## @item @qcode{"quench"}
 ## a global quench: a null shell sent in from the boundary at t = 0 turns
 ## the vacuum into the black hole of inverse temperature beta (thin-shell

@@ -260,6 +260,13 @@ endfunction
 %! assert (entropy_inequalities (S).holds);
 
 %!test
+%! ## Two-sided parties on the circle thermofield double: every inequality
+%! ## of the holographic entropy cone holds at each time.
+%! tfd = ads3_background ("tfd", "circle", "beta", 1);
+%! St = entropy_vector (tfd, {struct("left", [0 1]), struct("right", [0 1]), struct("left", [2 3], "right", [2.5 4])}, "t", [0 0.7]);
+%! assert (entropy_inequalities (St(:, 1)).holds && entropy_inequalities (St(:, 2)).holds);
+
+%!test
 %! ## Holographic entropy vectors of random region sets satisfy every family:
 %! ## SSA (Headrick and Takayanagi 2007, Phys. Rev. D 76, 106013), MMI (Hayden,
 %! ## Headrick and Maloney 2011, arXiv:1107.2940) and the cyclic family (Bao,

@@ -12,7 +12,8 @@
 ## Inf when I is still positive at @var{tmax} (default 100 beta); 0 when it
 ## vanishes already.  Found by bisection to 1e-14 relative
 ## (@file{doc/tfd_shock.md}).  For A_L = A_R = [0, l]:
-## cosh(2 pi t/beta) = sinh(pi l/beta).
+## cosh(2 pi t/beta) = sinh(pi l/beta) (on a circle of circumference L while
+## l < L/2; for l > L/2 the information saturates above zero: Inf).
 ##
 ## @seealso{scrambling_time, mutual_information, ads3_background}
 ## @end deftypefn
@@ -41,6 +42,14 @@ endfunction
 %! assert (mi_vanishing_time (bg, struct ("left", [0 0.1], "right", [5 5.1])), 0);
 
 %!error <Invalid call> mi_vanishing_time (1)
+%!test
+%! ## On a circle: the line's time while l < L/2 (windings are exponentially
+%! ## suppressed); never for l > L/2, where the late surface is the pair of
+%! ## geodesics over the complements (doc/tfd_shock.md, section 3).
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 6);
+%! assert (mi_vanishing_time (bg, struct ("left", [0 1.5], "right", [0 1.5])), ...
+%!         acosh (sinh (1.5 * pi)) / (2 * pi), 1e-10);
+%! assert (mi_vanishing_time (bg, struct ("left", [0 4], "right", [0 4])), Inf);
 %!error <thermofield double> mi_vanishing_time (ads3_background ("vacuum", "line"), struct ("left", [0 1], "right", [0 1]))
 %!error <positive> mi_vanishing_time (ads3_background ("tfd", "line", "beta", 1), struct ("left", [0 1], "right", [0 1]), "tmax", -1)
 %!error <must be a struct> mi_vanishing_time (ads3_background ("tfd", "line", "beta", 1), [0 1])

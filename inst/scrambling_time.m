@@ -13,6 +13,9 @@
 ## (@code{ads3_background ("tfd", ..., "shock_energy", E, "shock_time", tw)};
 ## the shift it carries is ignored here; without an energy @var{t_star} is
 ## NaN).  For A_L = A_R = [0, l] at t = 0, alpha* = 2 (sinh(pi l/beta) - 1).
+## Both are Inf when no shock removes the correlation (on a circle of
+## circumference L, e.g. A_L = A_R longer than L/2: the surfaces over the
+## complements keep I > 0 without the bridge).
 ## Derivation: @file{doc/tfd_shock.md}.
 ##
 ## @seealso{mi_vanishing_time, ads3_background, mutual_information}
@@ -40,5 +43,14 @@ endfunction
 %! assert (mutual_information (sh, struct ("left", [0 l]), struct ("right", [0 l])), 0, 1e-8);
 
 %!error <Invalid call> scrambling_time (1)
+%!test
+%! ## On a circle: the line's alpha* while l < L/2; Inf for l > L/2
+%! ## (doc/tfd_shock.md, section 3).
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 6, ...
+%!                       "shock_energy", 1e-6, "shock_time", 0);
+%! [~, a] = scrambling_time (bg, struct ("left", [0 1.5], "right", [0 1.5]));
+%! assert (a, 2 * (sinh (1.5 * pi) - 1), 1e-9 * a);
+%! [ts, a] = scrambling_time (bg, struct ("left", [0 4], "right", [0 4]));
+%! assert ([ts, a], [Inf, Inf]);
 %!error <thermofield double> scrambling_time (ads3_background ("thermal", "line", "beta", 1), struct ("left", [0 1], "right", [0 1]))
 %!error <scrambling_time: A.left: has no intervals> scrambling_time (ads3_background ("tfd", "line", "beta", 1), struct ("right", [0 1]))

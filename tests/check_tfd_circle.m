@@ -237,11 +237,3 @@
 %! assert (S(2) < 2 * S1);
 %! I = mutual_information (bg, struct ("left", [0 l]), struct ("right", [0 l]), "t", [0 5]);
 %! assert (I(2) > 0);            # saturation below S(A_L) + S(A_R)
-
-%!test
-%! ## Scrambling on the circle: alpha* = 2 (sinh(pi l/beta) - 1) as on the
-%! ## line (Shenker and Stanford 2014) while l is small against L.
-%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 30, ...
-%!                       "shock_energy", 1e-4, "shock_time", 0);
-%! [ts, a] = scrambling_time (bg, struct ("left", [0 1], "right", [0 1]));
-%! assert (a, 2 * (sinh (pi) - 1), 1e-9);

@@ -478,10 +478,20 @@ log_add (double a, double b)
   return m + log1p (exp (-fabs (a - b)));
 }
 
+/* Whether the minimum lies strictly below S(A_L) + S(A_R) (the mutual
+   information is positive): corr[0] at these times, corr[1] without any
+   geodesic through the bridge (its limit at late times or large
+   shocks).  */
+typedef struct
+{
+  int now, late;
+} tfd_corr;
+
 /* The annulus (both sides of a circle; doc/tfd_shock.md, section 3).  */
 static int
 annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
-                 holent_rt_result *res, size_t *ncross, int *bad_side)
+                 holent_rt_result *res, size_t *ncross, tfd_corr *corr,
+                 int *bad_side)
 {
   const double c6 = b->side.c / 6.0, SBH = b->side.S_BH, Lc = b->side.L;
   double sig[2][2], cnt[2], lcnt[2];
@@ -509,6 +519,13 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
           hbest = h;
         }
     }
+  /* S(A_L) + S(A_R) one-sided: the same sums, but both faces inside
+     need a horizon on each side.  */
+  double one = c6 * len[1] + 2.0 * SBH;
+  for (int h = 0; h < 4; h++)
+    if (h != 1)
+      one = fmin (one, c6 * len[h] + (h >= 2 ? SBH : 0.0));
+  corr->late = best < one;
   const holent_region *R = w->reg[1], *Lr = w->reg[0];
   const size_t nr = 2 * R->n, nl = 2 * Lr->n;
   res->S = best;
@@ -527,7 +544,10 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         - r->pts[i] <= 2.0 * b->side.eps;
     }
   if (nr == 0 || nl == 0)
-    return HOLENT_SUCCESS;
+    {
+      corr->now = corr->late;
+      return HOLENT_SUCCESS;
+    }
 
   /* Cut along a bridge (rb, lb): the rest is a disk whose boundary, in
      the bridge order, is the right circle from rb up to rb + L and the
@@ -598,16 +618,21 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
             }
         }
     }
+  corr->now = res->S < one;
   return HOLENT_SUCCESS;
 }
 
-int
-holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
-                    const holent_tfd_side *left,
-                    const holent_tfd_side *right, double dt,
-                    holent_rt_result *res, size_t *ncross, int *bad_side,
-                    size_t *bad_row)
+/* holent_tfd_entropy, and whether the mutual information is positive.  */
+static int
+tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
+             const holent_tfd_side *left, const holent_tfd_side *right,
+             double dt, holent_rt_result *res, size_t *ncross,
+             tfd_corr *corr, int *bad_side, size_t *bad_row)
 {
+  tfd_corr dummy_corr;
+  if (corr == NULL)
+    corr = &dummy_corr;
+  corr->now = corr->late = 0;
   size_t dummy_row;
   int dummy_side;
   if (bad_row == NULL)
@@ -650,7 +675,7 @@ holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       return st;
     }
   if (b->side.circle)
-    return annulus_entropy (w, b, res, ncross, bad_side);
+    return annulus_entropy (w, b, res, ncross, corr, bad_side);
 
   /* The line: bridge order, right ascending, then left descending.  */
   size_t N = 0;
@@ -666,16 +691,31 @@ holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
     return st;
   tfd_ctx c = { b, w->x, w->t, w->lift, w->side };
   st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost, &c, res,
-                               ncross ? w->pairs : NULL, NULL);
+                               w->pairs, NULL);
   if (st)
     return st;
   res->n_short = 0;
   for (size_t i = 0; i + 1 < N; i++)
     res->n_short += w->side[i] == w->side[i + 1]
                     && fabs (w->x[i + 1] - w->x[i]) <= 2.0 * b->side.eps;
+  /* The one-sided candidates give S(A_L) + S(A_R) exactly: the mutual
+     information is positive when a bridge geodesic is used.  */
+  size_t nc = count_cross (w, n);
   if (ncross)
-    *ncross = count_cross (w, n);
+    *ncross = nc;
+  corr->now = nc > 0;
   return HOLENT_SUCCESS;
+}
+
+int
+holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
+                    const holent_tfd_side *left,
+                    const holent_tfd_side *right, double dt,
+                    holent_rt_result *res, size_t *ncross, int *bad_side,
+                    size_t *bad_row)
+{
+  return tfd_entropy (w, b, left, right, dt, res, ncross, NULL, bad_side,
+                      bad_row);
 }
 
 typedef struct
@@ -685,26 +725,29 @@ typedef struct
   const holent_tfd_side *left, *right;
   int mode;    /* 0: shift dt, 1: shock alpha */
   int status;
+  int late;    /* I > 0 without the bridge: it never vanishes */
 } mi_ctx;
 
-/* 1 when I(A_L : A_R) > 0 at shift x (mode 0) or shock x (mode 1), i.e.
-   when the minimiser uses a geodesic through the bridge; the one-sided
-   candidates give S(A_L) + S(A_R) exactly.  */
+/* 1 when I(A_L : A_R) > 0 at shift x (mode 0) or shock x (mode 1), from
+   the same sums as the minimum: on the line exactly when a geodesic
+   through the bridge is used; on a circle also when both faces of the
+   hole lie in A without a horizon (then m->late is set).  */
 static int
 mi_positive (mi_ctx *m, double x)
 {
   holent_rt_result r;
-  size_t nc = 0;
+  tfd_corr corr = { 0, 0 };
   double dt = 0.0;
   if (m->mode == 0)
     dt = x;
   else
     m->b.alpha = x;
-  int st = holent_tfd_entropy (m->w, &m->b, m->left, m->right, dt, &r, &nc,
-                               NULL, NULL);
+  int st = tfd_entropy (m->w, &m->b, m->left, m->right, dt, &r, NULL, &corr,
+                        NULL, NULL);
   if (st && !m->status)
     m->status = st;
-  return nc > 0;
+  m->late = corr.late;
+  return corr.now;
 }
 
 static int
@@ -722,6 +765,7 @@ mi_setup (mi_ctx *m, holent_tfd_workspace *w, const holent_tfd_bg *b,
   m->right = right;
   m->mode = mode;
   m->status = HOLENT_SUCCESS;
+  m->late = 0;
   return HOLENT_SUCCESS;
 }
 
@@ -771,7 +815,7 @@ holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
       *dt = 0.0;
       return HOLENT_SUCCESS;
     }
-  if (p1)
+  if (p1 || m.late)
     {
       *dt = INFINITY;
       return HOLENT_SUCCESS;
@@ -794,6 +838,11 @@ holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
     {
       *alpha = 0.0;
       return m.status;
+    }
+  if (m.late)
+    {
+      *alpha = INFINITY;  /* no shock removes it */
+      return HOLENT_SUCCESS;
     }
   /* Each bridge geodesic grows like 2 log(alpha): a bracket exists.  */
   double lo = 0.0, hi = 1.0;
@@ -823,7 +872,9 @@ holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
   if (st)
     return st;
   *t_star = NAN;
-  if (E > 0.0 && *alpha > 0.0)
+  if (E > 0.0 && isinf (*alpha))
+    *t_star = INFINITY;
+  else if (E > 0.0 && *alpha > 0.0)
     st = holent_tfd_shock_time (b->side.circle, b->side.circle ? b->side.L
                                                                : 1.0,
                                 b->beta, b->side.c, E, *alpha, t_star);

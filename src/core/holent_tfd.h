@@ -154,7 +154,9 @@ int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
 /* The first shift dt in [0, tmax] at which the two-sided mutual
  * information I(A_L : A_R) = S(A_L) + S(A_R) - S(A_L u A_R) vanishes
  * (to a relative 1e-12 of beta); *dt = Inf when it is still positive at
- * tmax, 0 when it already vanishes.  A negative tmax means the default,
+ * tmax or never vanishes (on a circle, when the geodesics over the
+ * complements on both sides beat the one-sided surfaces without a
+ * bridge, e.g. A_L = A_R longer than L/2), 0 when it already vanishes.  A negative tmax means the default,
  * 100 beta.  */
 int holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         const holent_tfd_side *left,
@@ -163,7 +165,8 @@ int holent_tfd_mi_zero (holent_tfd_workspace *w, const holent_tfd_bg *b,
 
 /* Scrambling: the smallest shock shift alpha at which I(A_L : A_R)
  * vanishes at the given times (the shift in b is ignored); *alpha = 0
- * when it vanishes without a shock.  */
+ * when it vanishes without a shock, Inf when no shock removes it (see
+ * holent_tfd_mi_zero).  */
 int holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
                               const holent_tfd_side *left,
                               const holent_tfd_side *right, double *alpha);
@@ -171,7 +174,8 @@ int holent_tfd_mi_zero_alpha (holent_tfd_workspace *w, const holent_tfd_bg *b,
 /* The scrambling time: *alpha as holent_tfd_mi_zero_alpha, and *t_star the
  * shock time tw at which a perturbation of energy E gives that shift
  * (holent_tfd_shock_time: tw = (beta/(2 pi)) log(4 M alpha/E)); NaN when
- * E = 0 or *alpha = 0 (no perturbation needed, or none given).  */
+ * E = 0 or *alpha = 0 (no perturbation needed, or none given), Inf when
+ * *alpha is.  */
 int holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
                            const holent_tfd_side *left,
                            const holent_tfd_side *right, double E,

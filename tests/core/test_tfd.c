@@ -186,15 +186,6 @@ test_winding (void)
              HOLENT_EINVAL);
 }
 
-static int
-stop_now (void *ctx, double done, double total)
-{
-  (void) ctx;
-  (void) done;
-  (void) total;
-  return 1;
-}
-
 /* The annulus (both sides of the circle): purity of the thermofield
    double, S(A) = S(A^c) with the complement on both sides, and S(A_L u
    whole right) = S(A_L^c) one-sided (common practice); the whole of both
@@ -265,7 +256,21 @@ test_annulus (void)
   double ts;
   HT_STATUS (holent_tfd_mi_zero (w, &b, &I, &I, 10.0, &ts), HOLENT_SUCCESS);
   HT_CLOSE (ts, acosh (sinh (2 * M_PI)) / (2 * M_PI), 1e-10);
-  holent_poll stop = { stop_now, NULL };
+  /* A_L = A_R longer than L/2: the geodesics over both complements keep
+     I > 0 without the bridge, at every time and shock.  */
+  HT_STATUS (holent_tfd_init (&b, 1, 6.0, eps, 1.0, 3.0, 0.0),
+             HOLENT_SUCCESS);
+  double b4[1] = { 4.0 }, al;
+  holent_tfd_side J = { 1, a0, b4, z, z };
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &J, &J, -1.0, &ts), HOLENT_SUCCESS);
+  HT_CHECK (isinf (ts), "l > L/2: never, got %g", ts);
+  HT_STATUS (holent_tfd_scrambling (w, &b, &J, &J, 1e-6, &al, &ts),
+             HOLENT_SUCCESS);
+  HT_CHECK (isinf (al) && isinf (ts), "l > L/2: %g %g", al, ts);
+  HT_STATUS (holent_tfd_mi_zero (w, &b, &I, &I, -1.0, &ts), HOLENT_SUCCESS);
+  HT_CLOSE (ts, acosh (sinh (2 * M_PI)) / (2 * M_PI), 1e-10);
+  int calls = 1;  /* stop at once */
+  holent_poll stop = { ht_stop_second, &calls };
   HT_STATUS (holent_tfd_workspace_set_poll (w, &stop), HOLENT_SUCCESS);
   HT_STATUS (holent_tfd_entropy (w, &b, &I, &I, 0.0, &r1, &nc, NULL, NULL),
              HOLENT_EINTR);
