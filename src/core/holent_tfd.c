@@ -257,6 +257,7 @@ struct holent_tfd_workspace
   double *tp[2];       /* endpoint times of each side              */
   double *x, *t;       /* combined endpoints in the bridge order   */
   double *lift;        /* multiples of L added to x (circle)       */
+  size_t *idx;         /* sorted endpoint index within its side    */
   int *side;
   double *fa, *fb;     /* rows of the stand-in region              */
   size_t *pairs;
@@ -293,12 +294,13 @@ holent_tfd_workspace_alloc (size_t nmax)
   w->x = malloc (N * sizeof (double));
   w->t = malloc (N * sizeof (double));
   w->lift = malloc (N * sizeof (double));
+  w->idx = malloc (N * sizeof (size_t));
   w->side = malloc (N * sizeof (int));
   w->fa = malloc (nmax * sizeof (double));
   w->fb = malloc (nmax * sizeof (double));
   w->pairs = malloc (N * sizeof (size_t));
   if (!w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
-      || !w->tp[1] || !w->x || !w->t || !w->lift || !w->side || !w->fa
+      || !w->tp[1] || !w->x || !w->t || !w->lift || !w->idx || !w->side || !w->fa
       || !w->fb || !w->pairs)
     {
       holent_tfd_workspace_free (w);
@@ -321,6 +323,7 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w->x);
   free (w->t);
   free (w->lift);
+  free (w->idx);
   free (w->side);
   free (w->fa);
   free (w->fb);
@@ -328,11 +331,27 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w);
 }
 
+/* Windings of the lifted separations in the annulus' cuts: lifts of
+   the right points 0 or 1, of the left ones m or m + 1 with |m| <= 2.  */
+#define TFD_WMAX 3
+
+/* Lengths of the annulus, computed once for all its cuts: per side
+   (sorted indices i != j) the geodesic over the arc from i to j in the
+   positive sense, and per left-right pair and winding the bridge.  */
+typedef struct
+{
+  size_t n[2];
+  double *arc[2];   /* n[s] x n[s]                              */
+  double *cross;    /* n[0] x n[1] x (2 TFD_WMAX + 1)            */
+} tfd_table;
+
 typedef struct
 {
   const holent_tfd_bg *b;
   const double *x, *t, *lift;
+  const size_t *idx;
   const int *side;
+  const tfd_table *tab;  /* NULL: evaluate each length */
 } tfd_ctx;
 
 /* Lengths for the minimiser over the bridge order (right ascending, then
@@ -351,12 +370,26 @@ tfd_cost (void *vctx, size_t i, size_t j, double arc, double *len)
       /* lo has the smaller lifted x: first on the right, last on the
          left.  */
       size_t lo = (i < j) == (c->side[i] == 1) ? i : j, hi = i + j - lo;
+      if (c->tab)
+        {
+          const int s = c->side[i];
+          *len = c->tab->arc[s][c->idx[lo] * c->tab->n[s] + c->idx[hi]];
+          return HOLENT_SUCCESS;
+        }
       return holent_hrt_length (&c->b->side, c->x[lo], c->t[lo], c->x[hi],
                                 c->t[hi], c->b->side.circle
                                 ? HOLENT_GEO_POSITIVE : HOLENT_GEO_SHORTER,
                                 0, len, &im);
     }
   size_t l = c->side[i] == 0 ? i : j, r = i + j - l;
+  double wd = c->lift[r] - c->lift[l];
+  if (c->tab && fabs (wd) <= TFD_WMAX)
+    {
+      size_t k = (c->idx[l] * c->tab->n[1] + c->idx[r])
+                 * (2 * TFD_WMAX + 1) + (size_t) (wd + TFD_WMAX);
+      *len = c->tab->cross[k];
+      return HOLENT_SUCCESS;
+    }
   double dx = c->x[r] - c->x[l];
   if (c->b->side.circle)
     dx += (c->lift[r] - c->lift[l]) * L;
@@ -405,6 +438,77 @@ put_point (holent_tfd_workspace *w, size_t k, int s, size_t i, double m)
   w->t[k] = w->tp[s][i];
   w->side[k] = s;
   w->lift[k] = m;
+  w->idx[k] = i;
+}
+
+static void
+table_free (tfd_table *T)
+{
+  free (T->arc[0]);
+  free (T->arc[1]);
+  free (T->cross);
+}
+
+/* Fill T for the two sides in w (HOLENT_ENOMEM: evaluate each length
+   instead).  The same calls as tfd_cost makes, so the same numbers.  */
+static int
+table_fill (holent_tfd_workspace *w, const holent_tfd_bg *b, tfd_table *T)
+{
+  const size_t nl = 2 * w->reg[0]->n, nr = 2 * w->reg[1]->n;
+  const size_t nw = 2 * TFD_WMAX + 1;
+  T->n[0] = nl;
+  T->n[1] = nr;
+  T->arc[0] = T->arc[1] = T->cross = NULL;
+  /* Past some 10^7 entries the tables cost more memory than they save
+     (and the cuts take hours anyway).  */
+  if ((double) (nl * nl + nr * nr + nw * nl * nr) > 1e7)
+    return HOLENT_ENOMEM;
+  T->arc[0] = malloc (nl * nl * sizeof (double));
+  T->arc[1] = malloc (nr * nr * sizeof (double));
+  T->cross = malloc (nw * nl * nr * sizeof (double));
+  if (!T->arc[0] || !T->arc[1] || !T->cross)
+    {
+      table_free (T);
+      return HOLENT_ENOMEM;
+    }
+  for (int s = 0; s < 2; s++)
+    {
+      const holent_region *r = w->reg[s];
+      const size_t n = T->n[s];
+      for (size_t i = 0; i < n; i++)
+        for (size_t j = 0; j < n; j++)
+          {
+            double im, *v = &T->arc[s][i * n + j];
+            *v = INFINITY;
+            if (i != j)
+              {
+                int st = holent_hrt_length (&b->side, r->pts[i],
+                                            w->tp[s][i], r->pts[j],
+                                            w->tp[s][j], HOLENT_GEO_POSITIVE,
+                                            0, v, &im);
+                if (st)
+                  {
+                    table_free (T);
+                    return st;
+                  }
+              }
+          }
+    }
+  const double *xl = w->reg[0]->pts, *xr = w->reg[1]->pts;
+  for (size_t i = 0; i < nl; i++)
+    for (size_t j = 0; j < nr; j++)
+      for (size_t k = 0; k < nw; k++)
+        {
+          double dx = (xr[j] - xl[i]) + ((double) k - TFD_WMAX) * b->side.L;
+          int st = cross_len (b, dx, w->tp[0][i], w->tp[1][j],
+                              &T->cross[(i * nr + j) * nw + k]);
+          if (st)
+            {
+              table_free (T);
+              return st;
+            }
+        }
+  return HOLENT_SUCCESS;
 }
 
 /* The stand-in region: n intervals on a line, so the minimiser runs its
@@ -487,6 +591,88 @@ typedef struct
   int now, late;
 } tfd_corr;
 
+/* The configurations with geodesics through the bridge: every cut
+   (doc/tfd_shock.md, section 3); res and *ncross are updated where a cut
+   beats them.  */
+static int
+annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
+              const tfd_ctx *c, holent_rt_result *res, size_t *ncross)
+{
+  const holent_region *R = w->reg[1], *Lr = w->reg[0];
+  const size_t nr = 2 * R->n, nl = 2 * Lr->n;
+  const double c6 = b->side.c / 6.0, Lc = b->side.L;
+  /* Cut along a bridge (rb, lb): the rest is a disk whose boundary, in
+     the bridge order, is the right circle from rb up to rb + L and the
+     left circle from lb + L down to lb.  rb and lb must be of the same
+     kind (both starts or both ends) for the faces beside the cut to agree
+     with A.  */
+  holent_geo_bg line;
+  const size_t n1 = (nr + nl) / 2 - 1;
+  int st = set_fake (w, n1, &line, b->side.c);
+  if (st)
+    return st;
+  const double total = (double) nr * (double) nl;
+  for (size_t i = 0; i < nr; i++)
+    {
+      if (w->poll.fn && w->poll.fn (w->poll.ctx, (double) i * nl, total))
+        return HOLENT_EINTR;
+      int kind_r = ((i & 1) == 0) == (R->start0 != 0);
+      for (size_t j = 0; j < nl; j++)
+        {
+          int kind_l = ((j & 1) == 0) == (Lr->start0 != 0);
+          if (kind_r != kind_l)
+            continue;
+          /* The shortest winding (and the other one at a tie): an
+             optimum always has a bridge of |dx| <= L/2, section 3.  */
+          double d0 = Lr->pts[j] - R->pts[i];
+          double m0 = -nearbyint (d0 / Lc);
+          for (int alt = 0; alt < 2; alt++)
+            {
+              double m = m0, dd = d0 + m0 * Lc;
+              if (alt)
+                {
+                  m = m0 + (dd > 0.0 ? -1.0 : 1.0);
+                  dd = d0 + m * Lc;
+                  if (fabs (dd) > 0.5 * Lc * (1.0 + 1e-9))
+                    continue;
+                }
+              double lb;
+              st = cross_len (b, -dd, w->tp[0][j], w->tp[1][i], &lb);
+              if (st)
+                return st;
+              size_t k = 0;
+              for (size_t p = i + 1; p < nr; p++)
+                put_point (w, k++, 1, p, 0.0);
+              for (size_t p = 0; p < i; p++)
+                put_point (w, k++, 1, p, 1.0);
+              for (size_t p = j; p-- > 0;)
+                put_point (w, k++, 0, p, m + 1.0);
+              for (size_t p = nl; p-- > j + 1;)
+                put_point (w, k++, 0, p, m);
+              holent_rt_result r1;
+              st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost,
+                                           (void *) c, &r1, w->pairs,
+                                           NULL);
+              if (st)
+                return st;
+              res->candidates += r1.candidates;
+              res->log_candidates = log_add (res->log_candidates,
+                                             r1.log_candidates);
+              double S = c6 * (lb + r1.length);
+              if (S < res->S)
+                {
+                  res->S = S;
+                  res->length = lb + r1.length;
+                  res->horizon = 0;
+                  if (ncross)
+                    *ncross = 1 + count_cross (w, n1);
+                }
+            }
+        }
+    }
+  return HOLENT_SUCCESS;
+}
+
 /* The annulus (both sides of a circle; doc/tfd_shock.md, section 3).  */
 static int
 annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
@@ -549,75 +735,16 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       return HOLENT_SUCCESS;
     }
 
-  /* Cut along a bridge (rb, lb): the rest is a disk whose boundary, in
-     the bridge order, is the right circle from rb up to rb + L and the
-     left circle from lb + L down to lb.  rb and lb must be of the same
-     kind (both starts or both ends) for the faces beside the cut to agree
-     with A.  */
-  holent_geo_bg line;
-  const size_t n1 = (nr + nl) / 2 - 1;
-  int st = set_fake (w, n1, &line, b->side.c);
+  tfd_table T;
+  int st = table_fill (w, b, &T);
+  if (st && st != HOLENT_ENOMEM)
+    return st;
+  tfd_ctx c = { b, w->x, w->t, w->lift, w->idx, w->side, st ? NULL : &T };
+  st = annulus_cuts (w, b, &c, res, ncross);
+  if (c.tab)
+    table_free (&T);
   if (st)
     return st;
-  tfd_ctx c = { b, w->x, w->t, w->lift, w->side };
-  const double total = (double) nr * (double) nl;
-  for (size_t i = 0; i < nr; i++)
-    {
-      if (w->poll.fn && w->poll.fn (w->poll.ctx, (double) i * nl, total))
-        return HOLENT_EINTR;
-      int kind_r = ((i & 1) == 0) == (R->start0 != 0);
-      for (size_t j = 0; j < nl; j++)
-        {
-          int kind_l = ((j & 1) == 0) == (Lr->start0 != 0);
-          if (kind_r != kind_l)
-            continue;
-          /* The shortest winding (and the other one at a tie): an
-             optimum always has a bridge of |dx| <= L/2, section 3.  */
-          double d0 = Lr->pts[j] - R->pts[i];
-          double m0 = -nearbyint (d0 / Lc);
-          for (int alt = 0; alt < 2; alt++)
-            {
-              double m = m0, dd = d0 + m0 * Lc;
-              if (alt)
-                {
-                  m = m0 + (dd > 0.0 ? -1.0 : 1.0);
-                  dd = d0 + m * Lc;
-                  if (fabs (dd) > 0.5 * Lc * (1.0 + 1e-9))
-                    continue;
-                }
-              double lb;
-              st = cross_len (b, -dd, w->tp[0][j], w->tp[1][i], &lb);
-              if (st)
-                return st;
-              size_t k = 0;
-              for (size_t p = i + 1; p < nr; p++)
-                put_point (w, k++, 1, p, 0.0);
-              for (size_t p = 0; p < i; p++)
-                put_point (w, k++, 1, p, 1.0);
-              for (size_t p = j; p-- > 0;)
-                put_point (w, k++, 0, p, m + 1.0);
-              for (size_t p = nl; p-- > j + 1;)
-                put_point (w, k++, 0, p, m);
-              holent_rt_result r1;
-              st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost,
-                                           &c, &r1, w->pairs, NULL);
-              if (st)
-                return st;
-              res->candidates += r1.candidates;
-              res->log_candidates = log_add (res->log_candidates,
-                                             r1.log_candidates);
-              double S = c6 * (lb + r1.length);
-              if (S < res->S)
-                {
-                  res->S = S;
-                  res->length = lb + r1.length;
-                  res->horizon = 0;
-                  if (ncross)
-                    *ncross = 1 + count_cross (w, n1);
-                }
-            }
-        }
-    }
   corr->now = res->S < one;
   return HOLENT_SUCCESS;
 }
@@ -689,7 +816,7 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
   int st = set_fake (w, n, &line, b->side.c);
   if (st)
     return st;
-  tfd_ctx c = { b, w->x, w->t, w->lift, w->side };
+  tfd_ctx c = { b, w->x, w->t, w->lift, w->idx, w->side, NULL };
   st = holent_rt_entropy_cost (w->rt, &line, w->fake, tfd_cost, &c, res,
                                w->pairs, NULL);
   if (st)
