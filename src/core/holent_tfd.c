@@ -258,6 +258,7 @@ struct holent_tfd_workspace
   double *x, *t;       /* combined endpoints in the bridge order   */
   double *lift;        /* multiples of L added to x (circle)       */
   size_t *idx;         /* sorted endpoint index within its side    */
+  double *pmin;        /* half the cheapest length at each point   */
   int *side;
   double *fa, *fb;     /* rows of the stand-in region              */
   size_t *pairs;
@@ -295,12 +296,13 @@ holent_tfd_workspace_alloc (size_t nmax)
   w->t = malloc (N * sizeof (double));
   w->lift = malloc (N * sizeof (double));
   w->idx = malloc (N * sizeof (size_t));
+  w->pmin = malloc (N * sizeof (double));
   w->side = malloc (N * sizeof (int));
   w->fa = malloc (nmax * sizeof (double));
   w->fb = malloc (nmax * sizeof (double));
   w->pairs = malloc (N * sizeof (size_t));
   if (!w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
-      || !w->tp[1] || !w->x || !w->t || !w->lift || !w->idx || !w->side || !w->fa
+      || !w->tp[1] || !w->x || !w->t || !w->lift || !w->idx || !w->pmin || !w->side || !w->fa
       || !w->fb || !w->pairs)
     {
       holent_tfd_workspace_free (w);
@@ -324,6 +326,7 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w->t);
   free (w->lift);
   free (w->idx);
+  free (w->pmin);
   free (w->side);
   free (w->fa);
   free (w->fb);
@@ -611,6 +614,36 @@ annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
   int st = set_fake (w, n1, &line, b->side.c);
   if (st)
     return st;
+  double cut_count, cut_lcount;
+  st = holent_rt_count (&line, n1, &cut_count, &cut_lcount);
+  if (st)
+    return st;
+  /* A lower bound on the rest of a cut: every point pays at least half
+     its cheapest length (any pair, class or winding of the tables),
+     which holds for every perfect matching.  Cuts that cannot beat the
+     best so far are skipped (with a margin above the rounding of the
+     sums), which prunes most of them once the bridge is long.  */
+  double *mins = w->pmin;  /* left points, then right ones */
+  double lb_all = 0.0, lb_abs = 0.0;
+  int prune = c->tab != NULL;
+  for (size_t q = 0; prune && q < nl + nr; q++)
+    {
+      const int s = q < nl ? 0 : 1;
+      const size_t p = s ? q - nl : q, n = c->tab->n[s];
+      const size_t nw = 2 * TFD_WMAX + 1;
+      double m = INFINITY;
+      for (size_t u = 0; u < n; u++)
+        if (u != p)
+          m = fmin (m, fmin (c->tab->arc[s][p * n + u],
+                             c->tab->arc[s][u * n + p]));
+      for (size_t u = 0; u < (s ? nl : nr); u++)
+        for (size_t k = 0; k < nw; k++)
+          m = fmin (m, c->tab->cross[(s ? u * nr + p : p * nr + u) * nw
+                                     + k]);
+      mins[q] = 0.5 * m;
+      lb_all += 0.5 * m;
+      lb_abs += fabs (0.5 * m);
+    }
   const double total = (double) nr * (double) nl;
   for (size_t i = 0; i < nr; i++)
     {
@@ -640,6 +673,17 @@ annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
               st = cross_len (b, -dd, w->tp[0][j], w->tp[1][i], &lb);
               if (st)
                 return st;
+              res->candidates += cut_count;
+              res->log_candidates = log_add (res->log_candidates,
+                                             cut_lcount);
+              if (prune)
+                {
+                  double rest = lb_all - mins[j] - mins[nl + i];
+                  double tol = 1e-12 * (c6 * (fabs (lb) + 2.0 * lb_abs)
+                                        + fabs (res->S));
+                  if (c6 * (lb + rest) > res->S + tol)
+                    continue;
+                }
               size_t k = 0;
               for (size_t p = i + 1; p < nr; p++)
                 put_point (w, k++, 1, p, 0.0);
@@ -655,9 +699,6 @@ annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
                                            NULL);
               if (st)
                 return st;
-              res->candidates += r1.candidates;
-              res->log_candidates = log_add (res->log_candidates,
-                                             r1.log_candidates);
               double S = c6 * (lb + r1.length);
               if (S < res->S)
                 {
