@@ -44,6 +44,7 @@
 #include "core/holent_hrt.h"
 #include "core/holent_interval.h"
 #include "core/holent_quench.h"
+#include "core/holent_slab.h"
 #include "core/holent_tfd.h"
 
 typedef enum { BG_STATIC, BG_TFD, BG_QUENCH } bg_kind;
@@ -404,18 +405,52 @@ side_array (const char *fn, const time_bg *b, const mxArray *a,
   return real_array (fn, a, name, n);
 }
 
+/* The pairs [i0, i0 + m) of do_geodesic: one slab of holent_slab_run
+   (Ctrl-C between slabs); the first failure is kept for the message.  */
+typedef struct
+{
+  const time_bg *b;
+  const double *x1, *t1, *s1, *x2, *t2, *s2;
+  int cls, tl;
+  double *re, *im;
+  size_t bad;
+} geo_job;
+
+static int
+geo_slab (void *ctx, size_t i0, size_t m)
+{
+  geo_job *j = ctx;
+  for (size_t i = i0; i < i0 + m; i++)
+    {
+      int st = length_one (j->b, j->x1[i], j->t1[i], j->s1 ? j->s1[i] : 1.0,
+                           j->x2[i], j->t2[i], j->s2 ? j->s2[i] : 1.0,
+                           j->cls, j->tl, &j->re[i], &j->im[i]);
+      if (st)
+        {
+          j->bad = i;
+          return st;
+        }
+    }
+  return HOLENT_SUCCESS;
+}
+
+/* Pairs per slab of the time path (0.2-2 us a pair): milliseconds.  */
+#define GEO_SLAB 4096
+
 static void
 do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
 {
   time_bg b;
   get_bg (fn, prhs[2], &b);
   size_t n;
-  const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n);
-  const double *t1 = real_array (fn, prhs[4], "t1", n);
-  const double *s1 = side_array (fn, &b, prhs[5], "side1", n);
-  const double *x2 = real_array (fn, prhs[6], "X2", n);
-  const double *t2 = real_array (fn, prhs[7], "t2", n);
-  const double *s2 = side_array (fn, &b, prhs[8], "side2", n);
+  geo_job j;
+  j.b = &b;
+  j.x1 = holent_gw_real (prhs[3], fn, "X1", &n);
+  j.t1 = real_array (fn, prhs[4], "t1", n);
+  j.s1 = side_array (fn, &b, prhs[5], "side1", n);
+  j.x2 = real_array (fn, prhs[6], "X2", n);
+  j.t2 = real_array (fn, prhs[7], "t2", n);
+  j.s2 = side_array (fn, &b, prhs[8], "side2", n);
   double cls = holent_gw_scalar (prhs[9], fn, "class");
   double tl = holent_gw_scalar (prhs[10], fn, "timelike");
   if (cls != 0.0 && cls != 1.0 && cls != 2.0)
@@ -423,28 +458,28 @@ do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
                      "must be 0, 1 or 2");
   if (b.kind == BG_QUENCH)
     for (size_t i = 0; i < n; i++)
-      if (t1[i] != t2[i])
+      if (j.t1[i] != j.t2[i])
         holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
                          "on a quench both ends live at the time 't' (t1 "
                          "and t2 must agree)");
+  j.cls = (int) cls;
+  j.tl = tl != 0.0;
   plhs[0] = holent_gw_like (prhs[3]);
   plhs[1] = holent_gw_like (prhs[3]);
-  double *re = mxGetPr (plhs[0]), *im = mxGetPr (plhs[1]);
-  for (size_t i = 0; i < n; i++)
-    {
-      int st = length_one (&b, x1[i], t1[i], s1 ? s1[i] : 1.0, x2[i], t2[i],
-                           s2 ? s2[i] : 1.0, (int) cls, tl != 0.0, &re[i],
-                           &im[i]);
-      if (st == HOLENT_ETIMELIKE)
-        holent_gw_raise (fn, st, "X2", i,
-                         "timelike or null separated from X1(%zu) on the "
-                         "boundary (|t2 - t1| must be below their distance; "
-                         "the option \"timelike\", true gives the timelike "
-                         "entanglement branch)", i + 1);
-      if (st)
-        holent_gw_raise (fn, st, "X2", i, "%s (with X1(%zu))",
-                         holent_strerror (st), i + 1);
-    }
+  j.re = mxGetPr (plhs[0]);
+  j.im = mxGetPr (plhs[1]);
+  j.bad = 0;
+  int st = holent_slab_run (n, GEO_SLAB, geo_slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st == HOLENT_ETIMELIKE)
+    holent_gw_raise (fn, st, "X2", j.bad,
+                     "timelike or null separated from X1(%zu) on the "
+                     "boundary (|t2 - t1| must be below their distance; "
+                     "the option \"timelike\", true gives the timelike "
+                     "entanglement branch)", j.bad + 1);
+  if (st)  /* HOLENT_EINTR: raising it interrupts */
+    holent_gw_raise (fn, st, "X2", j.bad, "%s (with X1(%zu))",
+                     holent_strerror (st), j.bad + 1);
 }
 
 /* ---- regions ---- */
@@ -727,6 +762,79 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
 
 /* ---- single intervals ---- */
 
+/* interval_entropy's time path in slabs: work item w is interval
+   k = w / NT at time j = w % NT, so one interval's region is read once.
+   A failure of the timelike entropy is kept for the message; the others
+   are raised inside (entropy_one), tracked arrays freed by Octave.  */
+typedef struct
+{
+  gw_state *g;
+  const time_bg *b;
+  const double *l, *dt, *t;
+  size_t n, nt;
+  int tl;
+  double *sr, *si;
+  mxLogical *pb;
+  mxArray *row;
+  size_t bad, k;      /* the failed interval; the interval read   */
+  int any_im, have;   /* some pair causal; region k is read       */
+  region_in r;
+} iv_job;
+
+/* (interval, time) pairs per slab (about 5 us a pair): milliseconds.  */
+#define IV_SLAB 256
+
+static int
+iv_slab (void *ctx, size_t w0, size_t m)
+{
+  iv_job *j = ctx;
+  const time_bg *b = j->b;
+  for (size_t w = w0; w < w0 + m; w++)
+    {
+      size_t k = w / j->nt, jt = w % j->nt, i = k + j->n * jt;
+      if (!j->have || j->k != k)
+        {
+          char nm[32];
+          double *pr = mxGetPr (j->row);
+          snprintf (nm, sizeof nm, "L(%zu)", k + 1);
+          pr[0] = 0.0;
+          pr[1] = j->l[k];
+          if (b->kind != BG_QUENCH)
+            {
+              pr[2] = 0.0;
+              pr[3] = j->dt[k];
+            }
+          read_region (j->g, j->row, b, nm, &j->r);
+          j->k = k;
+          j->have = 1;
+        }
+      int causal = 0;
+      if (j->tl && b->kind != BG_QUENCH)
+        {
+          int st = holent_hrt_timelike_entropy (&b->geo, j->l[k], j->t[jt],
+                                                j->dt[k], &j->sr[i],
+                                                &j->si[i], &causal);
+          if (st)
+            {
+              j->bad = k;
+              return st;
+            }
+        }
+      if (causal)
+        {
+          j->any_im = 1;
+          continue;
+        }
+      size_t ncross;
+      int horizon;
+      j->sr[i] = entropy_one (j->g, b, &j->r, j->t[jt], &ncross, &horizon);
+      if (j->si)
+        j->si[i] = 0.0;
+      j->pb[i] = horizon != 0;
+    }
+  return HOLENT_SUCCESS;
+}
+
 /* interval_entropy's time path: the interval [0, L(k)] with its right end
    DT(k) later, at each shift/time T(j); TIMELIKE: causal pairs give the
    timelike entropy.  */
@@ -766,63 +874,34 @@ do_interval (const char *fn, int nlhs, mxArray *plhs[],
   alloc_ws (&g, 1);
   mxArray *S = mxCreateDoubleMatrix (n, nt, tl ? mxCOMPLEX : mxREAL);
   mxArray *br = mxCreateLogicalMatrix (n, nt);
-  double *sr = mxGetPr (S), *si = tl ? mxGetPi (S) : NULL;
-  mxLogical *pb = mxGetLogicals (br);
-  int any_im = 0;
   /* one row [0, L, 0, DT] (a quench: [0, L]) */
   mxArray *row = mxCreateDoubleMatrix (1, b.kind == BG_QUENCH ? 2 : 4,
                                        mxREAL);
-  double *pr = mxGetPr (row);
-  for (size_t k = 0; k < n; k++)
+  iv_job j = { .g = &g, .b = &b, .l = l, .dt = dt, .t = t, .n = n,
+               .nt = nt, .tl = tl, .sr = mxGetPr (S),
+               .si = tl ? mxGetPi (S) : NULL, .pb = mxGetLogicals (br),
+               .row = row, .bad = HOLENT_NOINDEX };
+  /* every (interval, time) pair, interval by interval, in slabs (Ctrl-C
+     between them) */
+  int st = holent_slab_run (n * nt, IV_SLAB, iv_slab, &j,
+                            holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)
     {
-      char nm[32];
-      region_in r;
-      snprintf (nm, sizeof nm, "L(%zu)", k + 1);
-      pr[0] = 0.0;
-      pr[1] = l[k];
-      if (b.kind != BG_QUENCH)
-        {
-          pr[2] = 0.0;
-          pr[3] = dt[k];
-        }
-      read_region (&g, row, &b, nm, &r);
-      for (size_t j = 0; j < nt; j++)
-        {
-          size_t i = k + n * j;
-          int causal = 0;
-          if (tl && b.kind != BG_QUENCH)
-            {
-              int st = holent_hrt_timelike_entropy (&b.geo, l[k], t[j],
-                                                    dt[k], &sr[i], &si[i],
-                                                    &causal);
-              if (st)
-                {
-                  mxDestroyArray (S);
-                  mxDestroyArray (br);
-                  mxDestroyArray (row);
-                  fail (&g, st, "L", k, "%s", st == HOLENT_ETIMELIKE
-                         ? "the ends of the interval are causally related "
-                           "and have no timelike entropy (a null pair, or "
-                           "a geodesic without a timelike branch)"
-                         : holent_strerror (st));
-                }
-            }
-          if (causal)
-            {
-              any_im = 1;
-              continue;
-            }
-          size_t ncross;
-          int horizon;
-          sr[i] = entropy_one (&g, &b, &r, t[j], &ncross, &horizon);
-          if (si)
-            si[i] = 0.0;
-          pb[i] = horizon != 0;
-        }
+      mxDestroyArray (S);
+      mxDestroyArray (br);
+      mxDestroyArray (row);
+      /* Ctrl-C (HOLENT_EINTR) too: fail frees, and raising it interrupts */
+      fail (&g, st, "L", j.bad, "%s", st == HOLENT_ETIMELIKE
+             ? "the ends of the interval are causally related "
+               "and have no timelike entropy (a null pair, or "
+               "a geodesic without a timelike branch)"
+             : holent_strerror (st));
     }
+  double *sr = j.sr;
   mxDestroyArray (row);
   release (&g);
-  if (tl && !any_im)
+  if (tl && !j.any_im)
     {
       /* all spacelike: a real array, as without the option */
       mxArray *R = mxCreateDoubleMatrix (n, nt, mxREAL);
