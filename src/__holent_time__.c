@@ -39,6 +39,7 @@
 #include <stdlib.h>
 #include <string.h>
 #include "holent_gw.h"
+#include "holent_gw_array.h"
 #include "holent_gw_poll.h"
 #include "core/holent_causal.h"
 #include "core/holent_hrt.h"
@@ -464,13 +465,20 @@ do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
                          "and t2 must agree)");
   j.cls = (int) cls;
   j.tl = tl != 0.0;
-  plhs[0] = holent_gw_like (prhs[3]);
-  plhs[1] = holent_gw_like (prhs[3]);
-  j.re = mxGetPr (plhs[0]);
-  j.im = mxGetPr (plhs[1]);
+  /* no copy or zero-fill of large results: pauses no poll can cut short
+     (holent_gw_array.h) */
+  mxArray *re = holent_gw_result_like (prhs[3]);
+  mxArray *im = holent_gw_result_like (prhs[3]);
+  j.re = mxGetPr (re);
+  j.im = mxGetPr (im);
   j.bad = 0;
   int st = holent_slab_run (n, GEO_SLAB, geo_slab, &j, holent_gw_poll (fn));
   holent_gw_poll_end ();
+  if (st)
+    {
+      mxDestroyArray (re);
+      mxDestroyArray (im);
+    }
   if (st == HOLENT_ETIMELIKE)
     holent_gw_raise (fn, st, "X2", j.bad,
                      "timelike or null separated from X1(%zu) on the "
@@ -480,6 +488,8 @@ do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
   if (st)  /* HOLENT_EINTR: raising it interrupts */
     holent_gw_raise (fn, st, "X2", j.bad, "%s (with X1(%zu))",
                      holent_strerror (st), j.bad + 1);
+  plhs[0] = re;
+  plhs[1] = im;
 }
 
 /* ---- regions ---- */
@@ -691,6 +701,58 @@ region_rows (const mxArray *a)
   return mxGetM (a);
 }
 
+/* rt_entropy's time path in slabs: work item w is region k = w / NT at
+   time j = w % NT, so each region is read once.  Failures are raised
+   inside (read_region, entropy_one: tracked arrays freed by Octave).  */
+typedef struct
+{
+  gw_state *g;
+  const time_bg *b;
+  const mxArray *A, *names;
+  const double *t;
+  size_t nreg, nt, k;
+  int cell, have;
+  double *S, *pc, *ph;
+  region_in r;
+} en_job;
+
+/* (region, time) pairs per slab: microseconds to milliseconds a pair.  */
+#define EN_SLAB 16
+
+static int
+en_slab (void *ctx, size_t w0, size_t m)
+{
+  en_job *j = ctx;
+  for (size_t w = w0; w < w0 + m; w++)
+    {
+      size_t k = w / j->nt, jt = w % j->nt, i = k + j->nreg * jt;
+      if (!j->have || j->k != k)
+        {
+          char nm[96];
+          if (j->names)
+            holent_gw_string (mxGetCell (j->names, k), j->g->fn, "NAMES", nm,
+                              sizeof nm);
+          else if (j->cell)
+            snprintf (nm, sizeof nm, "A{%zu}", k + 1);
+          else
+            snprintf (nm, sizeof nm, "A");
+          const mxArray *a = j->cell ? mxGetCell (j->A, k) : j->A;
+          if (a == NULL)
+            fail (j->g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX,
+                  "has no intervals");
+          read_region (j->g, a, j->b, nm, &j->r);
+          j->k = k;
+          j->have = 1;
+        }
+      size_t ncross;
+      int horizon;
+      j->S[i] = entropy_one (j->g, j->b, &j->r, j->t[jt], &ncross, &horizon);
+      j->pc[i] = (double) ncross;
+      j->ph[i] = horizon;
+    }
+  return HOLENT_SUCCESS;
+}
+
 static void
 do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
             const mxArray *prhs[])
@@ -725,30 +787,16 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
   plhs[0] = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *nc = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *hz = mxCreateDoubleMatrix (nreg, nt, mxREAL);
-  double *S = mxGetPr (plhs[0]), *pc = mxGetPr (nc), *ph = mxGetPr (hz);
-  for (size_t k = 0; k < nreg; k++)
-    {
-      if (names)
-        holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
-      else if (cell)
-        snprintf (nm, sizeof nm, "A{%zu}", k + 1);
-      else
-        snprintf (nm, sizeof nm, "A");
-      const mxArray *a = cell ? mxGetCell (A, k) : A;
-      if (a == NULL)
-        fail (&g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX, "has no intervals");
-      region_in r;
-      read_region (&g, a, &b, nm, &r);
-      for (size_t j = 0; j < nt; j++)
-        {
-          size_t ncross;
-          int horizon;
-          S[k + nreg * j] = entropy_one (&g, &b, &r, t[j], &ncross,
-                                         &horizon);
-          pc[k + nreg * j] = (double) ncross;
-          ph[k + nreg * j] = horizon;
-        }
-    }
+  en_job j = { .g = &g, .b = &b, .A = A, .names = names, .t = t,
+               .nreg = nreg, .nt = nt, .cell = cell, .S = mxGetPr (plhs[0]),
+               .pc = mxGetPr (nc), .ph = mxGetPr (hz) };
+  /* every (region, time) pair, region by region, in slabs (Ctrl-C between
+     them; large regions also poll inside the minimiser) */
+  int st = holent_slab_run (nreg * nt, EN_SLAB, en_slab, &j,
+                            holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)  /* only HOLENT_EINTR: the others are raised inside */
+    fail (&g, st, NULL, HOLENT_NOINDEX, "%s", holent_strerror (st));
   release (&g);
   if (nlhs > 1)
     plhs[1] = nc;
@@ -918,6 +966,39 @@ do_interval (const char *fn, int nlhs, mxArray *plhs[],
 
 /* ---- causality ---- */
 
+/* One slab of do_light; S1, S2: 0 for a scalar X1, X2 (repeated).  */
+typedef struct
+{
+  const time_bg *b;
+  const double *x1, *x2;
+  size_t s1, s2;
+  double tol, *tb, *tl;
+  size_t bad;
+} light_job;
+
+/* Pairs per slab (well under a microsecond a pair).  */
+#define LIGHT_SLAB ((size_t) 1 << 16)
+
+static int
+light_slab (void *ctx, size_t i0, size_t m)
+{
+  light_job *j = ctx;
+  for (size_t i = i0; i < i0 + m; i++)
+    {
+      int st = holent_causal_times (&j->b->geo, j->x1[i * j->s1],
+                                    j->x2[i * j->s2], j->tol, &j->tb[i],
+                                    &j->tl[i]);
+      if (st)
+        {
+          j->bad = i;
+          return st;
+        }
+      if (j->b->kind != BG_STATIC)
+        j->tb[i] = INFINITY;  /* behind a horizon (doc/bulk_causality.md) */
+    }
+  return HOLENT_SUCCESS;
+}
+
 /* X1 and X2 broadcast (equal sizes, or one of them a scalar).  */
 static void
 do_light (const char *fn, int nrhs, mxArray *plhs[],
@@ -945,27 +1026,32 @@ do_light (const char *fn, int nrhs, mxArray *plhs[],
         holent_gw_raise (fn, HOLENT_EDOM, "tol", HOLENT_NOINDEX,
                          "must be nonnegative and finite");
     }
-  plhs[0] = holent_gw_like (shape);
-  plhs[1] = holent_gw_like (shape);
-  double *tb = mxGetPr (plhs[0]), *tl = mxGetPr (plhs[1]);
-  size_t n = mxGetNumberOfElements (shape);
-  for (size_t i = 0; i < n; i++)
+  mxArray *tb = holent_gw_result_like (shape);
+  mxArray *tl = holent_gw_result_like (shape);
+  light_job j = { &b, x1, x2, n1 == 1 ? 0 : 1, n2 == 1 ? 0 : 1, tol,
+                  mxGetPr (tb), mxGetPr (tl), 0 };
+  int st = holent_slab_run (mxGetNumberOfElements (shape), LIGHT_SLAB,
+                            light_slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)
     {
-      size_t i1 = n1 == 1 ? 0 : i, i2 = n2 == 1 ? 0 : i;
-      int st = holent_causal_times (&b.geo, x1[i1], x2[i2], tol, &tb[i],
-                                    &tl[i]);
-      if (st)
-        {
-          int one = !isfinite (x1[i1]);
-          double v = one ? x1[i1] : x2[i2];
-          holent_gw_raise (fn, isnan (v) ? HOLENT_ENAN : HOLENT_EDOM,
-                           one ? "X1" : "X2", one ? i1 : i2,
-                           isnan (v) ? "must not be NaN"
-                           : "must be finite, and X2 - X1 too");
-        }
-      if (b.kind != BG_STATIC)
-        tb[i] = INFINITY;  /* behind a horizon (doc/bulk_causality.md) */
+      mxDestroyArray (tb);
+      mxDestroyArray (tl);
     }
+  if (st == HOLENT_EINTR)
+    holent_gw_interrupt ();
+  if (st)
+    {
+      size_t i1 = j.bad * j.s1, i2 = j.bad * j.s2;
+      int one = !isfinite (x1[i1]);
+      double v = one ? x1[i1] : x2[i2];
+      holent_gw_raise (fn, isnan (v) ? HOLENT_ENAN : HOLENT_EDOM,
+                       one ? "X1" : "X2", one ? i1 : i2,
+                       isnan (v) ? "must not be NaN"
+                       : "must be finite, and X2 - X1 too");
+    }
+  plhs[0] = tb;
+  plhs[1] = tl;
 }
 
 /* ---- two-sided mutual information ---- */

@@ -86,7 +86,11 @@ function varargout = __holent_time_entropy__ (fn, varargin)
                strjoin (strcat (nm, " (", sz, ")"), ", "));
       endif
       for k = find (any (S != sz, 2))'
-        varargout{k} = a{k} + zeros (sz);
+        if (isscalar (a{k}))
+          varargout{k} = repmat (a{k}, sz);   # one pass, not two
+        else
+          varargout{k} = a{k} + zeros (sz);
+        endif
       endfor
     case "double"
       x = varargin{1};
