@@ -701,6 +701,22 @@ region_rows (const mxArray *a)
   return mxGetM (a);
 }
 
+/* Work item W of a (region, time) batch of NT times, region by region:
+   region *K at time *JT; nonzero when region *K is not the one read last
+   (*CUR, valid once *HAVE), which it then becomes.  */
+static int
+batch_item (size_t w, size_t nt, size_t *k, size_t *jt, size_t *cur,
+            int *have)
+{
+  *k = w / nt;
+  *jt = w % nt;
+  if (*have && *cur == *k)
+    return 0;
+  *cur = *k;
+  *have = 1;
+  return 1;
+}
+
 /* rt_entropy's time path in slabs: work item w is region k = w / NT at
    time j = w % NT, so each region is read once.  Failures are raised
    inside (read_region, entropy_one: tracked arrays freed by Octave).  */
@@ -725,8 +741,8 @@ en_slab (void *ctx, size_t w0, size_t m)
   en_job *j = ctx;
   for (size_t w = w0; w < w0 + m; w++)
     {
-      size_t k = w / j->nt, jt = w % j->nt, i = k + j->nreg * jt;
-      if (!j->have || j->k != k)
+      size_t k, jt;
+      if (batch_item (w, j->nt, &k, &jt, &j->k, &j->have))
         {
           char nm[96];
           if (j->names)
@@ -741,10 +757,8 @@ en_slab (void *ctx, size_t w0, size_t m)
             fail (j->g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX,
                   "has no intervals");
           read_region (j->g, a, j->b, nm, &j->r);
-          j->k = k;
-          j->have = 1;
         }
-      size_t ncross;
+      size_t ncross, i = k + j->nreg * jt;
       int horizon;
       j->S[i] = entropy_one (j->g, j->b, &j->r, j->t[jt], &ncross, &horizon);
       j->pc[i] = (double) ncross;
@@ -839,8 +853,8 @@ iv_slab (void *ctx, size_t w0, size_t m)
   const time_bg *b = j->b;
   for (size_t w = w0; w < w0 + m; w++)
     {
-      size_t k = w / j->nt, jt = w % j->nt, i = k + j->n * jt;
-      if (!j->have || j->k != k)
+      size_t k, jt;
+      if (batch_item (w, j->nt, &k, &jt, &j->k, &j->have))
         {
           char nm[32];
           double *pr = mxGetPr (j->row);
@@ -853,9 +867,8 @@ iv_slab (void *ctx, size_t w0, size_t m)
               pr[3] = j->dt[k];
             }
           read_region (j->g, j->row, b, nm, &j->r);
-          j->k = k;
-          j->have = 1;
         }
+      size_t i = k + j->n * jt;
       int causal = 0;
       if (j->tl && b->kind != BG_QUENCH)
         {
