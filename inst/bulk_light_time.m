@@ -33,7 +33,10 @@ function [tb, tl] = bulk_light_time (bg, x1, x2, varargin)
     tol = __holent_time_entropy__ ("double", o.tol);   # the gateway checks it
     tol = {tol};
   endif
-  [x1, x2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2"}, x1, x2);
+  if (! isscalar (x1) && ! isscalar (x2))
+    ## the gateway repeats a scalar itself: no full-size copy of it
+    [x1, x2] = __holent_time_entropy__ ("broadcast", fn, {"X1", "X2"}, x1, x2);
+  endif
   [tb, tl] = __holent_time__ ("light", fn, bg, x1, x2, tol{:});
 endfunction
 

@@ -17,12 +17,15 @@
  * Omega, circumference, c, T, F_btz, F_thermal_ads, btz_dominates.
  *
  * Errors name the argument of the public function FN and the first
- * offending element.
+ * offending element.  The states go through the core in slabs of
+ * THERMO_SLAB, polled between (Ctrl-C, progress line).
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
 #include "holent_gw_array.h"
+#include "holent_gw_poll.h"
+#include "core/holent_slab.h"
 #include "core/holent_thermo.h"
 
 static const char GW[] = "__holent_thermo__";
@@ -207,6 +210,60 @@ fail (const char *fn, const inputs *in, int st, int why, size_t bad)
               pairs[in->k].b, bad, ab, bb, Lb, in->u[0]);
 }
 
+/* States per slab (about 0.1 us a state and 14 result columns of
+   fresh memory): hundredths of a second.  */
+#define THERMO_SLAB ((size_t) 1 << 18)
+
+/* One slab of either mode: the inputs and every result column offset by
+   the slab's first state.  */
+typedef struct
+{
+  const inputs *in;
+  int hp;                       /* 1: hawking_page, else state */
+  holent_thermo_table t;
+  double *col[7];
+  unsigned char *dom;
+  size_t bad;
+  int why;
+} job;
+
+#define AT(p, i0) ((p) ? (p) + (i0) : NULL)
+
+static int
+slab (void *ctx, size_t i0, size_t m)
+{
+  job *j = ctx;
+  const inputs *in = j->in;
+  const double *a = in->a + i0 * in->step[0], *b = in->b + i0 * in->step[1];
+  const double *L = in->L ? in->L + i0 * in->step[2] : NULL;
+  size_t bad = 0;
+  int st;
+  if (j->hp)
+    st = holent_thermo_hp_compare (in->u[0], in->u[2], pairs[in->k].pair, m,
+                                   a, b, L, in->step, AT (j->col[0], i0),
+                                   AT (j->col[1], i0), AT (j->col[4], i0),
+                                   AT (j->col[5], i0), AT (j->col[6], i0),
+                                   AT (j->dom, i0), &bad, &j->why);
+  else
+    {
+      const holent_thermo_table *t = &j->t;
+      holent_thermo_table u = {
+        AT (t->r_plus, i0), AT (t->r_minus, i0), AT (t->M, i0),
+        AT (t->J, i0), AT (t->T, i0), AT (t->Omega, i0),
+        AT (t->Omega_J, i0), AT (t->T_L, i0), AT (t->T_R, i0),
+        AT (t->S, i0), AT (t->F, i0), AT (t->C_Omega, i0),
+        AT (t->C_J, i0), AT (t->horizon_length, i0), AT (t->L0, i0),
+        AT (t->Lbar0, i0), AT (t->F_thermal_ads, i0),
+        AT (t->btz_dominates, i0)
+      };
+      st = holent_thermo_states (in->u[0], in->u[2],
+                                 (holent_thermo_pair) pairs[in->k].pair, m,
+                                 a, b, L, in->step, &u, &bad, &j->why);
+    }
+  j->bad = i0 + bad;
+  return st;
+}
+
 static void
 do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
           const char *fn)
@@ -252,15 +309,13 @@ do_state (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
     col[9], col[10], NULL, col[11], col[12], col[13], col[14], col[15],
     (unsigned char *) mxGetLogicals (dom)
   };
-  size_t bad = 0;
-  int why = HOLENT_THERMO_OK;
-  int st = holent_thermo_states (in.u[0], in.u[2],
-                                 (holent_thermo_pair) pairs[in.k].pair, in.n,
-                                 in.a, in.b, in.L, in.step, &t, &bad, &why);
+  job j = { &in, 0, t, { NULL }, NULL, 0, HOLENT_THERMO_OK };
+  int st = holent_slab_run (in.n, THERMO_SLAB, slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
   if (st)
     {
       mxDestroyArray (s);
-      fail (fn, &in, st, why, bad);
+      fail (fn, &in, st, j.why, j.bad);
     }
   plhs[0] = s;
 }
@@ -290,17 +345,15 @@ do_hawking_page (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[],
   mxArray *dom = mxCreateLogicalArray (mxGetNumberOfDimensions (in.shape),
                                        mxGetDimensions (in.shape));
   mxSetField (s, 0, "btz_dominates", dom);
-  size_t bad = 0;
-  int why = HOLENT_THERMO_OK;
-  int st = holent_thermo_hp_compare (in.u[0], in.u[2], pairs[in.k].pair,
-                                     in.n, in.a, in.b, in.L, in.step,
-                                     col[0], col[1], col[4], col[5], col[6],
-                                     (unsigned char *) mxGetLogicals (dom),
-                                     &bad, &why);
+  job j = { &in, 1, { NULL }, { col[0], col[1], NULL, NULL, col[4], col[5],
+                                 col[6] },
+            (unsigned char *) mxGetLogicals (dom), 0, HOLENT_THERMO_OK };
+  int st = holent_slab_run (in.n, THERMO_SLAB, slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
   if (st)
     {
       mxDestroyArray (s);
-      fail (fn, &in, st, why, bad);
+      fail (fn, &in, st, j.why, j.bad);
     }
   /* the circumference of every point */
   for (size_t i = 0; i < in.n; i++)

@@ -39,11 +39,13 @@
 #include <stdlib.h>
 #include <string.h>
 #include "holent_gw.h"
+#include "holent_gw_array.h"
 #include "holent_gw_poll.h"
 #include "core/holent_causal.h"
 #include "core/holent_hrt.h"
 #include "core/holent_interval.h"
 #include "core/holent_quench.h"
+#include "core/holent_slab.h"
 #include "core/holent_tfd.h"
 
 typedef enum { BG_STATIC, BG_TFD, BG_QUENCH } bg_kind;
@@ -404,18 +406,52 @@ side_array (const char *fn, const time_bg *b, const mxArray *a,
   return real_array (fn, a, name, n);
 }
 
+/* The pairs [i0, i0 + m) of do_geodesic: one slab of holent_slab_run
+   (Ctrl-C between slabs); the first failure is kept for the message.  */
+typedef struct
+{
+  const time_bg *b;
+  const double *x1, *t1, *s1, *x2, *t2, *s2;
+  int cls, tl;
+  double *re, *im;
+  size_t bad;
+} geo_job;
+
+static int
+geo_slab (void *ctx, size_t i0, size_t m)
+{
+  geo_job *j = ctx;
+  for (size_t i = i0; i < i0 + m; i++)
+    {
+      int st = length_one (j->b, j->x1[i], j->t1[i], j->s1 ? j->s1[i] : 1.0,
+                           j->x2[i], j->t2[i], j->s2 ? j->s2[i] : 1.0,
+                           j->cls, j->tl, &j->re[i], &j->im[i]);
+      if (st)
+        {
+          j->bad = i;
+          return st;
+        }
+    }
+  return HOLENT_SUCCESS;
+}
+
+/* Pairs per slab of the time path (0.2-2 us a pair): milliseconds.  */
+#define GEO_SLAB 4096
+
 static void
 do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
 {
   time_bg b;
   get_bg (fn, prhs[2], &b);
   size_t n;
-  const double *x1 = holent_gw_real (prhs[3], fn, "X1", &n);
-  const double *t1 = real_array (fn, prhs[4], "t1", n);
-  const double *s1 = side_array (fn, &b, prhs[5], "side1", n);
-  const double *x2 = real_array (fn, prhs[6], "X2", n);
-  const double *t2 = real_array (fn, prhs[7], "t2", n);
-  const double *s2 = side_array (fn, &b, prhs[8], "side2", n);
+  geo_job j;
+  j.b = &b;
+  j.x1 = holent_gw_real (prhs[3], fn, "X1", &n);
+  j.t1 = real_array (fn, prhs[4], "t1", n);
+  j.s1 = side_array (fn, &b, prhs[5], "side1", n);
+  j.x2 = real_array (fn, prhs[6], "X2", n);
+  j.t2 = real_array (fn, prhs[7], "t2", n);
+  j.s2 = side_array (fn, &b, prhs[8], "side2", n);
   double cls = holent_gw_scalar (prhs[9], fn, "class");
   double tl = holent_gw_scalar (prhs[10], fn, "timelike");
   if (cls != 0.0 && cls != 1.0 && cls != 2.0)
@@ -423,28 +459,37 @@ do_geodesic (const char *fn, mxArray *plhs[], const mxArray *prhs[])
                      "must be 0, 1 or 2");
   if (b.kind == BG_QUENCH)
     for (size_t i = 0; i < n; i++)
-      if (t1[i] != t2[i])
+      if (j.t1[i] != j.t2[i])
         holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
                          "on a quench both ends live at the time 't' (t1 "
                          "and t2 must agree)");
-  plhs[0] = holent_gw_like (prhs[3]);
-  plhs[1] = holent_gw_like (prhs[3]);
-  double *re = mxGetPr (plhs[0]), *im = mxGetPr (plhs[1]);
-  for (size_t i = 0; i < n; i++)
+  j.cls = (int) cls;
+  j.tl = tl != 0.0;
+  /* no copy or zero-fill of large results: pauses no poll can cut short
+     (holent_gw_array.h) */
+  mxArray *re = holent_gw_result_like (prhs[3]);
+  mxArray *im = holent_gw_result_like (prhs[3]);
+  j.re = mxGetPr (re);
+  j.im = mxGetPr (im);
+  j.bad = 0;
+  int st = holent_slab_run (n, GEO_SLAB, geo_slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)
     {
-      int st = length_one (&b, x1[i], t1[i], s1 ? s1[i] : 1.0, x2[i], t2[i],
-                           s2 ? s2[i] : 1.0, (int) cls, tl != 0.0, &re[i],
-                           &im[i]);
-      if (st == HOLENT_ETIMELIKE)
-        holent_gw_raise (fn, st, "X2", i,
-                         "timelike or null separated from X1(%zu) on the "
-                         "boundary (|t2 - t1| must be below their distance; "
-                         "the option \"timelike\", true gives the timelike "
-                         "entanglement branch)", i + 1);
-      if (st)
-        holent_gw_raise (fn, st, "X2", i, "%s (with X1(%zu))",
-                         holent_strerror (st), i + 1);
+      mxDestroyArray (re);
+      mxDestroyArray (im);
     }
+  if (st == HOLENT_ETIMELIKE)
+    holent_gw_raise (fn, st, "X2", j.bad,
+                     "timelike or null separated from X1(%zu) on the "
+                     "boundary (|t2 - t1| must be below their distance; "
+                     "the option \"timelike\", true gives the timelike "
+                     "entanglement branch)", j.bad + 1);
+  if (st)  /* HOLENT_EINTR: raising it interrupts */
+    holent_gw_raise (fn, st, "X2", j.bad, "%s (with X1(%zu))",
+                     holent_strerror (st), j.bad + 1);
+  plhs[0] = re;
+  plhs[1] = im;
 }
 
 /* ---- regions ---- */
@@ -652,6 +697,72 @@ region_rows (const mxArray *a)
   return mxGetM (a);
 }
 
+/* Work item W of a (region, time) batch of NT times, region by region:
+   region *K at time *JT; nonzero when region *K is not the one read last
+   (*CUR, valid once *HAVE), which it then becomes.  */
+static int
+batch_item (size_t w, size_t nt, size_t *k, size_t *jt, size_t *cur,
+            int *have)
+{
+  *k = w / nt;
+  *jt = w % nt;
+  if (*have && *cur == *k)
+    return 0;
+  *cur = *k;
+  *have = 1;
+  return 1;
+}
+
+/* rt_entropy's time path in slabs: work item w is region k = w / NT at
+   time j = w % NT, so each region is read once.  Failures are raised
+   inside (read_region, entropy_one: tracked arrays freed by Octave).  */
+typedef struct
+{
+  gw_state *g;
+  const time_bg *b;
+  const mxArray *A, *names;
+  const double *t;
+  size_t nreg, nt, k;
+  int cell, have;
+  double *S, *pc, *ph;
+  region_in r;
+} en_job;
+
+/* (region, time) pairs per slab: microseconds to milliseconds a pair.  */
+#define EN_SLAB 16
+
+static int
+en_slab (void *ctx, size_t w0, size_t m)
+{
+  en_job *j = ctx;
+  for (size_t w = w0; w < w0 + m; w++)
+    {
+      size_t k, jt;
+      if (batch_item (w, j->nt, &k, &jt, &j->k, &j->have))
+        {
+          char nm[96];
+          if (j->names)
+            holent_gw_string (mxGetCell (j->names, k), j->g->fn, "NAMES", nm,
+                              sizeof nm);
+          else if (j->cell)
+            snprintf (nm, sizeof nm, "A{%zu}", k + 1);
+          else
+            snprintf (nm, sizeof nm, "A");
+          const mxArray *a = j->cell ? mxGetCell (j->A, k) : j->A;
+          if (a == NULL)
+            fail (j->g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX,
+                  "has no intervals");
+          read_region (j->g, a, j->b, nm, &j->r);
+        }
+      size_t ncross, i = k + j->nreg * jt;
+      int horizon;
+      j->S[i] = entropy_one (j->g, j->b, &j->r, j->t[jt], &ncross, &horizon);
+      j->pc[i] = (double) ncross;
+      j->ph[i] = horizon;
+    }
+  return HOLENT_SUCCESS;
+}
+
 static void
 do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
             const mxArray *prhs[])
@@ -686,30 +797,16 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
   plhs[0] = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *nc = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *hz = mxCreateDoubleMatrix (nreg, nt, mxREAL);
-  double *S = mxGetPr (plhs[0]), *pc = mxGetPr (nc), *ph = mxGetPr (hz);
-  for (size_t k = 0; k < nreg; k++)
-    {
-      if (names)
-        holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
-      else if (cell)
-        snprintf (nm, sizeof nm, "A{%zu}", k + 1);
-      else
-        snprintf (nm, sizeof nm, "A");
-      const mxArray *a = cell ? mxGetCell (A, k) : A;
-      if (a == NULL)
-        fail (&g, HOLENT_EEMPTY, nm, HOLENT_NOINDEX, "has no intervals");
-      region_in r;
-      read_region (&g, a, &b, nm, &r);
-      for (size_t j = 0; j < nt; j++)
-        {
-          size_t ncross;
-          int horizon;
-          S[k + nreg * j] = entropy_one (&g, &b, &r, t[j], &ncross,
-                                         &horizon);
-          pc[k + nreg * j] = (double) ncross;
-          ph[k + nreg * j] = horizon;
-        }
-    }
+  en_job j = { .g = &g, .b = &b, .A = A, .names = names, .t = t,
+               .nreg = nreg, .nt = nt, .cell = cell, .S = mxGetPr (plhs[0]),
+               .pc = mxGetPr (nc), .ph = mxGetPr (hz) };
+  /* every (region, time) pair, region by region, in slabs (Ctrl-C between
+     them; large regions also poll inside the minimiser) */
+  int st = holent_slab_run (nreg * nt, EN_SLAB, en_slab, &j,
+                            holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)  /* only HOLENT_EINTR: the others are raised inside */
+    fail (&g, st, NULL, HOLENT_NOINDEX, "%s", holent_strerror (st));
   release (&g);
   if (nlhs > 1)
     plhs[1] = nc;
@@ -722,6 +819,78 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
 }
 
 /* ---- single intervals ---- */
+
+/* interval_entropy's time path in slabs: work item w is interval
+   k = w / NT at time j = w % NT, so one interval's region is read once.
+   A failure of the timelike entropy is kept for the message; the others
+   are raised inside (entropy_one), tracked arrays freed by Octave.  */
+typedef struct
+{
+  gw_state *g;
+  const time_bg *b;
+  const double *l, *dt, *t;
+  size_t n, nt;
+  int tl;
+  double *sr, *si;
+  mxLogical *pb;
+  mxArray *row;
+  size_t bad, k;      /* the failed interval; the interval read   */
+  int any_im, have;   /* some pair causal; region k is read       */
+  region_in r;
+} iv_job;
+
+/* (interval, time) pairs per slab (about 5 us a pair): milliseconds.  */
+#define IV_SLAB 256
+
+static int
+iv_slab (void *ctx, size_t w0, size_t m)
+{
+  iv_job *j = ctx;
+  const time_bg *b = j->b;
+  for (size_t w = w0; w < w0 + m; w++)
+    {
+      size_t k, jt;
+      if (batch_item (w, j->nt, &k, &jt, &j->k, &j->have))
+        {
+          char nm[32];
+          double *pr = mxGetPr (j->row);
+          snprintf (nm, sizeof nm, "L(%zu)", k + 1);
+          pr[0] = 0.0;
+          pr[1] = j->l[k];
+          if (b->kind != BG_QUENCH)
+            {
+              pr[2] = 0.0;
+              pr[3] = j->dt[k];
+            }
+          read_region (j->g, j->row, b, nm, &j->r);
+        }
+      size_t i = k + j->n * jt;
+      int causal = 0;
+      if (j->tl && b->kind != BG_QUENCH)
+        {
+          int st = holent_hrt_timelike_entropy (&b->geo, j->l[k], j->t[jt],
+                                                j->dt[k], &j->sr[i],
+                                                &j->si[i], &causal);
+          if (st)
+            {
+              j->bad = k;
+              return st;
+            }
+        }
+      if (causal)
+        {
+          j->any_im = 1;
+          continue;
+        }
+      size_t ncross;
+      int horizon;
+      j->sr[i] = entropy_one (j->g, b, &j->r, j->t[jt], &ncross, &horizon);
+      if (j->si)
+        j->si[i] = 0.0;
+      j->pb[i] = horizon != 0;
+    }
+  return HOLENT_SUCCESS;
+}
 
 /* interval_entropy's time path: the interval [0, L(k)] with its right end
    DT(k) later, at each shift/time T(j); TIMELIKE: causal pairs give the
@@ -762,63 +931,34 @@ do_interval (const char *fn, int nlhs, mxArray *plhs[],
   alloc_ws (&g, 1);
   mxArray *S = mxCreateDoubleMatrix (n, nt, tl ? mxCOMPLEX : mxREAL);
   mxArray *br = mxCreateLogicalMatrix (n, nt);
-  double *sr = mxGetPr (S), *si = tl ? mxGetPi (S) : NULL;
-  mxLogical *pb = mxGetLogicals (br);
-  int any_im = 0;
   /* one row [0, L, 0, DT] (a quench: [0, L]) */
   mxArray *row = mxCreateDoubleMatrix (1, b.kind == BG_QUENCH ? 2 : 4,
                                        mxREAL);
-  double *pr = mxGetPr (row);
-  for (size_t k = 0; k < n; k++)
+  iv_job j = { .g = &g, .b = &b, .l = l, .dt = dt, .t = t, .n = n,
+               .nt = nt, .tl = tl, .sr = mxGetPr (S),
+               .si = tl ? mxGetPi (S) : NULL, .pb = mxGetLogicals (br),
+               .row = row, .bad = HOLENT_NOINDEX };
+  /* every (interval, time) pair, interval by interval, in slabs (Ctrl-C
+     between them) */
+  int st = holent_slab_run (n * nt, IV_SLAB, iv_slab, &j,
+                            holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)
     {
-      char nm[32];
-      region_in r;
-      snprintf (nm, sizeof nm, "L(%zu)", k + 1);
-      pr[0] = 0.0;
-      pr[1] = l[k];
-      if (b.kind != BG_QUENCH)
-        {
-          pr[2] = 0.0;
-          pr[3] = dt[k];
-        }
-      read_region (&g, row, &b, nm, &r);
-      for (size_t j = 0; j < nt; j++)
-        {
-          size_t i = k + n * j;
-          int causal = 0;
-          if (tl && b.kind != BG_QUENCH)
-            {
-              int st = holent_hrt_timelike_entropy (&b.geo, l[k], t[j],
-                                                    dt[k], &sr[i], &si[i],
-                                                    &causal);
-              if (st)
-                {
-                  mxDestroyArray (S);
-                  mxDestroyArray (br);
-                  mxDestroyArray (row);
-                  fail (&g, st, "L", k, "%s", st == HOLENT_ETIMELIKE
-                         ? "the ends of the interval are causally related "
-                           "and have no timelike entropy (a null pair, or "
-                           "a geodesic without a timelike branch)"
-                         : holent_strerror (st));
-                }
-            }
-          if (causal)
-            {
-              any_im = 1;
-              continue;
-            }
-          size_t ncross;
-          int horizon;
-          sr[i] = entropy_one (&g, &b, &r, t[j], &ncross, &horizon);
-          if (si)
-            si[i] = 0.0;
-          pb[i] = horizon != 0;
-        }
+      mxDestroyArray (S);
+      mxDestroyArray (br);
+      mxDestroyArray (row);
+      /* Ctrl-C (HOLENT_EINTR) too: fail frees, and raising it interrupts */
+      fail (&g, st, "L", j.bad, "%s", st == HOLENT_ETIMELIKE
+             ? "the ends of the interval are causally related "
+               "and have no timelike entropy (a null pair, or "
+               "a geodesic without a timelike branch)"
+             : holent_strerror (st));
     }
+  double *sr = j.sr;
   mxDestroyArray (row);
   release (&g);
-  if (tl && !any_im)
+  if (tl && !j.any_im)
     {
       /* all spacelike: a real array, as without the option */
       mxArray *R = mxCreateDoubleMatrix (n, nt, mxREAL);
@@ -834,6 +974,39 @@ do_interval (const char *fn, int nlhs, mxArray *plhs[],
 }
 
 /* ---- causality ---- */
+
+/* One slab of do_light; S1, S2: 0 for a scalar X1, X2 (repeated).  */
+typedef struct
+{
+  const time_bg *b;
+  const double *x1, *x2;
+  size_t s1, s2;
+  double tol, *tb, *tl;
+  size_t bad;
+} light_job;
+
+/* Pairs per slab (well under a microsecond a pair).  */
+#define LIGHT_SLAB ((size_t) 1 << 16)
+
+static int
+light_slab (void *ctx, size_t i0, size_t m)
+{
+  light_job *j = ctx;
+  for (size_t i = i0; i < i0 + m; i++)
+    {
+      int st = holent_causal_times (&j->b->geo, j->x1[i * j->s1],
+                                    j->x2[i * j->s2], j->tol, &j->tb[i],
+                                    &j->tl[i]);
+      if (st)
+        {
+          j->bad = i;
+          return st;
+        }
+      if (j->b->kind != BG_STATIC)
+        j->tb[i] = INFINITY;  /* behind a horizon (doc/bulk_causality.md) */
+    }
+  return HOLENT_SUCCESS;
+}
 
 /* X1 and X2 broadcast (equal sizes, or one of them a scalar).  */
 static void
@@ -862,27 +1035,32 @@ do_light (const char *fn, int nrhs, mxArray *plhs[],
         holent_gw_raise (fn, HOLENT_EDOM, "tol", HOLENT_NOINDEX,
                          "must be nonnegative and finite");
     }
-  plhs[0] = holent_gw_like (shape);
-  plhs[1] = holent_gw_like (shape);
-  double *tb = mxGetPr (plhs[0]), *tl = mxGetPr (plhs[1]);
-  size_t n = mxGetNumberOfElements (shape);
-  for (size_t i = 0; i < n; i++)
+  mxArray *tb = holent_gw_result_like (shape);
+  mxArray *tl = holent_gw_result_like (shape);
+  light_job j = { &b, x1, x2, n1 == 1 ? 0 : 1, n2 == 1 ? 0 : 1, tol,
+                  mxGetPr (tb), mxGetPr (tl), 0 };
+  int st = holent_slab_run (mxGetNumberOfElements (shape), LIGHT_SLAB,
+                            light_slab, &j, holent_gw_poll (fn));
+  holent_gw_poll_end ();
+  if (st)
     {
-      size_t i1 = n1 == 1 ? 0 : i, i2 = n2 == 1 ? 0 : i;
-      int st = holent_causal_times (&b.geo, x1[i1], x2[i2], tol, &tb[i],
-                                    &tl[i]);
-      if (st)
-        {
-          int one = !isfinite (x1[i1]);
-          double v = one ? x1[i1] : x2[i2];
-          holent_gw_raise (fn, isnan (v) ? HOLENT_ENAN : HOLENT_EDOM,
-                           one ? "X1" : "X2", one ? i1 : i2,
-                           isnan (v) ? "must not be NaN"
-                           : "must be finite, and X2 - X1 too");
-        }
-      if (b.kind != BG_STATIC)
-        tb[i] = INFINITY;  /* behind a horizon (doc/bulk_causality.md) */
+      mxDestroyArray (tb);
+      mxDestroyArray (tl);
     }
+  if (st == HOLENT_EINTR)
+    holent_gw_interrupt ();
+  if (st)
+    {
+      size_t i1 = j.bad * j.s1, i2 = j.bad * j.s2;
+      int one = !isfinite (x1[i1]);
+      double v = one ? x1[i1] : x2[i2];
+      holent_gw_raise (fn, isnan (v) ? HOLENT_ENAN : HOLENT_EDOM,
+                       one ? "X1" : "X2", one ? i1 : i2,
+                       isnan (v) ? "must not be NaN"
+                       : "must be finite, and X2 - X1 too");
+    }
+  plhs[0] = tb;
+  plhs[1] = tl;
 }
 
 /* ---- two-sided mutual information ---- */

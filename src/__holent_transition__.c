@@ -6,16 +6,64 @@
  *   [X, FOUND] = __holent_transition__ ("hawking_page", FN, OMEGA, L)
  *   [X, FOUND] = __holent_transition__ ("strip_pair", FN, HDBG, L1, L2)
  * L1, L2 (OMEGA, L) arrays of one size; X, FOUND of that size.  FN, the
- * public function's name, starts every message.  */
+ * public function's name, starts every message.  One root find per
+ * element, TR_SLAB of them between two polls (Ctrl-C, progress line).  */
 #include <math.h>
 #include <string.h>
 #include "holent_gw.h"
 #include "holent_gw_hd.h"
+#include "holent_gw_poll.h"
+#include "core/holent_slab.h"
 #include "core/holent_transition.h"
 
 static const char GW[] = "__holent_transition__";
 
 enum { PLATEAU, SEPARATION, HAWKING_PAGE, STRIP_PAIR };
+
+/* Elements per slab: a root find takes 1 us to a few ms.  */
+#define TR_SLAB 8
+
+typedef struct
+{
+  int op;
+  const double *a, *b;
+  const holent_geo_bg *bg;
+  const holent_hd_bg *hd;
+  holent_strip_workspace *w;
+  double *x, *f;
+  size_t bad;
+} job;
+
+static int
+slab (void *ctx, size_t i0, size_t m)
+{
+  job *j = ctx;
+  holent_transition_result r;
+  int st = HOLENT_SUCCESS;
+  for (size_t i = i0; i < i0 + m && !st; i++)
+    {
+      switch (j->op)
+        {
+        case PLATEAU:
+          st = holent_transition_plateau (j->bg, &r);
+          break;
+        case SEPARATION:
+          st = holent_transition_separation (j->bg, j->a[i], j->b[i], &r);
+          break;
+        case HAWKING_PAGE:
+          st = holent_transition_hawking_page (j->a[i], j->b[i], &r);
+          break;
+        default:
+          st = holent_transition_strip_pair (j->hd, j->w, j->a[i], j->b[i],
+                                             &r);
+          break;
+        }
+      j->x[i] = r.x;
+      j->f[i] = r.found;
+      j->bad = i;
+    }
+  return st;
+}
 
 void
 mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
@@ -27,9 +75,8 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   static const char *an[][2] = { { NULL, NULL }, { "L1", "L2" },
                                  { "Omega", "L" }, { "L1", "L2" } };
   char mode[16], fn[64];
-  holent_transition_result r;
-  int st = 0, op;
-  size_t n = 1, n2 = 1, bad = HOLENT_NOINDEX;
+  int op;
+  size_t n = 1, n2 = 1;
   holent_gw_init ();
   holent_gw_nargs (GW, nlhs, 2, nrhs, 3, 5);
   holent_gw_string (prhs[0], GW, "MODE", mode, sizeof mode);
@@ -71,28 +118,11 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   mxArray *X = shape ? holent_gw_like (shape) : mxCreateDoubleScalar (0);
   mxArray *F = shape ? holent_gw_like (shape) : mxCreateDoubleScalar (0);
-  double *x = mxGetPr (X), *f = mxGetPr (F);
-  for (size_t i = 0; i < n && !st; i++)
-    {
-      switch (op)
-        {
-        case PLATEAU:
-          st = holent_transition_plateau (&bg, &r);
-          break;
-        case SEPARATION:
-          st = holent_transition_separation (&bg, a[i], b[i], &r);
-          break;
-        case HAWKING_PAGE:
-          st = holent_transition_hawking_page (a[i], b[i], &r);
-          break;
-        default:
-          st = holent_transition_strip_pair (&hd, w, a[i], b[i], &r);
-          break;
-        }
-      x[i] = r.x;
-      f[i] = r.found;
-      bad = i;
-    }
+  job j = { op, a, b, &bg, &hd, w, mxGetPr (X), mxGetPr (F),
+            HOLENT_NOINDEX };
+  int st = holent_slab_run (n, TR_SLAB, slab, &j, holent_gw_poll (fn));
+  size_t bad = j.bad;
+  holent_gw_poll_end ();
   if (op == STRIP_PAIR)
     {
       holent_strip_workspace_free (w);

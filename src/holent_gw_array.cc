@@ -6,7 +6,14 @@
 // (doc/fast_paths.md).  An Octave array wrapped as an mxArray is handed
 // back as it is.  C++ because the wrapping constructor is Octave's own
 // (mxarray.h); the gateways stay plain C.
+// The elements are taken from operator new without being touched: an
+// NDArray of a size (Array's own allocator) zero-fills every element,
+// one pass over fresh memory before the core starts, which for 1e8
+// elements is a pause of seconds that no poll can interrupt; untouched,
+// the pages are first written inside the core's polled slabs.
 // SPDX-License-Identifier: GPL-3.0-or-later
+#include <memory>
+
 #include <octave/oct.h>
 #include <octave/mxarray.h>
 
@@ -21,7 +28,10 @@ holent_gw_result_like (const mxArray *a)
   dv(0) = dv(1) = 1;
   for (mwSize k = 0; k < nd; k++)
     dv(k) = d[k];
-  NDArray x (dv);   // elements left unset: the caller writes every one
+  // Array adopts a block from operator new (std::allocator) and frees it
+  // the same way; elements left unset: the caller writes every one.
+  double *p = std::allocator<double> ().allocate (dv.safe_numel ());
+  NDArray x (Array<double> (p, dv));
   // The gateways use the separate-complex API (mxGetPr): not interleaved.
   return new mxArray (false, octave_value (x));
 }

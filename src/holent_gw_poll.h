@@ -11,6 +11,9 @@
  *     holent_gw_interrupt ();             // back to the prompt, no return
  *
  * holent_gw_fail (HOLENT_EINTR, ...) does the last two steps itself.
+ * Elementwise work over many values (a kernel over a long array, a loop
+ * of core calls in the gateway) runs through holent_slab_run
+ * (core/holent_slab.h), which polls between slabs.
  * The callback may be called from any thread (OpenMP loops in the core):
  * only the calling (main) thread talks to Octave; the others see the
  * stop flag it sets.  Implemented in C++ (holent_gw_poll.cc) because the

@@ -134,3 +134,69 @@
 %! ## the one edge after its last vertex: 1 + m unit edges
 %! assert (m, 19);
 %! assert (again(3), m + 1);
+
+%!function setup = calibrated_vectorised (seconds)
+%! ## Three long vectorised calls, each sized to last about SECONDS
+%! ## uninterrupted, from the faster of two timed runs of a smaller one
+%! ## (fresh result memory included; the faster run, so that a burst of
+%! ## load during the timing does not shorten the long call below the
+%! ## interrupt): interval_entropy on the BTZ circle (the static kernel,
+%! ## at most 1e8 lengths: 0.8 GB in, 0.8 GB out), geodesic_length with
+%! ## times after a global quench (the slowest covariant kernel of the time
+%! ## path, at most 2e7 pairs) and find_transition over many separations
+%! ## (one root find each, at most 1e7).
+%! setup = sprintf (["bg = ads3_background ('thermal', 'circle', 'beta', 1); " ...
+%!   "q = ads3_background ('quench', 'circle', 'beta', 1); vac = ads3_background ('vacuum', 'line'); " ...
+%!   "l = linspace (1e-3, 2*pi, 4e6); interval_entropy (bg, l(1:1e3)); " ...
+%!   "t = tic (); interval_entropy (bg, l); a = toc (t); t = tic (); interval_entropy (bg, l); per = min (a, toc (t)) / 4e6; " ...
+%!   "n1 = min (1e8, ceil (%g / per)); est1 = per * n1; l = linspace (1e-3, 2*pi, n1); " ...
+%!   "x = linspace (0.05, 3, 2e5); x0 = zeros (size (x)); geodesic_length (q, 0, 1, 't', 0.3); " ...
+%!   "t = tic (); geodesic_length (q, x0, x, 't', 0.3); a = toc (t); t = tic (); geodesic_length (q, x0, x, 't', 0.3); per = min (a, toc (t)) / 2e5; " ...
+%!   "n2 = min (2e7, ceil (%g / per)); est2 = per * n2; x = linspace (0.05, 3, n2); x0 = zeros (size (x)); " ...
+%!   "d = linspace (0.1, 1, 5000); find_transition ('mutual_information', vac, 1, 1); " ...
+%!   "t = tic (); find_transition ('mutual_information', vac, d, d); a = toc (t); t = tic (); find_transition ('mutual_information', vac, d, d); per = min (a, toc (t)) / 5000; " ...
+%!   "n3 = min (1e7, ceil (%g / per)); est3 = per * n3; d = linspace (0.1, 1, n3); " ...
+%!   "keep = 42; printf ('READY %%g %%g %%g %%d %%d %%d\\n', est1, est2, est3, n1, n2, n3);"],
+%!   seconds, seconds, seconds);
+%!endfunction
+
+%!test
+%! ## Ctrl-C 1 s into each of three long vectorised calls in one session:
+%! ## the static interval kernel over up to 1e8 lengths (polled between
+%! ## slabs of 2^20 values), the time path's geodesic kernel on a quench
+%! ## (slabs of 4096 pairs) and a vector of root finds (slabs of 8).  Each prompt is back
+%! ## within a fraction of a second (the limit below is generous for a
+%! ## loaded machine), no result was assigned, the workspace is intact, and
+%! ## the same session computes again, against closed forms: the BTZ
+%! ## interval entropy (c/3) log((beta/(pi eps)) sinh(pi l/beta)) below the
+%! ## plateau (Ryu and Takayanagi 2006, PRL 96, 181602), the boosted BTZ
+%! ## geodesic log((beta/(pi eps))^2 (sinh^2(pi x/beta) - sinh^2(pi t/beta)))
+%! ## (Hubeny, Rangamani and Takayanagi 2007, JHEP 07, 062), and the vacuum
+%! ## mutual-information transition of two intervals of length l at the
+%! ## separation (sqrt(2) - 1) l (Headrick 2010, PRD 82, 126010).
+%! long = sprintf ("%s\n", "S = interval_entropy (bg, l);",
+%!   "G = geodesic_length (q, x0, x, 't', 0.3);",
+%!   "X = find_transition ('mutual_information', vac, d, d);");
+%! after = ["printf ('AGAIN %d %d %d %d', keep, exist ('S', 'var'), exist ('G', 'var'), exist ('X', 'var')); " ...
+%!   "r = [0.1 0.5 1.5]; printf (' %.15g', interval_entropy (bg, r), bg.c / 3 * log (bg.beta / (pi * bg.cutoff) * sinh (pi * r / bg.beta)), " ...
+%!   "geodesic_length (bg, [0 0], [0.3 1.2], 't1', 0, 't2', 0.1), log ((bg.beta / (pi * bg.cutoff))^2 * (sinh (pi * [0.3 1.2] / bg.beta).^2 - sinh (pi * 0.1 / bg.beta)^2)), " ...
+%!   "find_transition ('mutual_information', vac, [0.3 2], [0.3 2]), [0.3 2] * (sqrt (2) - 1)); printf ('\\n');"];
+%! [lat, out] = session (calibrated_vectorised (6), long, after, 1);
+%! ready = number_after (out, "READY");
+%! assert (numel (ready), 6, out);
+%! est = ready(1:3);
+%! printf ("  Ctrl-C latency %.3f %.3f %.3f s (calls of about %.1f %.1f %.1f s: %d lengths, %d pairs, %d root finds)\n",
+%!         lat, ready);
+%! assert (all (est > 3), "the vectorised calls are too short to test an interrupt: %g %g %g s", est);
+%! assert (numel (lat), 3, out);
+%! assert (all (lat < 3), out);
+%! ## each call ran until its interrupt (it did not fail at once) and stopped
+%! back = cellfun (@str2double, regexp (out, 'BACK ([\d.]+)', "tokens"));
+%! assert (numel (back), 3, out);
+%! assert (all (back > 0.9 & back < est), out);
+%! again = number_after (out, "AGAIN");
+%! assert (again(1:4), [42 0 0 0]);
+%! v = again(5:end);
+%! assert (v(1:3), v(4:6), 1e-12 * max (abs (v(4:6))));
+%! assert (v(7:8), v(9:10), 1e-12 * max (abs (v(9:10))));
+%! assert (v(11:12), v(13:14), 1e-10);

@@ -72,14 +72,26 @@ function varargout = __holent_time_entropy__ (fn, varargin)
       if (! all (cellfun ("isreal", a) & cellfun (@(x) isa (x, "double"), a)))
         return;   # the gateway names the argument of the wrong type
       endif
-      try
-        z = zeros (size (plus (a{:}, 0)));
-      catch
+      ## The common size from the sizes alone, and only the arrays of
+      ## another size expanded: no pass over large arrays that already
+      ## have it (each would be a pause Ctrl-C cannot cut short).
+      nd = max (cellfun ("ndims", a));
+      S = cell2mat (cellfun (@(x) [size(x), ones(1, nd - ndims (x))], a(:),
+                             "uniformoutput", false));
+      sz = max (S, [], 1);
+      sz(any (S == 0, 1)) = 0;
+      if (any ((S != 1 & S != sz)(:)))
         sz = cellfun (@(x) mat2str (size (x)), a, "uniformoutput", false);
         error ("holent:size", "%s: %s do not broadcast", f,
                strjoin (strcat (nm, " (", sz, ")"), ", "));
-      end_try_catch
-      varargout = cellfun (@(x) x + z, a, "uniformoutput", false);
+      endif
+      for k = find (any (S != sz, 2))'
+        if (isscalar (a{k}))
+          varargout{k} = repmat (a{k}, sz);   # one pass, not two
+        else
+          varargout{k} = a{k} + zeros (sz);
+        endif
+      endfor
     case "double"
       x = varargin{1};
       if (isnumeric (x))
