@@ -35,23 +35,23 @@ entropy_block (const holent_geo_bg *bg, double m_star, size_t n,
                const double *l, double *S, unsigned char *branch)
 {
   const double c6 = bg->c / 6.0, L = bg->L;
-  double d[IV_BLOCK], add[IV_BLOCK];
+  double add[IV_BLOCK];
   if (!bg->circle)
     {
-      holent_vmath_arc_lengths (bg, n, l, d);
+      holent_vmath_arc_lengths (bg, n, l, S);
 #pragma omp simd
       for (size_t i = 0; i < n; i++)
-        S[i] = c6 * d[i];
+        S[i] = c6 * S[i];
       if (branch)
         for (size_t i = 0; i < n; i++)
           branch[i] = 0;
       return;
     }
-  /* The arc whose geodesic is taken, and the branch: with a horizon the
-     complement when its arc L - l is below m_star; without one the
-     shorter side (both give the same surface up to rounding at l = L/2:
-     the branch is named by geometry).  l = L (the whole circle) gets a
-     harmless stand-in and is replaced below.  */
+  /* The arc whose geodesic is taken (into S, then its length in place),
+     and the branch: with a horizon the complement when its arc L - l is
+     below m_star; without one the shorter side (both give the same
+     surface up to rounding at l = L/2: the branch is named by geometry).
+     l = L (the whole circle) gets a harmless stand-in, replaced below.  */
   const double sbh = bg->S_BH;
   const int hz = bg->horizon;
   const double whole = hz ? L : 0.5 * L;
@@ -60,24 +60,21 @@ entropy_block (const holent_geo_bg *bg, double m_star, size_t n,
     {
       double c = L - l[i], t = hz ? m_star : l[i];
       double a = c < t ? c : l[i], br = c < t ? 1.0 : 0.0;
-      d[i] = l[i] < L ? a : whole;
-      add[i] = l[i] < L ? br : 1.0;
+      S[i] = l[i] < L ? a : whole;
+      add[i] = l[i] < L ? br : 2.0;
     }
-  /* (GCC cannot see that the simd loop above sets every d[i], i < n) */
-#pragma GCC diagnostic push
-#pragma GCC diagnostic ignored "-Wmaybe-uninitialized"
-  holent_vmath_arc_lengths (bg, n, d, d);
-#pragma GCC diagnostic pop
-  /* add[i] is the branch (0 or 1); the whole circle is S_BH or 0 */
+  holent_vmath_arc_lengths (bg, n, S, S);
+  /* add[i] is the branch (0 or 1), or 2 for the whole circle (S_BH or
+     0, branch 1); l is not read again, so S may alias it */
 #pragma omp simd
   for (size_t i = 0; i < n; i++)
     {
-      double s = c6 * d[i] + add[i] * sbh;
-      S[i] = l[i] >= L ? sbh : s;
+      double s = c6 * S[i] + add[i] * sbh;
+      S[i] = add[i] > 1.5 ? sbh : s;
     }
   if (branch)
     for (size_t i = 0; i < n; i++)
-      branch[i] = (unsigned char) add[i];
+      branch[i] = add[i] != 0.0;
 }
 
 /* Invalid and short lengths, counted without a branch (in doubles, exact

@@ -21,7 +21,8 @@
 /* len[i] = regulated length of the geodesic over the arc arc[i], for arcs
    that holent_geo_arc_length accepts (not checked here).  Agrees with
    holent_geo_len_unchecked to a few ulps (log sinh x is evaluated as
-   x - log 2 + log(-expm1(-2x)) throughout).  len may alias arc.  */
+   x - log 2 + log(-expm1(-2x)); with two temperatures the two logs are
+   one, of the product of the expm1 terms).  len may alias arc.  */
 void holent_vmath_arc_lengths (const holent_geo_bg *bg, size_t n,
                                const double *arc, double *len);
 

@@ -263,6 +263,15 @@ test_interval_plateau (void)
             okb = 0;
         }
       HT_CHECK (ok, "case %zu: S = min of both candidates", k);
+      /* in place (S aliasing the lengths), the whole circle included */
+      static double ip[NR + NU];
+      for (int i = 0; i < NR + NU; i++)
+        ip[i] = i == 7 ? p.L : l[i];
+      HT_STATUS (holent_interval_entropy (&bg, NR + NU, ip, ip, NULL, NULL, NULL), HOLENT_SUCCESS);
+      int same = ip[7] == sbh;
+      for (int i = 0; i < NR + NU; i++)
+        same = same && (i == 7 || ip[i] == S[i]);
+      HT_CHECK (same, "case %zu: in place", k);
       HT_CHECK (okb, "case %zu: branch", k);
       /* the difference of the candidates grows with l (its derivative is
          (c/6) sum k (coth kl + coth k(L - l)) > 0): on a grid */
