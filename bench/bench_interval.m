@@ -14,8 +14,9 @@ function bench_interval ()
   rand ("seed", 3);
   bgs = {ads3_background("vacuum", "line", "c", 12, "cutoff", 1e-6), ...
          ads3_background("thermal", "line", "beta", 0.7, "c", 12, "cutoff", 1e-6), ...
-         ads3_background("thermal", "circle", "beta", 0.7, "c", 12, "cutoff", 1e-6)};
-  names = {"vacuum line", "thermal line", "BTZ circle (plateau)"};
+         ads3_background("thermal", "circle", "beta", 0.7, "c", 12, "cutoff", 1e-6), ...
+         ads3_background("rotating", "circle", "beta_L", 0.7, "beta_R", 0.4, "c", 12, "cutoff", 1e-6)};
+  names = {"vacuum line", "thermal line", "BTZ circle (plateau)", "rotating BTZ circle"};
   printf ("%-36s %8s %11s %8s %11s %7s %10s\n", "case", "n", "holent [s]",
           "ns/val", "peer [s]", "ratio", "max rel");
   for k = 1:numel (bgs)
@@ -66,7 +67,10 @@ function S = closed_form (bg, l)
     case "poincare"
       S = (bg.c / 3) * log (l / bg.cutoff);
     otherwise
-      S = (bg.c / 3) * log ((bg.beta / (pi * bg.cutoff)) * sinh (pi * l / bg.beta));
+      ## one temperature: beta_L = beta_R = beta (Hubeny, Rangamani and
+      ## Takayanagi 2007 for two)
+      S = (bg.c / 6) * (log ((bg.beta_L / (pi * bg.cutoff)) * sinh (pi * l / bg.beta_L))
+                        + log ((bg.beta_R / (pi * bg.cutoff)) * sinh (pi * l / bg.beta_R)));
   endswitch
 endfunction
 

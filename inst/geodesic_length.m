@@ -49,19 +49,24 @@ function len = geodesic_length (bg, x1, x2, varargin)
   if (nargin < 3 || mod (nargin, 2) != 1)
     print_usage ();
   endif
-  ## The static fast path (a static state, no option, real full doubles
-  ## of one size) tests the state in one line: no time-path test, no
-  ## option parsing; no isfield, which copies a struct's fields in Octave 7
-  ## (doc/fast_paths.md).
-  try
-    fast = nargin == 3 && any (strcmp (bg.state, {"vacuum", "thermal", "rotating", "heavy"}));
-  catch
-    fast = false;   # not a scalar struct with a state
-  end_try_catch
-  if (fast && isa (x1, "double") && isreal (x1) && ! issparse (x1)
-      && isa (x2, "double") && isreal (x2) && ! issparse (x2) && size_equal (x1, x2))
-    len = __holent_geodesic__ ("length", fn, bg, x1, x2, 0);
-    return;
+  ## The static fast path (a static state, no option, X1 and X2 of one
+  ## size): no time-path test, no option parsing, no isfield (it copies a
+  ## struct's fields in Octave 7), and no type tests: the gateway refuses
+  ## anything but real full doubles with holent:type, and then the general
+  ## path below converts or explains (__holent_fast_error__,
+  ## doc/fast_paths.md).
+  if (nargin == 3)
+    try
+      switch (bg.state)
+        case {"vacuum", "thermal", "rotating", "heavy"}
+          if (size_equal (x1, x2))
+            len = __holent_geodesic__ ("length", fn, bg, x1, x2, 0);
+            return;
+          endif
+      endswitch
+    catch err
+      __holent_fast_error__ (err);
+    end_try_catch
   endif
   o = struct ();
   if (nargin > 3)
@@ -205,6 +210,12 @@ endfunction
 %!error <NaN> geodesic_length (bgl, NaN, 1)
 %!error <finite> geodesic_length (bgl, Inf, 1)
 %!error <real> geodesic_length (bgl, 1i, 1)
+%!test
+%! ## the static fast path leaves other types to the general path
+%! bgl = ads3_background ("vacuum", "line", "cutoff", 1e-3);
+%! assert (geodesic_length (bgl, single (0.5), 2), geodesic_length (bgl, 0.5, 2));
+%! assert (geodesic_length (bgl, sparse (0.5), 2), geodesic_length (bgl, 0.5, 2));
+%! assert (geodesic_length (bgl, int8 (1), [2 3]), geodesic_length (bgl, [1 1], [2 3]));
 %!error <numeric array> geodesic_length (bgl, true, 2)
 %!error <numeric array> geodesic_length (bgl, "a", 2)
 %!error <background struct> geodesic_length (struct (), 1, 2)

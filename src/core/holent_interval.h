@@ -13,13 +13,28 @@
  *           l = L (the whole circle) gives S_BH.
  * branch[i] (may be NULL) is 0 when the geodesic over the interval itself
  * wins and 1 when the complementary geodesic (plus the horizon, if any)
- * wins; with a horizon ties go to 0, without one branch = (l > L/2), the
- * side on which the (equal or shorter) geodesic runs.  *n_short (may be NULL) counts lengths not longer
- * than twice the cutoff, where the regulated formula is meaningless.  */
+ * wins: with a horizon branch = (L - l < m_star) (holent_interval_plateau
+ * below; one geodesic is evaluated a value, the minimum is the same up to
+ * rounding), without one branch = (l > L/2), the side on which the (equal
+ * or shorter) geodesic runs.  *n_short (may be NULL) counts lengths not
+ * longer than twice the cutoff, where the regulated formula is
+ * meaningless.  */
 int holent_interval_entropy (const holent_geo_bg *bg, size_t n,
                              const double *l, double *S,
                              unsigned char *branch, size_t *bad,
                              size_t *n_short);
+
+/* The plateau of an interval on a circle with a horizon (BTZ, rotating
+ * BTZ): *m_star = L - l*, the arc of the complement at which the geodesic
+ * over the interval and the complementary one plus the horizon have the
+ * same length (the entanglement plateau of Hubeny, Maxfield, Rangamani
+ * and Tonni 2013).  holent_interval_entropy takes the complement exactly
+ * when L - l < *m_star.  Closed form for one temperature, a bracketed
+ * root (Brent's method) to the last bits for two; 0 < *m_star <= L/2.
+ * HOLENT_EINVAL for NULL, HOLENT_EDOM without a circle and a horizon,
+ * HOLENT_ENOMEM or HOLENT_ENOCONV from the root finder (two
+ * temperatures).  */
+int holent_interval_plateau (const holent_geo_bg *bg, double *m_star);
 
 /* Why the length l = lengths[i] fails holent_interval_entropy, in E (arg
  * 0: the lengths, index i): HOLENT_ENAN, HOLENT_EDOM (not positive, Inf,

@@ -34,7 +34,7 @@
    end) so that the minimiser can be unwound.  */
 typedef struct
 {
-  double *T, *A, *arc, *cost;
+  double *T, *T2, *A, *arc, *cost;
   size_t *P;
   size_t *lg_e, *lg_next, *head;  /* log: right end, previous record */
   size_t lg_n, lg_cap;
@@ -63,17 +63,18 @@ static int
 sweep_alloc (sweep_state *s, size_t P, size_t N)
 {
   s->T = malloc ((P + 2) * sizeof *s->T);
+  s->T2 = malloc ((P + 2) * sizeof *s->T2);
   s->A = malloc ((P + 2) * sizeof *s->A);
   s->P = malloc ((P + 2) * sizeof *s->P);
   s->head = malloc ((P + 2) * sizeof *s->head);
   s->arc = malloc (N * sizeof *s->arc);
-  s->cost = malloc (2 * N * sizeof *s->cost);  /* two columns */
+  s->cost = malloc (4 * N * sizeof *s->cost);  /* four columns */
   /* A few records per point in practice (doc/rt_fast.md); beyond that
      the unwinding sweeps again over sub-runs instead.  */
   s->lg_cap = 8 * N + 64;
   s->lg_e = malloc (s->lg_cap * sizeof *s->lg_e);
   s->lg_next = malloc (s->lg_cap * sizeof *s->lg_next);
-  return s->T && s->A && s->P && s->head && s->arc && s->cost && s->lg_e
+  return s->T && s->T2 && s->A && s->P && s->head && s->arc && s->cost && s->lg_e
          && s->lg_next;
 }
 
@@ -81,6 +82,7 @@ static void
 sweep_free (sweep_state *s)
 {
   free (s->T);
+  free (s->T2);
   free (s->A);
   free (s->P);
   free (s->head);
@@ -434,18 +436,28 @@ backtrack (const dp *d, size_t s0, size_t m0, size_t *stack, size_t *pi,
 }
 
 /* ---- The sweep (doc/rt_fast.md).  Runs [s, e] of unrolled points
- * with a <= s < e <= b and at most cap points.  After column e, T[s]
+ * with a <= s < e <= b and at most cap points.  After column e, T_e[s]
  * holds the best run [s, e] for every start s of the other parity; its
  * candidates are the partner kept from column e - 2 and the new point e:
- *   T[s] = min(A[s] + T[P[s] + 1], c(y[e] - y[s]) + T[s + 1]),
- * in the order of the DP's sums, so both give the same numbers.  full
- * (if non-NULL) receives T[s] for each run of exactly cap points.  */
+ *   T_e[s] = min(A[s] + T_e[P[s] + 1], c(y[e] - y[s]) + T_{e-1}[s + 1]),
+ * in the order of the DP's sums, so both give the same numbers.  Columns
+ * go in pairs (e, e + 1) whose starts have opposite parities, so one
+ * array holds both; consecutive pairs alternate between st->T and st->T2
+ * (sweep_tcol).  full (if non-NULL) receives T_e[s] for each run of
+ * exactly cap points.  */
+static inline double *
+sweep_tcol (const sweep_state *st, size_t a, size_t x)
+{
+  return ((x - a - 1) / 2) & 1 ? st->T2 : st->T;
+}
+
 /* A new partner e of s at cost v (rare: a few per point), logged when
    the unwinding needs it.  */
 static inline void
-sweep_take (sweep_state *st, size_t s, size_t e, double v, int first)
+sweep_take (sweep_state *st, double *T, size_t s, size_t e, double v,
+            int first)
 {
-  st->T[s] = st->A[s] = v;
+  T[s] = st->A[s] = v;
   st->P[s] = e;
   if (st->logging)
     {
@@ -462,16 +474,17 @@ sweep_take (sweep_state *st, size_t s, size_t e, double v, int first)
     }
 }
 
-/* Column e at start s, not its first: the kept partner against the new
-   point e, whose length is c.  Ties keep the earlier partner.  */
+/* Column e (array T, the previous column's Tp) at start s, not its
+   first: the kept partner against the new point e, whose length is c.
+   Ties keep the earlier partner.  */
 static inline void
-sweep_step (sweep_state *st, size_t s, size_t e, double c)
+sweep_step (sweep_state *st, double *restrict T, const double *Tp, size_t s,
+            size_t e, double c)
 {
-  double *restrict T = st->T;
-  double vnew = c + T[s + 1];
+  double vnew = c + Tp[s + 1];
   double vold = st->A[s] + T[st->P[s] + 1];
   if (__builtin_expect (vnew < vold, 0))
-    sweep_take (st, s, e, vnew, 0);
+    sweep_take (st, T, s, e, vnew, 0);
   else
     T[s] = vold;
 }
@@ -500,48 +513,58 @@ sweep_column (sweep_state *st, const holent_geo_bg *bg, const double *y,
   return J;
 }
 
+#define SWEEP_LANES 4
+
 static void
 sweep_run (sweep_state *st, const holent_geo_bg *bg, const double *y,
            size_t N, size_t a, size_t b, size_t cap, double *full)
 {
-  double *T = st->T, *c0 = st->cost, *c1 = st->cost + N;
   st->lg_n = 0;
   st->overflow = 0;
-  /* Columns e and e + 1 go together, step by step: their starts have
-     opposite parities (disjoint slots), and column e + 1 at start s + 1
-     needs only T[s + 2] of column e, made one step earlier.  Two
-     independent chains of loads and adds keep the core busy where one
-     would wait on the latency of each.  */
-  for (size_t e = a + 1; e <= b; e += 2)
+  /* the empty run [a + 1, a] before the first column */
+  sweep_tcol (st, a, a)[a + 1] = 0.0;
+  /* Four columns e, ..., e + 3 go together, step by step: column x at
+     step j (start x - 1 - 2j) needs columns x - 1 and x - 2 at step j - 1
+     only (T_{x-1}[s + 1], and A[s], P[s] as column x - 2 left them), so
+     four independent chains of loads and adds keep the core busy where
+     one would wait on the latency of each.  Columns x and x + 2 share
+     the slots of A and P (one step apart) but not their T array.  */
+  for (size_t e = a + 1; e <= b; e += SWEEP_LANES)
     {
-      int two = e + 1 <= b;
-      T[e] = 0.0;  /* the empty runs [e, e - 1] and [e + 1, e] */
-      size_t J0 = sweep_column (st, bg, y, N, a, cap, e, c0), J1 = 0;
-      if (two)
+      size_t nl = b - e + 1 < SWEEP_LANES ? b - e + 1 : SWEEP_LANES;
+      double *T[SWEEP_LANES], *Tp[SWEEP_LANES], *c[SWEEP_LANES];
+      size_t J[SWEEP_LANES] = { 0 }, Jc = (size_t) -1, Jsum = 0;
+      for (size_t q = 0; q < nl; q++)
         {
-          T[e + 1] = 0.0;
-          J1 = sweep_column (st, bg, y, N, a, cap, e + 1, c1);
+          size_t x = e + q;
+          T[q] = sweep_tcol (st, a, x);
+          Tp[q] = sweep_tcol (st, a, x - 1);
+          c[q] = st->cost + q * N;
+          T[q][x + 1] = 0.0;  /* the empty run [x + 1, x] */
+          J[q] = sweep_column (st, bg, y, N, a, cap, x, c[q]);
+          Jc = J[q] < Jc ? J[q] : Jc;
+          Jsum += J[q];
         }
-      /* the first start of each column (the pair (e-1, e)), then both
-         columns in step, then the longer one's tail */
-      sweep_take (st, e - 1, e, c0[0] + T[e], 1);
-      if (J1 > 0)
-        sweep_take (st, e, e + 1, c1[0] + T[e + 1], 1);
-      size_t Jc = J0 < J1 ? J0 : J1, j = 1;
-      for (; j < Jc; j++)
-        {
-          sweep_step (st, e - 1 - 2 * j, e, c0[j]);
-          sweep_step (st, e - 2 * j, e + 1, c1[j]);
-        }
-      for (; j < J0; j++)
-        sweep_step (st, e - 1 - 2 * j, e, c0[j]);
-      for (; j < J1; j++)
-        sweep_step (st, e - 2 * j, e + 1, c1[j]);
-      if (full && e + 1 >= a + cap)
-        full[e + 1 - cap] = T[e + 1 - cap];
-      if (full && two && e + 2 >= a + cap)
-        full[e + 2 - cap] = T[e + 2 - cap];
-      if (sweep_poll (st, (double) (J0 + J1)))
+      /* the first start of each column (the pair (x - 1, x)) */
+      for (size_t q = 0; q < nl; q++)
+        sweep_take (st, T[q], e + q - 1, e + q, c[q][0] + Tp[q][e + q], 1);
+      size_t j = 1;
+      if (nl == SWEEP_LANES)
+        for (; j < Jc; j++)
+          {
+            sweep_step (st, T[0], Tp[0], e - 1 - 2 * j, e, c[0][j]);
+            sweep_step (st, T[1], Tp[1], e - 2 * j, e + 1, c[1][j]);
+            sweep_step (st, T[2], Tp[2], e + 1 - 2 * j, e + 2, c[2][j]);
+            sweep_step (st, T[3], Tp[3], e + 2 - 2 * j, e + 3, c[3][j]);
+          }
+      /* the rest of each column, in column order */
+      for (size_t q = 0; q < nl; q++)
+        for (size_t i = j; i < J[q]; i++)
+          sweep_step (st, T[q], Tp[q], e + q - 1 - 2 * i, e + q, c[q][i]);
+      for (size_t q = 0; full && q < nl; q++)
+        if (e + q + 1 >= a + cap)
+          full[e + q + 1 - cap] = T[q][e + q + 1 - cap];
+      if (sweep_poll (st, (double) Jsum))
         return;
     }
 }
@@ -763,8 +786,7 @@ rt_minimise (holent_rt_workspace *w, const holent_geo_bg *bg,
       else
         {
           w->sw[0].logging = want_conf;
-          sweep_run (&w->sw[0], bg, w->y, N, 0, N - 1, N, NULL);
-          w->full[0] = w->sw[0].T[0];
+          sweep_run (&w->sw[0], bg, w->y, N, 0, N - 1, N, w->full);
         }
       if (w->sw[0].stopped || w->sw[1].stopped)
         return HOLENT_EINTR;

@@ -1,5 +1,6 @@
 /* holent_vmath.c: vectorised regulated lengths (holent_vmath.h).
  * SPDX-License-Identifier: GPL-3.0-or-later */
+#include <float.h>
 #include <math.h>
 #include <gsl/gsl_math.h>
 #include "holent_vmath.h"
@@ -57,13 +58,44 @@ len_sine (double pref, double k, double cap, size_t n, const double *arc,
     len[i] = pref + 2.0 * log (sin (len[i]));
 }
 
+#define VM_BLOCK 512
+
+/* Two temperatures: g(xL) + g(xR) with one log of the product of the
+   two expm1 terms (each in [-1, 0), so no overflow): two expm1 and one
+   log a value instead of two of each.  The product is a normal number
+   when both k arc >= 2^-500 (|expm1(-2x)| >= min(x, 0.6)); a block with
+   a shorter arc (far below any cutoff) takes the two logs.  Past k arc =
+   19 for both, log(p) = log(1) = 0 and the sum is the linear form of
+   holent_vmath_arc_lengths_sorted to the last bit.  */
 VM_CLONES static void
 len_btz (double pref, double kL, double kR, size_t n, const double *arc,
          double *len)
 {
+  const double tiny = 0x1p-500 / (kL < kR ? kL : kR);
+  for (size_t i0 = 0; i0 < n; i0 += VM_BLOCK)
+    {
+      const size_t m = n - i0 < VM_BLOCK ? n - i0 : VM_BLOCK;
+      const double *a = arc + i0;
+      double *y = len + i0;
+      int small = 0;
+#pragma omp simd reduction(| : small)
+      for (size_t i = 0; i < m; i++)
+        small |= a[i] < tiny;
+      if (small)
+        {
 #pragma omp simd
-  for (size_t i = 0; i < n; i++)
-    len[i] = pref + (lnsinh (kL * arc[i]) + lnsinh (kR * arc[i]));
+          for (size_t i = 0; i < m; i++)
+            y[i] = pref + (lnsinh (kL * a[i]) + lnsinh (kR * a[i]));
+          continue;
+        }
+#pragma omp simd
+      for (size_t i = 0; i < m; i++)
+        {
+          double xL = kL * a[i], xR = kR * a[i];
+          double p = expm1 (-2.0 * xL) * expm1 (-2.0 * xR);
+          y[i] = pref + (((xL - M_LN2) + (xR - M_LN2)) + log (p));
+        }
+    }
 }
 
 /* beta_L = beta_R: one log sinh (g + g = 2 g exactly).  */
@@ -165,8 +197,6 @@ lnsinh_sorted (double k, size_t n, const double *arc, double *g)
     g[i] = k * arc[i] - M_LN2;
 }
 
-#define VM_BLOCK 512
-
 void
 holent_vmath_arc_lengths_sorted (const holent_geo_bg *bg, size_t n,
                                  const double *arc, double *len)
@@ -226,6 +256,37 @@ point_arc (const holent_geo_bg *bg, double a, double b, double *arc)
   return r == 0.0 || r >= L ? HOLENT_ECOINCIDE : HOLENT_SUCCESS;
 }
 
+/* The arcs of point_arc without a branch where |x2 - x1| < L (every pair
+   on a line with a finite distance); returns the number of pairs it
+   could not settle (bad, or to be reduced modulo L), whose len is then
+   meaningless.  Counted in doubles: GCC vectorises that reduction.  */
+HOLENT_VM_CLONES __attribute__ ((optimize ("no-trapping-math"))) static double
+arcs_plain (const holent_geo_bg *bg, size_t n, const double *x1,
+            const double *x2, double *len)
+{
+  double nb = 0.0;
+  if (!bg->circle)
+    {
+#pragma omp simd reduction(+ : nb)
+      for (size_t i = 0; i < n; i++)
+        {
+          double d = fabs (x2[i] - x1[i]);  /* NaN, Inf: not <= DBL_MAX */
+          len[i] = d;
+          nb += (d <= DBL_MAX && d != 0.0) ? 0.0 : 1.0;
+        }
+      return nb;
+    }
+  const double L = bg->L;
+#pragma omp simd reduction(+ : nb)
+  for (size_t i = 0; i < n; i++)
+    {
+      double d = x2[i] - x1[i], r = d < 0.0 ? d + L : d;
+      len[i] = r;
+      nb += (fabs (d) < L && r != 0.0 && r < L) ? 0.0 : 1.0;
+    }
+  return nb;
+}
+
 int
 holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
                             const double *x1, const double *x2,
@@ -236,17 +297,20 @@ holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
   if (cls != HOLENT_GEO_SHORTER && cls != HOLENT_GEO_POSITIVE
       && cls != HOLENT_GEO_NEGATIVE)
     return HOLENT_EINVAL;
-  /* Arcs first (into len), stopping at the first bad pair.  */
-  for (size_t i = 0; i < n; i++)
-    {
-      int st = point_arc (bg, x1[i], x2[i], &len[i]);
-      if (st)
-        {
-          if (bad)
-            *bad = i;
-          return st;
-        }
-    }
+  /* Arcs first (into len), in one branch-free pass; only when a pair is
+     bad or needs the reduction modulo L, again pair by pair, stopping at
+     the first bad one.  */
+  if (arcs_plain (bg, n, x1, x2, len) > 0)
+    for (size_t i = 0; i < n; i++)
+      {
+        int st = point_arc (bg, x1[i], x2[i], &len[i]);
+        if (st)
+          {
+            if (bad)
+              *bad = i;
+            return st;
+          }
+      }
   const int other = bg->circle && cls != HOLENT_GEO_POSITIVE;
   const double L = bg->L;
   const long nb = (long) ((n + VM_BLOCK - 1) / VM_BLOCK);
@@ -268,10 +332,14 @@ holent_vmath_point_lengths (const holent_geo_bg *bg, size_t n,
           holent_vmath_arc_lengths (bg, m, c, x);
           continue;
         }
-      holent_vmath_arc_lengths (bg, m, x, x);
-      holent_vmath_arc_lengths (bg, m, c, c);
+      /* The shorter geodesic is the one over the shorter arc: every
+         length on a circle is a nondecreasing function of the arc up to
+         L/2 and (global, thermal AdS) symmetric about it, or increasing
+         (BTZ family, the defect up to its cap) (doc/fast_paths.md).  One
+         length a pair.  */
       for (size_t i = 0; i < m; i++)
-        x[i] = x[i] < c[i] ? x[i] : c[i];
+        x[i] = c[i] < x[i] ? c[i] : x[i];
+      holent_vmath_arc_lengths (bg, m, x, x);
     }
   return HOLENT_SUCCESS;
 }

@@ -8,6 +8,7 @@
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_sf_trig.h>
 #include <gsl/gsl_errno.h>
+#include <gsl/gsl_roots.h>
 #include "holent_ctest.h"
 #include "holent_geo.h"
 #include "holent_interval.h"
@@ -162,6 +163,137 @@ test_interval (void)
   free (ss);
 }
 
+/* The plateau of an interval on a circle with a horizon (Hubeny,
+ * Maxfield, Rangamani and Tonni 2013, JHEP 08, 092: for l beyond l* the
+ * complement plus the horizon is the RT surface; from memory), and
+ * holent_interval_entropy, which evaluates one geodesic a value chosen by
+ * comparing L - l with m* = L - l*.  Independent route: the two
+ * candidates written out with GSL's log sinh (Ryu and Takayanagi 2006;
+ * Hubeny, Rangamani and Takayanagi 2007 for two temperatures), their
+ * crossing found by GSL's Brent solver, and their minimum at random
+ * lengths and at lengths within 300 ulps of l*.  */
+typedef struct
+{
+  double bl, br, L, c, eps;
+} pl_case;
+
+static double
+pl_len (const pl_case *p, double l)
+{
+  return log (p->bl / (M_PI * p->eps)) + gsl_sf_lnsinh (M_PI * l / p->bl)
+         + log (p->br / (M_PI * p->eps)) + gsl_sf_lnsinh (M_PI * l / p->br);
+}
+
+/* complement plus horizon minus the interval, at complement arc m */
+static double
+pl_gap (double m, void *vp)
+{
+  const pl_case *p = vp;
+  double sbh = M_PI * p->c / 6 * (1 / p->bl + 1 / p->br) * p->L;
+  return p->c / 6 * pl_len (p, m) + sbh - p->c / 6 * pl_len (p, p->L - m);
+}
+
+static void
+test_interval_plateau (void)
+{
+  const pl_case cs[] = {
+    { 0.5, 0.5, 2 * M_PI, 3, 1e-6 }, { 3, 3, 2 * M_PI, 12, 1e-4 },
+    { 50, 50, 2 * M_PI, 1, 1e-6 },   /* k L < 1: the other closed form */
+    { 1000, 1000, 1, 2, 1e-7 },      /* nearly no horizon: l* -> L/2 */
+    { 0.001, 0.001, 10, 1, 1e-9 },   /* k L ~ 3e4 */
+    { 0.7, 0.4, 2 * M_PI, 3, 1e-6 }, { 5, 0.3, 2 * M_PI, 1, 1e-6 },
+    { 100, 1, 2 * M_PI, 24, 1e-5 },  { 0.02, 0.01, 1, 1, 1e-8 },
+  };
+  enum { NR = 3000, NU = 601 };
+  static double l[NR + NU], S[NR + NU];
+  static unsigned char br[NR + NU];
+  gsl_root_fsolver *rs = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
+  HT_CHECK (rs != NULL, "brent");
+  srand (11);
+  for (size_t k = 0; rs && k < sizeof cs / sizeof cs[0]; k++)
+    {
+      pl_case p = cs[k];
+      holent_geo_bg bg;
+      holent_bulk bulk = p.bl == p.br ? HOLENT_BULK_BTZ : HOLENT_BULK_ROTATING_BTZ;
+      HT_STATUS (holent_geo_bg_init (&bg, bulk, p.L, p.eps, p.bl, p.br, 1, p.c), HOLENT_SUCCESS);
+      double ms;
+      HT_STATUS (holent_interval_plateau (&bg, &ms), HOLENT_SUCCESS);
+      HT_CHECK (ms > 0 && ms <= p.L / 2, "case %zu: m* = %g", k, ms);
+      /* the crossing by Brent on the written-out candidates */
+      gsl_function F = { pl_gap, &p };
+      double lo = 1e-12 * p.L, hi = p.L / 2, root = 0;
+      gsl_root_fsolver_set (rs, &F, lo, hi);
+      for (int it = 0; it < 200; it++)
+        {
+          gsl_root_fsolver_iterate (rs);
+          root = gsl_root_fsolver_root (rs);
+          lo = gsl_root_fsolver_x_lower (rs);
+          hi = gsl_root_fsolver_x_upper (rs);
+          if (gsl_root_test_interval (lo, hi, 0, 1e-15) == GSL_SUCCESS)
+            break;
+        }
+      HT_CHECK (fabs (ms - root) <= 1e-11 * root, "case %zu: m* %.17g, Brent %.17g", k, ms, root);
+      /* random lengths, then L - m* give or take 300 ulps */
+      double lstar = p.L - ms;
+      for (int i = 0; i < NR; i++)
+        l[i] = p.L * (rand () + 1.0) / (RAND_MAX + 2.0);
+      for (int i = 0; i < NU; i++)
+        {
+          double x = lstar;
+          for (int j = 0; j < abs (i - NU / 2); j++)
+            x = nextafter (x, i < NU / 2 ? 0.0 : p.L);
+          l[NR + i] = x;
+        }
+      HT_STATUS (holent_interval_entropy (&bg, NR + NU, l, S, br, NULL, NULL), HOLENT_SUCCESS);
+      double sbh = M_PI * p.c / 6 * (1 / p.bl + 1 / p.br) * p.L;
+      int ok = 1, okb = 1;
+      for (int i = 0; i < NR + NU; i++)
+        {
+          double a = p.c / 6 * pl_len (&p, l[i]);
+          double b = p.c / 6 * pl_len (&p, p.L - l[i]) + sbh;
+          double want = a < b ? a : b, sc = fabs (want) > 1 ? fabs (want) : 1;
+          if (!(fabs (S[i] - want) <= 1e-14 * sc))
+            {
+              if (ok)
+                HT_CHECK (0, "case %zu: l = %.17g: S %.17g, min %.17g", k, l[i], S[i], want);
+              ok = 0;
+            }
+          /* the branch where the candidates differ beyond rounding */
+          if (fabs (a - b) > 1e-14 * sc && br[i] != (b < a))
+            okb = 0;
+        }
+      HT_CHECK (ok, "case %zu: S = min of both candidates", k);
+      /* in place (S aliasing the lengths), the whole circle included */
+      static double ip[NR + NU];
+      for (int i = 0; i < NR + NU; i++)
+        ip[i] = i == 7 ? p.L : l[i];
+      HT_STATUS (holent_interval_entropy (&bg, NR + NU, ip, ip, NULL, NULL, NULL), HOLENT_SUCCESS);
+      int same = ip[7] == sbh;
+      for (int i = 0; i < NR + NU; i++)
+        same = same && (i == 7 || ip[i] == S[i]);
+      HT_CHECK (same, "case %zu: in place", k);
+      HT_CHECK (okb, "case %zu: branch", k);
+      /* the difference of the candidates grows with l (its derivative is
+         (c/6) sum k (coth kl + coth k(L - l)) > 0): on a grid */
+      int mono = 1;
+      double prev = -INFINITY;
+      for (int i = 1; i < 2000; i++)
+        {
+          double x = p.L * i / 2000.0, g = -pl_gap (p.L - x, &p);
+          mono = mono && g > prev - 1e-12 * fabs (g);
+          prev = g;
+        }
+      HT_CHECK (mono, "case %zu: monotone difference", k);
+    }
+  gsl_root_fsolver_free (rs);
+  holent_geo_bg bg;
+  double ms;
+  HT_STATUS (holent_geo_bg_init (&bg, HOLENT_BULK_GLOBAL_ADS, 1, 1e-3, 0, 0, 1, 1), HOLENT_SUCCESS);
+  HT_STATUS (holent_interval_plateau (&bg, &ms), HOLENT_EDOM);
+  HT_STATUS (holent_interval_plateau (NULL, &ms), HOLENT_EINVAL);
+  HT_STATUS (holent_interval_plateau (&bg, NULL), HOLENT_EINVAL);
+}
+
 /* Derived constants that overflow, or cutoff-scale arcs that would be
    subnormal, are refused (EDOM) instead of giving Inf or digit-less
    lengths; large but representable ratios are computed in logs and
@@ -232,6 +364,7 @@ main (void)
   test_init_range ();
   test_lengths ();
   test_interval ();
+  test_interval_plateau ();
   HT_CHECK (holent_strerror (HOLENT_EOVERLAP)[0] != '\0', "strerror");
   HT_CHECK (holent_strerror (12345)[0] != '\0', "strerror unknown");
   return HT_DONE ();
