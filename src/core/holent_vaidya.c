@@ -16,11 +16,14 @@
 #define NSTEP 20000     /* ODE steps of one shot                           */
 #define ROOT_IT 60      /* iterations of the 2D root solve                 */
 #define ROOT_TOL 1e-11  /* residual of the 2D root solve (relative)        */
+#define ROOT_FLOOR 1e-8 /* ... or this once the tip is at roundoff         */
 #define NEWTON_IT 8     /* iterations of a continuation step's Newton       */
 #define HALVE 30        /* continuation: halvings of a time step           */
 #define TSTEP 0.05      /* continuation: largest step in t per min(l, zh)  */
 #define ODE_ABS 3e-14   /* tolerances of the shots                         */
 #define ODE_REL 3e-12
+#define NCROSS 4      /* shell crossings of one shot (a tangency: more) */
+#define ZDEEP 8       /* a shot deeper than ZDEEP z* is not a strip      */
 
 struct holent_vaidya_workspace
 {
@@ -143,8 +146,11 @@ rhs_z (double z, const double y[], double dy[], void *p)
   double v = y[1], vz = y[2], F, Fp, sp;
   if (!(z > 0) || holent_hd_bg_f (q->F, z, &F, &Fp))
     return GSL_EBADFUNC;
-  double s = shell (q, v, &sp);
-  double om = s * (1 - F), fz = s * Fp, fv = -sp * (1 - F);
+  /* 1 - F from the evaluator, not from F: near the boundary 1 - F ~ z^d
+     would keep only the digits 1e-16/z^d, noise that the step control of
+     the area then chases with tiny steps */
+  double s = shell (q, v, &sp), omF = holent_hd_bg_omf (q->F, z);
+  double om = s * omF, fz = s * Fp, fv = -sp * omF;
   double u = 1 + vz, P = 1 - u * u + om * vz * vz;
   double r = gsl_pow_int (z / q->zs, 2 * d - 2);
   if (!(r < 1) || !(P > 0))
@@ -154,17 +160,20 @@ rhs_z (double z, const double y[], double dy[], void *p)
   dy[1] = vz;
   dy[2] = ((d - 1) * PR / z + 0.5 * fz * vz * vz) * (u - om * vz)
           + fz * vz * vz + 0.5 * fv * vz * vz * vz;
-  dy[3] = -((P - 1 + r) * R / (sq + 1)) / gsl_pow_int (z, d - 1);
+  dy[3] = -((r - u * u + om * vz * vz) * R / (sq + 1)) / gsl_pow_int (z, d - 1);
   return GSL_SUCCESS;
 }
 
 /* Thin shell: from (x0, y0) the step to x1 crossed v = 0; land on the
    crossing by bisection of single rk8pd steps and refract there:
    (z' + f v')' = f_v v'^2/2 integrates to the jump z' -> z' - v' [f]/2,
-   [f] = f(after) - f(before) = -(s_after - s_before)(1 - F(z)).  */
+   [f] = f(after) - f(before) = -(s_after - s_before)(1 - F(z)).  With z
+   the parameter (zpar), *zpn is z' after the refraction: when it is no
+   longer below -1 the caller goes back to x (the surface turns deeper
+   after the shell, where z is no parameter).  */
 static int
 cross (holent_ode *ode, holent_ode_fn f, vpar *q, int zpar, double x0,
-       const double y0[5], double x1, double *xc, double yc[5])
+       const double y0[5], double x1, double *xc, double yc[5], double *zpn)
 {
   double lo = 0, hi = x1 - x0, yt[5], v0 = y0[1];
   for (int it = 0; it < 80 && fabs (hi - lo) > 1e-15 * (fabs (x0) + fabs (hi)); it++)
@@ -182,11 +191,12 @@ cross (holent_ode *ode, holent_ode_fn f, vpar *q, int zpar, double x0,
   if (hi != 0 && holent_ode_fixed (ode, f, q, x0, hi, yc))
     return HOLENT_ENOCONV;
   *xc = x0 + hi;
-  double F, z = zpar ? *xc : yc[0];
-  if (holent_hd_bg_f (q->F, z, &F, NULL))
-    return HOLENT_EDOM;
+  double z = zpar ? *xc : yc[0];
+  if (!(z > 0) || z > q->F->zmax)
+    return HOLENT_ENOCONV;
   int after = v0 < 0;  /* crossing upwards in v enters the final state */
-  double jump = -((double) after - (double) q->side) * (1 - F);
+  double jump = -((double) after - (double) q->side)
+                * holent_hd_bg_omf (q->F, z);
   if (zpar)
     {
       /* z' = 1/x_z and v' = v_z z' before; z' jumps, v' does not */
@@ -194,7 +204,8 @@ cross (holent_ode *ode, holent_ode_fn f, vpar *q, int zpar, double x0,
       if (rhs_z (z, yc, dy, q))
         return HOLENT_ENOCONV;
       double zp = 1 / dy[0], vp = yc[2] * zp;
-      yc[2] = vp / (zp - 0.5 * vp * jump);
+      *zpn = zp - 0.5 * vp * jump;
+      yc[2] = vp / *zpn;
     }
   else
     yc[2] -= 0.5 * yc[3] * jump;
@@ -215,48 +226,71 @@ holent_vaidya_shoot (const holent_hd_bg *F, double w,
   int d = F->d;
   vpar q = { F, w, zs, vs >= 0 };
   double y[5] = { zs, vs, 0, 0, -pow (zs, 2 - d) / (d - 2) }, x = 0;
-  double h = 1e-3 * zs, y0[5];
-  double xmax = 50 * zs;
-  holent_ode_reset (ws->ode);
-  int k = 0, st;
-  for (; y[2] > -1; k++)
+  double h = 1e-3 * zs, y0[5], yz[5], z = zs;
+  double xmax = 50 * zs, zend = ZEND * zs;
+  int k = 0, st, ncross = 0;
+  for (;;)
     {
-      if (k > NSTEP || x > xmax || y[0] > 2 * zs)
-        return HOLENT_ENOCONV;  /* does not reach the boundary */
-      double x0 = x;
-      memcpy (y0, y, sizeof y0);
-      if (holent_ode_step (ws->ode, rhs, &q, &x, xmax, &h, 1e-12 * zs, y))
-        return HOLENT_ENOCONV;
-      if (w <= 0 && ((y[1] < 0) != (y0[1] < 0)))
+      /* in x while z' > -1 (the tip, and where the surface turns) */
+      holent_ode_reset (ws->ode);
+      for (; y[2] > -1; k++)
         {
-          double xc;
-          if ((st = cross (ws->ode, rhs, &q, 0, x0, y0, x, &xc, y)))
-            return st;
-          x = xc;
-          holent_ode_reset (ws->ode);
+          if (k > NSTEP || x > xmax || y[0] > ZDEEP * zs)
+            return HOLENT_ENOCONV;  /* does not reach the boundary */
+          double x0 = x;
+          memcpy (y0, y, sizeof y0);
+          if (holent_ode_step (ws->ode, rhs, &q, &x, xmax, &h, 1e-12 * zs, y))
+            return HOLENT_ENOCONV;
+          if (w <= 0 && ((y[1] < 0) != (y0[1] < 0)))
+            {
+              double xc;
+              if (++ncross > NCROSS
+                  || (st = cross (ws->ode, rhs, &q, 0, x0, y0, x, &xc, y,
+                                  NULL)))
+                return HOLENT_ENOCONV;
+              x = xc;
+              holent_ode_reset (ws->ode);
+            }
         }
-    }
-  /* z' < -1: on in z down to ZEND z* (state x, v, v_z, K) */
-  double z = y[0], yz[5] = { x, y[1], y[3] / y[2], y[4], 0 };
-  double zend = ZEND * zs, hz = -1e-3 * z;
-  holent_ode_reset (ws->ode4);
-  for (; z > zend; k++)
-    {
-      if (k > NSTEP)
-        return HOLENT_ENOCONV;
-      double z0 = z;
-      memcpy (y0, yz, sizeof y0);
-      if (holent_ode_step (ws->ode4, rhs_z, &q, &z, zend, &hz, 1e-12 * z,
-                           yz))
-        return HOLENT_ENOCONV;
-      if (w <= 0 && ((yz[1] < 0) != (y0[1] < 0)))
+      /* z' < -1: on in z down to ZEND z* (state x, v, v_z, K) */
+      z = y[0];
+      yz[0] = x;
+      yz[1] = y[1];
+      yz[2] = y[3] / y[2];
+      yz[3] = y[4];
+      yz[4] = 0;
+      double hz = -1e-3 * z, zpn = -INFINITY;
+      holent_ode_reset (ws->ode4);
+      for (; z > zend && zpn < -1; k++)
         {
-          double zc;
-          if ((st = cross (ws->ode4, rhs_z, &q, 1, z0, y0, z, &zc, yz)))
-            return st;
-          z = zc;
-          holent_ode_reset (ws->ode4);
+          if (k > NSTEP)
+            return HOLENT_ENOCONV;
+          double z0 = z;
+          memcpy (y0, yz, sizeof y0);
+          if (holent_ode_step (ws->ode4, rhs_z, &q, &z, zend, &hz, 1e-12 * z,
+                               yz))
+            return HOLENT_ENOCONV;
+          if (w <= 0 && ((yz[1] < 0) != (y0[1] < 0)))
+            {
+              double zc;
+              if (++ncross > NCROSS
+                  || (st = cross (ws->ode4, rhs_z, &q, 1, z0, y0, z, &zc, yz,
+                                  &zpn)))
+                return HOLENT_ENOCONV;
+              z = zc;
+              holent_ode_reset (ws->ode4);
+            }
         }
+      if (zpn < -1)
+        break;
+      /* the refraction turned the surface (z' >= -1): back to x */
+      x = yz[0];
+      y[0] = z;
+      y[1] = yz[1];
+      y[2] = zpn;
+      y[3] = yz[2] * zpn;
+      y[4] = yz[3];
+      h = 1e-3 * zs;
     }
   /* beyond ZEND z*: t = v + z + m z^(d+1)/(d+1), the rest of x and of the
      finite area O(z^d), O(m z^2) (m = s(t) m_F) */
@@ -292,6 +326,29 @@ resid (const gsl_vector *p, void *vp, gsl_vector *r)
   return GSL_SUCCESS;
 }
 
+/* Wide strips at late times hug the critical surface inside the horizon
+   (Liu and Suh 2014): t at the boundary then depends exponentially on
+   the tip (dt/dz* ~ 1e5..1e6), and the residual of t cannot go below
+   roundoff of z* times that.  A Newton step at roundoff of the tip (a
+   few ulps) with a residual below ROOT_FLOOR (t within ~1e-8 l: S within
+   v_E s A times that) is then the root.  */
+static int
+tip_floor (const double dy[2], const double y[2], double nr)
+{
+  return nr < ROOT_FLOOR && fabs (dy[0]) < 1e-14
+         && fabs (dy[1]) < 1e-14 * (1 + fabs (y[1]));
+}
+
+static int
+at_floor (const gsl_multiroot_fsolver *s)
+{
+  double dy[2] = { gsl_vector_get (s->dx, 0), gsl_vector_get (s->dx, 1) };
+  double y[2] = { gsl_vector_get (s->x, 0), gsl_vector_get (s->x, 1) };
+  double nr = fmax (fabs (gsl_vector_get (s->f, 0)),
+                    fabs (gsl_vector_get (s->f, 1)));
+  return tip_floor (dy, y, nr);
+}
+
 /* the tip (zs, vs) of the surface of width l at time t, from a guess */
 static int
 solve (rpar *a, double *zs, double *vs)
@@ -304,7 +361,8 @@ solve (rpar *a, double *zs, double *vs)
     {
       if (it >= ROOT_IT)
         return HOLENT_ENOCONV;
-      if (gsl_multiroot_test_residual (a->ws->root->f, ROOT_TOL) == GSL_SUCCESS)
+      if (gsl_multiroot_test_residual (a->ws->root->f, ROOT_TOL) == GSL_SUCCESS
+          || (it > 0 && at_floor (a->ws->root)))
         break;
       st = gsl_multiroot_fsolver_iterate (a->ws->root);
     }
@@ -416,6 +474,11 @@ newton (rpar *a, branch *b, double y[2])
         }
       double dy[2] = { -(J[3] * r[0] - J[1] * r[1]) / det,
                        -(J[0] * r[1] - J[2] * r[0]) / det };
+      if (fresh && tip_floor (dy, y, nr))
+        {
+          a->jfin = jy;
+          return HOLENT_SUCCESS;
+        }
       yn[0] = y[0] + dy[0];
       yn[1] = y[1] + dy[1];
       double nrn = INFINITY;
