@@ -4,20 +4,22 @@
 ## in [-0.2, 3] for 10 widths in [0.5, 3] zh (wide strips saturate through
 ## a swallow tail, l = 3 at t ~ 2.6), against a plain Octave shooting
 ## script of the same problem written as a careful user would for 1e-8:
-##  * ode45 (RelTol 1e-11, AbsTol 1e-13) on the Euler-Lagrange equations in
+##  * ode45 (RelTol 1e-10, AbsTol 1e-12) on the Euler-Lagrange equations in
 ##    ingoing coordinates, in x from the tip while z' > -1, then in z (the
 ##    conserved quantity fixes x_z, the area's divergence subtracted in the
 ##    integrand) down to z = 1e-3 z*, the rest from the boundary series;
-##  * the thin shell crossed exactly: an ode45 event at v = 0, the
-##    refraction z' -> z' + v' (1 - F)/2 applied, and the shot restarted;
+##  * the thin shell crossed exactly: an ode45 event at v = 0 (the state
+##    there integrated again from the last step, not ode45's interpolant),
+##    the refraction z' -> z' + v' (1 - F)/2 applied, the shot restarted;
 ##  * the tip (log z*, v*) by fsolve (TolFun 1e-11), continued in t: the
 ##    guess extrapolated linearly from the two previous tips.
-## The peer is slow (a few seconds per point), so it runs on 8 consecutive
+## The peer is slow (~0.5 s per point), so it runs on 16 consecutive
 ## times of one width, from the vacuum, and its time per point is scaled
 ## to the 2000 points; the printout says so.  Agreement: the finite parts
-## at those 8 points.  Targets (issue 14): ratio holent/peer <= 0.01 and
+## at those 16 points.  Targets (issue 14): ratio holent/peer <= 0.01 and
 ## the whole scan under 2 s.
 function bench_vaidya ()
+  warning ("off", "all", "local");   # Octave's own notes from fsolve/ode45
   bg = ads_background (4, "vaidya", "zh", 1);
   l = linspace (0.5, 3, 10);
   t = linspace (-0.2, 3, 200);
@@ -36,7 +38,7 @@ function bench_vaidya ()
   t_ours = median (tw);
   ## the peer: width l(4), 8 times from t = 0.05 (its own continuation
   ## from the vacuum strip; no tip from holent)
-  k = 4;  tt = 0.05 + 0.05 * (0:7);
+  k = 4;  tt = 0.05 + 0.05 * (0:15);   # up to t = 0.8, before saturation
   [~, info] = strip_entropy (bg, l(k), "t", tt);
   zv = l(k) / 2 / (sqrt (pi) * gamma (2/3) / gamma (1/6));   # vacuum tip, d = 4
   c0 = cputime ();  t0 = tic ();
@@ -48,7 +50,8 @@ function bench_vaidya ()
     endif
     P = fsolve (@(q) peer_res (q, l(k), tt(i)), P, opt);
     hist = [hist; P];
-    [~, ~, fp(i)] = peer_shot (exp (P(1)), P(2));
+    [~, ~, jf] = peer_shot (exp (P(1)), P(2));
+    fp(i) = 2 * jf / 4;   # 2 ell^3 Lperp^2/(4G) times jf, ell = G = Lperp = 1
   endfor
   t_peer_pt = toc (t0) / numel (tt);
   c_peer_pt = (cputime () - c0) / numel (tt);
@@ -60,8 +63,9 @@ function bench_vaidya ()
           t_ours, median (tc));
   printf ("  plain ode45 + fsolve   : %8.1f s (%.2f s wall, %.2f s CPU a point, on %d points, scaled to %d)\n",
           t_peer, t_peer_pt, c_peer_pt, numel (tt), npts);
-  printf ("  ratio holent/peer      : %8.2g  (target <= 0.01)\n", t_ours / t_peer);
-  printf ("  scan under 2 s         : %s\n", ifelse_ (t_ours < 2, "yes", "no"));
+  printf ("  ratio holent/peer      : %8.2g wall, %.2g CPU  (target <= 0.01)\n", t_ours / t_peer, median (tc) / (c_peer_pt * npts));
+  printf ("  scan under 2 s         : %s in CPU time, %s in wall time (shared machine: see the load)\n",
+          ifelse_ (median (tc) < 2, "yes", "no"), ifelse_ (t_ours < 2, "yes", "no"));
   printf ("  agreement (finite parts, %d points): max relative difference %.2g\n",
           numel (tt), max (abs (fp - info.finite) ./ abs (info.finite)));
 endfunction
@@ -87,10 +91,11 @@ function [lh, tb, jf] = peer_shot (zs, vs)
   y = [zs; vs; 0; 0; -zs^(2-d) / (d - 2)];  x = 0;
   ## in x while z' > -1, stopping at the shell (v = 0) and at z' = -1
   while (true)
-    opt = odeset ("RelTol", 1e-11, "AbsTol", 1e-13,
+    opt = odeset ("RelTol", 1e-10, "AbsTol", 1e-12, "Refine", 1,
                   "Events", @(x, y) deal ([y(2); y(3) + 1], [1; 1], [0; -1]));
-    [xs, ys, xe, ye, ie] = ode45 (@(x, y) rhs_x (y, zs, side), [x, x + 50 * zs], y, opt);
-    x = xs(end);  y = ys(end,:)';
+    f = @(x, y) rhs_x (y, zs, side);
+    [xs, ys, xe, ~, ie] = ode45 (f, [x, x + 50 * zs], y, opt);
+    [x, y] = land_ (f, xs, ys, xe, opt);
     if (isempty (ie) || ie(end) == 2)
       break;
     endif
@@ -106,9 +111,11 @@ function [lh, tb, jf] = peer_shot (zs, vs)
   ## in z down to 1e-3 z*: state (x, v, v_z, K)
   yz = [x; y(2); y(4) / y(3); y(5)];  z = y(1);  ze = 1e-3 * zs;
   while (true)
-    opt = odeset ("RelTol", 1e-11, "AbsTol", 1e-13, "Events", @(z, y) deal (y(2), 1, 0));
-    [zz, ys, ~, ~, ie] = ode45 (@(z, y) rhs_z (z, y, zs, side), [z, ze], yz, opt);
-    z = zz(end);  yz = ys(end,:)';
+    opt = odeset ("RelTol", 1e-10, "AbsTol", 1e-12, "Refine", 1,
+                  "Events", @(z, y) deal (y(2), 1, 0));
+    f = @(z, y) rhs_z (z, y, zs, side);
+    [zz, ys, ze_, ~, ie] = ode45 (f, [z, ze], yz, opt);
+    [z, yz] = land_ (f, zz, ys, ze_, opt);
     if (isempty (ie) || z <= ze * (1 + 1e-12))
       break;
     endif
@@ -121,6 +128,19 @@ function [lh, tb, jf] = peer_shot (zs, vs)
   lh = yz(1) + z^d / (d * zs^(d-1));
   tb = yz(2) + z + m * z^(d+1) / (d + 1);
   jf = yz(4) + 0.25 * m * z^2;
+endfunction
+
+## The state at an event: ode45's value there is its interpolant's (about
+## 1e-7 off at these tolerances), so integrate again from the last step
+## to the event's abscissa.
+function [x, y] = land_ (f, xs, ys, xe, opt)
+  if (isempty (xe) || numel (xs) < 2)
+    x = xs(end);  y = ys(end,:)';
+    return;
+  endif
+  x = xe(end);
+  [~, y2] = ode45 (f, [xs(end-1), x], ys(end-1,:)', odeset (opt, "Events", []));
+  y = y2(end,:)';
 endfunction
 
 function dy = rhs_x (y, zs, side)
