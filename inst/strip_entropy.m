@@ -47,10 +47,11 @@
 ## ...)}), @code{"t"} gives the boundary times (a vector; the shell leaves the
 ## boundary at t = 0) and @var{S} (of the size of @var{t}) is S(t) of one
 ## strip of width @var{l}: the extremal surface (z(x), v(x)) in ingoing
-## coordinates is shot from its tip with a GSL ODE solver, the tip found by a
-## two-dimensional root solve onto (l, t) and followed continuously in t;
-## where several extremal surfaces exist (the late branch from the static
-## surface of the final state) the one of least area is taken, and
+## coordinates is shot from its tip with a GSL ODE solver; for a thin shell
+## the curve of surfaces of width l is traced in the tip's time v* from the
+## vacuum to the static strip (through its folds) and each time refined on
+## it, for a smooth shell the tip is followed continuously in t; where
+## several extremal surfaces exist the one of least area is taken, and
 ## @code{info.jump} marks the times where the minimal surface changed
 ## branch.  @var{info} has @code{finite}, @code{z_star}, @code{v_star} (the
 ## tip), @code{jump} and @code{divergence}.  Before the quench S(t) is the

@@ -84,6 +84,37 @@
 %! vsA = entanglement_velocity (bg) * bg.entropy_density * 2;
 %! assert (slope < vsA * 1.001 && slope > 0.85 * vsA);
 
+%!test
+%! ## wide strips (issue 14): l = 6 in d = 3, l = 4 and 6 in d = 4, from the
+%! ## vacuum to saturation.  Checks: the vacuum strip for t <= 0 and the
+%! ## static brane strip after saturation (strip_entropy of the vacuum and
+%! ## of the brane); the growth rate in the linear regime tends to
+%! ## v_E s A from below (Liu and Suh 2014, PRL 112, 011601; v_E from
+%! ## entanglement_velocity, checked there against their closed form);
+%! ## S(t) never decreases and is continuous at the one change of branch
+%! ## (a swallow tail: the early surface crosses the static one; its rise
+%! ## over a time step is at most the rate v_E s A times the step).
+%! for c = {{3, 6, [-0.1 2.5 3.5 3.9 4.02 4.06 4.1 4.14 4.2 5]}, ...
+%!          {4, 4, [-0.1 2.4 3.2 3.36 3.38 3.4 3.42 3.44 3.5 4.5]}, ...
+%!          {4, 6, [-0.1 3.5 4.5 4.96 4.98 5.0 5.02 5.04 5.2 6]}}
+%!   [d, l, t] = deal (c{1}{:});
+%!   bg = ads_background (d, "vaidya", "zh", 1);
+%!   [S, info] = strip_entropy (bg, l, "t", t);
+%!   [~, iv] = strip_entropy (ads_background (d, "vacuum"), l);
+%!   [~, ib] = strip_entropy (ads_background (d, "black_brane", "zh", 1), l);
+%!   assert (info.finite(1), iv.finite, 1e-10);
+%!   assert (info.finite(end), ib.finite, 1e-10);
+%!   rate = entanglement_velocity (bg) * bg.entropy_density * 2;
+%!   slope = diff (info.finite(2:3)) / diff (t(2:3));
+%!   assert (slope < rate * 1.0005 && slope > 0.97 * rate, sprintf ("d = %d, l = %g: slope %g, v_E s A %g", d, l, slope, rate));
+%!   assert (all (diff (info.finite) >= -1e-10));
+%!   k = find (info.jump);
+%!   assert (numel (k), 1);
+%!   assert (info.finite(k), ib.finite, 1e-10);
+%!   assert (info.finite(k) - info.finite(k-1) <= rate * (t(k) - t(k-1)) * 1.0001);
+%!   assert (info.finite(k-1) < ib.finite);
+%! endfor
+
 %!error <give the boundary times> strip_entropy (ads_background (4, "vaidya", "zh", 1), 1)
 %!error <needs a quench> strip_entropy (ads_background (4, "black_brane", "zh", 1), 1, "t", 1)
 %!error <shell_width must be nonnegative> ads_background (4, "vaidya", "zh", 1, "shell_width", -1)

@@ -6,9 +6,14 @@
  * (holent_hd_bg: a brane or a tabulated f).  The extremal surface
  * (z(x), v(x)) is shot from its tip with a GSL ODE solver (the thin
  * shell crossed exactly, with its refraction) and the tip (z*, v*) found
- * by a two-dimensional root solve onto (l, t), following the branch
- * continuously in t; where the static surface of the final state is also
- * extremal (entirely after the shell) the smaller area is taken.
+ * so that the strip has width l and reaches the boundary at t.  Thin
+ * shell: the curve of surfaces of width l is traced in the tip's time v*
+ * (z* at fixed v* by a bracketed secant), from the vacuum strip to the
+ * static strip of the final state through the folds of t(v*), and every
+ * surface on it with boundary time t is a candidate (the least area is
+ * taken: saturation exactly where the static strip becomes the least).
+ * Smooth shell: the tip is followed continuously in t (2D Newton/Broyden)
+ * and compared with the late branch from the static strip.
  * Derivations: doc/higher_dimensional.md ("Quench: Vaidya").
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #ifndef HOLENT_VAIDYA_H

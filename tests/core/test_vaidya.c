@@ -78,6 +78,33 @@ main (void)
     HT_CHECK (bad == 3, "bad = %zu", bad);
     HT_STATUS (holent_vaidya_strip (&F, 0, w, 1, l, 0, t, St, NULL, NULL, NULL, NULL, &bad), HOLENT_SUCCESS);
   }
+  /* a refraction that turns the surface deeper (z' >= -1 after the
+     shell): the shot goes back to x and still reaches the boundary
+     (before, it stalled at v = 0); a deeper tip falls in */
+  HT_STATUS (holent_vaidya_shoot (&F, 0, w, 2.72, -1.5, &lh, &tb, &j), HOLENT_SUCCESS);
+  HT_CHECK (lh > 1.2 && lh < 1.3 && tb > 1.5 && tb < 2, "lh %g tb %g", lh, tb);
+  HT_STATUS (holent_vaidya_shoot (&F, 0, w, 2.76, -1.5, &lh, &tb, &j), HOLENT_ENOCONV);
+  /* a wide strip (l = 3 zh) from the vacuum to saturation through its
+     swallow tail: vacuum before, the static brane strip after (Ryu and
+     Takayanagi 2006 closed form; holent_strip_entropy), one change of
+     branch, S non-decreasing */
+  {
+    double l = 3, tt[6] = { -0.1, 1.0, 2.0, 2.5, 2.7, 3.5 }, St[6], ft[6];
+    unsigned char jt[6];
+    double S, fin, zs;
+    HT_STATUS (holent_vaidya_strip (&F, 0, w, 1, l, 6, tt, St, ft, NULL, NULL, jt, NULL), HOLENT_SUCCESS);
+    HT_STATUS (holent_strip_entropy (&F, sw, 1, 1, &l, &S, &fin, NULL, &zs, NULL, NULL), HOLENT_SUCCESS);
+    double zv = l / holent_strip_ratio (4);
+    HT_CLOSE (ft[0], 0.5 * holent_strip_vacuum_j (4) / (zv * zv), 1e-10);
+    HT_CLOSE (ft[5], fin, 1e-10);
+    int nj = 0;
+    for (int i = 1; i < 6; i++)
+      {
+        nj += jt[i];
+        HT_CHECK (ft[i] >= ft[i - 1] - 1e-12, "S decreases at t = %g", tt[i]);
+      }
+    HT_CHECK (nj == 1 && jt[4] == 1, "jumps %d", nj);
+  }
   HT_STATUS (holent_vaidya_shoot (&F, 0, w, -1, 0, &lh, &tb, &j), HOLENT_EDOM);
   HT_STATUS (holent_vaidya_shoot (NULL, 0, w, 1, 0, &lh, &tb, &j), HOLENT_EINVAL);
   holent_hd_bg V;
