@@ -295,6 +295,20 @@ endfunction
 %! assert (info.reach >= max (wg) - 1e-6 && info.reach < max (wg) + 0.05);
 
 %!test
+%! ## many widths: the series path agrees with the exact path (more in
+%! ## tests/check_strip_series.m) and says so in info
+%! bg = ads_background (5, "black_brane", "zh", 2, "cutoff", 1e-3);
+%! l = linspace (0.05, 20, 100);
+%! [S, info] = strip_entropy (bg, l);
+%! [Se, ie] = strip_entropy (bg, l, "method", "exact");
+%! assert ([info.series, ie.series], [100, 0]);
+%! assert (info.series_error < 1e-11 && isnan (ie.series_error));
+%! assert (S, Se, 1e-10 * Se);
+%! assert (info.z_star, ie.z_star, 1e-10 * ie.z_star);
+%! [~, i3] = strip_entropy (bg, l(1:3), "method", "series");
+%! assert (i3.series, 3);
+
+%!test
 %! [S, info] = strip_entropy (ads_background (4, "vacuum"), zeros (0, 3));
 %! assert (size (S), [0 3]);
 
@@ -314,6 +328,7 @@ endfunction
 %!error <NaN> strip_entropy (ads_background (4, "vacuum"), NaN)
 %!error <complex> strip_entropy (ads_background (4, "vacuum"), 1i)
 %!error <unknown option> strip_entropy (ads_background (4, "vacuum"), 1, "width", 2)
+%!error <method: must be "auto", "exact" or "series"> strip_entropy (ads_background (4, "vacuum"), 1, "method", "fast")
 %!error <background struct> strip_entropy (ads3_background ("vacuum", "line"), 1)
 %!error <L\(1\) = 1e-300 gives an entropy out of double precision> strip_entropy (ads_background (4, "vacuum"), 1e-300)
 %!error <strip_entropy: BG.kind must be a short string> strip_entropy (setfield (ads_background (4, "vacuum"), "kind", 3), 1)

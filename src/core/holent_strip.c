@@ -58,7 +58,9 @@ holent_strip_workspace_set_method (holent_strip_workspace *w,
                                    holent_strip_method m)
 {
   if (w)
-    w->method = m;
+    w->method = m == HOLENT_STRIP_EXACT || m == HOLENT_STRIP_SERIES
+                    ? m
+                    : HOLENT_STRIP_AUTO;
 }
 
 double

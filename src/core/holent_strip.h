@@ -43,6 +43,7 @@ typedef enum
 
 #define HOLENT_STRIP_SERIES_MIN 64
 
+/* Any other value of M: AUTO.  */
 void holent_strip_workspace_set_method (holent_strip_workspace *w,
                                         holent_strip_method m);
 
