@@ -57,10 +57,11 @@
 ## Chebyshev series in y = log(z*/(Z - z*)) (degree and pieces chosen
 ## until the series' tails are below 1e-12), each width is inverted by
 ## Newton's method on the series, and every output follows from the
-## series.  Agreement with the exact path is about 1e-13 relative in S,
-## z* and delta (tests/check_strip_series.m; doc/fast_paths.md);
+## series.  Agreement with the exact path is 1e-13 relative or better in
+## S, z* and delta (tests/check_strip_series.m; doc/fast_paths.md);
 ## @code{finite} agrees to 1e-13 of the larger of |finite| and the
-## divergence-free scale |S_vac,fin|.  Widths outside the fitted range,
+## vacuum's |finite| at the same width (finite changes sign for wide
+## strips).  Widths outside the fitted range,
 ## noisier data, non-monotonic widths and series that do not converge
 ## take the exact path (per width: Brent's method on the width
 ## quadrature).  The vacuum always uses its closed forms.
