@@ -1,7 +1,10 @@
 /* RT surfaces in AdS_{d+1} (FN: the public function, named in messages):
- *   [S, FIN, DELTA, ZSTAR, REACH, ACC, DIV] = __holent_hd__ ("strip", FN, BG, L, LPERP[, NAMES])
+ *   [S, FIN, DELTA, ZSTAR, REACH, ACC, DIV, NSER, SERR] = __holent_hd__ ("strip", FN, BG, L, LPERP[, NAMES[, METHOD]])
  *     (NAMES: a cell of k names when L is k arguments' widths one after
- *     the other, so that messages name the right one)
+ *     the other, so that messages name the right one, or []; METHOD:
+ *     "auto" (default), "exact" or "series", holent_strip_method; NSER
+ *     widths came from the series, SERR their estimated relative error,
+ *     NaN when none)
  *   [S, FIN, DELTA, ZTIP, REACH, ACC]       = __holent_hd__ ("ball", FN, BG, R[, NAMES])
  *   [VE, VB, ZM] = __holent_hd__ ("velocity", FN, BG)
  *   __holent_hd__ ("check", FN, BG)   (raises holent:background unless valid)
@@ -23,7 +26,7 @@ typedef struct
   holent_strip_workspace *sw;
   holent_ball_workspace *bw;
   holent_vaidya_workspace *vw;
-  mxArray *out[7];
+  mxArray *out[9];
 } job;
 
 static void
@@ -36,7 +39,7 @@ release (job *j, int outputs)
   j->sw = NULL;
   j->bw = NULL;
   j->vw = NULL;
-  for (int k = 0; outputs && k < 7; k++)
+  for (int k = 0; outputs && k < 9; k++)
     if (j->out[k])
       {
         mxDestroyArray (j->out[k]);
@@ -182,8 +185,22 @@ surfaces (const char *fn, int strip, int nlhs, mxArray *plhs[], int nrhs,
   double reach = INFINITY, Lperp = 1;
   const char *name = strip ? "L" : "R", *what = strip ? "width" : "radius";
   const double *x = holent_gw_real (prhs[3], fn, name, &n);
+  holent_strip_method method = HOLENT_STRIP_AUTO;
   if (strip)
     Lperp = holent_gw_scalar (prhs[4], fn, "length");
+  if (strip && nrhs > 6)
+    {
+      static const char *mnames[] = { "auto", "exact", "series" };
+      char m[16];
+      int k;
+      holent_gw_string (prhs[6], fn, "method", m, sizeof m);
+      for (k = 0; k < 3 && strcmp (m, mnames[k]); k++)
+        ;
+      if (k == 3)
+        holent_gw_raise (fn, HOLENT_EOPTION, "method", HOLENT_NOINDEX,
+                         "must be \"auto\", \"exact\" or \"series\"");
+      method = (holent_strip_method) k;
+    }
   /* all Octave-side checks done: from here release before raising */
   holent_gw_hd_bg (prhs[2], fn, &j.bg);
   if (strip)
@@ -194,6 +211,7 @@ surfaces (const char *fn, int strip, int nlhs, mxArray *plhs[], int nrhs,
     fail (&j, fn, HOLENT_ENOMEM, what, NULL, NULL, n, x, bad, reach);
   const holent_poll *poll = holent_gw_poll (fn);
   holent_strip_workspace_set_poll (j.sw, poll);
+  holent_strip_workspace_set_method (j.sw, method);
   holent_ball_workspace_set_poll (j.bw, poll);
   for (int k = 0; k < 4; k++)
     j.out[k] = holent_gw_like (prhs[3]);
@@ -206,6 +224,8 @@ surfaces (const char *fn, int strip, int nlhs, mxArray *plhs[], int nrhs,
                                         &bad, &reach);
   if (st)
     fail (&j, fn, st, what, name, names, n, x, bad, reach);
+  size_t nser = 0;
+  double serr = holent_strip_series_error (j.sw, &nser);
   if (nlhs > 5)
     {
       double *acc = mxGetPr (j.out[5]);
@@ -220,7 +240,12 @@ surfaces (const char *fn, int strip, int nlhs, mxArray *plhs[], int nrhs,
   j.out[6] = mxCreateDoubleScalar (strip ? holent_strip_divergence (&j.bg,
                                                                     Lperp)
                                          : NAN);
-  hand_out (&j, nlhs, plhs, strip ? 7 : 6);
+  if (strip)
+    {
+      j.out[7] = mxCreateDoubleScalar ((double) nser);
+      j.out[8] = mxCreateDoubleScalar (serr);
+    }
+  hand_out (&j, nlhs, plhs, strip ? 9 : 6);
   release (&j, 1);
 }
 
@@ -231,7 +256,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   {
     const char *mode;
     int nin, nmax, nout;
-  } modes[] = { { "strip", 5, 6, 7 }, { "ball", 4, 5, 6 },
+  } modes[] = { { "strip", 5, 7, 9 }, { "ball", 4, 5, 6 },
                 { "velocity", 3, 3, 3 }, { "check", 3, 3, 0 },
                 { "vaidya", 6, 6, 6 } };
   char mode[16], fn[64] = "";
@@ -239,7 +264,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   holent_gw_init ();
   if (nrhs >= 2)
     holent_gw_string (prhs[1], "__holent_hd__", "FN", fn, sizeof fn);
-  holent_gw_nargs (fn, nlhs, 7, nrhs, 3, 6);
+  holent_gw_nargs (fn, nlhs, 9, nrhs, 3, 7);
   holent_gw_string (prhs[0], fn, "MODE", mode, sizeof mode);
   for (k = 0; k < nm; k++)
     if (strcmp (mode, modes[k].mode) == 0)

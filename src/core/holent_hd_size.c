@@ -251,6 +251,16 @@ holent_hd_size_table (const holent_hd_bg *bg, holent_hd_size_workspace *ws,
   return st;
 }
 
+void
+holent_hd_size_table_get (const holent_hd_size_workspace *ws, size_t *nt,
+                          const double **ty, const double **tv, int *mono)
+{
+  *nt = ws->nt;
+  *ty = ws->ty;
+  *tv = ws->tv;
+  *mono = ws->mono;
+}
+
 int
 holent_hd_size_check (size_t n, const double *l, size_t *bad, double *lmin,
                       double *lmax)

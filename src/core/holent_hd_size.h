@@ -46,6 +46,13 @@ int holent_hd_size_table (const holent_hd_bg *bg, holent_hd_size_workspace *ws,
                           double smax, double ratio, double wmin,
                           double *reach);
 
+/* The table of the last holent_hd_size_table call: *nt entries (root
+ * variable ty, size tv) and whether the size is monotonic along it
+ * (read-only; valid until the next table).  */
+void holent_hd_size_table_get (const holent_hd_size_workspace *ws, size_t *nt,
+                               const double **ty, const double **tv,
+                               int *mono);
+
 /* Every extremal surface of size s bracketed by the table; the one with
  * the least finite area is returned (RT): its areas, excess and depth.  */
 int holent_hd_size_solve (const holent_hd_bg *bg, holent_hd_size_workspace *ws,

@@ -20,6 +20,40 @@ void holent_strip_workspace_free (holent_strip_workspace *w);
 void holent_strip_workspace_set_poll (holent_strip_workspace *w,
                                       const holent_poll *poll);
 
+/* How holent_strip_entropy finds the surfaces of a background with a
+ * black brane or a tabulated f (the vacuum has closed forms):
+ * EXACT solves every width (table, Brent on the width quadrature, area
+ * quadratures); SERIES fits, once per call, piecewise Chebyshev series
+ * in the root variable y = log(z* / (Z - z*)) of the width's and the
+ * finite area's excess over the vacuum and of the cutoff term, with
+ * degrees raised (16, 32, 64) and pieces split until the last three
+ * coefficients of every series are below 1e-12 of its scale, then
+ * inverts the width per strip by safeguarded Newton on the series.
+ * Widths outside the fitted range, tabulated f with noise above 1e-12
+ * or with a width not monotonic in z*, and series that do not converge
+ * within their budget take the exact path.  AUTO (the default) is
+ * SERIES for n >= HOLENT_STRIP_SERIES_MIN widths, else EXACT.
+ * doc/fast_paths.md.  */
+typedef enum
+{
+  HOLENT_STRIP_AUTO = 0,
+  HOLENT_STRIP_EXACT = 1,
+  HOLENT_STRIP_SERIES = 2
+} holent_strip_method;
+
+#define HOLENT_STRIP_SERIES_MIN 64
+
+/* Any other value of M: AUTO.  */
+void holent_strip_workspace_set_method (holent_strip_workspace *w,
+                                        holent_strip_method m);
+
+/* After holent_strip_entropy: the number of widths the series gave
+ * (*count, may be NULL) and the series' estimated relative error (the
+ * largest tail estimate over the pieces; NaN when no width came from
+ * the series).  */
+double holent_strip_series_error (const holent_strip_workspace *w,
+                                  size_t *count);
+
 /* The area-law divergence 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G)
    that S - fin tends to as eps -> 0.  */
 double holent_strip_divergence (const holent_hd_bg *bg, double Lperp);

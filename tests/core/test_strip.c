@@ -271,6 +271,94 @@ test_poll (void)
   holent_strip_workspace_free (w);
 }
 
+/* The series path (holent_strip.h, doc/fast_paths.md) against the exact
+   path of the same module: every output, widths from 0.02 zh to near the
+   horizon; which widths it takes; its poll.  */
+static void
+test_series (void)
+{
+  enum { N = 400 };
+  static double l[N], S[N], fin[N], del[N], zs[N], Se[N], fe[N], de[N], ze[N];
+  holent_strip_workspace *w = holent_strip_workspace_alloc ();
+  holent_hd_bg bg;
+  size_t bad, cnt = 7;
+  HT_CHECK (isnan (holent_strip_series_error (NULL, &cnt)) && cnt == 0, "NULL");
+  holent_strip_workspace_set_method (NULL, HOLENT_STRIP_SERIES);
+  for (int d = 3; d <= 6; d++)
+    {
+      HT_STATUS (holent_hd_bg_init (&bg, d, HOLENT_HD_BRANE, 1.3, 1.1, 0.7, 1e-3), HOLENT_SUCCESS);
+      for (int i = 0; i < N; i++)  /* 0.02 zh .. 40 zh, log-spaced */
+        l[i] = 1.3 * 0.02 * pow (2000.0, (double) i / (N - 1));
+      holent_strip_workspace_set_method (w, HOLENT_STRIP_SERIES);
+      HT_STATUS (holent_strip_entropy (&bg, w, 1.5, N, l, S, fin, del, zs, &bad, NULL), HOLENT_SUCCESS);
+      double err = holent_strip_series_error (w, &cnt);
+      HT_CHECK (cnt == N && err < 1e-11, "d = %d: %zu from the series, error %g", d, cnt, err);
+      holent_strip_workspace_set_method (w, HOLENT_STRIP_EXACT);
+      HT_STATUS (holent_strip_entropy (&bg, w, 1.5, N, l, Se, fe, de, ze, &bad, NULL), HOLENT_SUCCESS);
+      HT_CHECK (isnan (holent_strip_series_error (w, &cnt)) && cnt == 0, "exact");
+      double eS = 0, ez = 0, ed = 0, ef = 0;
+      double fv = fabs (holent_strip_vacuum_j (d)) * 2 * pow (1.1, d - 1) * pow (1.5, d - 2) / (4 * 0.7);
+      for (int i = 0; i < N; i++)
+        {
+          double zv = l[i] / holent_strip_ratio (d);
+          eS = fmax (eS, fabs (S[i] / Se[i] - 1));
+          ez = fmax (ez, fabs (zs[i] / ze[i] - 1));
+          ed = fmax (ed, fabs (del[i] / de[i] - 1));
+          ef = fmax (ef, fabs (fin[i] - fe[i]) / fmax (fabs (fe[i]), fv * pow (zv, 2 - d)));
+        }
+      HT_CHECK (eS < 1e-10 && ez < 1e-10 && ed < 1e-10 && ef < 1e-10,
+                "d = %d: S %g z* %g delta %g finite %g", d, eS, ez, ed, ef);
+      /* AUTO (also any unknown value): the series from
+         HOLENT_STRIP_SERIES_MIN widths on */
+      holent_strip_workspace_set_method (w, (holent_strip_method) 9);
+      HT_STATUS (holent_strip_entropy (&bg, w, 1.5, HOLENT_STRIP_SERIES_MIN - 1, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+      HT_CHECK (isnan (holent_strip_series_error (w, &cnt)) && cnt == 0, "auto, few");
+      HT_STATUS (holent_strip_entropy (&bg, w, 1.5, HOLENT_STRIP_SERIES_MIN, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+      holent_strip_series_error (w, &cnt);
+      HT_CHECK (cnt == HOLENT_STRIP_SERIES_MIN, "auto, many: %zu", cnt);
+    }
+  /* the vacuum keeps its closed forms */
+  HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_VACUUM, 0, 1, 1, 1e-3), HOLENT_SUCCESS);
+  holent_strip_workspace_set_method (w, HOLENT_STRIP_SERIES);
+  HT_STATUS (holent_strip_entropy (&bg, w, 1, N, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_SUCCESS);
+  HT_CHECK (isnan (holent_strip_series_error (w, &cnt)) && cnt == 0, "vacuum");
+  /* a width not monotonic in z* (f dips to 0.02): the exact path, with
+     the same numbers as when asked for */
+  {
+    enum { M = 2000 };
+    static double zz[M], ff[M];
+    holent_hd_bg bt;
+    for (int i = 0; i < M; i++)
+      {
+        zz[i] = 4.0 * i / (M - 1);
+        ff[i] = 1 - 1.96 * gsl_pow_int (zz[i], 4) / (1 + gsl_pow_int (zz[i], 8));
+      }
+    HT_STATUS (holent_hd_bg_tabulated (&bt, 4, M, zz, ff, 0, 1, 1, 1e-2, &bad), HOLENT_SUCCESS);
+    for (int i = 0; i < 100; i++)
+      l[i] = 0.5 + 3.0 * i / 99;
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 100, l, S, NULL, NULL, zs, &bad, NULL), HOLENT_SUCCESS);
+    HT_CHECK (isnan (holent_strip_series_error (w, &cnt)) && cnt == 0, "not monotonic");
+    holent_strip_workspace_set_method (w, HOLENT_STRIP_EXACT);
+    HT_STATUS (holent_strip_entropy (&bt, w, 1, 100, l, Se, NULL, NULL, ze, &bad, NULL), HOLENT_SUCCESS);
+    for (int i = 0; i < 100; i++)
+      HT_CHECK (S[i] == Se[i] && zs[i] == ze[i], "width %d", i);
+    holent_hd_bg_free (&bt);
+  }
+  /* the poll is asked while the series are fitted */
+  {
+    int calls = 0;
+    holent_poll poll = { ht_stop_second, &calls };
+    HT_STATUS (holent_hd_bg_init (&bg, 4, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
+    for (int i = 0; i < N; i++)
+      l[i] = 0.05 + 30.0 * i / (N - 1);
+    holent_strip_workspace_set_method (w, HOLENT_STRIP_SERIES);
+    holent_strip_workspace_set_poll (w, &poll);
+    HT_STATUS (holent_strip_entropy (&bg, w, 1, N, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EINTR);
+    HT_CHECK (calls == 2, "calls %d", calls);
+  }
+  holent_strip_workspace_free (w);
+}
+
 int
 main (void)
 {
@@ -278,5 +366,6 @@ main (void)
   test_poll ();
   test_closed_forms ();
   test_strip ();
+  test_series ();
   return HT_DONE ();
 }
