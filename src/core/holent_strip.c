@@ -86,6 +86,7 @@ typedef struct
 {
   const holent_hd_bg *bg;
   double zs, w, a, sa;
+  double ftip;  /* f at the turning point */
   int pw;
   int excess;  /* weigh by 1 - sqrt(f): the integrand minus the vacuum's */
 } spar;
@@ -167,9 +168,12 @@ qag (holent_strip_workspace *w, double (*fn) (double, void *), spar *p,
   /* Roundoff in f (tabulated, next to a horizon) can stop QAG short of
      its goal (roundoff detected, or the subdivision limit reached);
      accept what it reached if its error estimate is still within 1e-9,
-     or within 100 times the data's accuracy.  */
+     or within 100 times the data's relative accuracy where f is least:
+     noise sigma in f is sigma/f(z*) relative at the tip, where the
+     integrand ~ f^(-1/2) peaks (a tip next to a double zero).  */
+  double acc = 100 * p->bg->noise / fmin (1.0, p->ftip);
   if ((st == GSL_EROUND || st == GSL_EMAXITER)
-      && err <= fmax (1e-9, 100 * p->bg->noise) * fabs (*out) + QAG_EPSABS)
+      && err <= fmax (1e-9, acc) * fabs (*out) + QAG_EPSABS)
     st = GSL_SUCCESS;
   if (st || !isfinite (*out))
     return HOLENT_ENOCONV;
@@ -191,6 +195,7 @@ strip_setup (const holent_hd_bg *bg, double zs, double w, spar *p)
   f = holent_hd_bg_fval (bg, zs, w);
   if (!(f > 0))
     return HOLENT_EDOM;
+  p->ftip = f;
   p->a = 1;
   if (fp < 0)
     p->a = fmin (1.0, f / (-fp * zs));
