@@ -225,7 +225,8 @@
 %! ## ~ eta/h (h the grid step), and its least moves by that over a.  So
 %! ## T is resolved only when eta << b^2/(2a) = 8.3e-8 (q = 1.999);
 %! ## otherwise the data may be reported extremal (T = 0), with T_error
-%! ## covering the true T.
+%! ## covering the true T.  (On 100 points the grid, not eta, limits: its
+%! ## interpolation error replaces eta; only 6 digits are taken there.)
 %! warning ("off", "holent:cutoff", "local");
 %! cases = {100, 6; 1000, 8; 10000, 10; 1000, 1e-10; 10000, 1e-8; 1000, 1e-7};
 %! l = [0.5 2];

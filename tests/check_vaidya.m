@@ -136,3 +136,8 @@
 %! ## and the static interval of the final state (planar BTZ)
 %! [~, is] = strip_entropy (ads_background (2, "black_brane", "zh", b / (2*pi), "cutoff", eps), l);
 %! assert (is.finite, Sb - is.divergence, 1e-9);
+%! ## BTZ as 10-digit samples (to 3 zh: the early surfaces reach z* = l/2)
+%! zh = b / (2*pi);  z = linspace (0, 3 * zh, 3001)';
+%! bt = ads_background (2, "vaidya", "z", z, "f", round ((1 - (z / zh).^2) * 1e10) / 1e10, "cutoff", eps);
+%! [~, it] = strip_entropy (bt, l, "t", t([2 6 9]));
+%! assert (it.finite, S3([2 6 9]) - info.divergence, 1e-8);
