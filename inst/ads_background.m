@@ -9,11 +9,15 @@
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{bg} =} ads_background (@var{d}, @var{kind})
 ## @deftypefnx {} {@var{bg} =} ads_background (@dots{}, @var{name}, @var{value}, @dots{})
-## A planar asymptotically AdS_(d+1) background, d >= 3, with metric
+## A planar asymptotically AdS_(d+1) background, d >= 2, with metric
 ## @example
 ## ds^2 = (ell^2/z^2) (-f(z) dt^2 + dz^2/f(z) + dx_1^2 + ... + dx_(d-1)^2)
 ## @end example
 ## for the strips and balls of @code{strip_entropy} and @code{ball_entropy}.
+## In d = 2 (AdS3; the brane is planar BTZ with beta = 2 pi zh) a strip is
+## an interval, with no transverse direction, S = (c/3) log(l/epsilon) in
+## the vacuum for c = 3 ell/(2 G), and balls are refused (a ball of radius
+## R is the interval of width 2 R); see doc/higher_dimensional.md.
 ## The background is built and checked by the C core, which computes every
 ## field below; later calls reuse it without recomputation.
 ##
@@ -71,8 +75,8 @@
 ## not every sample.
 ##
 ## The normalisation is the AdS radius @qcode{"ell"} and Newton's constant
-## @qcode{"G"} (the central charge @qcode{"c"} of AdS3 does not apply for
-## d >= 3: the error says what to give instead).
+## @qcode{"G"} (the central charge @qcode{"c"} of AdS3 is not an option
+## here: the error says what to give instead; in d = 2, c = 3 ell/(2 G)).
 ##
 ## @seealso{strip_entropy, ball_entropy, strip_mutual_information,
 ## entanglement_velocity, butterfly_velocity}
@@ -92,9 +96,9 @@ function bg = ads_background (d, kind, varargin)
   o = __holent_opts__ (fn, {"ell", "G", "cutoff", "zh", "T", "z", "f", "noise", "z_max", "shell_width", "c"}, varargin);
   if (isfield (o, "c"))
     error ("holent:option", ["%s: option 'c' (the central charge 3 ell/(2 G) of AdS3) ", ...
-           "does not apply to AdS_(d+1), d >= 3: give the AdS radius 'ell' and ", ...
+           "is not an option of AdS_(d+1) backgrounds: give the AdS radius 'ell' and ", ...
            "Newton's constant 'G' in d+1 dimensions (entropies are Area/(4 G), ", ...
-           "the normalisation ell^(d-1)/G); for d = 2 use ads3_background"], fn);
+           "the normalisation ell^(d-1)/G; in d = 2, G = 3 ell/(2 c))"], fn);
   endif
   own = struct ("vacuum", {{}}, "black_brane", {{"zh", "T"}},
                 "tabulated", {{"z", "f", "noise", "z_max"}},
@@ -221,11 +225,24 @@ endfunction
 %! assert (bg.table.samples.z, z);
 %! assert (numel (bg.table.spline.g2), 400);
 
-%!error <option 'c' .*does not apply.*give the AdS radius 'ell'> ads_background (4, "vacuum", "c", 12)
+%!test
+%! ## d = 2: the brane is planar BTZ, beta = 2 pi zh; with c = 3 ell/(2G)
+%! ## (Brown and Henneaux 1986) the Cardy-regime densities s = pi c T/3
+%! ## and e = pi c T^2/6 (common practice), and the AdS3 module's thermal
+%! ## state agrees
+%! bg = ads_background (2, "black_brane", "T", 0.7, "G", 0.3, "ell", 1.2);
+%! c = 3 * 1.2 / (2 * 0.3);
+%! assert (bg.zh, 1 / (2 * pi * 0.7), 1e-15);
+%! assert (bg.entropy_density, pi * c * 0.7 / 3, 1e-13);
+%! assert (bg.energy_density, pi * c * 0.7^2 / 6, 1e-13);
+%! b3 = ads3_background ("thermal", "line", "T", 0.7, "G", 0.3, "ell", 1.2);
+%! assert (bg.entropy_density, b3.entropy_density, 1e-13);
+
+%!error <option 'c' .*is not an option.*give the AdS radius 'ell'> ads_background (4, "vacuum", "c", 12)
 
 %!error <Invalid call> ads_background (4)
-%!error <integer from 3> ads_background (2, "vacuum")
-%!error <integer from 3> ads_background (3.5, "vacuum")
+%!error <integer from 2> ads_background (1, "vacuum")
+%!error <integer from 2> ads_background (3.5, "vacuum")
 %!error <KIND must be> ads_background (4, "soliton")
 %!error <exactly one> ads_background (4, "black_brane")
 %!error <exactly one> ads_background (4, "black_brane", "zh", 1, "T", 1)

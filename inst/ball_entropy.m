@@ -165,3 +165,4 @@ endfunction
 %!error <background struct> ball_entropy (struct ("a", 1), 1)
 %!error <R\(1\) = 1e\+308 gives an entropy out of double precision> ball_entropy (ads_background (4, "vacuum"), 1e308)
 %!error <ball_entropy: BG.zh: must be positive> ball_entropy (setfield (ads_background (4, "vacuum"), "zh", -1), 1)
+%!error <BG: must have d .= 3 for a ball: in d = 2 the ball of radius R is the interval of width 2 R> ball_entropy (ads_background (2, "vacuum"), 1)

@@ -15,7 +15,9 @@
 ## the growth rate of the critical surface that sits at z = z_m inside the
 ## horizon.  f is needed past zh: a tabulated f must extend beyond z_m
 ## (for the d = 4 brane z_m = 1.19 zh; an error says how far the table
-## reached).  An extremal horizon gives 0.  @var{info} has fields
+## reached).  An extremal horizon gives 0.  In d = 2 the brane (planar
+## BTZ) gives v_E = 1 = v_B, the supremum approached as z_m -> Inf.
+## @var{info} has fields
 ## @code{z_m} and @code{butterfly} (v_B, @pxref{butterfly_velocity}); v_E
 ## <= v_B.  Derivation: doc/higher_dimensional.md ("Velocities").
 ##
@@ -44,6 +46,14 @@ endfunction
 %!   assert (v, sqrt (d) * (d-2)^(1/2 - 1/d) / (2*(d-1))^(1 - 1/d), 1e-9);
 %!   assert (v < info.butterfly);
 %! endfor
+
+%!test
+%! ## d = 2 (planar BTZ): v_E = v_B = 1, the light-cone spreading of a 2D
+%! ## CFT (Calabrese and Cardy 2005, J. Stat. Mech. P04010; Liu and Suh
+%! ## 2014): the rate (zh/z)^2 (z^2/zh^2 - 1) = 1 - zh^2/z^2 tends to 1
+%! [v, info] = entanglement_velocity (ads_background (2, "black_brane", "zh", 0.3));
+%! assert ([v info.butterfly], [1 1], 1e-15);
+%! assert (isinf (info.z_m));
 
 %!test
 %! ## charged brane f = 1 - (1+q) z^4 + q z^6, tabulated past the horizon:

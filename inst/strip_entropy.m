@@ -21,7 +21,10 @@
 ## @item finite
 ## S minus the area-law divergence 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4 G),
 ## in the limit eps -> 0 (it differs from S minus the divergence at the
-## actual cutoff by O(eps^2));
+## actual cutoff by O(eps^2)).  In d = 2 the strip is an interval (no
+## transverse direction: @var{Lperp} has no effect) and the divergence is
+## (2 ell/(4 G)) log(1/eps) = (c/3) log(1/eps), c = 3 ell/(2 G), so the
+## vacuum has finite = (c/3) log(l), l in the boundary length unit;
 ## @item delta
 ## finite minus that of the vacuum strip of the same width: independent of
 ## the cutoff (zero in vacuum);

@@ -203,6 +203,16 @@ surfaces (const char *fn, int strip, int nlhs, mxArray *plhs[], int nrhs,
     }
   /* all Octave-side checks done: from here release before raising */
   holent_gw_hd_bg (prhs[2], fn, &j.bg);
+  if (!strip)
+    {
+      holent_err e;
+      static const char *const bgname[] = { "BG" };
+      if (holent_ball_check (&j.bg, &e))
+        {
+          release (&j, 1);
+          holent_gw_raise_err (fn, &e, bgname, 1);
+        }
+    }
   if (strip)
     j.sw = holent_strip_workspace_alloc ();
   else

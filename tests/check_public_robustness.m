@@ -99,7 +99,7 @@
 %!      f = [scal, nonpos, {"huge", "int8", "uint64"}];
 %!    case "weight"       # h in [0, c/24)
 %!      f = [scal, {"neg", "int8neg", "huge", "int8", "uint64"}];
-%!    case "dim"          # an integer from 3 to 12
+%!    case "dim"          # an integer from 2 to 12
 %!      f = [scal, nonpos, {"huge", "tiny", "single", "sparse"}];
 %!    case "bool"         # true, false, 0 or 1
 %!      f = [setdiff(scal, {"logical"}), {"neg", "int8neg", "huge", "tiny", ...

@@ -137,3 +137,38 @@
 %! ## saturation: the static strip of the tabulated final state
 %! [~, is] = strip_entropy (rmfield (setfield (bt, "kind", "tabulated"), {"final", "shell_width"}), 1);
 %! assert (it.finite(end), is.finite, 1e-9);
+
+%!test
+%! ## d = 2 (AdS3): the thin-shell quench of an interval against the AdS3
+%! ## quench of ads3_background/interval_entropy, an independent code: its
+%! ## closed forms match vacuum and BTZ geodesics across the shell
+%! ## (Balasubramanian et al. 2011, PRD 84, 026010; Abajo-Arrastia, Aparicio
+%! ## and Lopez 2010, JHEP 11 (2010) 149; doc/quench.md), ours shoot the
+%! ## Euler-Lagrange equations.  Conventions: zh = beta/(2 pi) (f = 1 -
+%! ## z^2/zh^2 is planar BTZ), the same G (c = 3/(2G)) and cutoff; the
+%! ## divergence (c/3) log(1/eps) is subtracted alike, so the finite parts
+%! ## and S(t) - S(t < 0) are compared.  Saturation at t = l/2 (unit
+%! ## entanglement velocity in d = 2).
+%! warning ("off", "holent:cutoff", "local");
+%! b = 1;  eps = 1e-6;  l = 0.7;
+%! bg = ads_background (2, "vaidya", "zh", b / (2*pi), "cutoff", eps);
+%! q = ads3_background ("quench", "line", "beta", b, "G", 1, "cutoff", eps);
+%! t = [-0.2 0.01 0.05 0.1 0.15 0.2 0.25 0.3 0.34 0.349 0.35 0.5];
+%! [S, info] = strip_entropy (bg, l, "t", t);
+%! S3 = interval_entropy (q, l, "t", t);
+%! assert (info.divergence, log (1 / eps) / 2, 1e-14);
+%! assert (info.finite, S3 - info.divergence, 1e-8);
+%! assert (S - S(1), S3 - S3(1), 1e-8);
+%! ## the limits, from the AdS3 module's vacuum and thermal states
+%! Sv = interval_entropy (ads3_background ("vacuum", "line", "G", 1, "cutoff", eps), l);
+%! Sb = interval_entropy (ads3_background ("thermal", "line", "beta", b, "G", 1, "cutoff", eps), l);
+%! assert (info.finite([1 end]), [Sv Sb] - info.divergence, 1e-9);
+%! assert (all (diff (info.finite) > 0) || t(end-1) >= l/2);
+%! ## and the static interval of the final state (planar BTZ)
+%! [~, is] = strip_entropy (ads_background (2, "black_brane", "zh", b / (2*pi), "cutoff", eps), l);
+%! assert (is.finite, Sb - is.divergence, 1e-9);
+%! ## BTZ as 10-digit samples (to 3 zh: the early surfaces reach z* = l/2)
+%! zh = b / (2*pi);  z = linspace (0, 3 * zh, 3001)';
+%! bt = ads_background (2, "vaidya", "z", z, "f", round ((1 - (z / zh).^2) * 1e10) / 1e10, "cutoff", eps);
+%! [~, it] = strip_entropy (bt, l, "t", t([2 6 9]));
+%! assert (it.finite, S3([2 6 9]) - info.divergence, 1e-8);

@@ -314,6 +314,8 @@ holent_ball_entropy (const holent_hd_bg *bg, holent_ball_workspace *ws,
   holent_hd_size_problem pb = { ball_size, ball_eval, &ctx, 0, 1 };
   if (bg == NULL || ws == NULL || (n > 0 && (R == NULL || S == NULL)))
     return HOLENT_EINVAL;
+  if ((st = holent_ball_check (bg, NULL)))
+    return st;
   if ((st = holent_hd_size_check (n, R, bad, &rmin, &rmax)))
     return st;
   if (n == 0)
@@ -379,6 +381,22 @@ ball_fin (const holent_hd_bg *bg, void *ctx, size_t n, const double *R,
           double *S, double *fin)
 {
   return holent_ball_entropy (bg, ctx, n, R, S, fin, NULL, NULL, NULL, NULL);
+}
+
+int
+holent_ball_check (const holent_hd_bg *bg, holent_err *e)
+{
+  if (bg == NULL)
+    return HOLENT_EINVAL;
+  /* d = 2: a ball is an interval, the strip of width 2R (one code for
+     it: the strip's, with its log divergence) */
+  if (bg->d < 3)
+    return holent_err_set (e, HOLENT_EDOM, 0, HOLENT_NOINDEX,
+                           "must have d >= 3 for a ball: in d = 2 the ball "
+                           "of radius R is the interval of width 2 R "
+                           "(strip_entropy (bg, 2*R))");
+  holent_err_clear (e);
+  return HOLENT_SUCCESS;
 }
 
 int

@@ -20,6 +20,10 @@ void holent_ball_workspace_free (holent_ball_workspace *w);
 void holent_ball_workspace_set_poll (holent_ball_workspace *w,
                                      const holent_poll *poll);
 
+/* Balls need d >= 3: EDOM with the reason in E (may be NULL; arg 0, the
+ * background) for d = 2, where a ball is an interval (a strip).  */
+int holent_ball_check (const holent_hd_bg *bg, holent_err *e);
+
 /* Balls of radii R[i]: S at the cutoff, fin (every divergent term of the
  * hemisphere, and for even d its log(R/eps), removed), delta = fin -
  * (vacuum fin), ztip = depth of the tip.  Any output but S may be NULL.

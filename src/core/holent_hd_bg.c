@@ -21,7 +21,7 @@
 static int
 d_ok (int d)
 {
-  return d >= 3 && d <= HOLENT_HD_DMAX;
+  return d >= 2 && d <= HOLENT_HD_DMAX;
 }
 
 static int
@@ -905,13 +905,12 @@ holent_hd_dimension (double d, int *out, holent_err *e)
     return HOLENT_EINVAL;
   if (isnan (d))
     return holent_err_set (e, HOLENT_ENAN, 0, HOLENT_NOINDEX,
-                           "must be an integer from 3 to %d, not NaN",
+                           "must be an integer from 2 to %d, not NaN",
                            HOLENT_HD_DMAX);
   /* compared as a double first: a huge d must not reach the int cast */
-  if (d != floor (d) || d < 3 || d > HOLENT_HD_DMAX)
+  if (d != floor (d) || d < 2 || d > HOLENT_HD_DMAX)
     return holent_err_set (e, HOLENT_EDOM, 0, HOLENT_NOINDEX,
-                           "must be an integer from 3 to %d, got %g "
-                           "(d = 2, AdS3: use ads3_background)",
+                           "must be an integer from 2 to %d, got %g",
                            HOLENT_HD_DMAX, d);
   *out = (int) d;
   return HOLENT_SUCCESS;

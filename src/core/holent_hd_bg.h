@@ -1,4 +1,5 @@
-/* holent_hd_bg.h: planar AdS_{d+1} backgrounds, d >= 3,
+/* holent_hd_bg.h: planar AdS_{d+1} backgrounds, d >= 2 (d = 2: planar
+ * BTZ for the brane),
  *   ds^2 = (ell^2/z^2) (-f dt^2 + dz^2/f + dx_1^2 + ... + dx_{d-1}^2):
  * vacuum (f = 1), the black brane f = 1 - (z/zh)^d and f tabulated by
  * samples (interpolated).  The evaluators of f used by the strip and
@@ -93,7 +94,7 @@ int holent_hd_bg_spline (holent_hd_bg *bg, int d, size_t n, const double *tz,
 void holent_hd_bg_free (holent_hd_bg *bg);
 
 /* The dimension d from a double: EDOM (ENAN) with the reason in E (may
- * be NULL; arg 0) unless an integer from 3 to HOLENT_HD_DMAX; no int
+ * be NULL; arg 0) unless an integer from 2 to HOLENT_HD_DMAX; no int
  * overflow for any input.  */
 int holent_hd_dimension (double d, int *out, holent_err *e);
 

@@ -46,6 +46,16 @@ holent_hd_velocities (const holent_hd_bg *bg, double *vE, double *zm,
         *zm = zh;
       return HOLENT_SUCCESS;
     }
+  if (d == 2 && bg->kind == HOLENT_HD_BRANE)
+    {
+      /* planar BTZ: the rate 1/zh^2 - 1/z^2 grows to its supremum as
+         z -> infinity, v_E = 1 (= v_B: light-cone spreading in 2D) */
+      if (vE)
+        *vE = 1;
+      if (zm)
+        *zm = INFINITY;
+      return HOLENT_SUCCESS;
+    }
   /* scan (zh, zend] for the largest rate; f must stay known past it */
   double zend = fmin (bg->zmax, ZFAR * zh), best = -INFINITY;
   size_t ib = 0;

@@ -80,11 +80,18 @@ holent_strip_workspace_set_poll (holent_strip_workspace *w,
 }
 
 double
+holent_strip_uv (int d, double z)
+{
+  /* d = 2: the limit d -> 2 of (z^(2-d) - 1)/(d - 2) */
+  return d == 2 ? -log (z) : pow (z, 2 - d) / (d - 2);
+}
+
+double
 holent_strip_divergence (const holent_hd_bg *bg, double Lperp)
 {
   int d = bg->d;
   return 2 * pow (bg->ell, d - 1) * pow (Lperp, d - 2)
-         / ((d - 2) * pow (bg->eps, d - 2) * 4 * bg->G);
+         * holent_strip_uv (d, bg->eps) / (4 * bg->G);
 }
 
 holent_strip_workspace *
@@ -127,8 +134,18 @@ double
 holent_strip_vacuum_j (int d)
 {
   double a = 1.0 / (2.0 * (d - 1));
+  if (d == 2)  /* int_0^1 (1/sqrt(1 - u^2) - 1) du/u */
+    return M_LN2;
   return sqrt (M_PI) * gsl_sf_gamma ((2.0 - d) * a)
          / (2.0 * (d - 1) * gsl_sf_gamma (a));
+}
+
+double
+holent_strip_vacuum_fin (int d, double zs)
+{
+  /* d = 2: J is scale-free and the log of the cutoff leaves log(zs) */
+  double jv = holent_strip_vacuum_j (d);
+  return d == 2 ? jv + log (zs) : jv * pow (zs, 2 - d);
 }
 
 
@@ -139,6 +156,7 @@ typedef struct
 {
   const holent_hd_bg *bg;
   double zs, w, a, sa;
+  double ftip;  /* f at the turning point */
   int pw;
   int excess;  /* weigh by 1 - sqrt(f): the integrand minus the vacuum's */
 } spar;
@@ -220,9 +238,15 @@ qag (holent_strip_workspace *w, double (*fn) (double, void *), spar *p,
   /* Roundoff in f (tabulated, next to a horizon) can stop QAG short of
      its goal (roundoff detected, or the subdivision limit reached);
      accept what it reached if its error estimate is still within 1e-9,
-     or within 100 times the data's accuracy.  */
+     or within 100 times the data's relative accuracy where f is least:
+     noise sigma in f is sigma/f(z*) relative at the tip, where the
+     integrand ~ f^(-1/2) peaks (a tip near a noisy double zero).  Only
+     for f(z*) >= 1e-3: closer to a horizon a failure ends the table of
+     sizes instead (holent_hd_size.c), as it always did.  */
+  double ft = p->ftip;
+  double acc = 100 * p->bg->noise / (ft >= 1e-3 ? fmin (1.0, ft) : 1.0);
   if ((st == GSL_EROUND || st == GSL_EMAXITER)
-      && err <= fmax (1e-9, 100 * p->bg->noise) * fabs (*out) + QAG_EPSABS)
+      && err <= fmax (1e-9, acc) * fabs (*out) + QAG_EPSABS)
     st = GSL_SUCCESS;
   if (st || !isfinite (*out))
     return HOLENT_ENOCONV;
@@ -244,6 +268,7 @@ strip_setup (const holent_hd_bg *bg, double zs, double w, spar *p)
   f = holent_hd_bg_fval (bg, zs, w);
   if (!(f > 0))
     return HOLENT_EDOM;
+  p->ftip = f;
   p->a = 1;
   if (fp < 0)
     p->a = fmin (1.0, f / (-fp * zs));
@@ -300,7 +325,10 @@ static double
 strip_ddel (int d, double dK, double dJ)
 {
   double jv = holent_strip_vacuum_j (d), kv = 0.5 * holent_strip_ratio (d);
-  return dJ - jv * expm1 ((2 - d) * log1p (dK / kv));
+  /* d = 2: the vacuum of the same width has log(l) = log(2 zs) +
+     log1p(dK/kv) in place of the power */
+  return d == 2 ? dJ - log1p (dK / kv)
+                : dJ - jv * expm1 ((2 - d) * log1p (dK / kv));
 }
 
 /* Area integrals J (finite: eps -> 0; cut: at the cutoff) with
@@ -323,7 +351,7 @@ strip_area (const holent_hd_bg *bg, holent_strip_workspace *ws, double zs,
     {
       if ((st = qag (ws, u_integrand, &p, 0, del, &i0)))
         return st;
-      *jcut = *jfin + pow (del, 2 - d) / (d - 2) - i0;
+      *jcut = *jfin + holent_strip_uv (d, del) - i0;
     }
   else if (del < 1)
     {
@@ -358,8 +386,11 @@ strip_eval (void *ctx, double zs, double w, double *fin, double *cut,
   if (st)
     return st;
   /* per unit 2 ell^(d-1) Lperp^(d-2)/(4G) */
-  double sc = pow (zs, 2 - c->bg->d);
-  *fin *= sc;
+  int d = c->bg->d;
+  double sc = pow (zs, 2 - d);
+  /* the cutoff's divergence holent_strip_uv (eps) taken off: in d = 2
+     uv(eps/zs) = uv(eps) + log(zs) leaves log(zs) */
+  *fin = *fin * sc + (d == 2 ? log (zs) : 0);
   *cut *= sc;
   *extra *= sc;
   return HOLENT_SUCCESS;
@@ -678,7 +709,8 @@ fit_setup (const holent_hd_bg *bg, holent_strip_workspace *ws, size_t n,
   *ok = 0;
   if (ws->method == HOLENT_STRIP_EXACT
       || (ws->method == HOLENT_STRIP_AUTO && n < HOLENT_STRIP_SERIES_MIN)
-      || bg->kind == HOLENT_HD_VACUUM || bg->noise > FIT_NOISE)
+      || bg->kind == HOLENT_HD_VACUUM || bg->noise > FIT_NOISE
+      || bg->d < 3)  /* d = 2 (intervals): not validated for the series */
     return HOLENT_SUCCESS;
   long budget;
   holent_hd_size_table_get (ws->size, &nt, &ty, &tv, &mono);
@@ -726,7 +758,7 @@ holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *ws,
   if (n == 0)
     return HOLENT_SUCCESS;
   int d = bg->d;
-  double ratio = holent_strip_ratio (d), jv = holent_strip_vacuum_j (d);
+  double ratio = holent_strip_ratio (d);
   double pref = 2 * pow (bg->ell, d - 1) * pow (Lperp, d - 2) / (4 * bg->G);
   if (bg->kind != HOLENT_HD_VACUUM)
     {
@@ -762,7 +794,7 @@ holent_strip_entropy (const holent_hd_bg *bg, holent_strip_workspace *ws,
           zs = l[i] / ratio;
           if ((st = strip_area (bg, ws, zs, 0, &jf, &jc, &extra)))
             return st;
-          jf = jv * pow (zs, 2 - d);
+          jf = holent_strip_vacuum_fin (d, zs);
           jc *= pow (zs, 2 - d);
           extra = 0;
         }

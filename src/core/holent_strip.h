@@ -55,7 +55,8 @@ double holent_strip_series_error (const holent_strip_workspace *w,
                                   size_t *count);
 
 /* The area-law divergence 2 ell^(d-1) Lperp^(d-2)/((d-2) eps^(d-2) 4G)
-   that S - fin tends to as eps -> 0.  */
+ * (d = 2: (2 ell/4G) log(1/eps), eps in the boundary length unit)
+ * that S - fin tends to as eps -> 0.  */
 double holent_strip_divergence (const holent_hd_bg *bg, double Lperp);
 
 /* Strips of widths l[i] (transverse size Lperp): S at the cutoff,
@@ -80,8 +81,16 @@ int holent_strip_accuracy (const holent_hd_bg *bg, holent_strip_workspace *w,
                            const double *fin, double *acc);
 
 /* Vacuum closed forms: width/zstar of the strip, and its finite part per
- * unit 2 ell^(d-1) Lperp^(d-2)/(4G) times zstar^(d-2).  */
+ * unit 2 ell^(d-1) Lperp^(d-2)/(4G) times zstar^(d-2) (d = 2: log 2, the
+ * finite part less log(zstar)); holent_strip_vacuum_fin: the finite part
+ * itself per 2 ell^(d-1) Lperp^(d-2)/(4G) for the tip zs.  */
 double holent_strip_ratio (int d);
 double holent_strip_vacuum_j (int d);
+double holent_strip_vacuum_fin (int d, double zs);
+
+/* The divergent part int_z u^(1-d) du of the area per 2 ell^(d-1)
+ * Lperp^(d-2): z^(2-d)/(d-2), and -log z in d = 2 (an interval: no
+ * transverse direction, Lperp^0 = 1).  */
+double holent_strip_uv (int d, double z);
 
 #endif /* HOLENT_STRIP_H */

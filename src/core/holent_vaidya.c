@@ -131,8 +131,9 @@ rhs (double x, const double y[], double dy[], void *p)
   dy[1] = vp;
   dy[2] = -f * vpp - fz * zp * vp - 0.5 * fv * vp * vp;
   dy[3] = vpp;
-  /* K = J - z^(2-d)/(d-2) stays finite at the boundary (J' the area
-     element zs^(d-1)/z^(2d-2)): no cancellation at the end */
+  /* K = J - z^(2-d)/(d-2) (d = 2: J + log z; holent_strip_uv) stays
+     finite at the boundary (J' the area element zs^(d-1)/z^(2d-2)): no
+     cancellation at the end */
   dy[4] = (gsl_pow_int (q->zs / z, d - 1) + zp) / gsl_pow_int (z, d - 1);
   return GSL_SUCCESS;
 }
@@ -232,7 +233,7 @@ holent_vaidya_shoot (const holent_hd_bg *F, double w,
     return HOLENT_EDOM;
   int d = F->d;
   vpar q = { F, w, zs, vs >= 0 };
-  double y[5] = { zs, vs, 0, 0, -pow (zs, 2 - d) / (d - 2) }, x = 0;
+  double y[5] = { zs, vs, 0, 0, -holent_strip_uv (d, zs) }, x = 0;
   double h = 1e-3 * zs, y0[5], yz[5], z = zs;
   double xmax = 50 * zs, zend = ZEND * zs;
   int k = 0, st, ncross = 0;
@@ -796,7 +797,7 @@ thin_scan (const holent_hd_bg *F, holent_vaidya_workspace *ws, double l,
   int d = F->d, st = HOLENT_SUCCESS;
   double scale = fmin (l, F->zh), hmax = TSTEP * scale;
   double zv = l / holent_strip_ratio (d);
-  double jv = holent_strip_vacuum_j (d) * pow (zv, 2 - d);
+  double jv = holent_strip_vacuum_fin (d, zv);
   rpar a = { F, 0, l, 0, ws, 0 };
   size_t cap = 256, np = 1;
   tpoint *p = malloc (cap * sizeof *p);
@@ -1087,8 +1088,7 @@ holent_vaidya_strip (const holent_hd_bg *F, double w,
   /* the early branch starts in the vacuum, before the shell: z* =
      l/ratio, v* = t - z* (exact for a thin shell) */
   double tc = fmin (o[0].t, w > 0 ? -12 * w : -1e-3 * scale), zs = l / ratio;
-  branch_start (&A, tc, zs, tc - zs, holent_strip_vacuum_j (d)
-                                     * pow (zs, 2 - d), hmax);
+  branch_start (&A, tc, zs, tc - zs, holent_strip_vacuum_fin (d, zs), hmax);
   if (w > 0)
     {
       rpar a = proto;

@@ -2,6 +2,7 @@
  * constants by hand and by GSL quadrature, first law and wall term.
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <math.h>
+#include <string.h>
 #include <stdlib.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
@@ -175,5 +176,18 @@ main (void)
   test_poll ();
   test_closed_forms ();
   test_ball ();
+  {
+    /* d = 2: a ball is an interval; refused with the reason */
+    holent_hd_bg b2;
+    holent_ball_workspace *w = holent_ball_workspace_alloc ();
+    holent_err e;
+    double R = 1, S;
+    HT_STATUS (holent_hd_bg_init (&b2, 2, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
+    HT_STATUS (holent_ball_check (&b2, &e), HOLENT_EDOM);
+    HT_CHECK (e.arg == 0 && strstr (e.reason, "interval") != NULL, "%s", e.reason);
+    HT_STATUS (holent_ball_entropy (&b2, w, 1, &R, &S, NULL, NULL, NULL, NULL, NULL), HOLENT_EDOM);
+    HT_STATUS (holent_ball_check (NULL, &e), HOLENT_EINVAL);
+    holent_ball_workspace_free (w);
+  }
   return HT_DONE ();
 }

@@ -356,6 +356,52 @@ test_series (void)
     HT_STATUS (holent_strip_entropy (&bg, w, 1, N, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EINTR);
     HT_CHECK (calls == 2, "calls %d", calls);
   }
+/* d = 2 (AdS3): an interval.  Vacuum: the semicircle z^2 + x^2 = z*^2
+   has the area 2 int_eps^z* z* dz/(z sqrt(z*^2 - z^2)) = 2 acosh(z* / eps)
+   above the cutoff (derived here), fin = (2/4G) log(l).  Planar BTZ
+   (f = 1 - z^2/zh^2, beta = 2 pi zh): fin = (2/4G) log((beta/pi)
+   sinh(pi l/beta)) (Calabrese and Cardy 2004, J. Stat. Mech. P06002,
+   with c = 3/(2G); from memory).  */
+static void
+test_d2 (void)
+{
+  holent_hd_bg bv, bb, bt;
+  holent_strip_workspace *w = holent_strip_workspace_alloc ();
+  double l[3] = { 0.3, 1.0, 4.0 }, S[3], fin[3], del[3], zs[3], eps = 1e-4;
+  double G = 0.5, zh = 0.5, beta = 2 * M_PI * zh;
+  HT_STATUS (holent_hd_bg_init (&bv, 2, HOLENT_HD_VACUUM, 1, 1, G, eps), HOLENT_SUCCESS);
+  HT_STATUS (holent_strip_entropy (&bv, w, 1, 3, l, S, fin, del, zs, NULL, NULL), HOLENT_SUCCESS);
+  HT_CLOSE (holent_strip_divergence (&bv, 7), -2 * log (eps) / (4 * G), 1e-14);
+  for (int i = 0; i < 3; i++)
+    {
+      HT_CLOSE (zs[i], l[i] / 2, 1e-14);
+      HT_CLOSE (S[i], 2 * acosh (l[i] / (2 * eps)) / (4 * G), 1e-12);
+      HT_CLOSE (fin[i], 2 * log (l[i]) / (4 * G), 1e-12);
+    }
+  HT_STATUS (holent_hd_bg_init (&bb, 2, HOLENT_HD_BRANE, zh, 1, G, eps), HOLENT_SUCCESS);
+  HT_STATUS (holent_strip_entropy (&bb, w, 1, 3, l, S, fin, del, zs, NULL, NULL), HOLENT_SUCCESS);
+  for (int i = 0; i < 3; i++)
+    {
+      double fx = 2 * log (beta / M_PI * sinh (M_PI * l[i] / beta)) / (4 * G);
+      HT_CLOSE (fin[i], fx, 1e-10);
+      HT_CLOSE (del[i], fx - 2 * log (l[i]) / (4 * G), 1e-10);
+      HT_CLOSE (S[i] - fin[i], -2 * log (eps) / (4 * G), 1e-6);  /* O(eps^2/zh^2) */
+    }
+  /* the same brane as samples: the spline reproduces it */
+  enum { N = 601 };
+  double z[N], f[N], fint[3];
+  for (int i = 0; i < N; i++)
+    {
+      z[i] = 0.6 * i / (N - 1.0);
+      f[i] = 1 - z[i] * z[i] / (zh * zh);
+    }
+  HT_STATUS (holent_hd_bg_tabulated (&bt, 2, N, z, f, 0, 1, G, eps, NULL), HOLENT_SUCCESS);
+  HT_CLOSE (bt.zh, zh, 1e-9);
+  HT_CLOSE (bt.T, 1 / beta, 1e-8);
+  HT_STATUS (holent_strip_entropy (&bt, w, 1, 3, l, S, fint, NULL, NULL, NULL, NULL), HOLENT_SUCCESS);
+  for (int i = 0; i < 2; i++)
+    HT_CLOSE (fint[i], fin[i], 1e-8);
+  holent_hd_bg_free (&bt);
   holent_strip_workspace_free (w);
 }
 
@@ -367,5 +413,6 @@ main (void)
   test_closed_forms ();
   test_strip ();
   test_series ();
+  test_d2 ();
   return HT_DONE ();
 }

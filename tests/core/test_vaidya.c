@@ -42,6 +42,17 @@ main (void)
       HT_CLOSE (tb, -3 + 0.7, 1e-10);
       HT_CLOSE (j, holent_strip_vacuum_j (d) * pow (0.7, 2 - d), 1e-9);
     }
+  /* d = 2: the vacuum interval, finite area log(2 z*) = log(l) per
+     2/(4G) (Ryu and Takayanagi 2006, PRL 96, 181602: S = (c/3) log(l/eps)
+     with c = 3/(2G)) */
+  {
+    holent_hd_bg F2;
+    HT_STATUS (holent_hd_bg_init (&F2, 2, HOLENT_HD_BRANE, 1, 1, 1, 1e-3), HOLENT_SUCCESS);
+    HT_STATUS (holent_vaidya_shoot (&F2, 0, w, 0.7, -3, &lh, &tb, &j), HOLENT_SUCCESS);
+    HT_CLOSE (2 * lh, 1.4, 1e-10);
+    HT_CLOSE (tb, -3 + 0.7, 1e-10);
+    HT_CLOSE (j, log (1.4), 1e-9);
+  }
   /* after the shell: the static brane strip; t - v* = int_0^z* dz/f */
   {
     double l = 1.5, S, fin, zs, r, err;
