@@ -31,6 +31,15 @@
 ## two-sided @code{"bcft_tfd"} one exterior is drawn with the island
 ## configuration of the radiation region (@code{page_curve}).
 ##
+## Regions with endpoint times (n x 4 rows), a quench (option
+## @qcode{"t"}, the boundary time) and a thermofield double (a struct
+## region with fields @code{left} and @code{right}, option @qcode{"t"})
+## are drawn from @code{rt_surface}'s time path: the curves projected on
+## the picture (their third coordinate, the time, is dropped); the
+## thermofield double in its Kruskal diagram (X_K, T_K), with the two
+## boundaries, the horizons (dotted, in @code{horizon}) and the
+## singularities (in @code{defect}).
+##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
 ## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label};
@@ -44,7 +53,7 @@ function h = plot_rt_surface (varargin)
   if (nargin < 2)
     print_usage ();
   endif
-  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol"});
+  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol", "t"});
   [bg, A] = deal (args{:});
   tol = 2e-3;
   if (isfield (o, "tol"))
@@ -59,7 +68,11 @@ function h = plot_rt_surface (varargin)
   endif
   ## rt_surface's own path, its messages naming this function
   r = [];
-  s = __holent_rt_surface__ (fn, bg, A, {"tol", tol});
+  topt = {};
+  if (isfield (o, "t"))
+    topt = {"t", o.t};
+  endif
+  s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
     r = __holent_rt_surface__ (fn, bg, A, {"tol", tol, "configuration", "runner_up"});
   endif
@@ -69,7 +82,20 @@ function h = plot_rt_surface (varargin)
               "brane", [], "cut", [], "label", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
-  if (disk)
+  if (strcmp (s.picture, "kruskal"))
+    ## the Kruskal diagram of the two-sided geometry: boundaries
+    ## X^2 - T^2 = 1, singularities T^2 - X^2 = 1, horizons |X| = |T|
+    u = linspace (-1.2, 1.2, 241);
+    h.bulk = fill (hax, [cosh(u), -cosh(fliplr (u))], [sinh(u), sinh(fliplr (u))],
+                   pal.bulk, "edgecolor", "none");
+    h.boundary = plot (hax, [cosh(u); -cosh(u)]', [sinh(u); sinh(u)]',
+                       "color", pal.boundary, "linewidth", 1.2);
+    h.horizon = plot (hax, [-1.5 1.5; -1.5 1.5]', [-1.5 1.5; 1.5 -1.5]', ":",
+                      "color", pal.horizon, "linewidth", 1.2);
+    h.defect = plot (hax, [sinh(u); sinh(u)]', [cosh(u); -cosh(u)]',
+                     "color", pal.defect, "linewidth", 2);
+    xlabel (hax, "X_K");  ylabel (hax, "T_K");
+  elseif (disk)
     if (bcft)
       L = 2 * bg.length;     # the doubled interval of the thermal AdS saddle
     else
@@ -174,6 +200,9 @@ function h = plot_rt_surface (varargin)
   if (disk)
     axis (hax, "equal");
     set (hax, "xlim", [-1.1 1.1], "ylim", [-1.1 1.1], "visible", "off");
+  elseif (strcmp (s.picture, "kruskal"))
+    axis (hax, "equal");
+    set (hax, "xlim", [-1.9 1.9], "ylim", [-1.5 1.5]);
   endif
   if (! held)
     hold (hax, "off");
@@ -234,6 +263,35 @@ endfunction
 %!     assert (get (h.brane(1), "ydata")(:), h.surf.brane_curves{1}(:,2));
 %!     assert (numel (h.surface) >= 1);
 %!   endfor
+%! unwind_protect_cleanup
+%!   close (f);
+%! end_unwind_protect
+
+%!demo
+%! ## A two-sided region of the thermofield double at t = 0.2: the
+%! ## geodesics through the Einstein-Rosen bridge in the Kruskal diagram.
+%! figure ("visible", "off");
+%! bg = ads3_background ("tfd", "line", "beta", 2);
+%! h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_tfd_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bg = ads3_background ("tfd", "line", "beta", 2);
+%!   h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+%!   assert (numel (h.surface), 2);
+%!   assert (get (h.surface(1), "xdata")(:), h.surf.curves{1}(:,1));
+%!   assert (get (h.surface(1), "ydata")(:), h.surf.curves{1}(:,2));
+%!   ## one boundary to the other
+%!   x = get (h.surface(1), "xdata");
+%!   assert (sort (sign (x([1 end]))), [-1 1]);
+%!   clf (f);
+%!   q = ads3_background ("quench", "line", "beta", 1);
+%!   h = plot_rt_surface (q, [0 2], "t", 0.5);
+%!   assert (get (h.surface(1), "ydata")(:), h.surf.curves{1}(:,2));
+%!   assert (get (h.axes, "ydir"), "reverse");
 %! unwind_protect_cleanup
 %!   close (f);
 %! end_unwind_protect
