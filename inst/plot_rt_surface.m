@@ -263,6 +263,14 @@ endfunction
 %!     assert (get (h.brane(1), "ydata")(:), h.surf.brane_curves{1}(:,2));
 %!     assert (numel (h.surface) >= 1);
 %!   endfor
+%!   ## the runner-up (the other saddle) drawn dashed from rt_surface's data
+%!   clf (f);
+%!   h = plot_rt_surface (bgs{1}, [1 2], "runner_up", true);
+%!   r = rt_surface (bgs{1}, [1 2], "configuration", "runner_up", "tol", 2e-3);
+%!   assert (numel (h.runner_up), numel (r.curves));
+%!   assert (get (h.runner_up(1), "xdata")(:), r.curves{1}(:,1));
+%!   assert (get (h.runner_up(1), "ydata")(:), r.curves{1}(:,2));
+%!   assert (get (h.runner_up(1), "linestyle"), "--");
 %! unwind_protect_cleanup
 %!   close (f);
 %! end_unwind_protect

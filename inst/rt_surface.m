@@ -24,7 +24,11 @@
 ##
 ## @var{which} is @qcode{"minimal"} (the default: the minimiser of
 ## @code{rt_entropy}) or @qcode{"runner_up"} (the best other candidate, for
-## up to 8 intervals; @code{holent:domain} when there is none).
+## up to 8 intervals; @code{holent:domain} when there is none).  On the
+## one-sided BCFT backgrounds the runner-up is the best other configuration
+## of geodesics between endpoints, geodesics ending on a brane and the
+## horizon (e.g. the brane-ending saddle of an interval whose connected
+## geodesic wins, and the reverse); not on @qcode{"bcft_tfd"}.
 ##
 ## @strong{Time} (@file{doc/surfaces.md}): regions with endpoint times
 ## (n x 4 rows [start, end, t_start, t_end]) in every static bulk, a quench

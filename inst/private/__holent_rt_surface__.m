@@ -53,13 +53,11 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
   [bcft, gw] = __holent_is_bcft__ (bg);
   if (bcft)
     ## surfaces ending on the branes, and the branes (the core's minimiser)
-    if (strcmp (which, "runner_up"))
-      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available on a BCFT background", fn);
-    endif
+    ru = strcmp (which, "runner_up");
     if (wascell)
-      s = __holent_bcft__ ("surface", fn, bg, A, tol);
+      s = __holent_bcft__ ("surface", fn, bg, A, tol, double (ru));
     else
-      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol);
+      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol, double (ru));
     endif
     [s.arcs] = deal (zeros (0, 1));
     [s.defect] = deal (false);
