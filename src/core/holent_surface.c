@@ -87,6 +87,8 @@ typedef struct
   int circle;
   double R;      /* horizon radius (bulk units)                       */
   double sc;     /* boundary units per bulk unit: L/(2 pi) or 1        */
+  int tglobal;   /* EM_GLOBAL: third column the global time (+ g->tc),
+                    not v                                             */
 } emb_chart;
 
 typedef struct
@@ -294,6 +296,10 @@ holent_surface_geodesic (holent_surface_workspace *w,
   return holent_surface_geodesic_t (w, bg, x1, 0.0, x2, 0.0, tol);
 }
 
+static int apex_legs (holent_curve *c, const holent_geo_bg *bg, double ph1,
+                      double t1, double ph2, double t2, double ta,
+                      double sc, double tol);
+
 int
 holent_surface_geodesic_t (holent_surface_workspace *w,
                            const holent_geo_bg *bg, double x1, double t1,
@@ -349,15 +355,12 @@ holent_surface_geodesic_t (holent_surface_workspace *w,
         double h = 0.5 * bg->alpha * (ph2 - ph1), ta = bg->alpha * tau;
         if (bg->alpha < 1.0 && h >= M_PI_2)
           {
-            /* no geodesic on this side of the defect: through the apex */
-            if (t1 != t2)
-              return HOLENT_EUNSUP;
-            int st = push (&w->cur, cos (ph1), sin (ph1), t1);
-            if (!st)
-              st = push (&w->cur, 0.0, 0.0, t1);
-            if (!st)
-              st = push (&w->cur, cos (ph2), sin (ph2), t1);
-            return st;
+            /* no geodesic on this side of the defect: the two radial
+               legs through the apex, reached at the mean covering time
+               (doc/hrt_time.md); straight in the picture, sampled for
+               their times */
+            return apex_legs (&w->cur, bg, ph1, t1, ph2, t2, ta,
+                              tsc / bg->alpha, tol);
           }
         if (h >= M_PI)
           return HOLENT_EDOM;  /* the whole circle in global AdS */
@@ -613,7 +616,10 @@ emb_eval (const geo_par *g, double s, double *px, double *py, double *pt,
       {
         double r = hypot (X[1], X[2]);
         areal_picture (1, g->xc + atan2 (X[2], X[1]), r, px, py, bd);
-        *pt = ch->sc * (atan2 (X[3], X[0]) - atan2 (1.0, r));
+        if (ch->tglobal)
+          *pt = g->tc + ch->sc * atan2 (X[3], X[0]);
+        else
+          *pt = ch->sc * (atan2 (X[3], X[0]) - atan2 (1.0, r));
         return;
       }
     case EM_BTZ:
@@ -758,6 +764,36 @@ circle_direction (const holent_geo_bg *bg, double xa, double ta, double xb,
     }
 }
 
+/* The path through the apex of a conical defect from the boundary angle
+   ph1 (time t1) to ph2 (t2), ta half the covering delay, sc boundary time
+   units per covering time unit.  */
+static int
+apex_legs (holent_curve *c, const holent_geo_bg *bg, double ph1, double t1,
+           double ph2, double t2, double ta, double sc, double tol)
+{
+  emb_chart ch = { EM_GLOBAL, 1, 0.0, sc, 1 };
+  double Q[4] = { 1.0, 0.0, 0.0, 0.0 };   /* the apex at covering time 0 */
+  (void) bg;
+  for (int leg = 0; leg < 2; leg++)
+    {
+      double tb = leg ? ta : -ta, ph = leg ? ph2 : ph1;
+      double P[4] = { cos (tb), 1.0, 0.0, sin (tb) };
+      geo_par g;
+      if (emb_piece (&g, &ch, ph, KIND_RAY, Q, P))
+        return HOLENT_ETIMELIKE;
+      g.tc = 0.5 * (t1 + t2);
+      size_t i0 = c->n;
+      int st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), leg);
+      if (!st)
+        st = push (c, cos (ph), sin (ph), leg ? t2 : t1);
+      if (st)
+        return st;
+      if (leg == 0)
+        curve_reverse (c, i0);
+    }
+  return HOLENT_SUCCESS;
+}
+
 int
 holent_surface_pair (holent_surface_workspace *w, const holent_geo_bg *bg,
                      double xa, double ta, double xb, double tb, double arc,
@@ -795,9 +831,9 @@ holent_surface_quench (holent_surface_workspace *w,
   st = holent_quench_crossing (q, x2 - x1, t, &eta, &xc, &rc);
   if (st)
     return st;
-  emb_chart vac = { circle ? EM_GLOBAL : EM_POINCARE, circle, 0.0, sc };
+  emb_chart vac = { circle ? EM_GLOBAL : EM_POINCARE, circle, 0.0, sc, 0 };
   emb_chart bh = { EM_BTZ, circle, circle ? q->vac.L / q->beta
-                                          : 2.0 * M_PI / q->beta, sc };
+                                          : 2.0 * M_PI / q->beta, sc, 0 };
   double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc, tb = t / sc;
   holent_curve *c = &w->cur;
   c->n = 0;
@@ -854,7 +890,7 @@ holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
     return HOLENT_EDOM;
   double L = b->side.L, sc = circle ? L / (2.0 * M_PI) : 1.0;
   emb_chart ch = { EM_KRUSKAL, circle, circle ? L / b->beta
-                                              : 2.0 * M_PI / b->beta, sc };
+                                              : 2.0 * M_PI / b->beta, sc, 0 };
   double x1 = xa, t1 = ta, x2 = xb, t2 = tb;
   if (sa == sb)
     {

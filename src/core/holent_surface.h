@@ -78,7 +78,8 @@ int holent_surface_picture (const holent_geo_bg *bg);
  * 0 < x2 - x1 <= L; on a line x1 != x2), sampled to tol into w->cur
  * (replacing its contents), tol in [TOLMIN, 1].  With a conical defect and
  * alpha (x2 - x1) 2 pi / L >= pi the infimum is the path through the
- * apex: two radial segments.  Returns EINVAL/EDOM on bad input, ENOMEM.  */
+ * apex: two radial segments (sampled as holent_surface_geodesic_t's).
+ * Returns EINVAL/EDOM on bad input, ENOMEM.  */
 int holent_surface_geodesic (holent_surface_workspace *w,
                              const holent_geo_bg *bg, double x1, double x2,
                              double tol);
@@ -87,8 +88,9 @@ int holent_surface_geodesic (holent_surface_workspace *w,
  * interval: the geodesic leaves the constant-time slice; each point
  * carries its boundary time in w->cur.t).  HOLENT_ETIMELIKE unless the
  * endpoints are spacelike separated (in the covering space for the
- * circle bulks); HOLENT_EUNSUP for the path through a defect's apex with
- * t1 != t2.  */
+ * circle bulks).  The path through a defect's apex is the two radial
+ * legs meeting at the mean covering time (doc/hrt_time.md), straight in
+ * the picture and sampled like a geodesic for their times.  */
 int holent_surface_geodesic_t (holent_surface_workspace *w,
                                const holent_geo_bg *bg, double x1, double t1,
                                double x2, double t2, double tol);
