@@ -35,14 +35,16 @@
 ## @qcode{"t"}, the boundary time) and a thermofield double (a struct
 ## region with fields @code{left} and @code{right}, option @qcode{"t"})
 ## are drawn from @code{rt_surface}'s time path: the curves projected on
-## the picture (their third coordinate, the time, is dropped); the
+## the picture, their time (t, or v on a quench) coded by the colour of
+## markers along them (@code{time}, with a colour bar); the
 ## thermofield double in its Kruskal diagram (X_K, T_K), with the two
 ## boundaries, the horizons (dotted, in @code{horizon}) and the
 ## singularities (in @code{defect}).
 ##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
-## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label};
+## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label},
+## @code{time};
 ## and @code{surf}, the configuration drawn (from @code{rt_surface}).
 ##
 ## @seealso{rt_surface, rt_entropy, plot_surface_profile, plot_phase_diagram}
@@ -79,7 +81,7 @@ function h = plot_rt_surface (varargin)
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
               "surface", [], "runner_up", [], "horizon", [], "defect", [],
-              "brane", [], "cut", [], "label", [], "surf", s);
+              "brane", [], "cut", [], "label", [], "time", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
   if (strcmp (s.picture, "kruskal"))
@@ -192,6 +194,16 @@ function h = plot_rt_surface (varargin)
     h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
   endif
   __holent_fig_props__ (fn, h.surface, props);
+  ## the time of curves that leave the constant-time slice: markers on the
+  ## curve coloured by its third column (t, or v on a quench), a colour bar
+  tc = cellfun (@(c) columns (c) > 2 && max (c(:,3)) > min (c(:,3)), s.curves);
+  if (any (tc) && ! strcmp (s.picture, "kruskal"))
+    P = cell2mat (cellfun (@(c) c(unique (round (linspace (1, rows (c), 41))), :),
+                           s.curves(tc)(:), "uniformoutput", false));
+    h.time = scatter (hax, P(:,1), P(:,2), 18, P(:,3), "filled");
+    cb = colorbar (hax);
+    ylabel (cb, s.columns{3});
+  endif
   txt = sprintf ("S = %.4g", s.S);
   if (! isempty (r))
     txt = sprintf ("%s   (runner-up %.4g)", txt, r.S);
@@ -299,6 +311,11 @@ endfunction
 %!   q = ads3_background ("quench", "line", "beta", 1);
 %!   h = plot_rt_surface (q, [0 2], "t", 0.5);
 %!   assert (get (h.surface(1), "ydata")(:), h.surf.curves{1}(:,2));
+%!   ## the markers carry the curve's time v: 0.5 at the ends, 0 at the shell
+%!   c = h.surf.curves{1};
+%!   v = get (h.time, "cdata")(:);
+%!   assert (v([1 end]), [0.5; 0.5]);
+%!   assert (min (v) < 0 && all (ismember (get (h.time, "xdata")(:), c(:,1))));
 %!   assert (get (h.axes, "ydir"), "reverse");
 %! unwind_protect_cleanup
 %!   close (f);
