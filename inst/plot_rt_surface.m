@@ -31,9 +31,20 @@
 ## two-sided @code{"bcft_tfd"} one exterior is drawn with the island
 ## configuration of the radiation region (@code{page_curve}).
 ##
+## Regions with endpoint times (n x 4 rows), a quench (option
+## @qcode{"t"}, the boundary time) and a thermofield double (a struct
+## region with fields @code{left} and @code{right}, option @qcode{"t"})
+## are drawn from @code{rt_surface}'s time path: the curves projected on
+## the picture, their time (t, or v on a quench) coded by the colour of
+## markers along them (@code{time}, with a colour bar); the
+## thermofield double in its Kruskal diagram (X_K, T_K), with the two
+## boundaries, the horizons (dotted, in @code{horizon}) and the
+## singularities (in @code{defect}).
+##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
-## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label};
+## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label},
+## @code{time};
 ## and @code{surf}, the configuration drawn (from @code{rt_surface}).
 ##
 ## @seealso{rt_surface, rt_entropy, plot_surface_profile, plot_phase_diagram}
@@ -44,7 +55,7 @@ function h = plot_rt_surface (varargin)
   if (nargin < 2)
     print_usage ();
   endif
-  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol"});
+  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol", "t"});
   [bg, A] = deal (args{:});
   tol = 2e-3;
   if (isfield (o, "tol"))
@@ -59,17 +70,34 @@ function h = plot_rt_surface (varargin)
   endif
   ## rt_surface's own path, its messages naming this function
   r = [];
-  s = __holent_rt_surface__ (fn, bg, A, {"tol", tol});
+  topt = {};
+  if (isfield (o, "t"))
+    topt = {"t", o.t};
+  endif
+  s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
     r = __holent_rt_surface__ (fn, bg, A, {"tol", tol, "configuration", "runner_up"});
   endif
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
               "surface", [], "runner_up", [], "horizon", [], "defect", [],
-              "brane", [], "cut", [], "label", [], "surf", s);
+              "brane", [], "cut", [], "label", [], "time", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
-  if (disk)
+  if (strcmp (s.picture, "kruskal"))
+    ## the Kruskal diagram of the two-sided geometry: boundaries
+    ## X^2 - T^2 = 1, singularities T^2 - X^2 = 1, horizons |X| = |T|
+    u = linspace (-1.2, 1.2, 241);
+    h.bulk = fill (hax, [cosh(u), -cosh(fliplr (u))], [sinh(u), sinh(fliplr (u))],
+                   pal.bulk, "edgecolor", "none");
+    h.boundary = plot (hax, [cosh(u); -cosh(u)]', [sinh(u); sinh(u)]',
+                       "color", pal.boundary, "linewidth", 1.2);
+    h.horizon = plot (hax, [-1.5 1.5; -1.5 1.5]', [-1.5 1.5; 1.5 -1.5]', ":",
+                      "color", pal.horizon, "linewidth", 1.2);
+    h.defect = plot (hax, [sinh(u); sinh(u)]', [cosh(u); -cosh(u)]',
+                     "color", pal.defect, "linewidth", 2);
+    xlabel (hax, "X_K");  ylabel (hax, "T_K");
+  elseif (disk)
     if (bcft)
       L = 2 * bg.length;     # the doubled interval of the thermal AdS saddle
     else
@@ -166,6 +194,16 @@ function h = plot_rt_surface (varargin)
     h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
   endif
   __holent_fig_props__ (fn, h.surface, props);
+  ## the time of curves that leave the constant-time slice: markers on the
+  ## curve coloured by its third column (t, or v on a quench), a colour bar
+  tc = cellfun (@(c) columns (c) > 2 && max (c(:,3)) > min (c(:,3)), s.curves);
+  if (any (tc) && ! strcmp (s.picture, "kruskal"))
+    P = cell2mat (cellfun (@(c) c(unique (round (linspace (1, rows (c), 41))), :),
+                           s.curves(tc)(:), "uniformoutput", false));
+    h.time = scatter (hax, P(:,1), P(:,2), 18, P(:,3), "filled");
+    cb = colorbar (hax);
+    ylabel (cb, s.columns{3});
+  endif
   txt = sprintf ("S = %.4g", s.S);
   if (! isempty (r))
     txt = sprintf ("%s   (runner-up %.4g)", txt, r.S);
@@ -174,6 +212,9 @@ function h = plot_rt_surface (varargin)
   if (disk)
     axis (hax, "equal");
     set (hax, "xlim", [-1.1 1.1], "ylim", [-1.1 1.1], "visible", "off");
+  elseif (strcmp (s.picture, "kruskal"))
+    axis (hax, "equal");
+    set (hax, "xlim", [-1.9 1.9], "ylim", [-1.5 1.5]);
   endif
   if (! held)
     hold (hax, "off");
@@ -234,6 +275,48 @@ endfunction
 %!     assert (get (h.brane(1), "ydata")(:), h.surf.brane_curves{1}(:,2));
 %!     assert (numel (h.surface) >= 1);
 %!   endfor
+%!   ## the runner-up (the other saddle) drawn dashed from rt_surface's data
+%!   clf (f);
+%!   h = plot_rt_surface (bgs{1}, [1 2], "runner_up", true);
+%!   r = rt_surface (bgs{1}, [1 2], "configuration", "runner_up", "tol", 2e-3);
+%!   assert (numel (h.runner_up), numel (r.curves));
+%!   assert (get (h.runner_up(1), "xdata")(:), r.curves{1}(:,1));
+%!   assert (get (h.runner_up(1), "ydata")(:), r.curves{1}(:,2));
+%!   assert (get (h.runner_up(1), "linestyle"), "--");
+%! unwind_protect_cleanup
+%!   close (f);
+%! end_unwind_protect
+
+%!demo
+%! ## A two-sided region of the thermofield double at t = 0.2: the
+%! ## geodesics through the Einstein-Rosen bridge in the Kruskal diagram.
+%! figure ("visible", "off");
+%! bg = ads3_background ("tfd", "line", "beta", 2);
+%! h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_tfd_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bg = ads3_background ("tfd", "line", "beta", 2);
+%!   h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+%!   assert (numel (h.surface), 2);
+%!   assert (get (h.surface(1), "xdata")(:), h.surf.curves{1}(:,1));
+%!   assert (get (h.surface(1), "ydata")(:), h.surf.curves{1}(:,2));
+%!   ## one boundary to the other
+%!   x = get (h.surface(1), "xdata");
+%!   assert (sort (sign (x([1 end]))), [-1 1]);
+%!   clf (f);
+%!   q = ads3_background ("quench", "line", "beta", 1);
+%!   h = plot_rt_surface (q, [0 2], "t", 0.5);
+%!   assert (get (h.surface(1), "ydata")(:), h.surf.curves{1}(:,2));
+%!   ## the markers carry the curve's time v: 0.5 at the ends, 0 at the shell
+%!   c = h.surf.curves{1};
+%!   v = get (h.time, "cdata")(:);
+%!   assert (v([1 end]), [0.5; 0.5]);
+%!   assert (min (v) < 0 && all (ismember (get (h.time, "xdata")(:), c(:,1))));
+%!   assert (get (h.axes, "ydir"), "reverse");
 %! unwind_protect_cleanup
 %!   close (f);
 %! end_unwind_protect

@@ -3,7 +3,7 @@
 
 ## -*- texinfo -*-
 ## @deftypefn  {} {@var{surf} =} rt_surface (@var{bg}, @var{A})
-## @deftypefnx {} {@var{surf} =} rt_surface (@dots{}, "tol", @var{tol}, "configuration", @var{which})
+## @deftypefnx {} {@var{surf} =} rt_surface (@dots{}, "tol", @var{tol}, "configuration", @var{which}, "t", @var{t})
 ## The RT surface of the region @var{A} (as in @code{rt_entropy}: an
 ## n x 2 matrix of intervals, or a cell array of them) in the AdS3
 ## background @var{bg}, as curves in the bulk, ready to be drawn.
@@ -24,7 +24,31 @@
 ##
 ## @var{which} is @qcode{"minimal"} (the default: the minimiser of
 ## @code{rt_entropy}) or @qcode{"runner_up"} (the best other candidate, for
-## up to 8 intervals; @code{holent:domain} when there is none).
+## up to 8 intervals; @code{holent:domain} when there is none).  On the
+## one-sided BCFT backgrounds the runner-up is the best other configuration
+## of geodesics between endpoints, geodesics ending on a brane and the
+## horizon (e.g. the brane-ending saddle of an interval whose connected
+## geodesic wins, and the reverse); not on @qcode{"bcft_tfd"}.
+##
+## @strong{Time} (@file{doc/surfaces.md}): regions with endpoint times
+## (n x 4 rows [start, end, t_start, t_end]) in every static bulk, a quench
+## (@code{ads3_background ("quench", @dots{})}, @var{t} the boundary time)
+## and a thermofield double (@code{ads3_background ("tfd", @dots{})}, a
+## region or a struct with fields @code{left} and @code{right}, @var{t}
+## added to every time) give the minimiser of @code{rt_entropy} with its
+## geodesics as k x 3 arrays whose columns are named in @code{columns}:
+## [x, z, t] or [X, Y, t] in the pictures above for static bulks (the
+## boosted geodesics); the same with the ingoing Eddington-Finkelstein
+## time v (the shell at v = 0, the boundary time at the boundary) for a
+## quench, whose curve is the BTZ leg, the vacuum chord inside the shell
+## and the BTZ leg out; and for a thermofield double the Kruskal picture
+## @qcode{"kruskal"} [X_K, T_K, x], X_K = (v - u)/2, T_K = (v + u)/2
+## (boundaries X_K = +-cosh(R t), T_K = sinh(R t), R = 2 pi/beta on a
+## line, L/beta on a circle; horizons |X_K| = |T_K|), the horizon as the
+## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  No
+## runner-up on this path.  Regions on both sides of a circle are not
+## supported (as in @code{rt_entropy}); geodesics through a shock are not
+## drawn (@code{holent:unsupported}).
 ##
 ## @var{surf} (a struct array of the size of the cell) has fields
 ## @table @code
@@ -43,6 +67,11 @@
 ## R of the horizon in the disk, z = 1/r_+ in the half plane, NaN without.
 ## @item defect
 ## true when the bulk has a conical defect (apex at the centre).
+## @item times, sides
+## the time of each endpoint and its side (0 left, 1 right; 1 without a
+## thermofield double).
+## @item columns
+## the names of the curves' columns.
 ## @end table
 ##
 ## @seealso{rt_entropy, plot_rt_surface, surface_profile}
@@ -78,7 +107,19 @@ endfunction
 %! s = rt_surface (bg, [0 1; 1.2 2.2]);
 %! assert (s.pairs, [1 4; 2 3]);
 
+%!test
+%! ## A boosted interval in Poincare AdS: the curve lies on
+%! ## z^2 + (x - xc)^2 - (t - tc)^2 = (dx^2 - dt^2)/4 (common practice),
+%! ## from (0, 0, 0) to (2, 0, 1).
+%! s = rt_surface (ads3_background ("vacuum", "line"), [0 2 0 1]);
+%! c = s.curves{1};
+%! assert (s.columns, {"x", "z", "t"});
+%! assert (c(:,2).^2 + (c(:,1) - 1).^2 - (c(:,3) - 0.5).^2, 0.75 * ones (rows (c), 1), 1e-12);
+%! assert (c([1 end], :), [0 0 0; 2 0 1], 1e-14);
+%! assert (s.times', [0 1]);
+
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
+%!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")
 %!error <tol must lie> rt_surface (ads3_background ("vacuum", "line"), [0 1], "tol", 0)

@@ -13,8 +13,9 @@
  *       disjointness only: STATUS 0 or a core status, the two rows.
  *   [S, KB, NB, SNO, INFO] = __holent_bcft__ ("page", FN, BG, R, T)
  *   X = __holent_bcft__ ("profile", FN, BG, Z, END)  (NaN where no brane)
- *   SURF = __holent_bcft__ ("surface", FN, BG, A, TOL)
- *       the minimal configuration as curves (rt_surface), with the branes;
+ *   SURF = __holent_bcft__ ("surface", FN, BG, A, TOL [, RUNNER])
+ *       the minimal configuration (RUNNER true: the runner-up) as curves
+ *       (rt_surface), with the branes;
  *       on a two-sided background the island configuration of R = A.
  * Unpack, call the core, pack; no physics.  */
 #include <ctype.h>
@@ -591,12 +592,17 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
   char fn[64];
   holent_bcft_bg bg;
   holent_err err;
-  holent_gw_nargs (GW, nlhs, 1, nrhs, 5, 5);
+  holent_gw_nargs (GW, nlhs, 1, nrhs, 5, 6);
   holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
   unpack_bg (prhs[2], fn, &bg);
   const mxArray *A = prhs[3];
   double tol = holent_gw_scalar (prhs[4], fn, "tol");
+  int runner = nrhs > 5 && holent_gw_scalar (prhs[5], fn, "RUNNER") != 0.0;
   int tfd = bg.kind == HOLENT_BCFT_TFD;
+  if (runner && tfd)
+    holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
+                     "configuration \"runner_up\" is not available on a "
+                     "two-sided \"bcft_tfd\" background");
   const char *name = tfd ? "R" : "A";
   size_t maxrows, nreg = holent_gw_regions (A, fn, name, &maxrows);
   holent_bcft_workspace *ws = ws_alloc (fn, name, maxrows);
@@ -627,6 +633,18 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
           holent_surface_workspace_free (sw);
           mxDestroyArray (surf);
           region_raise (fn, name, A, k, ws, &err);
+        }
+      if (runner && (st = holent_bcft_runner_up (ws, &bg, &r)))
+        {
+          holent_surface_workspace_free (sw);
+          holent_bcft_workspace_free (ws);
+          mxDestroyArray (surf);
+          if (st == HOLENT_EDOM)
+            holent_gw_raise (fn, st, NULL, HOLENT_NOINDEX, "the region has a "
+                             "single RT candidate: there is no runner-up");
+          holent_gw_raise (fn, st, name, k, "the runner-up is available for "
+                           "at most %zu endpoints",
+                           (size_t) HOLENT_BCFT_RUNNER_MMAX);
         }
       if (tfd)
         {

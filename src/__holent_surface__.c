@@ -84,19 +84,9 @@ op_curves (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
   mxArray *cell = mxCreateCellMatrix (1, m);
   for (size_t i = 0; i < m; i++)
     {
-      double xa = pts[pr[2 * i]], xb = pts[pr[2 * i + 1]];
-      if (bg.circle)
-        {
-          /* the geodesic subtends arcs[i]: from xa forwards, or from xb */
-          double d = xb - xa;
-          if (fabs (arcs[i] - d) > fabs (arcs[i] - (bg.L - d)))
-            {
-              double t = xa;
-              xa = xb;
-              xb = t + bg.L;
-            }
-        }
-      int st = holent_surface_geodesic (w, &bg, xa, xb, tol);
+      /* the geodesic over the arc arcs[i] (the core picks the side) */
+      int st = holent_surface_pair (w, &bg, pts[pr[2 * i]], 0.0,
+                                    pts[pr[2 * i + 1]], 0.0, arcs[i], tol);
       if (st)
         {
           holent_surface_workspace_free (w);

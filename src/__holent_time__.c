@@ -47,6 +47,7 @@
 #include "core/holent_quench.h"
 #include "core/holent_slab.h"
 #include "core/holent_tfd.h"
+#include "core/holent_surface.h"
 
 typedef enum { BG_STATIC, BG_TFD, BG_QUENCH } bg_kind;
 
@@ -68,6 +69,10 @@ typedef struct
   holent_tfd_workspace *tw;
   holent_quench_scan *qs;  /* quench: chords kept from time to time */
   double *tp, *ts, *te;
+  holent_surface_workspace *sw;  /* "surface" only                */
+  size_t *pairs;                 /* "surface": the minimiser      */
+  double *arcs;
+  size_t m;                      /* geodesics of the last region  */
 } gw_state;
 
 static void
@@ -80,11 +85,17 @@ release (gw_state *g)
   free (g->tp);
   free (g->ts);
   free (g->te);
+  holent_surface_workspace_free (g->sw);
+  free (g->pairs);
+  free (g->arcs);
   g->reg = NULL;
   g->rt = NULL;
   g->tw = NULL;
   g->qs = NULL;
   g->tp = g->ts = g->te = NULL;
+  g->sw = NULL;
+  g->pairs = NULL;
+  g->arcs = NULL;
 }
 
 /* Free everything, then raise through holent_gw_raise.  */
@@ -640,7 +651,7 @@ entropy_one (gw_state *g, const time_bg *b, const region_in *r, double t,
         fail_region (g, st, r->name[1], g->reg->bad[0], g->reg->bad[1]);
       if (b->kind == BG_QUENCH)
         st = holent_quench_entropy_scan (g->rt, &b->quench, g->reg, t,
-                                         g->qs, &res, NULL, NULL);
+                                         g->qs, &res, g->pairs, g->arcs);
       else
         {
           size_t bad = 0, bi, bj;
@@ -650,13 +661,14 @@ entropy_one (gw_state *g, const time_bg *b, const region_in *r, double t,
             fail_region (g, st, r->name[1], bad, HOLENT_NOINDEX);
           for (size_t i = 0; i < 2 * g->reg->n; i++)
             g->tp[i] += t;
-          st = holent_hrt_entropy (g->rt, &b->geo, g->reg, g->tp, &res, NULL,
-                                   NULL, &bi, &bj);
+          st = holent_hrt_entropy (g->rt, &b->geo, g->reg, g->tp, &res,
+                                   g->pairs, g->arcs, &bi, &bj);
         }
       if (st)
         fail_region (g, st, r->name[1], HOLENT_NOINDEX, HOLENT_NOINDEX);
     }
   *horizon = res.horizon;
+  g->m = res.m;
   return res.S;
 }
 
@@ -816,6 +828,139 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
     plhs[2] = hz;
   else
     mxDestroyArray (hz);
+}
+
+/* ---- surfaces (rt_surface's time path) ---- */
+
+/* One sampled curve as a k x 3 array [X, Y, third].  */
+static mxArray *
+curve3 (const holent_curve *c)
+{
+  mxArray *a = mxCreateDoubleMatrix (c->n, 3, mxREAL);
+  double *p = mxGetPr (a);
+  memcpy (p, c->x, c->n * sizeof *p);
+  memcpy (p + c->n, c->y, c->n * sizeof *p);
+  memcpy (p + 2 * c->n, c->t, c->n * sizeof *p);
+  return a;
+}
+
+/* [C, PTS, TP, SIDE, PAIRS, ARCS, S, HOR, HC, PICTURE] =
+   ("surface", FN, BG, A, T, TOL): the minimiser of the one region A at
+   shift/time T and its geodesics sampled to TOL (holent_surface).  */
+static void
+do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
+{
+  gw_state g;
+  time_bg b;
+  memset (&g, 0, sizeof g);
+  g.fn = fn;
+  (void) nlhs;
+  get_bg (fn, prhs[2], &b);
+  const mxArray *A = prhs[3];
+  double t = holent_gw_scalar (prhs[4], fn, "t");
+  double tol = holent_gw_scalar (prhs[5], fn, "tol");
+  if (!isfinite (t))
+    holent_gw_raise (fn, isnan (t) ? HOLENT_ENAN : HOLENT_EDOM, "t",
+                     HOLENT_NOINDEX, "must be finite");
+  size_t nmax = region_rows (A);
+  alloc_ws (&g, nmax > 0 ? nmax : 1);
+  g.sw = holent_surface_workspace_alloc ();
+  g.pairs = malloc (2 * (nmax + 1) * sizeof *g.pairs);
+  g.arcs = malloc ((nmax + 1) * sizeof *g.arcs);
+  if (!g.sw || !g.pairs || !g.arcs)
+    fail (&g, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, "out of memory");
+  region_in r;
+  read_region (&g, A, &b, "A", &r);
+  size_t ncross;
+  int horizon;
+  double S = entropy_one (&g, &b, &r, t, &ncross, &horizon);
+  /* the endpoints, their times and sides, the pairs */
+  size_t np;
+  const double *x, *tp, *arcs = g.arcs;
+  const size_t *pairs = g.pairs;
+  const int *side = NULL;
+  if (b.kind == BG_TFD)
+    {
+      int st = holent_tfd_configuration (g.tw, &np, &x, &tp, &side, &pairs,
+                                         &arcs);
+      if (st == HOLENT_EEMPTY)  /* the annulus keeps no configuration */
+        fail (&g, HOLENT_EUNSUP, "A", HOLENT_NOINDEX, "the surfaces of a "
+               "region on both sides of a thermofield double on a circle "
+               "are not available (its entropy is: rt_entropy)");
+      if (st)
+        fail (&g, st, "A", HOLENT_NOINDEX, "%s", holent_strerror (st));
+    }
+  else
+    {
+      np = 2 * g.reg->n;
+      x = g.reg->pts;
+      if (b.kind == BG_QUENCH)
+        for (size_t i = 0; i < np; i++)
+          g.tp[i] = t;
+      tp = g.tp;
+    }
+  size_t m = g.m;
+  mxArray *cell = mxCreateCellMatrix (1, m);
+  for (size_t k = 0; k < m; k++)
+    {
+      size_t i = pairs[2 * k], j = pairs[2 * k + 1];
+      int st;
+      if (b.kind == BG_TFD)
+        st = holent_surface_tfd (g.sw, &b.tfd, x[i], tp[i], side[i], x[j],
+                                 tp[j], side[j], arcs[k], tol);
+      else if (b.kind == BG_QUENCH)
+        st = holent_surface_quench (g.sw, &b.quench, x[i], x[j], t, tol);
+      else
+        st = holent_surface_pair (g.sw, &b.geo, x[i], tp[i], x[j], tp[j],
+                                  arcs[k], tol);
+      if (st)
+        fail (&g, st, "geodesic", k, "%s", holent_strerror (st));
+      mxSetCell (cell, k, curve3 (&g.sw->cur));
+    }
+  /* the horizon when it is part of the surface */
+  mxArray *hc = mxCreateDoubleMatrix (0, 3, mxREAL);
+  if (horizon)
+    {
+      double depth;
+      int st = b.kind == BG_TFD
+                 ? holent_surface_tfd_horizon (g.sw, &b.tfd, 0.0, b.tfd.side.L)
+                 : holent_surface_horizon (g.sw, &b.geo, 0.0, 0.0, tol,
+                                           &depth);
+      if (st)
+        fail (&g, st, "horizon", HOLENT_NOINDEX, "%s", holent_strerror (st));
+      mxDestroyArray (hc);
+      hc = curve3 (&g.sw->cur);
+    }
+  mxArray *P = mxCreateDoubleMatrix (np, 1, mxREAL);
+  mxArray *T = mxCreateDoubleMatrix (np, 1, mxREAL);
+  mxArray *SD = mxCreateDoubleMatrix (np, 1, mxREAL);
+  mxArray *PR = mxCreateDoubleMatrix (m, 2, mxREAL);
+  mxArray *AR = mxCreateDoubleMatrix (m, 1, mxREAL);
+  for (size_t i = 0; i < np; i++)
+    {
+      mxGetPr (P)[i] = x[i];
+      mxGetPr (T)[i] = tp[i];
+      mxGetPr (SD)[i] = side ? side[i] : 1.0;
+    }
+  for (size_t k = 0; k < m; k++)
+    {
+      mxGetPr (PR)[k] = (double) pairs[2 * k] + 1;
+      mxGetPr (PR)[k + m] = (double) pairs[2 * k + 1] + 1;
+      mxGetPr (AR)[k] = arcs[k];
+    }
+  int circle = b.kind == BG_TFD ? b.tfd.side.circle : b.geo.circle;
+  release (&g);
+  plhs[0] = cell;
+  plhs[1] = P;
+  plhs[2] = T;
+  plhs[3] = SD;
+  plhs[4] = PR;
+  plhs[5] = AR;
+  plhs[6] = mxCreateDoubleScalar (S);
+  plhs[7] = mxCreateLogicalScalar (horizon != 0);
+  plhs[8] = hc;
+  plhs[9] = mxCreateString (b.kind == BG_TFD ? "kruskal"
+                            : circle ? "disk" : "half_plane");
 }
 
 /* ---- single intervals ---- */
@@ -1153,6 +1298,11 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     {
       holent_gw_nargs (fn, nlhs, 3, nrhs, 5, 6);
       do_entropy (fn, nlhs, nrhs, plhs, prhs);
+    }
+  else if (strcmp (mode, "surface") == 0)
+    {
+      holent_gw_nargs (fn, nlhs, 10, nrhs, 6, 6);
+      do_surface (fn, nlhs, plhs, prhs);
     }
   else if (strcmp (mode, "interval") == 0)
     {

@@ -174,5 +174,56 @@
 %!                     @(u, e) [0, zh / (1 + exp (-u))],
 %!                     @(z, e) [brane_profile(bg, z), z], [1 1] * zh * (1 - 1e-9));
 
-%!error <runner_up> rt_surface (ads3_background ("bcft", "half_line"), [1 2], "configuration", "runner_up")
+%!test
+%! ## Runner-up on the half line (Poincare, T = 0.4, and planar BTZ,
+%! ## T = -0.3): the other saddle of an interval, connected vs ending on
+%! ## the brane (Takayanagi 2011, PRL 107, 101602 for the candidates),
+%! ## its area computed here from the metric: the connected geodesic as
+%! ## the distance of the two cutoff points, each brane-ending one as the
+%! ## least distance from its cutoff point to the brane (fminbnd over the
+%! ## landing depth); the runner-up's curves pass check_brane_curves.
+%! bp = ads3_background ("bcft", "half_line", "tension", 0.4, "cutoff", 1e-5);
+%! bt = ads3_background ("bcft", "half_line", "tension", -0.3, "beta", 2, "cutoff", 1e-5);
+%! for k = 1:2
+%!   bg = merge (k == 1, bp, bt);
+%!   if (k == 1)
+%!     dist = @dist_hp;  zmax = 50;
+%!     zero_geo = @(u, e) [0, exp(u)];
+%!   else
+%!     zh = bt.zh;  dist = @(p, q) dist_btz (p, q, zh);  zmax = zh * (1 - 1e-9);
+%!     zero_geo = @(u, e) [0, zh / (1 + exp (-u))];
+%!   endif
+%!   brane_pt = @(z, e) [brane_profile(bg, z), z];
+%!   eps = bg.cutoff;
+%!   for A = {[1 2], [0.1 1.4]}
+%!     a = A{1};
+%!     s = rt_surface (bg, a, "tol", 1e-4);
+%!     r = rt_surface (bg, a, "configuration", "runner_up", "tol", 1e-4);
+%!     conn = dist ([a(1) eps], [a(2) eps]);
+%!     ends = 0;
+%!     for x = a
+%!       [~, d] = fminbnd (@(z) dist ([x eps], brane_pt (z, 1)), 1e-9, zmax, optimset ("TolX", 1e-14));
+%!       ends += d;
+%!     endfor
+%!     both = sort ([conn ends]) * bg.c / 6;
+%!     assert ([s.S r.S], both, 1e-6);
+%!     assert (r.S >= s.S);
+%!     assert (isempty (r.pairs) != isempty (s.pairs));
+%!     if (! isempty (r.brane.x))
+%!       check_brane_curves (bg, r, dist, bg.tension(1) * [1 1], zero_geo, brane_pt, [1 1] * zmax);
+%!     endif
+%!   endfor
+%! endfor
+
+%!test
+%! ## Interval in its BTZ saddle: the runner-up is a candidate of the same
+%! ## set, not below the minimum, and differs from it.
+%! bg = ads3_background ("bcft", "interval", "length", 3, "tension", 0.3, "beta", 1);
+%! s = rt_surface (bg, [0.2 0.9; 1.5 2.8]);
+%! r = rt_surface (bg, [0.2 0.9; 1.5 2.8], "configuration", "runner_up");
+%! assert (r.S >= s.S);
+%! assert (! isequal ({s.pairs, s.brane.x, s.horizon}, {r.pairs, r.brane.x, r.horizon}));
+
+%!error <not available on a two-sided> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "configuration", "runner_up")
+%!error <single RT candidate> rt_surface (ads3_background ("bcft", "interval", "length", 3, "beta", 1), [0 3], "configuration", "runner_up")
 %!error <rt_surface: A\(1,:\): must lie> rt_surface (ads3_background ("bcft", "half_line"), [-1 2])

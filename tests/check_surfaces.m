@@ -240,3 +240,64 @@
 %! R = hypot (c(:,1), c(:,2));
 %! len = curve_length (2 * R ./ (1 - R.^2), unwrap (atan2 (c(:,2), c(:,1))), c(:,3), 0, 0, 1, 1 / eps);
 %! assert (len, log ((2 / eps^2) * (cos (0.5) - cos (1.5))), -3e-7);
+
+%!test
+%! ## Regions with endpoint times (n x 4) in the eight static bulks: the
+%! ## curves of the minimiser, integrated here with the metric (dt
+%! ## included), add up to its regulated length (6/c) S (Hubeny, Rangamani
+%! ## and Takayanagi 2007, JHEP 07, 062); each starts and ends at its
+%! ## endpoints with their times.
+%! eps = 1e-5;  L = 2 * pi;
+%! cases = {{"vacuum", "line"}, {"thermal", "line", "beta", 0.9}, ...
+%!          {"rotating", "line", "beta", 1, "Omega", 0.3}, {"vacuum", "circle"}, ...
+%!          {"thermal", "circle", "beta", 1.2}, {"thermal", "circle", "beta", 9}, ...
+%!          {"rotating", "circle", "beta", 1, "Omega", -0.4}, {"heavy", "circle", "alpha", 0.6}};
+%! A = [0.5 2.1 0.1 0.6; 2.6 3.4 0.3 0.1];
+%! bulks = {};
+%! for k = 1:numel (cases)
+%!   bg = ads3_background (cases{k}{:}, "cutoff", eps);
+%!   bulks{end+1} = bg.bulk;
+%!   s = rt_surface (bg, A, "tol", 1e-6);
+%!   circle = strcmp (s.picture, "disk");
+%!   len = 0;
+%!   for q = 1:numel (s.curves)
+%!     c = s.curves{q};
+%!     e = s.pairs(q,:);
+%!     tt = s.times(e);
+%!     assert (sort (c([1 end], 3)), sort (tt(:)), 1e-14);
+%!     rp = 0;  rm = 0;  a2 = 0;
+%!     if (circle)
+%!       R = hypot (c(:,1), c(:,2));
+%!       r = 2 * R ./ (1 - R.^2);  ph = unwrap (atan2 (c(:,2), c(:,1)));
+%!       a2 = 1;
+%!       if (bg.horizon)
+%!         rp = (L/2) * (1/bg.beta_L + 1/bg.beta_R);  rm = (L/2) * (1/bg.beta_L - 1/bg.beta_R);
+%!         a2 = 0;
+%!       elseif (strcmp (bg.bulk, "conical_defect"))
+%!         r = bg.alpha * r;  a2 = bg.alpha^2;
+%!       endif
+%!     else
+%!       r = 1 ./ c(:,2);  ph = c(:,1);
+%!       if (bg.horizon)
+%!         rp = pi * (1/bg.beta_L + 1/bg.beta_R);  rm = pi * (1/bg.beta_L - 1/bg.beta_R);
+%!       endif
+%!     endif
+%!     len += curve_length (r, ph, c(:,3), rp, rm, a2, 1 / eps);
+%!   endfor
+%!   assert (len, 6 * s.S / bg.c, 1e-4);   # sampling-limited (~50 tol)
+%! endfor
+%! assert (numel (unique (bulks)), 8);
+
+%!test
+%! ## The path through the apex of a conical defect with times: two radial
+%! ## legs (constant angle) meeting at the centre at the mean time
+%! ## (doc/hrt_time.md: the extremum over the apex time).
+%! bg = ads3_background ("heavy", "circle", "alpha", 0.6);
+%! c = geodesic_curve (bg, [0 0], [5.5 0.3], "tol", 1e-5){1};
+%! [~, i] = min (hypot (c(:,1), c(:,2)));
+%! assert (c(i, :), [0 0 0.15], 1e-14);
+%! ang = atan2 (c(:,2), c(:,1));
+%! assert (ang(2:i-1), zeros (i - 2, 1), 1e-14);
+%! assert (ang(i+1:end-1), (5.5 - 2*pi) * ones (rows (c) - i - 1, 1), 1e-12);
+%! assert (all (diff (c(1:i,3)) >= 0) && all (diff (c(i:end,3)) >= 0));
+

@@ -7,7 +7,7 @@
 ## messages then name it); @var{opts} the cell of option pairs.
 ## @end deftypefn
 function surf = __holent_rt_surface__ (fn, bg, A, opts)
-  o = __holent_opts__ (fn, {"tol", "configuration"}, opts);
+  o = __holent_opts__ (fn, {"tol", "configuration", "t"}, opts);
   tol = 1e-3;
   if (isfield (o, "tol"))
     tol = __holent_scalar__ (fn, "tol", o.tol, {1e-10, 0.5, "[]"});
@@ -23,6 +23,27 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
   if (! wascell)
     A = {A};
   endif
+  surf = struct ("picture", {}, "curves", {}, "S", {}, "pairs", {}, "arcs", {},
+                 "horizon", {}, "endpoints", {}, "intervals", {},
+                 "horizon_curve", {}, "horizon_depth", {}, "defect", {},
+                 "brane", {}, "brane_curves", {}, "times", {}, "sides", {},
+                 "columns", {});
+  if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, A))
+    ## endpoint times, a thermofield double or a quench: the core's
+    ## minimiser and its geodesics in the picture of the state
+    if (strcmp (which, "runner_up"))
+      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available for regions with times, a thermofield double or a quench", fn);
+    endif
+    t = 0;
+    if (isfield (o, "t"))
+      t = __holent_scalar__ (fn, "t", o.t, {-Inf, Inf, "()"});
+    endif
+    for k = 1:numel (A)
+      surf(k) = orderfields (timed_surface (fn, bg, A{k}, t, tol), surf);
+    endfor
+    surf = reshape (surf, size (A));
+    return;
+  endif
   for k = 1:numel (A)
     if (! isnumeric (A{k}) || islogical (A{k}) || ! isreal (A{k}))
       error ("holent:type", "%s: A must be a real numeric n x 2 matrix or a cell array of them", fn);
@@ -30,22 +51,17 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
     A{k} = full (double (A{k}));
   endfor
   [bcft, gw] = __holent_is_bcft__ (bg);
-  surf = struct ("picture", {}, "curves", {}, "S", {}, "pairs", {}, "arcs", {},
-                 "horizon", {}, "endpoints", {}, "intervals", {},
-                 "horizon_curve", {}, "horizon_depth", {}, "defect", {},
-                 "brane", {}, "brane_curves", {});
   if (bcft)
     ## surfaces ending on the branes, and the branes (the core's minimiser)
-    if (strcmp (which, "runner_up"))
-      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available on a BCFT background", fn);
-    endif
+    ru = strcmp (which, "runner_up");
     if (wascell)
-      s = __holent_bcft__ ("surface", fn, bg, A, tol);
+      s = __holent_bcft__ ("surface", fn, bg, A, tol, double (ru));
     else
-      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol);
+      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol, double (ru));
     endif
     [s.arcs] = deal (zeros (0, 1));
     [s.defect] = deal (false);
+    s = static_fields (s);
     surf = reshape (orderfields (s, surf), size (A));
     return;
   endif
@@ -77,9 +93,63 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
     s.defect = strcmp (bg.bulk, "conical_defect") && bg.alpha < 1;
     s.brane = nobrane;
     s.brane_curves = {};
+    s = static_fields (s);
     surf(k) = orderfields (s, surf);
   endfor
   surf = reshape (surf, size (A));
+endfunction
+
+## The fields of a constant-time configuration: times 0, the right side,
+## the names of the curves' columns.
+function s = static_fields (s)
+  for k = 1:numel (s)
+    s(k).times = zeros (size (s(k).endpoints));
+    s(k).sides = ones (size (s(k).endpoints));
+    s(k).columns = merge (strcmp (s(k).picture, "disk"), {"X", "Y", "t"},
+                          {"x", "z", "t"});
+  endfor
+endfunction
+
+## One region with times, on a thermofield double or a quench.
+function s = timed_surface (fn, bg, A, t, tol)
+  if (isnumeric (A))
+    A = __holent_time_entropy__ ("double", A);
+  elseif (isstruct (A) && isscalar (A))
+    for f = fieldnames (A)'
+      A.(f{1}) = __holent_time_entropy__ ("double", A.(f{1}));
+    endfor
+  endif
+  [s.curves, s.endpoints, s.times, s.sides, s.pairs, s.arcs, s.S, s.horizon, ...
+   s.horizon_curve, s.picture] = __holent_time__ ("surface", fn, bg, A, t, tol);
+  quench = strcmp (bg.state, "quench");
+  switch (s.picture)
+    case "kruskal"
+      s.columns = {"X_K", "T_K", "x"};
+    case "disk"
+      s.columns = {"X", "Y", merge(quench, "v", "t")};
+    otherwise
+      s.columns = {"x", "z", merge(quench, "v", "t")};
+  endswitch
+  if (isstruct (A))
+    iv = zeros (0, 3);
+    for f = {"left", "right"}
+      if (isfield (A, f{1}) && ! isempty (A.(f{1})))
+        a = A.(f{1});
+        iv = [iv; a(:, 1:2), strcmp(f{1}, "right") * ones(rows (a), 1)];
+      endif
+    endfor
+    s.intervals = iv;
+  else
+    s.intervals = A(:, 1:2);
+  endif
+  s.horizon_depth = NaN;
+  s.defect = isfield (bg, "bulk") && strcmp (bg.bulk, "conical_defect") && bg.alpha < 1;
+  if (! strcmp (s.picture, "kruskal") && ! quench && bg.horizon)
+    [~, s.horizon_depth] = __holent_surface__ ("horizon", fn, bg, 0, 0, tol);
+  endif
+  s.brane = struct ("endpoint", zeros (0, 1), "x", zeros (0, 1),
+                    "end", zeros (0, 1), "landing", zeros (0, 2));
+  s.brane_curves = {};
 endfunction
 
 %!test

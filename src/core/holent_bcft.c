@@ -1053,6 +1053,120 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   return HOLENT_SUCCESS;
 }
 
+/* ---- runner-up: brute force over the same candidates ---------------- */
+
+typedef struct
+{
+  const holent_bcft_workspace *w;
+  double hlen;
+  int code[HOLENT_BCFT_RUNNER_MMAX];    /* partner, -1 left, -2 right  */
+  int cmin[HOLENT_BCFT_RUNNER_MMAX];    /* the minimiser               */
+  int cbest[HOLENT_BCFT_RUNNER_MMAX];
+  size_t stack[HOLENT_BCFT_RUNNER_MMAX];
+  double best;
+  int found;
+} runner_ctx;
+
+/* Every configuration of the DP (run_dp): pairs without crossings, brane
+   singles outside every pair, the left ones before the right ones; the
+   horizon where the face after the last left single (parity) is in the
+   homology region.  */
+static void
+runner_walk (runner_ctx *c, size_t i, int phase, size_t depth, size_t nl,
+             double cost)
+{
+  const holent_bcft_workspace *w = c->w;
+  size_t m = w->m;
+  if (!(cost < INFINITY))
+    return;
+  if (i == m)
+    {
+      if (depth)
+        return;
+      double v = cost + ((w->c0 ^ (int) (nl & 1)) ? c->hlen : 0.0);
+      if (!(v < c->best) || memcmp (c->code, c->cmin, m * sizeof (int)) == 0)
+        return;
+      c->best = v;
+      c->found = 1;
+      memcpy (c->cbest, c->code, m * sizeof (int));
+      return;
+    }
+  if (depth == 0 && phase == 0)
+    {
+      c->code[i] = -1;
+      runner_walk (c, i + 1, 0, 0, nl + 1, cost + w->lc[i]);
+    }
+  if (depth == 0)
+    {
+      c->code[i] = -2;
+      runner_walk (c, i + 1, 1, 0, nl, cost + w->rc[i]);
+    }
+  if (depth > 0 && (i - c->stack[depth - 1]) % 2 == 1)
+    {
+      size_t j = c->stack[depth - 1];
+      c->code[i] = (int) j;
+      c->code[j] = (int) i;
+      runner_walk (c, i + 1, phase, depth - 1, nl,
+                   cost + w->C[j * w->M + i]);
+      c->stack[depth - 1] = j;
+    }
+  if (m - i > depth + 1)
+    {
+      c->stack[depth] = i;
+      runner_walk (c, i + 1, phase, depth + 1, nl, cost);
+    }
+}
+
+int
+holent_bcft_runner_up (holent_bcft_workspace *w, const holent_bcft_bg *bg,
+                       holent_bcft_result *res)
+{
+  if (w == NULL || bg == NULL || res == NULL || res->pts != w->pts)
+    return HOLENT_EINVAL;
+  size_t m = w->m;
+  if (m > HOLENT_BCFT_RUNNER_MMAX)
+    return HOLENT_ETOOBIG;
+  runner_ctx c;
+  memset (&c, 0, sizeof c);
+  c.w = w;
+  /* an unbounded horizon (half line) is no candidate */
+  c.hlen = bg->btz ? bg->S_H * 6.0 / bg->c : 0.0;
+  c.best = INFINITY;
+  for (size_t q = 0; q < res->npairs; q++)
+    {
+      c.cmin[res->pairs[2 * q]] = (int) res->pairs[2 * q + 1];
+      c.cmin[res->pairs[2 * q + 1]] = (int) res->pairs[2 * q];
+    }
+  for (size_t q = 0; q < res->nbrane; q++)
+    c.cmin[res->brane[q]] = res->brane_end[q] ? -2 : -1;
+  runner_walk (&c, 0, 0, 0, 0, 0.0);
+  if (!c.found)
+    return HOLENT_EDOM;   /* a single candidate */
+  size_t np = 0, nb = 0, nl = 0;
+  for (size_t i = 0; i < m; i++)
+    if (c.cbest[i] < 0)
+      {
+        w->brane[nb] = i;
+        w->bend[nb] = c.cbest[i] == -2;
+        nl += c.cbest[i] == -1;
+        (void) brane_len (bg, w->pts[i], w->bend[nb], w->bx + nb, w->bz + nb);
+        nb++;
+      }
+    else if ((size_t) c.cbest[i] > i)
+      {
+        w->pairs[2 * np] = i;
+        w->pairs[2 * np + 1] = (size_t) c.cbest[i];
+        np++;
+      }
+  int hor = c.hlen > 0.0 && (w->c0 ^ (int) (nl & 1));
+  res->horizon = hor;
+  res->length = hor ? c.best - c.hlen : c.best;
+  res->S = bg->c / 6.0 * res->length + (hor ? bg->S_H : 0.0);
+  res->npairs = np;
+  res->nbrane = nb;
+  return HOLENT_SUCCESS;
+}
+
 /* ---- Page curve ---------------------------------------------------- */
 
 /* Cost of one bridge geodesic per side at time t: half the length of

@@ -227,6 +227,19 @@ int holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
                          holent_bcft_result *res, holent_err *err,
                          const holent_poll *poll);
 
+/* Largest number of endpoints for the runner-up (brute force).  */
+#define HOLENT_BCFT_RUNNER_MMAX ((size_t) 16)
+
+/* The runner-up of the last holent_bcft_entropy on w, whose minimiser is
+ * *res: the least configuration among the same candidates (pairs, brane
+ * endings, the horizon as homology asks) that differs from it, written
+ * over *res (S, length, horizon, pairs, brane endings and landing points;
+ * the pointers into w stay).  HOLENT_EDOM when there is no other
+ * candidate, HOLENT_ETOOBIG above RUNNER_MMAX endpoints, HOLENT_EINVAL
+ * unless *res comes from w.  */
+int holent_bcft_runner_up (holent_bcft_workspace *w, const holent_bcft_bg *bg,
+                           holent_bcft_result *res);
+
 /* ---- Page curve of a radiation region in the TFD -------------------- */
 
 typedef struct

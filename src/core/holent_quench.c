@@ -153,7 +153,7 @@ time_sc (const holent_quench_bg *q, double t, double sc[2])
 
 static int quench_len (const holent_quench_bg *q, double l, double t,
                        const double sc[2], double eta0, double *len,
-                       double *eta);
+                       double *eta, double *xh);
 
 int
 holent_quench_length (const holent_quench_bg *q, double l, double t,
@@ -163,14 +163,33 @@ holent_quench_length (const holent_quench_bg *q, double l, double t,
   if (q == NULL || len == NULL || isnan (l) || !isfinite (t))
     return HOLENT_EINVAL;
   time_sc (q, t, sc);
-  return quench_len (q, l, t, sc, -1.0, len, eta);
+  return quench_len (q, l, t, sc, -1.0, len, eta, NULL);
+}
+
+int
+holent_quench_crossing (const holent_quench_bg *q, double l, double t,
+                        double *eta, double *xc, double *rc)
+{
+  double sc[2], len, e, xh = 0.0;
+  if (q == NULL || eta == NULL || xc == NULL || rc == NULL || isnan (l)
+      || !isfinite (t))
+    return HOLENT_EINVAL;
+  time_sc (q, t, sc);
+  int st = quench_len (q, l, t, sc, -1.0, &len, &e, &xh);
+  if (st)
+    return st;
+  *eta = e;
+  *xc = e > 0.0 ? xh : 0.0;
+  /* the vacuum chord: y = x r (line) or r sin x (circle) = sinh(eta) */
+  *rc = e > 0.0 ? sinh (e) / (q->vac.circle ? sin (xh) : xh) : 0.0;
+  return HOLENT_SUCCESS;
 }
 
 /* eta0 > 0: the crossing's eta at a nearby time, where the line's
    Newton iteration starts.  */
 static int
 quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
-            double eta0, double *len, double *eta)
+            double eta0, double *len, double *eta, double *xh)
 {
   double e = 0.0;
   int circle = q->vac.circle;
@@ -200,6 +219,9 @@ quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
          E <= 1/2, so E = 3 S/(8 C lam) is above the root.  */
       double hi = fmax (M_LN2, log (8.0 * c.C * c.lam / (3.0 * c.S)));
       st = line_root (&c, hi, eta0, &e);
+      /* sinh(R (l/2 - x)) = S e^-eta, R = 2 pi/beta */
+      if (!st && xh)
+        *xh = 0.5 * l - asinh (c.S * exp (-e)) * q->beta / (2.0 * M_PI);
     }
   else
     {
@@ -212,7 +234,11 @@ quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
       double top = M_PI * l / L, E;
       c.gap = M_PI_2 - top;
       if (c.gap <= 1e-300)
-        E = (c.C - 1.0) / (c.R * c.S);
+        {
+          E = (c.C - 1.0) / (c.R * c.S);
+          if (xh)
+            *xh = M_PI_2;
+        }
       else
         {
           /* G(d = top) = C - cosh(lam) < 0; halve d until G > 0 (G -> C -
@@ -230,6 +256,8 @@ quench_len (const holent_quench_bg *q, double l, double t, const double sc[2],
           if (st)
             return st;
           E = sinh (c.R * d) / (c.S * sin (c.gap + d));
+          if (xh)
+            *xh = top - d;
         }
       /* Small black holes (L/beta < 1) can leave no crossing with
          e^-eta <= 1: not covered.  */
@@ -308,7 +336,7 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
 {
   const q_ctx *c = vctx;
   if (c->ch == NULL)
-    return quench_len (c->q, arc, c->t, c->sc, -1.0, len, NULL);
+    return quench_len (c->q, arc, c->t, c->sc, -1.0, len, NULL, NULL);
   q_chord *h = c->ch + i * c->K + ((j + c->N - i - 1) % c->N) / 2;
   int st;
   if (h->arc != arc)
@@ -316,7 +344,7 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
       h->arc = arc;
       h->eta = -1.0;
       h->vac = h->bh = NAN;
-      st = quench_len (c->q, arc, -1.0, c->sc, -1.0, &h->vac, NULL);
+      st = quench_len (c->q, arc, -1.0, c->sc, -1.0, &h->vac, NULL, NULL);
       if (st == HOLENT_SUCCESS)
         st = holent_geo_arc_length (&c->q->bh, c->q->vac.circle
                                     && arc > 0.5 * c->q->vac.L
@@ -340,7 +368,7 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
       return HOLENT_SUCCESS;
     }
   double e;
-  st = quench_len (c->q, arc, c->t, c->sc, h->eta, len, &e);
+  st = quench_len (c->q, arc, c->t, c->sc, h->eta, len, &e, NULL);
   h->eta = st == HOLENT_SUCCESS ? e : -1.0;
   return st;
 }

@@ -60,6 +60,14 @@ int holent_quench_make (holent_quench_bg *q, int circle, double L,
 int holent_quench_length (const holent_quench_bg *q, double l, double t,
                           double *len, double *eta);
 
+/* Where the geodesic of holent_quench_length crosses the shell v = 0:
+ * at the bulk points (v = 0, r = *rc, xm -+ *xc), xm the interval's
+ * centre, *xc in bulk units (boundary units on a line, an angle on a
+ * circle, for the shorter arc), with *eta as there; *xc = *rc = 0 when it
+ * does not cross (*eta 0 or -1).  Statuses as holent_quench_length.  */
+int holent_quench_crossing (const holent_quench_bg *q, double l, double t,
+                            double *eta, double *xc, double *rc);
+
 /* The same for the boundary points x1, x2 (their distance; on a circle
    modulo L, the shorter arc): HOLENT_ECOINCIDE when they coincide.  */
 int holent_quench_points_length (const holent_quench_bg *q, double x1,

@@ -8,6 +8,7 @@
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_odeiv2.h>
 #include "holent_surface.h"
+#include "holent_hrt.h"
 
 holent_surface_workspace *
 holent_surface_workspace_alloc (void)
@@ -31,6 +32,8 @@ holent_surface_workspace_free (holent_surface_workspace *w)
 static int
 push (holent_curve *c, double x, double y, double t)
 {
+  if (c->n >= ((size_t) 1 << 22))
+    return HOLENT_ETOOBIG;   /* a runaway refinement */
   if (c->n == c->cap)
     {
       size_t cap = c->cap ? 2 * c->cap : 256;
@@ -63,7 +66,30 @@ holent_surface_picture (const holent_geo_bg *bg)
 
 /* ---- geodesics: one parametrisation per family, by proper length s ---- */
 
-enum fam { FAM_POINCARE, FAM_DISK, FAM_BTZ };
+enum fam { FAM_POINCARE, FAM_DISK, FAM_BTZ, FAM_EMB };
+
+/* Bulk charts of the time-dependent pictures (doc/surfaces.md), each with
+   its embedding in R^{2,2}, -X0^2 + X1^2 + X2^2 - X3^2 = -1:
+   EM_POINCARE  vacuum line in ingoing Eddington-Finkelstein (x, r, v),
+   EM_GLOBAL    vacuum circle (global AdS) in (phi, r, v),
+   EM_BTZ       BTZ of horizon radius R in (x or phi, r, v),
+   EM_KRUSKAL   the two-sided BTZ in Kruskal (x or phi, u, v).  */
+enum emb_chart { EM_POINCARE, EM_GLOBAL, EM_BTZ, EM_KRUSKAL };
+
+/* A piece of geodesic X(s) = ca(s) P + cb(s) Q: between two null rays
+   (KIND_FULL, s real), from a bulk point P towards the null ray Q
+   (KIND_RAY, s >= 0), between two bulk points (KIND_CHORD, 0 <= s <= d).  */
+enum emb_kind { KIND_FULL, KIND_RAY, KIND_CHORD };
+
+typedef struct
+{
+  enum emb_chart chart;
+  int circle;
+  double R;      /* horizon radius (bulk units)                       */
+  double sc;     /* boundary units per bulk unit: L/(2 pi) or 1        */
+  int tglobal;   /* EM_GLOBAL: third column the global time (+ g->tc),
+                    not v                                             */
+} emb_chart;
 
 typedef struct
 {
@@ -79,7 +105,13 @@ typedef struct
   double N;        /* disk: normalisation sqrt(-2 p.q)                    */
   double rp, rm;   /* BTZ: horizon radii                                  */
   double a1, a2, b1, b2, logN;
+  emb_chart chart; /* FAM_EMB: the chart, the piece and its vectors       */
+  enum emb_kind kind;
+  double P[4], Q[4], d;
 } geo_par;
+
+static void emb_eval (const geo_par *g, double s, double *px, double *py,
+                      double *pt, double *bd);
 
 static double
 logaddexp (double a, double b)
@@ -95,6 +127,9 @@ geo_eval (const geo_par *g, double s, double *px, double *py, double *pt,
 {
   switch (g->fam)
     {
+    case FAM_EMB:
+      emb_eval (g, s, px, py, pt, bd);
+      return;
     case FAM_POINCARE:
       *px = g->xc + g->hx * tanh (s);
       *py = g->rad / cosh (s);
@@ -196,23 +231,18 @@ geo_smax (const geo_par *g, double tol, double sign)
   return s;
 }
 
-/* Sample the curve between its boundary endpoints (xb, yb, tb); the times
-   of the interior points are multiplied by tsc (rescaled circle -> L).  */
+/* Append the samples of the piece from s0 to s1 (the point at s0 unless
+   skip), refined to tol.  */
 static int
-sample_t (holent_curve *c, const geo_par *g, double tol, double xb1,
-          double yb1, double tb1, double xb2, double yb2, double tb2,
-          double tsc)
+sample_span (holent_curve *c, const geo_par *g, double tol, double s0,
+             double s1, int skip)
 {
   const int nseg = 32;
-  double s0 = -geo_smax (g, tol, -1.0), s1 = geo_smax (g, tol, 1.0);
   double pa[3], pb[3], bd;
   refine_ctx rc = { g, tol, c };
-  size_t first = c->n + 1;
-  int st = push (c, xb1, yb1, tb1);
-  if (st)
-    return st;
+  int st;
   geo_eval (g, s0, &pa[0], &pa[1], &pa[2], &bd);
-  if ((st = push (c, pa[0], pa[1], pa[2])))
+  if (!skip && (st = push (c, pa[0], pa[1], pa[2])))
     return st;
   for (int k = 1; k <= nseg; k++)
     {
@@ -223,6 +253,21 @@ sample_t (holent_curve *c, const geo_par *g, double tol, double xb1,
         return st;
       memcpy (pa, pb, sizeof pa);
     }
+  return HOLENT_SUCCESS;
+}
+
+/* Sample the curve between its boundary endpoints (xb, yb, tb); the times
+   of the interior points are multiplied by tsc (rescaled circle -> L).  */
+static int
+sample_t (holent_curve *c, const geo_par *g, double tol, double xb1,
+          double yb1, double tb1, double xb2, double yb2, double tb2,
+          double tsc)
+{
+  double s0 = -geo_smax (g, tol, -1.0), s1 = geo_smax (g, tol, 1.0);
+  size_t first = c->n + 1;
+  int st = push (c, xb1, yb1, tb1);
+  if (st || (st = sample_span (c, g, tol, s0, s1, 0)))
+    return st;
   for (size_t i = first; i < c->n; i++)
     c->t[i] *= tsc;
   return push (c, xb2, yb2, tb2);
@@ -250,6 +295,10 @@ holent_surface_geodesic (holent_surface_workspace *w,
 {
   return holent_surface_geodesic_t (w, bg, x1, 0.0, x2, 0.0, tol);
 }
+
+static int apex_legs (holent_curve *c, const holent_geo_bg *bg, double ph1,
+                      double t1, double ph2, double t2, double ta,
+                      double sc, double tol);
 
 int
 holent_surface_geodesic_t (holent_surface_workspace *w,
@@ -306,15 +355,12 @@ holent_surface_geodesic_t (holent_surface_workspace *w,
         double h = 0.5 * bg->alpha * (ph2 - ph1), ta = bg->alpha * tau;
         if (bg->alpha < 1.0 && h >= M_PI_2)
           {
-            /* no geodesic on this side of the defect: through the apex */
-            if (t1 != t2)
-              return HOLENT_EUNSUP;
-            int st = push (&w->cur, cos (ph1), sin (ph1), t1);
-            if (!st)
-              st = push (&w->cur, 0.0, 0.0, t1);
-            if (!st)
-              st = push (&w->cur, cos (ph2), sin (ph2), t1);
-            return st;
+            /* no geodesic on this side of the defect: the two radial
+               legs through the apex, reached at the mean covering time
+               (doc/hrt_time.md); straight in the picture, sampled for
+               their times */
+            return apex_legs (&w->cur, bg, ph1, t1, ph2, t2, ta,
+                              tsc / bg->alpha, tol);
           }
         if (h >= M_PI)
           return HOLENT_EDOM;  /* the whole circle in global AdS */
@@ -402,6 +448,487 @@ holent_surface_horizon (holent_surface_workspace *w,
         return st;
     }
   return HOLENT_SUCCESS;
+}
+
+static int
+check_tol (double tol)
+{
+  if (isnan (tol))
+    return HOLENT_EINVAL;
+  return tol >= HOLENT_SURFACE_TOLMIN && tol <= 1.0 ? HOLENT_SUCCESS
+                                                     : HOLENT_EDOM;
+}
+
+/* ---- time-dependent pictures: pieces of geodesics in the embedding ---- */
+
+/* In the BTZ and Kruskal charts the first two components are stored as
+   X0 + X1, X0 - X1 (= e^{+-R x} times a positive factor): the pieces of
+   long geodesics mix e^{R x} with e^{-R x}, whose difference of cosh and
+   sinh would cancel.  */
+static int
+emb_lightcone (const emb_chart *ch)
+{
+  return ch->chart == EM_BTZ || ch->chart == EM_KRUSKAL;
+}
+
+static double
+emb_dot (const emb_chart *ch, const double *X, const double *Y)
+{
+  double a = emb_lightcone (ch) ? -0.5 * (X[0] * Y[1] + X[1] * Y[0])
+                                : -X[0] * Y[0] + X[1] * Y[1];
+  return a + X[2] * Y[2] - X[3] * Y[3];
+}
+
+/* The bulk point of the chart at (x, a, v), x in bulk units centred on the
+   piece, a = r (Eddington-Finkelstein charts) or u (Kruskal).  */
+static void
+emb_bulk (const emb_chart *ch, double x, double a, double v, double *X)
+{
+  double R = ch->R;
+  switch (ch->chart)
+    {
+    case EM_POINCARE:
+      {
+        /* t = v + z, z = 1/r */
+        double z = 1.0 / a, t = v + z, q = x * x - t * t;
+        X[0] = (z * z + 1.0 + q) / (2.0 * z);
+        X[1] = x / z;
+        X[2] = (z * z - 1.0 + q) / (2.0 * z);
+        X[3] = t / z;
+        return;
+      }
+    case EM_GLOBAL:
+      {
+        /* global time tau = v - r_*(r), r_* = atan(r) - pi/2 */
+        double tau = v + atan2 (1.0, a), n = sqrt (1.0 + a * a);
+        X[0] = n * cos (tau);
+        X[1] = a * cos (x);
+        X[2] = a * sin (x);
+        X[3] = n * sin (tau);
+        return;
+      }
+    case EM_BTZ:
+      {
+        double ep = exp (R * v) * (a + R), em = exp (-R * v) * (a - R);
+        X[0] = a / R * exp (R * x);
+        X[1] = a / R * exp (-R * x);
+        X[2] = (ep + em) / (2.0 * R);
+        X[3] = (ep - em) / (2.0 * R);
+        return;
+      }
+    default:
+      {
+        double w = 1.0 + a * v, rho = (1.0 - a * v) / w;
+        X[0] = rho * exp (R * x);
+        X[1] = rho * exp (-R * x);
+        X[2] = (v - a) / w;
+        X[3] = (v + a) / w;
+        return;
+      }
+    }
+}
+
+/* The null ray of the boundary point (x, t) (bulk units, x centred);
+   side 0 is the left boundary of the Kruskal chart (forward time).  */
+static void
+emb_ray (const emb_chart *ch, double x, double t, int side, double *X)
+{
+  double R = ch->R;
+  switch (ch->chart)
+    {
+    case EM_POINCARE:
+      X[0] = 0.5 * (1.0 + x * x - t * t);
+      X[1] = x;
+      X[2] = 0.5 * (x * x - t * t - 1.0);
+      X[3] = t;
+      return;
+    case EM_GLOBAL:
+      X[0] = cos (t);
+      X[1] = cos (x);
+      X[2] = sin (x);
+      X[3] = sin (t);
+      return;
+    default:
+      X[0] = exp (R * x);
+      X[1] = exp (-R * x);
+      X[2] = (ch->chart == EM_KRUSKAL && side == 0 ? -1.0 : 1.0) * cosh (R * t);
+      X[3] = sinh (R * t);
+      return;
+    }
+}
+
+/* Picture point of the areal radius r at the angle or coordinate x.  */
+static void
+areal_picture (int circle, double x, double r, double *px, double *py,
+               double *bd)
+{
+  if (circle)
+    {
+      double R = r / (1.0 + sqrt (1.0 + r * r));
+      if (!isfinite (R))
+        R = 1.0;
+      *px = R * cos (x);
+      *py = R * sin (x);
+      *bd = 1.0 - R;
+    }
+  else
+    {
+      *px = x;
+      *py = 1.0 / r;
+      *bd = *py;
+    }
+}
+
+static void
+emb_eval (const geo_par *g, double s, double *px, double *py, double *pt,
+          double *bd)
+{
+  double ca, cb, X[4];
+  switch (g->kind)
+    {
+    case KIND_FULL:
+      ca = exp (-s) / g->d;
+      cb = exp (s) / g->d;
+      break;
+    case KIND_RAY:
+      ca = exp (-s);
+      cb = sinh (s) / g->d;
+      break;
+    default:
+      ca = sinh (g->d - s) / sinh (g->d);
+      cb = sinh (s) / sinh (g->d);
+      break;
+    }
+  for (int k = 0; k < 4; k++)
+    X[k] = ca * g->P[k] + cb * g->Q[k];
+  const emb_chart *ch = &g->chart;
+  double R = ch->R;
+  switch (ch->chart)
+    {
+    case EM_POINCARE:
+      {
+        double z = 1.0 / (X[0] - X[2]);
+        areal_picture (0, g->xc + X[1] * z, 1.0 / z, px, py, bd);
+        *pt = X[3] * z - z;
+        return;
+      }
+    case EM_GLOBAL:
+      {
+        double r = hypot (X[1], X[2]);
+        areal_picture (1, g->xc + atan2 (X[2], X[1]), r, px, py, bd);
+        if (ch->tglobal)
+          *pt = g->tc + ch->sc * atan2 (X[3], X[0]);
+        else
+          *pt = ch->sc * (atan2 (X[3], X[0]) - atan2 (1.0, r));
+        return;
+      }
+    case EM_BTZ:
+      {
+        double r = R * sqrt (X[0] * X[1]);
+        double x = 0.5 * log (X[0] / X[1]) / R;
+        areal_picture (ch->circle, g->xc + x, r, px, py, bd);
+        *pt = ch->sc * log (R * (X[2] + X[3]) / (r + R)) / R;
+        return;
+      }
+    default:
+      {
+        double rho = sqrt (X[0] * X[1]);
+        double x = 0.5 * log (X[0] / X[1]) / R;
+        *px = X[2] / (1.0 + rho);
+        *py = X[3] / (1.0 + rho);
+        *pt = ch->sc * (g->xc + x);
+        *bd = 1.0 / (1.0 + rho);
+        return;
+      }
+    }
+}
+
+/* Prepare g for the piece of the chart ch between P and Q.  */
+static int
+emb_piece (geo_par *g, const emb_chart *ch, double xc, enum emb_kind kind,
+           const double *P, const double *Q)
+{
+  memset (g, 0, sizeof *g);
+  g->fam = FAM_EMB;
+  g->chart = *ch;
+  g->xc = xc;
+  g->kind = kind;
+  memcpy (g->P, P, sizeof g->P);
+  memcpy (g->Q, Q, sizeof g->Q);
+  double pq = -emb_dot (ch, P, Q);
+  if (kind == KIND_FULL)
+    g->d = sqrt (2.0 * pq);
+  else if (kind == KIND_RAY)
+    g->d = pq;
+  else
+    g->d = acosh (pq);
+  return isfinite (g->d) && g->d > 0.0 ? HOLENT_SUCCESS : HOLENT_ERANGE;
+}
+
+/* Reverse the points from index i0 to the end.  */
+static void
+curve_reverse (holent_curve *c, size_t i0)
+{
+  for (size_t i = i0, j = c->n - 1; i < j; i++, j--)
+    {
+      double tx = c->x[i], ty = c->y[i], tt = c->t[i];
+      c->x[i] = c->x[j];
+      c->y[i] = c->y[j];
+      c->t[i] = c->t[j];
+      c->x[j] = tx;
+      c->y[j] = ty;
+      c->t[j] = tt;
+    }
+}
+
+/* No sample may be NaN or infinite (an overflow of the chart).  */
+static int
+curve_finite (const holent_curve *c, size_t i0)
+{
+  for (size_t i = i0; i < c->n; i++)
+    if (!isfinite (c->x[i]) || !isfinite (c->y[i]) || !isfinite (c->t[i]))
+      return HOLENT_ERANGE;
+  return HOLENT_SUCCESS;
+}
+
+/* Picture point of the boundary point at bulk coordinate x and boundary
+   time t (Eddington-Finkelstein pictures).  */
+static int
+push_boundary (holent_curve *c, const emb_chart *ch, double x, double t)
+{
+  if (ch->circle)
+    return push (c, cos (x), sin (x), t);
+  return push (c, x, 0.0, t);
+}
+
+/* The whole geodesic between the boundary points xm -+ h (bulk units) at
+   bulk times t1, t2, in chart ch (sides s1, s2 in Kruskal), pushed from
+   the first to the second.  */
+static int
+emb_full (holent_curve *c, const emb_chart *ch, double xm, double h,
+          double t1, int s1, double t2, int s2, double tol)
+{
+  double P[4], Q[4];
+  geo_par g;
+  emb_ray (ch, -h, t1, s1, P);
+  emb_ray (ch, h, t2, s2, Q);
+  int st = emb_piece (&g, ch, xm, KIND_FULL, P, Q);
+  if (st)
+    return st;
+  double s0 = -geo_smax (&g, tol, -1.0), s1b = geo_smax (&g, tol, 1.0);
+  double b1[3], b2[3], bd;
+  if (ch->chart == EM_KRUSKAL)
+    {
+      /* boundary points: X_K = +-cosh(R t), T_K = sinh(R t) */
+      b1[0] = (s1 ? 1.0 : -1.0) * cosh (ch->R * t1);
+      b1[1] = sinh (ch->R * t1);
+      b1[2] = ch->sc * (xm - h);
+      b2[0] = (s2 ? 1.0 : -1.0) * cosh (ch->R * t2);
+      b2[1] = sinh (ch->R * t2);
+      b2[2] = ch->sc * (xm + h);
+    }
+  else
+    {
+      areal_picture (ch->circle, xm - h, INFINITY, &b1[0], &b1[1], &bd);
+      areal_picture (ch->circle, xm + h, INFINITY, &b2[0], &b2[1], &bd);
+      b1[2] = ch->sc * t1;
+      b2[2] = ch->sc * t2;
+    }
+  size_t i0 = c->n;
+  if ((st = push (c, b1[0], b1[1], b1[2]))
+      || (st = sample_span (c, &g, tol, s0, s1b, 0))
+      || (st = push (c, b2[0], b2[1], b2[2])))
+    return st;
+  return curve_finite (c, i0);
+}
+
+/* The sorted endpoints xa < xb of a circle region, joined over the arc
+   ARC (the forward one xb - xa or its complement): the start and the end
+   of the geodesic in the positive direction.  */
+static void
+circle_direction (const holent_geo_bg *bg, double xa, double ta, double xb,
+                  double tb, double arc, double *x1, double *t1, double *x2,
+                  double *t2)
+{
+  double d = xb - xa;
+  *x1 = xa;
+  *t1 = ta;
+  *x2 = xb;
+  *t2 = tb;
+  if (bg->circle && fabs (arc - d) > fabs (arc - (bg->L - d)))
+    {
+      *x1 = xb;
+      *t1 = tb;
+      *x2 = xa + bg->L;
+      *t2 = ta;
+    }
+}
+
+/* The path through the apex of a conical defect from the boundary angle
+   ph1 (time t1) to ph2 (t2), ta half the covering delay, sc boundary time
+   units per covering time unit.  */
+static int
+apex_legs (holent_curve *c, const holent_geo_bg *bg, double ph1, double t1,
+           double ph2, double t2, double ta, double sc, double tol)
+{
+  emb_chart ch = { EM_GLOBAL, 1, 0.0, sc, 1 };
+  double Q[4] = { 1.0, 0.0, 0.0, 0.0 };   /* the apex at covering time 0 */
+  (void) bg;
+  for (int leg = 0; leg < 2; leg++)
+    {
+      double tb = leg ? ta : -ta, ph = leg ? ph2 : ph1;
+      double P[4] = { cos (tb), 1.0, 0.0, sin (tb) };
+      geo_par g;
+      if (emb_piece (&g, &ch, ph, KIND_RAY, Q, P))
+        return HOLENT_ETIMELIKE;
+      g.tc = 0.5 * (t1 + t2);
+      size_t i0 = c->n;
+      int st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), leg);
+      if (!st)
+        st = push (c, cos (ph), sin (ph), leg ? t2 : t1);
+      if (st)
+        return st;
+      if (leg == 0)
+        curve_reverse (c, i0);
+    }
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_surface_pair (holent_surface_workspace *w, const holent_geo_bg *bg,
+                     double xa, double ta, double xb, double tb, double arc,
+                     double tol)
+{
+  double x1, t1, x2, t2;
+  if (bg == NULL || isnan (arc))
+    return HOLENT_EINVAL;
+  circle_direction (bg, xa, ta, xb, tb, arc, &x1, &t1, &x2, &t2);
+  return holent_surface_geodesic_t (w, bg, x1, t1, x2, t2, tol);
+}
+
+int
+holent_surface_quench (holent_surface_workspace *w,
+                       const holent_quench_bg *q, double xa, double xb,
+                       double t, double tol)
+{
+  if (w == NULL || q == NULL || isnan (xa) || isnan (xb) || isnan (t))
+    return HOLENT_EINVAL;
+  int st = check_tol (tol), circle = q->vac.circle;
+  if (st)
+    return st;
+  if (!isfinite (xa) || !isfinite (xb) || !isfinite (t) || !(xa < xb)
+      || (circle && !(xb - xa < q->vac.L)))
+    return HOLENT_EDOM;
+  /* the geodesic over the shorter arc (doc/quench.md) */
+  double x1 = xa, x2 = xb;
+  if (circle && xb - xa > 0.5 * q->vac.L)
+    {
+      x1 = xb;
+      x2 = xa + q->vac.L;
+    }
+  double sc = circle ? q->vac.L / (2.0 * M_PI) : 1.0;
+  double eta, xc, rc;
+  st = holent_quench_crossing (q, x2 - x1, t, &eta, &xc, &rc);
+  if (st)
+    return st;
+  emb_chart vac = { circle ? EM_GLOBAL : EM_POINCARE, circle, 0.0, sc, 0 };
+  emb_chart bh = { EM_BTZ, circle, circle ? q->vac.L / q->beta
+                                          : 2.0 * M_PI / q->beta, sc, 0 };
+  double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc, tb = t / sc;
+  holent_curve *c = &w->cur;
+  c->n = 0;
+  if (eta < 0.0 || !(xc > 0.0))   /* before the quench, or saturated */
+    return emb_full (c, eta < 0.0 ? &vac : &bh, xm, h, tb, 1, tb, 1, tol);
+  /* the BTZ leg from the first crossing back to the boundary (reversed),
+     the vacuum chord inside the shell, the BTZ leg out */
+  double C1[4], C2[4], V1[4], V2[4], B1[4], B2[4];
+  emb_bulk (&bh, -xc, rc, 0.0, C1);
+  emb_bulk (&bh, xc, rc, 0.0, C2);
+  emb_bulk (&vac, -xc, rc, 0.0, V1);
+  emb_bulk (&vac, xc, rc, 0.0, V2);
+  emb_ray (&bh, -h, tb, 1, B1);
+  emb_ray (&bh, h, tb, 1, B2);
+  geo_par g;
+  double px, py, bd;
+  if ((st = emb_piece (&g, &bh, xm, KIND_RAY, C1, B1))
+      || (st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), 0))
+      || (st = push_boundary (c, &bh, xm - h, t)))
+    return st;
+  curve_reverse (c, 0);
+  /* the crossings exactly on the shell v = 0 */
+  areal_picture (circle, xm - xc, rc, &px, &py, &bd);
+  c->x[c->n - 1] = px;
+  c->y[c->n - 1] = py;
+  c->t[c->n - 1] = 0.0;
+  if ((st = emb_piece (&g, &vac, xm, KIND_CHORD, V1, V2))
+      || (st = sample_span (c, &g, tol, 0.0, g.d, 1)))
+    return st;
+  areal_picture (circle, xm + xc, rc, &px, &py, &bd);
+  c->x[c->n - 1] = px;
+  c->y[c->n - 1] = py;
+  c->t[c->n - 1] = 0.0;
+  if ((st = emb_piece (&g, &bh, xm, KIND_RAY, C2, B2))
+      || (st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), 1))
+      || (st = push_boundary (c, &bh, xm + h, t)))
+    return st;
+  return curve_finite (c, 0);
+}
+
+int
+holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
+                    double xa, double ta, int sa, double xb, double tb,
+                    int sb, double arc, double tol)
+{
+  if (w == NULL || b == NULL || isnan (xa) || isnan (xb) || isnan (ta)
+      || isnan (tb) || (sa != 0 && sa != 1)
+      || (sb != 0 && sb != 1))
+    return HOLENT_EINVAL;
+  int st = check_tol (tol), circle = b->side.circle;
+  if (st)
+    return st;
+  if (!isfinite (xa) || !isfinite (xb) || !isfinite (ta) || !isfinite (tb))
+    return HOLENT_EDOM;
+  double L = b->side.L, sc = circle ? L / (2.0 * M_PI) : 1.0;
+  emb_chart ch = { EM_KRUSKAL, circle, circle ? L / b->beta
+                                              : 2.0 * M_PI / b->beta, sc, 0 };
+  double x1 = xa, t1 = ta, x2 = xb, t2 = tb;
+  if (sa == sb)
+    {
+      if (xa == xb)
+        return HOLENT_ECOINCIDE;
+      if (!holent_hrt_spacelike (&b->side, xa, ta, xb, tb))
+        return HOLENT_ETIMELIKE;
+      if (circle)
+        {
+          if (isnan (arc))
+            return HOLENT_EINVAL;
+          if (xb < xa)
+            return HOLENT_EDOM;
+          circle_direction (&b->side, xa, ta, xb, tb, arc, &x1, &t1, &x2,
+                            &t2);
+        }
+    }
+  else
+    {
+      if (b->alpha > 0.0)
+        return HOLENT_EUNSUP;   /* broken at the shock: not drawn */
+      if (circle)   /* the shortest winding (holent_tfd_cross_length) */
+        x2 = x1 + remainder (x2 - x1, L);
+    }
+  w->cur.n = 0;
+  double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc;
+  return emb_full (&w->cur, &ch, xm, h, t1 / sc, sa, t2 / sc, sb, tol);
+}
+
+int
+holent_surface_tfd_horizon (holent_surface_workspace *w,
+                            const holent_tfd_bg *b, double xa, double xb)
+{
+  if (w == NULL || b == NULL || isnan (xa) || isnan (xb))
+    return HOLENT_EINVAL;
+  w->cur.n = 0;
+  int st = push (&w->cur, 0.0, 0.0, xa);
+  return st ? st : push (&w->cur, 0.0, 0.0, xb);
 }
 
 /* ---- runner-up: brute force over the candidates of holent_rt ---- */
@@ -685,15 +1212,6 @@ bcft_from_picture (const holent_bcft_bg *bg, double px, double py, double *x,
   double R = hypot (px, py);
   *x = bg->z0 * atan2 (py, px);
   *z = R < 1.0 ? bg->z0 / cosh (2.0 * atanh (R)) : 0.0;
-}
-
-static int
-check_tol (double tol)
-{
-  if (isnan (tol))
-    return HOLENT_EINVAL;
-  return tol >= HOLENT_SURFACE_TOLMIN && tol <= 1.0 ? HOLENT_SUCCESS
-                                                     : HOLENT_EDOM;
 }
 
 int

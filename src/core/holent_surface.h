@@ -40,6 +40,8 @@
 #include "holent_region.h"
 #include "holent_hd_bg.h"
 #include "holent_bcft.h"
+#include "holent_quench.h"
+#include "holent_tfd.h"
 
 /* Smallest sampling tolerance (picture units; for profiles relative to
    the turning point's depth): below it the number of samples explodes.  */
@@ -76,7 +78,8 @@ int holent_surface_picture (const holent_geo_bg *bg);
  * 0 < x2 - x1 <= L; on a line x1 != x2), sampled to tol into w->cur
  * (replacing its contents), tol in [TOLMIN, 1].  With a conical defect and
  * alpha (x2 - x1) 2 pi / L >= pi the infimum is the path through the
- * apex: two radial segments.  Returns EINVAL/EDOM on bad input, ENOMEM.  */
+ * apex: two radial segments (sampled as holent_surface_geodesic_t's).
+ * Returns EINVAL/EDOM on bad input, ENOMEM.  */
 int holent_surface_geodesic (holent_surface_workspace *w,
                              const holent_geo_bg *bg, double x1, double x2,
                              double tol);
@@ -85,11 +88,59 @@ int holent_surface_geodesic (holent_surface_workspace *w,
  * interval: the geodesic leaves the constant-time slice; each point
  * carries its boundary time in w->cur.t).  HOLENT_ETIMELIKE unless the
  * endpoints are spacelike separated (in the covering space for the
- * circle bulks); HOLENT_EUNSUP for the path through a defect's apex with
- * t1 != t2.  */
+ * circle bulks).  The path through a defect's apex is the two radial
+ * legs meeting at the mean covering time (doc/hrt_time.md), straight in
+ * the picture and sampled like a geodesic for their times.  */
 int holent_surface_geodesic_t (holent_surface_workspace *w,
                                const holent_geo_bg *bg, double x1, double t1,
                                double x2, double t2, double tol);
+
+/* The geodesic of a region's pair: sorted endpoints xa < xb (boundary
+ * coordinates, times ta, tb) joined over the boundary arc ARC (on a
+ * circle the forward arc xb - xa or its complement L - (xb - xa), as the
+ * minimiser reports it; ignored on a line): holent_surface_geodesic_t
+ * from the first endpoint of that arc.  */
+int holent_surface_pair (holent_surface_workspace *w,
+                         const holent_geo_bg *bg, double xa, double ta,
+                         double xb, double tb, double arc, double tol);
+
+/* ---- time-dependent states (doc/surfaces.md) --------------------------
+ * Each piece of a surface is a piece of an AdS3 geodesic, built in the
+ * embedding space (between two null rays, from a bulk point to a null
+ * ray, or between two bulk points) and mapped to the picture.
+ *
+ * Quench (thin-shell Vaidya): the picture of the vacuum (half plane or
+ * disk, areal r as above) with the third coordinate the ingoing
+ * Eddington-Finkelstein time v (boundary units; the boundary time at the
+ * boundary, the shell at v = 0).  The geodesic of the interval xa < xb
+ * (on a circle: over the shorter arc) at boundary time t: for 0 < t <
+ * l/2 the BTZ leg from (xa, t) to the shell, the vacuum chord inside the
+ * shell (v < 0), the BTZ leg out to (xb, t), the crossings pushed exactly
+ * (v = 0) at the points of holent_quench_crossing; for t <= 0 the vacuum
+ * geodesic, for t >= l/2 the BTZ one.  */
+int holent_surface_quench (holent_surface_workspace *w,
+                           const holent_quench_bg *q, double xa, double xb,
+                           double t, double tol);
+
+/* Thermofield double: the Kruskal picture (X_K, T_K) = ((v - u)/2,
+ * (v + u)/2) of the two-sided BTZ (right boundary X_K = cosh(R t_R),
+ * T_K = sinh(R t_R); left X_K = -cosh(R t_L), T_K = sinh(R t_L), both
+ * times forward; horizons |X_K| = |T_K|; singularities T_K^2 - X_K^2 = 1)
+ * with the third coordinate x (boundary units).  The geodesic from
+ * (xa, ta) on side sa (0 left, 1 right) to (xb, tb) on side sb: within a
+ * side (on a circle xa < xb joined over ARC, as holent_surface_pair) or
+ * through the bridge (on a circle the shortest winding, as
+ * holent_tfd_cross_length).  HOLENT_EUNSUP through a shock (alpha > 0),
+ * HOLENT_ETIMELIKE for a causal pair on one side.  */
+int holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
+                        double xa, double ta, int sa, double xb, double tb,
+                        int sb, double arc, double tol);
+
+/* The bifurcation circle (u = v = 0) of the Kruskal picture as two
+   points (0, 0, xa), (0, 0, xb).  */
+int holent_surface_tfd_horizon (holent_surface_workspace *w,
+                                const holent_tfd_bg *b, double xa,
+                                double xb);
 
 /* The horizon of a background with one (r = r_+) sampled to tol into
  * w->cur: the circle of radius R_h in the disk (closed: first point

@@ -263,6 +263,8 @@ struct holent_tfd_workspace
   double *fa, *fb;     /* rows of the stand-in region              */
   size_t *pairs;
   holent_poll poll;    /* between the cuts of the annulus          */
+  double *arcs;        /* one-sided: the arcs of the minimiser      */
+  size_t nconf;        /* endpoints of the last minimiser (0: none) */
 };
 
 int
@@ -301,7 +303,8 @@ holent_tfd_workspace_alloc (size_t nmax)
   w->fa = malloc (nmax * sizeof (double));
   w->fb = malloc (nmax * sizeof (double));
   w->pairs = malloc (N * sizeof (size_t));
-  if (!w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
+  w->arcs = malloc (nmax * sizeof (double));
+  if (!w->arcs || !w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
       || !w->tp[1] || !w->x || !w->t || !w->lift || !w->idx || !w->pmin || !w->side || !w->fa
       || !w->fb || !w->pairs)
     {
@@ -331,6 +334,7 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w->fa);
   free (w->fb);
   free (w->pairs);
+  free (w->arcs);
   free (w);
 }
 
@@ -830,16 +834,24 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       }
   if (ncross)
     *ncross = 0;
+  w->nconf = 0;
   if (left->n == 0 || right->n == 0)
     {
       /* One side: the one-sided BTZ problem (times do not matter to the
          static exterior beyond their differences).  */
       int s = left->n == 0;
-      size_t bi, bj;
+      size_t bi, bj, np = 2 * w->reg[s]->n;
       int st = holent_hrt_entropy (w->rt, &b->side, w->reg[s], w->tp[s],
-                                   res, NULL, NULL, &bi, &bj);
+                                   res, w->pairs, w->arcs, &bi, &bj);
       if (st)
         *bad_side = s;
+      else   /* the minimiser, for holent_tfd_configuration */
+        for (size_t i = 0; i < np; i++, w->nconf++)
+          {
+            w->x[i] = w->reg[s]->pts[i];
+            w->t[i] = w->tp[s][i];
+            w->side[i] = s;
+          }
       return st;
     }
   if (b->side.circle)
@@ -862,6 +874,9 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
                                w->pairs, NULL);
   if (st)
     return st;
+  w->nconf = N;
+  for (size_t k = 0; k < n; k++)
+    w->arcs[k] = NAN;
   res->n_short = 0;
   for (size_t i = 0; i + 1 < N; i++)
     res->n_short += w->side[i] == w->side[i + 1]
@@ -1047,4 +1062,24 @@ holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
                                                                : 1.0,
                                 b->beta, b->side.c, E, *alpha, t_star);
   return st;
+}
+
+int
+holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
+                          const double **x, const double **t,
+                          const int **side, const size_t **pairs,
+                          const double **arcs)
+{
+  if (w == NULL || npts == NULL || x == NULL || t == NULL || side == NULL
+      || pairs == NULL || arcs == NULL)
+    return HOLENT_EINVAL;
+  if (w->nconf == 0)
+    return HOLENT_EEMPTY;
+  *npts = w->nconf;
+  *x = w->x;
+  *t = w->t;
+  *side = w->side;
+  *pairs = w->pairs;
+  *arcs = w->arcs;
+  return HOLENT_SUCCESS;
 }

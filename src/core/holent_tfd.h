@@ -154,6 +154,18 @@ int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         holent_rt_result *res, size_t *ncross,
                         int *bad_side, size_t *bad_row);
 
+/* The minimiser of the last successful holent_tfd_entropy on w (pointers
+ * into w, valid until its next use): the npts endpoints x with their
+ * times t (the shift included) and sides (0 left, 1 right), in the
+ * boundary order of the bridge slice (one side: ascending), the npts/2
+ * geodesics as index pairs into them (first < second) and, for a
+ * one-sided region, the arcs they subtend (as holent_rt_entropy; NaN
+ * through the bridge).  HOLENT_EEMPTY when there is none.  */
+int holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
+                              const double **x, const double **t,
+                              const int **side, const size_t **pairs,
+                              const double **arcs);
+
 /* The first shift dt in [0, tmax] at which the two-sided mutual
  * information I(A_L : A_R) = S(A_L) + S(A_R) - S(A_L u A_R) vanishes
  * (to a relative 1e-12 of beta); *dt = Inf when it is still positive at

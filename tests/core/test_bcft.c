@@ -278,7 +278,7 @@ typedef struct
   int c0;
   double hlen;
   int stack[16], sp, assign[16], label[16];
-  double best;
+  double best, second;   /* the two least values (ties counted twice) */
 } brute;
 
 static void
@@ -304,7 +304,12 @@ brute_rec (brute *B, int i, double acc)
       if (B->c0 ^ (nl & 1))
         acc += B->hlen;
       if (acc < B->best)
-        B->best = acc;
+        {
+          B->second = B->best;
+          B->best = acc;
+        }
+      else if (acc < B->second)
+        B->second = acc;
       return;
     }
   /* open a pair */
@@ -408,7 +413,41 @@ test_dp_brute (void)
         }
       HT_CLOSE (r.length, sum, 1e-12);
       HT_CHECK (2 * r.npairs + r.nbrane == r.m, "every endpoint used once");
+      /* the runner-up: the second least value of the brute force, where
+         an unbounded horizon (half line) is no candidate */
+      brute B2 = B;
+      if (bg->btz && bg->kind != HOLENT_BCFT_INTERVAL)
+        B2.hlen = INFINITY;
+      B2.best = B2.second = INFINITY;
+      brute_rec (&B2, 0, 0.0);
+      st = holent_bcft_runner_up (w, bg, &r);
+      if (isfinite (B2.second))
+        {
+          HT_STATUS (st, HOLENT_SUCCESS);
+          HT_CLOSE (r.S, bg->c / 6.0 * B2.second, 1e-12);
+          HT_CHECK (2 * r.npairs + r.nbrane == r.m, "runner-up uses every endpoint");
+        }
+      else
+        HT_STATUS (st, HOLENT_EDOM);
     }
+  {
+    holent_bcft_result r;
+    HT_STATUS (holent_bcft_runner_up (NULL, bgs, &r), HOLENT_EINVAL);
+    memset (&r, 0, sizeof r);
+    HT_STATUS (holent_bcft_runner_up (w, bgs, &r), HOLENT_EINVAL);
+    /* 9 intervals: 18 endpoints, beyond the brute force */
+    holent_bcft_workspace *w9 = holent_bcft_workspace_alloc (9);
+    double a9[9], b9[9];
+    holent_err e9;
+    for (int k = 0; k < 9; k++)
+      {
+        a9[k] = 1.0 + k;
+        b9[k] = 1.5 + k;
+      }
+    HT_STATUS (holent_bcft_entropy (w9, bgs, 9, a9, b9, &r, &e9, NULL), HOLENT_SUCCESS);
+    HT_STATUS (holent_bcft_runner_up (w9, bgs, &r), HOLENT_ETOOBIG);
+    holent_bcft_workspace_free (w9);
+  }
   /* errors */
   holent_bcft_result r;
   holent_err err;

@@ -78,6 +78,79 @@ main (void)
   HT_STATUS (holent_surface_profile (w, &hb, 1, NAN, 1e-6), HOLENT_EINVAL);
   HT_STATUS (holent_surface_profile (NULL, &hb, 1, 1, 1e-6), HOLENT_EINVAL);
 
+  /* time-dependent states: error paths */
+  holent_quench_bg q, qc;
+  holent_tfd_bg tf, tc, ts;
+  HT_STATUS (holent_quench_init (&q, 0, 0, 1e-6, 1, 1), 0);
+  HT_STATUS (holent_quench_init (&qc, 1, 2 * M_PI, 1e-6, 1, 1), 0);
+  HT_STATUS (holent_tfd_init (&tf, 0, 0, 1e-6, 2, 1, 0), 0);
+  HT_STATUS (holent_tfd_init (&tc, 1, 2 * M_PI, 1e-6, 3, 1, 0), 0);
+  HT_STATUS (holent_tfd_init (&ts, 0, 0, 1e-6, 2, 1, 0.5), 0);
+  HT_STATUS (holent_surface_quench (NULL, &q, 0, 1, 0.2, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_quench (w, &q, NAN, 1, 0.2, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_quench (w, &q, 1, 0, 0.2, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_quench (w, &q, 0, 1, INFINITY, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_quench (w, &q, 0, 1, 0.2, 0), HOLENT_EDOM);
+  HT_STATUS (holent_surface_quench (w, &qc, 0, 7, 0.2, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_tfd (NULL, &tf, 0, 0, 0, 1, 0, 1, NAN, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_tfd (w, &tf, 0, 0, 2, 1, 0, 1, NAN, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_tfd (w, &tf, 0, 0, 1, 0, 0.5, 1, NAN, 1e-3), HOLENT_ECOINCIDE);
+  HT_STATUS (holent_surface_tfd (w, &tf, 0, 0, 1, 1, 2, 1, NAN, 1e-3), HOLENT_ETIMELIKE);
+  HT_STATUS (holent_surface_tfd (w, &tf, 0, INFINITY, 1, 1, 0, 1, NAN, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_tfd (w, &tc, 0, 0, 1, 1, 0, 1, NAN, 1e-3), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_tfd (w, &tc, 2, 0, 1, 1, 0, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_tfd (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 1e-3), HOLENT_EUNSUP);
+  HT_STATUS (holent_surface_tfd_horizon (NULL, &tc, 0, 1), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_pair (w, NULL, 0, 0, 1, 0, 1, 1e-3), HOLENT_EINVAL);
+  double eta, xc, rc;
+  HT_STATUS (holent_quench_crossing (NULL, 1, 0.2, &eta, &xc, &rc), HOLENT_EINVAL);
+  HT_STATUS (holent_quench_crossing (&q, 1, NAN, &eta, &xc, &rc), HOLENT_EINVAL);
+  HT_STATUS (holent_quench_crossing (&q, -1, 0.2, &eta, &xc, &rc), HOLENT_EDOM);
+
+  /* the quench crossing lies on the vacuum chord: y = x r = sinh(eta),
+     and on the BTZ leg from the boundary: sinh(R (l/2 - x)) = S e^-eta
+     (doc/quench.md), for 0 < t < l/2 */
+  HT_STATUS (holent_quench_crossing (&q, 2, 0.5, &eta, &xc, &rc), 0);
+  HT_CHECK (eta > 0 && xc > 0 && xc < 1, "crossing %g %g", eta, xc);
+  HT_CLOSE (xc * rc, sinh (eta), 1e-12);
+  HT_CLOSE (sinh (2 * M_PI * (1 - xc)), sinh (M_PI) * exp (-eta), 1e-10);
+  HT_STATUS (holent_quench_crossing (&q, 2, 1.5, &eta, &xc, &rc), 0);
+  HT_CHECK (eta == 0 && xc == 0, "saturated");
+
+  /* the two-sided geodesic at t = 0, dx = 0 is the straight bridge
+     T_K = 0 from X_K = -1 to 1 (Kruskal, common practice) */
+  HT_STATUS (holent_surface_tfd (w, &tf, 0.5, 0, 0, 0.5, 0, 1, NAN, 1e-4), 0);
+  HT_CLOSE (w->cur.x[0], -1, 1e-15);
+  HT_CLOSE (w->cur.x[w->cur.n - 1], 1, 1e-15);
+  worst = 0;
+  for (size_t i = 0; i < w->cur.n; i++)
+    {
+      double e = fabs (w->cur.y[i]) + fabs (w->cur.t[i] - 0.5);
+      worst = e > worst ? e : worst;
+    }
+  HT_CHECK (worst < 1e-14, "bridge off by %g", worst);
+  HT_STATUS (holent_surface_tfd_horizon (w, &tc, 0, 2 * M_PI), 0);
+  {
+    holent_tfd_workspace *tw = holent_tfd_workspace_alloc (2);
+    size_t np;
+    const double *x, *t, *arcs;
+    const int *side;
+    const size_t *pairs;
+    HT_STATUS (holent_tfd_configuration (NULL, &np, &x, &t, &side, &pairs, &arcs), HOLENT_EINVAL);
+    HT_STATUS (holent_tfd_configuration (tw, &np, &x, &t, &side, &pairs, &arcs), HOLENT_EEMPTY);
+    /* a bridge pair: [0, 1] on both sides at t = 0 (Hartman and
+       Maldacena 2013: connected at early times for l large; here l = 3,
+       beta = 2) */
+    double a[1] = { 0 }, b[1] = { 3 }, z[1] = { 0 };
+    holent_tfd_side sd = { 1, a, b, z, z };
+    holent_rt_result res;
+    HT_STATUS (holent_tfd_entropy (tw, &tf, &sd, &sd, 0, &res, NULL, NULL, NULL), 0);
+    HT_STATUS (holent_tfd_configuration (tw, &np, &x, &t, &side, &pairs, &arcs), 0);
+    HT_CHECK (np == 4 && side[pairs[0]] != side[pairs[1]], "bridge pairs");
+    holent_tfd_workspace_free (tw);
+  }
+  HT_CHECK (w->cur.n == 2, "horizon points");
+
   holent_surface_workspace_free (w);
   holent_surface_workspace_free (NULL);
   return HT_DONE ();
