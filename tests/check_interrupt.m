@@ -187,13 +187,15 @@
 %! est = ready(1:3);
 %! printf ("  Ctrl-C latency %.3f %.3f %.3f s (calls of about %.1f %.1f %.1f s: %d lengths, %d pairs, %d root finds)\n",
 %!         lat, ready);
-%! assert (all (est > 3), "the vectorised calls are too short to test an interrupt: %g %g %g s", est);
+%! ## the interval kernel is capped at 1e8 lengths (memory): on an idle
+%! ## machine that is about 3 s, still well past the interrupt at 1 s
+%! assert (all (est > 1.8), "the vectorised calls are too short to test an interrupt: %g %g %g s", est);
 %! assert (numel (lat), 3, out);
 %! assert (all (lat < 3), out);
 %! ## each call ran until its interrupt (it did not fail at once) and stopped
 %! back = cellfun (@str2double, regexp (out, 'BACK ([\d.]+)', "tokens"));
 %! assert (numel (back), 3, out);
-%! assert (all (back > 0.9 & back < est), out);
+%! assert (all (back > 0.9 & back < est - 0.5), out);
 %! again = number_after (out, "AGAIN");
 %! assert (again(1:4), [42 0 0 0]);
 %! v = again(5:end);

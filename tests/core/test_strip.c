@@ -356,6 +356,9 @@ test_series (void)
     HT_STATUS (holent_strip_entropy (&bg, w, 1, N, l, S, NULL, NULL, NULL, &bad, NULL), HOLENT_EINTR);
     HT_CHECK (calls == 2, "calls %d", calls);
   }
+  holent_strip_workspace_free (w);
+}
+
 /* d = 2 (AdS3): an interval.  Vacuum: the semicircle z^2 + x^2 = z*^2
    has the area 2 int_eps^z* z* dz/(z sqrt(z*^2 - z^2)) = 2 acosh(z* / eps)
    above the cutoff (derived here), fin = (2/4G) log(l).  Planar BTZ
