@@ -121,6 +121,7 @@ endfunction
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
+%!error id=holent:unsupported rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5), struct ("left", [0 1], "right", [0 1]))
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")
 %!error <tol must lie> rt_surface (ads3_background ("vacuum", "line"), [0 1], "tol", 0)
 %!error <overlap> rt_surface (ads3_background ("vacuum", "line"), [0 2; 1 3])

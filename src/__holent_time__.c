@@ -686,9 +686,7 @@ alloc_ws (gw_state *g, size_t nmax)
   g->te = malloc (nmax * sizeof (double));
   if (!g->reg || !g->rt || !g->tw || !g->tp || !g->ts || !g->te)
     fail (g, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, "out of memory");
-  /* optional: without it a quench scan is only slower */
-  if (nmax <= HOLENT_QUENCH_SCAN_NMAX)
-    g->qs = holent_quench_scan_alloc (nmax);
+
   /* the DP over many timed intervals runs long: Ctrl-C */
   const holent_poll *poll = holent_gw_poll (g->fn);
   holent_rt_set_poll (g->rt, poll);
@@ -806,6 +804,10 @@ do_entropy (const char *fn, int nlhs, int nrhs, mxArray *plhs[],
         holent_gw_string (mxGetCell (names, k), fn, "NAMES", nm, sizeof nm);
     }
   alloc_ws (&g, nmax);
+  /* a quench at several times keeps its chords (optional: without the
+     memory the scan is only slower) */
+  if (b.kind == BG_QUENCH && nt > 1 && nmax <= HOLENT_QUENCH_SCAN_NMAX)
+    g.qs = holent_quench_scan_alloc (nmax);
   plhs[0] = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *nc = mxCreateDoubleMatrix (nreg, nt, mxREAL);
   mxArray *hz = mxCreateDoubleMatrix (nreg, nt, mxREAL);
@@ -883,8 +885,8 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
     {
       int st = holent_tfd_configuration (g.tw, &np, &x, &tp, &side, &pairs,
                                          &arcs);
-      if (st == HOLENT_EEMPTY)  /* the annulus keeps no configuration */
-        fail (&g, HOLENT_EUNSUP, "A", HOLENT_NOINDEX, "the surfaces of a "
+      if (st == HOLENT_EUNSUP)
+        fail (&g, st, "A", HOLENT_NOINDEX, "the surfaces of a "
                "region on both sides of a thermofield double on a circle "
                "are not available (its entropy is: rt_entropy)");
       if (st)

@@ -338,6 +338,9 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
   if (c->ch == NULL)
     return quench_len (c->q, arc, c->t, c->sc, -1.0, len, NULL, NULL);
   q_chord *h = c->ch + i * c->K + ((j + c->N - i - 1) % c->N) / 2;
+  /* on a circle the shorter arc (quench_len does the same) */
+  double l = c->q->vac.circle && arc > 0.5 * c->q->vac.L
+             ? c->q->vac.L - arc : arc;
   int st;
   if (h->arc != arc)
     {
@@ -346,17 +349,13 @@ q_cost (void *vctx, size_t i, size_t j, double arc, double *len)
       h->vac = h->bh = NAN;
       st = quench_len (c->q, arc, -1.0, c->sc, -1.0, &h->vac, NULL, NULL);
       if (st == HOLENT_SUCCESS)
-        st = holent_geo_arc_length (&c->q->bh, c->q->vac.circle
-                                    && arc > 0.5 * c->q->vac.L
-                                    ? c->q->vac.L - arc : arc, &h->bh);
+        st = holent_geo_arc_length (&c->q->bh, l, &h->bh);
       if (st)
         {
           h->arc = NAN;
           return st;
         }
     }
-  double l = c->q->vac.circle && arc > 0.5 * c->q->vac.L
-             ? c->q->vac.L - arc : arc;
   if (c->t <= 0.0)
     {
       *len = h->vac;

@@ -265,6 +265,7 @@ struct holent_tfd_workspace
   holent_poll poll;    /* between the cuts of the annulus          */
   double *arcs;        /* one-sided: the arcs of the minimiser      */
   size_t nconf;        /* endpoints of the last minimiser (0: none) */
+  int annulus;         /* the last minimiser was the circle's annulus */
 };
 
 int
@@ -835,6 +836,7 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
   if (ncross)
     *ncross = 0;
   w->nconf = 0;
+  w->annulus = 0;
   if (left->n == 0 || right->n == 0)
     {
       /* One side: the one-sided BTZ problem (times do not matter to the
@@ -855,7 +857,10 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       return st;
     }
   if (b->side.circle)
-    return annulus_entropy (w, b, res, ncross, corr, bad_side);
+    {
+      w->annulus = 1;  /* no configuration kept (holent_tfd_configuration) */
+      return annulus_entropy (w, b, res, ncross, corr, bad_side);
+    }
 
   /* The line: bridge order, right ascending, then left descending.  */
   size_t N = 0;
@@ -1073,6 +1078,8 @@ holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
   if (w == NULL || npts == NULL || x == NULL || t == NULL || side == NULL
       || pairs == NULL || arcs == NULL)
     return HOLENT_EINVAL;
+  if (w->annulus)
+    return HOLENT_EUNSUP;
   if (w->nconf == 0)
     return HOLENT_EEMPTY;
   *npts = w->nconf;

@@ -160,7 +160,9 @@ int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
  * boundary order of the bridge slice (one side: ascending), the npts/2
  * geodesics as index pairs into them (first < second) and, for a
  * one-sided region, the arcs they subtend (as holent_rt_entropy; NaN
- * through the bridge).  HOLENT_EEMPTY when there is none.  */
+ * through the bridge).  HOLENT_EEMPTY when there is none,
+ * HOLENT_EUNSUP after a two-sided region on a circle (the annulus keeps
+ * no configuration).  */
 int holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
                               const double **x, const double **t,
                               const int **side, const size_t **pairs,
