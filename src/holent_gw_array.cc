@@ -17,6 +17,11 @@
 #include <octave/oct.h>
 #include <octave/mxarray.h>
 
+// Octave's C MEX API (mexproto.h cannot be included beside mxarray.h)
+extern "C" int mexCallMATLAB (int, mxArray **, int, mxArray **, const char *);
+extern "C" mxArray *mxCreateNumericArray (mwSize, const mwSize *, mxClassID,
+                                          mxComplexity);
+
 #include "holent_gw_array.h"
 
 extern "C" mxArray *
@@ -24,6 +29,10 @@ holent_gw_result_like (const mxArray *a)
 {
   mwSize nd = a->get_number_of_dimensions ();
   const mwSize *d = a->get_dimensions ();
+  // Small results: a registered plain mxArray, whose copy on return costs
+  // less than the call below (the fixed cost of a scalar call counts).
+  if (a->get_number_of_elements () <= 4096)
+    return mxCreateNumericArray (nd, d, mxDOUBLE_CLASS, mxREAL);
   dim_vector dv = dim_vector::alloc (nd < 2 ? 2 : nd);
   dv(0) = dv(1) = 1;
   for (mwSize k = 0; k < nd; k++)
@@ -33,5 +42,15 @@ holent_gw_result_like (const mxArray *a)
   double *p = std::allocator<double> ().allocate (dv.safe_numel ());
   NDArray x (Array<double> (p, dv));
   // The gateways use the separate-complex API (mxGetPr): not interleaved.
-  return new mxArray (false, octave_value (x));
+  // An mxArray made with new is unknown to the MEX call's bookkeeping, so
+  // it would outlive the call and keep the block: a leak of every result.
+  // mxDuplicateArray would register a copy.  Octave's identity "double"
+  // called through mexCallMATLAB returns a registered mxArray that shares
+  // the value (a reference, no copy of the data); the MEX call frees it
+  // once Octave holds the value.
+  mxArray *w = new mxArray (false, octave_value (x));
+  mxArray *r = NULL;
+  mexCallMATLAB (1, &r, 1, &w, "double");
+  delete w;
+  return r;
 }
