@@ -50,7 +50,15 @@ holent_gw_result_like (const mxArray *a)
   // once Octave holds the value.
   mxArray *w = new mxArray (false, octave_value (x));
   mxArray *r = NULL;
-  mexCallMATLAB (1, &r, 1, &w, "double");
+  try
+    {
+      mexCallMATLAB (1, &r, 1, &w, "double");
+    }
+  catch (...)   // e.g. a pending Ctrl-C: the wrapper must not leak
+    {
+      delete w;
+      throw;
+    }
   delete w;
   return r;
 }
