@@ -197,6 +197,14 @@ function h = plot_rt_surface (varargin)
   ## the time of curves that leave the constant-time slice: markers on the
   ## curve coloured by its third column (t, or v on a quench), a colour bar
   tc = cellfun (@(c) columns (c) > 2 && max (c(:,3)) > min (c(:,3)), s.curves);
+  if (strcmp (s.picture, "kruskal") && ! isempty (s.curves))
+    ## the regions: their endpoints sit on the boundaries X^2 - T^2 = 1
+    ## (the direction along them is not drawn), marked where curves start
+    P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
+    P = P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :);
+    h.regions = plot (hax, P(:,1), P(:,2), "o", "color", pal.region,
+                      "markerfacecolor", pal.region, "markersize", 8);
+  endif
   if (any (tc) && ! strcmp (s.picture, "kruskal"))
     P = cell2mat (cellfun (@(c) c(unique (round (linspace (1, rows (c), 41))), :),
                            s.curves(tc)(:), "uniformoutput", false));
@@ -307,6 +315,12 @@ endfunction
 %!   ## one boundary to the other
 %!   x = get (h.surface(1), "xdata");
 %!   assert (sort (sign (x([1 end]))), [-1 1]);
+%!   ## the four region endpoints marked on the boundaries X^2 - T^2 = 1,
+%!   ## at boundary time t: T_K = sinh (2 pi t/beta) (the Kruskal map)
+%!   X = get (h.regions, "xdata");  T = get (h.regions, "ydata");
+%!   assert (numel (X), 4);
+%!   assert (T, repmat (sinh (2 * pi * 0.2 / 2), 1, 4), 1e-12);
+%!   assert (abs (X), repmat (cosh (2 * pi * 0.2 / 2), 1, 4), 1e-12);
 %!   clf (f);
 %!   q = ads3_background ("quench", "line", "beta", 1);
 %!   h = plot_rt_surface (q, [0 2], "t", 0.5);

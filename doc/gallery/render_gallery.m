@@ -61,6 +61,19 @@ function files = render_gallery (outdir)
     plot_rt_surface (ads3_background ("bcft", "interval", "length", 3, "tension", 0.4),
                      [0.3 1.2; 1.9 2.8]);
     files{end+1} = save_ (f, outdir, "bcft_interval_disk.png");
+    ## 9. a quench: the HRT geodesic refracted at the infalling shell
+    clf (f);
+    plot_rt_surface (ads3_background ("quench", "line", "beta", 1), [0 3], "t", 0.9);
+    files{end+1} = save_ (f, outdir, "quench_hrt.png");
+    ## 10. a boosted interval on the vacuum line: the geodesic leaves the slice
+    clf (f);
+    plot_rt_surface (ads3_background ("vacuum", "line"), [0 2 0 1.2; 3 4.5 0.4 0]);
+    files{end+1} = save_ (f, outdir, "boosted_intervals.png");
+    ## 11. the thermofield double: geodesics through the Einstein-Rosen bridge
+    clf (f);
+    plot_rt_surface (ads3_background ("tfd", "line", "beta", 2),
+                     struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+    files{end+1} = save_ (f, outdir, "tfd_bridge.png");
   unwind_protect_cleanup
     close (f);
     warning (ws);
