@@ -9,8 +9,8 @@
 #include <gsl/gsl_math.h>
 #include <gsl/gsl_linalg.h>
 #include <gsl/gsl_multifit.h>
-#include <gsl/gsl_roots.h>
 #include <gsl/gsl_min.h>
+#include "holent_root.h"
 #include "holent_hd_bg.h"
 
 #define ROOT_ITMAX 200
@@ -461,30 +461,8 @@ end_slope (size_t n, const double *z, const double *g)
 static int
 brent_root (const holent_hd_bg *bg, double lo, double hi, double *root)
 {
-  gsl_function F = { tab_f, (void *) bg };
-  gsl_root_fsolver *s = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
-  if (s == NULL)
-    return HOLENT_ENOMEM;
-  int st = gsl_root_fsolver_set (s, &F, lo, hi);
-  for (int it = 0; st == GSL_SUCCESS; it++)
-    {
-      if (it >= ROOT_ITMAX)
-        {
-          st = GSL_EMAXITER;
-          break;
-        }
-      if ((st = gsl_root_fsolver_iterate (s)))
-        break;
-      st = gsl_root_test_interval (gsl_root_fsolver_x_lower (s),
-                                   gsl_root_fsolver_x_upper (s), 0, 1e-15);
-      if (st == GSL_SUCCESS)
-        break;
-      if (st == GSL_CONTINUE)
-        st = GSL_SUCCESS;
-    }
-  *root = gsl_root_fsolver_root (s);
-  gsl_root_fsolver_free (s);
-  return st ? HOLENT_ENOCONV : HOLENT_SUCCESS;
+  return holent_root_brent (tab_f, (void *) bg, lo, hi, 0.0, 1e-15,
+                            ROOT_ITMAX, root);
 }
 
 /* least f on [lo, hi] where f' changes sign from - to + */

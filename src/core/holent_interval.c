@@ -6,7 +6,7 @@
 #include <math.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
-#include <gsl/gsl_roots.h>
+#include "holent_root.h"
 #include "holent_interval.h"
 #include "holent_vmath.h"
 
@@ -159,32 +159,11 @@ holent_interval_plateau (const holent_geo_bg *bg, double *m_star)
       *m_star = hi;
       return HOLENT_SUCCESS;
     }
-  gsl_function F = { plateau_gap, (void *) bg };
-  gsl_root_fsolver *rs = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
-  if (rs == NULL)
-    return HOLENT_ENOMEM;
-  int st = gsl_root_fsolver_set (rs, &F, lo, hi);
-  for (int it = 0; st == GSL_SUCCESS; it++)
-    {
-      if (it >= 200)
-        {
-          st = GSL_EMAXITER;
-          break;
-        }
-      if ((st = gsl_root_fsolver_iterate (rs)))
-        break;
-      st = gsl_root_test_interval (gsl_root_fsolver_x_lower (rs),
-                                   gsl_root_fsolver_x_upper (rs), 0,
-                                   4.0 * DBL_EPSILON);
-      if (st == GSL_SUCCESS)
-        break;
-      if (st == GSL_CONTINUE)
-        st = GSL_SUCCESS;
-    }
-  double m = gsl_root_fsolver_root (rs);
-  gsl_root_fsolver_free (rs);
+  double m;
+  int st = holent_root_brent (plateau_gap, (void *) bg, lo, hi, 0.0,
+                              4.0 * DBL_EPSILON, 200, &m);
   if (st)
-    return HOLENT_ENOCONV;
+    return st;
   *m_star = m;
   return HOLENT_SUCCESS;
 }

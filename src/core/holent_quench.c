@@ -7,7 +7,7 @@
 #include <stdlib.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_math.h>
-#include <gsl/gsl_roots.h>
+#include "holent_root.h"
 #include "holent_quench.h"
 
 int
@@ -119,27 +119,7 @@ static int
 brent (double (*f) (double, void *), void *p, double lo, double hi,
        double *x)
 {
-  gsl_function F = { f, p };
-  gsl_root_fsolver *s = gsl_root_fsolver_alloc (gsl_root_fsolver_brent);
-  if (s == NULL)
-    return HOLENT_ENOMEM;
-  int st = gsl_root_fsolver_set (s, &F, lo, hi);
-  for (int it = 0; st == GSL_SUCCESS && it < 200; it++)
-    {
-      st = gsl_root_fsolver_iterate (s);
-      if (st)
-        break;
-      st = gsl_root_test_interval (gsl_root_fsolver_x_lower (s),
-                                   gsl_root_fsolver_x_upper (s), 1e-15,
-                                   4e-16);
-      if (st == GSL_SUCCESS)
-        break;
-      if (st == GSL_CONTINUE)
-        st = GSL_SUCCESS;
-    }
-  *x = gsl_root_fsolver_root (s);
-  gsl_root_fsolver_free (s);
-  return st == GSL_SUCCESS ? HOLENT_SUCCESS : HOLENT_ENOCONV;
+  return holent_root_brent (f, p, lo, hi, 1e-15, 4e-16, 200, x);
 }
 
 /* sinh and cosh of 2 pi t/beta: once per time in a region scan.  */
