@@ -12,7 +12,7 @@
  *  - on a circle S(A) = S(A^c) without a horizon (pure state, and thermal
  *    AdS at leading order), |S(A) - S(A^c)| <= S_BH with one (Araki-Lieb
  *    for the thermal state purified by the other side; common practice).
- * fuzz-core: holent_region holent_rt holent_interval holent_geo holent_vmath holent_status
+ * fuzz-core: holent_region holent_rt holent_interval holent_root holent_geo holent_vmath holent_status
  * fuzz-runs: 3000 (make check)
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <float.h>

@@ -14,7 +14,7 @@
  *  - a strip of width well inside the reach gets a finite entropy that
  *    agrees with the analytic black brane of the same zh (common
  *    practice: the same metric), and its turning point lies below zh.
- * fuzz-core: holent_hd_bg holent_strip holent_hd_size holent_status
+ * fuzz-core: holent_hd_bg holent_root holent_strip holent_hd_size holent_status
  * fuzz-runs: 200 (make check)
  * SPDX-License-Identifier: GPL-3.0-or-later  */
 #include <float.h>
