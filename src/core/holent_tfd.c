@@ -706,7 +706,9 @@ conf_sides (holent_tfd_workspace *w, const int f[2], int horizon)
 static void
 conf_sort (holent_tfd_workspace *w, size_t m)
 {
-  for (size_t k = 1; k < m; k++)   /* insertion: m is small, runs once */
+  /* insertion, once per minimisation: O(m^2) at worst, nothing beside
+     the O(N^3) minimiser */
+  for (size_t k = 1; k < m; k++)
     {
       size_t a = w->cpairs[2 * k], b = w->cpairs[2 * k + 1], q = k;
       double arc = w->carcs[k];
