@@ -39,7 +39,10 @@
 ## markers along them (@code{time}, with a colour bar); the
 ## thermofield double in its Kruskal diagram (X_K, T_K), with the two
 ## boundaries, the horizons (dotted, in @code{horizon}) and the
-## singularities (in @code{defect}).
+## singularities (in @code{defect}); on a circle a region on both sides
+## shows the geodesics through the bridge at the minimiser's winding and
+## those within each side, and the horizon circle, when it is part of
+## the surface, as a marker at the bifurcation point X_K = T_K = 0.
 ##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
@@ -191,7 +194,13 @@ function h = plot_rt_surface (varargin)
   endfor
   if (! isempty (s.horizon_curve))
     c = s.horizon_curve;
-    h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
+    if (strcmp (s.picture, "kruskal"))
+      ## the horizon circle u = v = 0 projects to the origin: a marker
+      h.surface(end+1) = plot (hax, c(:,1), c(:,2), "o", "color", pal.surface,
+                               "markerfacecolor", pal.surface, "markersize", 9);
+    else
+      h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
+    endif
   endif
   __holent_fig_props__ (fn, h.surface, props);
   ## the time of curves that leave the constant-time slice: markers on the
@@ -333,6 +342,45 @@ endfunction
 %!   assert (get (h.axes, "ydir"), "reverse");
 %! unwind_protect_cleanup
 %!   close (f);
+%! end_unwind_protect
+
+%!demo
+%! ## Both sides of a thermofield double on a circle: two geodesics through
+%! ## the bridge (one spanning more than half the circle) at t = 0.1.
+%! figure ("visible", "off");
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 5);
+%! h = plot_rt_surface (bg, struct ("left", [0 1], "right", [0 4]), "t", 0.1);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_tfd_circle_surface_demo.png"));
+
+%!test
+%! ## Two-sided regions on a circle drawn and rendered headless: the
+%! ## geodesics of rt_surface's minimiser, and the horizon as a marker.
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! png = [tempname(), ".png"];
+%! unwind_protect
+%!   bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 5);
+%!   h = plot_rt_surface (bg, struct ("left", [0 1], "right", [0 4]), "t", 0.1);
+%!   assert (numel (h.surface), 2);
+%!   for k = 1:2
+%!     assert (get (h.surface(k), "xdata")(:), h.surf.curves{k}(:,1));
+%!     assert (get (h.surface(k), "ydata")(:), h.surf.curves{k}(:,2));
+%!   endfor
+%!   print (f, "-dpng", png);
+%!   assert (stat (png).size > 0);
+%!   clf (f);
+%!   bg = ads3_background ("tfd", "circle", "beta", 2, "circumference", 1);
+%!   A = struct ("left", [0 0.45; 0.5 0.95], "right", [0 0.1]);
+%!   h = plot_rt_surface (bg, A, "t", 0.75);
+%!   assert (h.surf.horizon);
+%!   assert (numel (h.surface), rows (h.surf.pairs) + 1);
+%!   assert (get (h.surface(end), "marker"), "o");
+%!   print (f, "-dpng", png);
+%! unwind_protect_cleanup
+%!   close (f);
+%!   if (exist (png, "file"))
+%!     delete (png);
+%!   endif
 %! end_unwind_protect
 
 %!error <Invalid call> plot_rt_surface (1)

@@ -46,9 +46,13 @@
 ## (boundaries X_K = +-cosh(R t), T_K = sinh(R t), R = 2 pi/beta on a
 ## line, L/beta on a circle; horizons |X_K| = |T_K|), the horizon as the
 ## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  No
-## runner-up on this path.  Regions on both sides of a circle are not
-## supported (as in @code{rt_entropy}); geodesics through a shock are not
-## drawn (@code{holent:unsupported}).
+## runner-up on this path.  On a circle a region on both sides gives the
+## minimiser over the annulus (@file{doc/tfd_shock.md}): geodesics within
+## each side (over the arc in @code{arcs}), geodesics through the bridge
+## at the winding of the minimiser (@code{windings}: the right point's
+## image x_R + w L, the curve's x running over the lifted separation), and
+## the horizon circle when the Z2 homology asks for it.  Geodesics through
+## a shock are not drawn (@code{holent:unsupported}).
 ##
 ## @var{surf} (a struct array of the size of the cell) has fields
 ## @table @code
@@ -70,6 +74,10 @@
 ## @item times, sides
 ## the time of each endpoint and its side (0 left, 1 right; 1 without a
 ## thermofield double).
+## @item windings
+## per geodesic, the winding w of a geodesic through the bridge of a
+## thermofield double on a circle (it joins x_L to x_R + w L); 0 for the
+## others.
 ## @item columns
 ## the names of the curves' columns.
 ## @end table
@@ -118,10 +126,33 @@ endfunction
 %! assert (c([1 end], :), [0 0 0; 2 0 1], 1e-14);
 %! assert (s.times', [0 1]);
 
+%!test
+%! ## Both sides of a circle (the annulus of the two-sided BTZ, Banados,
+%! ## Henneaux, Teitelboim and Zanelli 1993, PRD 48, 1506): A_L = [0, 1],
+%! ## A_R = [0, 4], L = 5, beta = 1 at t = 0 are joined through the bridge,
+%! ## 0 to 0 and 1 to 4: that bridge spans 3 > L/2 (winding 0; the shorter
+%! ## image, -2, would cross the first bridge), each from X_K = -1 to 1.
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 5);
+%! s = rt_surface (bg, struct ("left", [0 1], "right", [0 4]));
+%! assert (s.picture, "kruskal");
+%! assert (s.pairs, [1 4; 2 3]);
+%! assert ([s.endpoints, s.sides], [0 1; 4 1; 1 0; 0 0]);
+%! assert (s.windings, [0; 0]);
+%! c = s.curves{2};
+%! assert (c([1 end], :), [1 0 4; -1 0 1], 1e-12);
+%! ## late (t = 3), A_L = A_R = [0, 4]: no bridge, one geodesic per side
+%! ## over the complement [4, 5] and no horizon (both faces of the hole
+%! ## in A; the state is pure: S(A) = S(A^c), common practice)
+%! s = rt_surface (bg, struct ("left", [0 4], "right", [0 4]), "t", 3);
+%! assert (s.sides(s.pairs(:,1)), s.sides(s.pairs(:,2)));
+%! assert (s.arcs, [1; 1], 1e-12);
+%! assert (! s.horizon);
+%! assert (s.S, rt_entropy (bg, struct ("left", [4 5], "right", [4 5]), "t", 3), 1e-12);
+
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
-%!error id=holent:unsupported rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5), struct ("left", [0 1], "right", [0 1]))
+%!error id=holent:unsupported rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5, "shock_alpha", 0.1), struct ("left", [0 1], "right", [0 1]))
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")
 %!error <tol must lie> rt_surface (ads3_background ("vacuum", "line"), [0 1], "tol", 0)
 %!error <overlap> rt_surface (ads3_background ("vacuum", "line"), [0 2; 1 3])

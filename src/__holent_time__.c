@@ -846,9 +846,11 @@ curve3 (const holent_curve *c)
   return a;
 }
 
-/* [C, PTS, TP, SIDE, PAIRS, ARCS, S, HOR, HC, PICTURE] =
+/* [C, PTS, TP, SIDE, PAIRS, ARCS, S, HOR, HC, PICTURE, WIND] =
    ("surface", FN, BG, A, T, TOL): the minimiser of the one region A at
-   shift/time T and its geodesics sampled to TOL (holent_surface).  */
+   shift/time T and its geodesics sampled to TOL (holent_surface); WIND
+   the winding of each geodesic through the bridge of a thermofield
+   double on a circle (else 0).  */
 static void
 do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
 {
@@ -881,16 +883,20 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
   const double *x, *tp, *arcs = g.arcs;
   const size_t *pairs = g.pairs;
   const int *side = NULL;
+  const long *wind = NULL;
   if (b.kind == BG_TFD)
     {
-      int st = holent_tfd_configuration (g.tw, &np, &x, &tp, &side, &pairs,
-                                         &arcs);
-      if (st == HOLENT_EUNSUP)
-        fail (&g, st, "A", HOLENT_NOINDEX, "the surfaces of a "
-               "region on both sides of a thermofield double on a circle "
-               "are not available (its entropy is: rt_entropy)");
+      holent_tfd_config cf;
+      int st = holent_tfd_minimiser (g.tw, &cf);
       if (st)
         fail (&g, st, "A", HOLENT_NOINDEX, "%s", holent_strerror (st));
+      np = cf.npts;
+      x = cf.x;
+      tp = cf.t;
+      side = cf.side;
+      pairs = cf.pairs;
+      arcs = cf.arcs;
+      wind = cf.winding;
     }
   else
     {
@@ -908,8 +914,17 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
       size_t i = pairs[2 * k], j = pairs[2 * k + 1];
       int st;
       if (b.kind == BG_TFD)
-        st = holent_surface_tfd (g.sw, &b.tfd, x[i], tp[i], side[i], x[j],
-                                 tp[j], side[j], arcs[k], tol);
+        {
+          if (side[i] == side[j] && x[j] < x[i])   /* sorted within a side */
+            {
+              size_t q = i;
+              i = j;
+              j = q;
+            }
+          st = holent_surface_tfd_winding (g.sw, &b.tfd, x[i], tp[i],
+                                           side[i], x[j], tp[j], side[j],
+                                           arcs[k], wind[k], tol);
+        }
       else if (b.kind == BG_QUENCH)
         st = holent_surface_quench (g.sw, &b.quench, x[i], x[j], t, tol);
       else
@@ -938,6 +953,7 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
   mxArray *SD = mxCreateDoubleMatrix (np, 1, mxREAL);
   mxArray *PR = mxCreateDoubleMatrix (m, 2, mxREAL);
   mxArray *AR = mxCreateDoubleMatrix (m, 1, mxREAL);
+  mxArray *WD = mxCreateDoubleMatrix (m, 1, mxREAL);
   for (size_t i = 0; i < np; i++)
     {
       mxGetPr (P)[i] = x[i];
@@ -949,6 +965,7 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
       mxGetPr (PR)[k] = (double) pairs[2 * k] + 1;
       mxGetPr (PR)[k + m] = (double) pairs[2 * k + 1] + 1;
       mxGetPr (AR)[k] = arcs[k];
+      mxGetPr (WD)[k] = wind ? (double) wind[k] : 0.0;
     }
   int circle = b.kind == BG_TFD ? b.tfd.side.circle : b.geo.circle;
   release (&g);
@@ -963,6 +980,10 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
   plhs[8] = hc;
   plhs[9] = mxCreateString (b.kind == BG_TFD ? "kruskal"
                             : circle ? "disk" : "half_plane");
+  if (nlhs > 10)
+    plhs[10] = WD;
+  else
+    mxDestroyArray (WD);
 }
 
 /* ---- single intervals ---- */
@@ -1303,7 +1324,7 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   else if (strcmp (mode, "surface") == 0)
     {
-      holent_gw_nargs (fn, nlhs, 10, nrhs, 6, 6);
+      holent_gw_nargs (fn, nlhs, 11, nrhs, 6, 6);
       do_surface (fn, nlhs, plhs, prhs);
     }
   else if (strcmp (mode, "interval") == 0)

@@ -27,7 +27,7 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
                  "horizon", {}, "endpoints", {}, "intervals", {},
                  "horizon_curve", {}, "horizon_depth", {}, "defect", {},
                  "brane", {}, "brane_curves", {}, "times", {}, "sides", {},
-                 "columns", {});
+                 "windings", {}, "columns", {});
   if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, A))
     ## endpoint times, a thermofield double or a quench: the core's
     ## minimiser and its geodesics in the picture of the state
@@ -100,11 +100,12 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
 endfunction
 
 ## The fields of a constant-time configuration: times 0, the right side,
-## the names of the curves' columns.
+## no windings, the names of the curves' columns.
 function s = static_fields (s)
   for k = 1:numel (s)
     s(k).times = zeros (size (s(k).endpoints));
     s(k).sides = ones (size (s(k).endpoints));
+    s(k).windings = zeros (rows (s(k).pairs), 1);
     s(k).columns = merge (strcmp (s(k).picture, "disk"), {"X", "Y", "t"},
                           {"x", "z", "t"});
   endfor
@@ -120,7 +121,7 @@ function s = timed_surface (fn, bg, A, t, tol)
     endfor
   endif
   [s.curves, s.endpoints, s.times, s.sides, s.pairs, s.arcs, s.S, s.horizon, ...
-   s.horizon_curve, s.picture] = __holent_time__ ("surface", fn, bg, A, t, tol);
+   s.horizon_curve, s.picture, s.windings] = __holent_time__ ("surface", fn, bg, A, t, tol);
   quench = strcmp (bg.state, "quench");
   switch (s.picture)
     case "kruskal"

@@ -874,10 +874,12 @@ holent_surface_quench (holent_surface_workspace *w,
   return curve_finite (c, 0);
 }
 
-int
-holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
-                    double xa, double ta, int sa, double xb, double tb,
-                    int sb, double arc, double tol)
+/* holent_surface_tfd (shortest: the shortest winding through the
+   bridge) and holent_surface_tfd_winding.  */
+static int
+tfd_curve (holent_surface_workspace *w, const holent_tfd_bg *b, double xa,
+           double ta, int sa, double xb, double tb, int sb, double arc,
+           int shortest, long winding, double tol)
 {
   if (w == NULL || b == NULL || isnan (xa) || isnan (xb) || isnan (ta)
       || isnan (tb) || (sa != 0 && sa != 1)
@@ -912,12 +914,33 @@ holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
     {
       if (b->alpha > 0.0)
         return HOLENT_EUNSUP;   /* broken at the shock: not drawn */
-      if (circle)   /* the shortest winding (holent_tfd_cross_length) */
+      if (circle && shortest)   /* as holent_tfd_cross_length */
         x2 = x1 + remainder (x2 - x1, L);
+      else   /* the image of the second point: xR - xL + winding L */
+        x2 += (sb ? 1.0 : -1.0) * (double) winding * L;
     }
+  if ((winding != 0 && (sa == sb || !circle)) || !isfinite (x2))
+    return HOLENT_EDOM;
   w->cur.n = 0;
   double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc;
   return emb_full (&w->cur, &ch, xm, h, t1 / sc, sa, t2 / sc, sb, tol);
+}
+
+int
+holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
+                    double xa, double ta, int sa, double xb, double tb,
+                    int sb, double arc, double tol)
+{
+  return tfd_curve (w, b, xa, ta, sa, xb, tb, sb, arc, 1, 0, tol);
+}
+
+int
+holent_surface_tfd_winding (holent_surface_workspace *w,
+                            const holent_tfd_bg *b, double xa, double ta,
+                            int sa, double xb, double tb, int sb,
+                            double arc, long winding, double tol)
+{
+  return tfd_curve (w, b, xa, ta, sa, xb, tb, sb, arc, 0, winding, tol);
 }
 
 int

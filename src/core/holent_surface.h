@@ -136,6 +136,17 @@ int holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
                         double xa, double ta, int sa, double xb, double tb,
                         int sb, double arc, double tol);
 
+/* The same with the winding of a geodesic through the bridge given (the
+ * minimiser's, holent_tfd_minimiser): on a circle it joins the left point
+ * to the image of the right one at lifted separation xR - xL + winding L
+ * (doc/tfd_shock.md, section 1).  HOLENT_EDOM for a nonzero winding
+ * within a side or on the line.  */
+int holent_surface_tfd_winding (holent_surface_workspace *w,
+                                const holent_tfd_bg *b, double xa,
+                                double ta, int sa, double xb, double tb,
+                                int sb, double arc, long winding,
+                                double tol);
+
 /* The bifurcation circle (u = v = 0) of the Kruskal picture as two
    points (0, 0, xa), (0, 0, xb).  */
 int holent_surface_tfd_horizon (holent_surface_workspace *w,

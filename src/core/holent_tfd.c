@@ -264,8 +264,19 @@ struct holent_tfd_workspace
   size_t *pairs;
   holent_poll poll;    /* between the cuts of the annulus          */
   double *arcs;        /* one-sided: the arcs of the minimiser      */
-  size_t nconf;        /* endpoints of the last minimiser (0: none) */
+  size_t nconf;        /* endpoints of the last minimiser           */
+  int have_conf;       /* a minimiser is kept                       */
   int annulus;         /* the last minimiser was the circle's annulus */
+  /* the annulus' minimiser (holent_tfd_minimiser): per side and face of
+     the hole (0 outside A_s, 1 inside) the one-sided pairs and arcs; the
+     configuration in the bridge order, its windings, the horizon */
+  size_t *spairs[2][2];
+  double *sarcs[2][2];
+  double *cx, *ct, *carcs;
+  int *cside;
+  size_t *cpairs;
+  long *cwind;
+  int chorizon, chside;
 };
 
 int
@@ -305,7 +316,23 @@ holent_tfd_workspace_alloc (size_t nmax)
   w->fb = malloc (nmax * sizeof (double));
   w->pairs = malloc (N * sizeof (size_t));
   w->arcs = malloc (nmax * sizeof (double));
-  if (!w->arcs || !w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
+  int fail = 0;
+  for (int s = 0; s < 2; s++)
+    for (int f = 0; f < 2; f++)
+      {
+        w->spairs[s][f] = malloc (N * sizeof (size_t));
+        w->sarcs[s][f] = malloc (nmax * sizeof (double));
+        fail |= !w->spairs[s][f] || !w->sarcs[s][f];
+      }
+  w->cx = malloc (N * sizeof (double));
+  w->ct = malloc (N * sizeof (double));
+  w->carcs = malloc (nmax * sizeof (double));
+  w->cside = malloc (N * sizeof (int));
+  w->cpairs = malloc (N * sizeof (size_t));
+  w->cwind = malloc (nmax * sizeof (long));
+  fail |= !w->cx || !w->ct || !w->carcs || !w->cside || !w->cpairs
+          || !w->cwind;
+  if (fail || !w->arcs || !w->rt || !w->reg[0] || !w->reg[1] || !w->fake || !w->tp[0]
       || !w->tp[1] || !w->x || !w->t || !w->lift || !w->idx || !w->pmin || !w->side || !w->fa
       || !w->fb || !w->pairs)
     {
@@ -336,6 +363,18 @@ holent_tfd_workspace_free (holent_tfd_workspace *w)
   free (w->fb);
   free (w->pairs);
   free (w->arcs);
+  for (int s = 0; s < 2; s++)
+    for (int f = 0; f < 2; f++)
+      {
+        free (w->spairs[s][f]);
+        free (w->sarcs[s][f]);
+      }
+  free (w->cx);
+  free (w->ct);
+  free (w->carcs);
+  free (w->cside);
+  free (w->cpairs);
+  free (w->cwind);
   free (w);
 }
 
@@ -574,7 +613,8 @@ side_sigmas (holent_tfd_workspace *w, const holent_tfd_bg *b, int s,
       holent_rt_result res;
       size_t bi, bj;
       int st = holent_hrt_entropy (w->rt, &g, h ? &comp : r, w->tp[s], &res,
-                                   NULL, NULL, &bi, &bj);
+                                   w->spairs[s][h], w->sarcs[s][h], &bi,
+                                   &bj);
       if (st)
         return st;
       sig[h] = res.length;
@@ -598,6 +638,94 @@ typedef struct
 {
   int now, late;
 } tfd_corr;
+
+/* Index of sorted endpoint i of side s in the bridge order of the
+   annulus' configuration: right ascending, then left descending.  */
+static size_t
+conf_index (const holent_tfd_workspace *w, int s, size_t i)
+{
+  const size_t nr = 2 * w->reg[1]->n, nl = 2 * w->reg[0]->n;
+  return s ? i : nr + (nl - 1 - i);
+}
+
+/* Pair k of the annulus' configuration: sorted endpoints i of side si and
+   j of side sj, the arc within a side (NaN across), the winding.  */
+static void
+conf_pair (holent_tfd_workspace *w, size_t k, int si, size_t i, int sj,
+           size_t j, double arc, long winding)
+{
+  size_t a = conf_index (w, si, i), c = conf_index (w, sj, j);
+  w->cpairs[2 * k] = a < c ? a : c;
+  w->cpairs[2 * k + 1] = a < c ? c : a;
+  w->carcs[k] = arc;
+  w->cwind[k] = winding;
+}
+
+/* The minimiser of the cut along the bridge (right i, left j) of lifted
+   separation xR - xL - m L: that bridge and the n1 pairs of w->pairs over
+   the cut's lifted points (doc/tfd_shock.md, section 3).  */
+static void
+conf_cut (holent_tfd_workspace *w, size_t i, size_t j, double m, size_t n1,
+          double Lc)
+{
+  conf_pair (w, 0, 1, i, 0, j, NAN, -(long) m);
+  for (size_t k = 0; k < n1; k++)
+    {
+      size_t p = w->pairs[2 * k], q = w->pairs[2 * k + 1];
+      if (w->side[p] == w->side[q])
+        conf_pair (w, k + 1, w->side[p], w->idx[p], w->side[q], w->idx[q],
+                   fabs ((w->x[q] + w->lift[q] * Lc)
+                         - (w->x[p] + w->lift[p] * Lc)), 0);
+      else
+        {
+          size_t l = w->side[p] == 0 ? p : q, r = p + q - l;
+          conf_pair (w, k + 1, 1, w->idx[r], 0, w->idx[l], NAN,
+                     (long) (w->lift[r] - w->lift[l]));
+        }
+    }
+  w->chorizon = 0;
+  w->chside = -1;
+}
+
+/* The minimiser without bridges: side s with the face of the hole
+   outside (f[s] = 0) or inside A_s (the complement's pairs).  */
+static void
+conf_sides (holent_tfd_workspace *w, const int f[2], int horizon)
+{
+  size_t k = 0;
+  for (int s = 0; s < 2; s++)
+    for (size_t q = 0; q < w->reg[s]->n; q++, k++)
+      conf_pair (w, k, s, w->spairs[s][f[s]][2 * q], s,
+                 w->spairs[s][f[s]][2 * q + 1], w->sarcs[s][f[s]][q], 0);
+  w->chorizon = horizon;
+  w->chside = horizon ? (f[1] ? 1 : 0) : -1;
+}
+
+/* Sort the m pairs of the annulus' configuration by first index (with
+   their arcs and windings).  */
+static void
+conf_sort (holent_tfd_workspace *w, size_t m)
+{
+  /* insertion, once per minimisation: O(m^2) at worst, nothing beside
+     the O(N^3) minimiser */
+  for (size_t k = 1; k < m; k++)
+    {
+      size_t a = w->cpairs[2 * k], b = w->cpairs[2 * k + 1], q = k;
+      double arc = w->carcs[k];
+      long wd = w->cwind[k];
+      for (; q > 0 && w->cpairs[2 * (q - 1)] > a; q--)
+        {
+          w->cpairs[2 * q] = w->cpairs[2 * (q - 1)];
+          w->cpairs[2 * q + 1] = w->cpairs[2 * (q - 1) + 1];
+          w->carcs[q] = w->carcs[q - 1];
+          w->cwind[q] = w->cwind[q - 1];
+        }
+      w->cpairs[2 * q] = a;
+      w->cpairs[2 * q + 1] = b;
+      w->carcs[q] = arc;
+      w->cwind[q] = wd;
+    }
+}
 
 /* The configurations with geodesics through the bridge: every cut
    (doc/tfd_shock.md, section 3); res and *ncross are updated where a cut
@@ -712,6 +840,7 @@ annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
                   res->horizon = 0;
                   if (ncross)
                     *ncross = 1 + count_cross (w, n1);
+                  conf_cut (w, i, j, m, n1, Lc);
                 }
             }
         }
@@ -766,6 +895,18 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
   res->m = (nr + nl) / 2;
   res->candidates = cnt[0] * cnt[1];
   res->log_candidates = lcnt[0] + lcnt[1];
+  /* the configuration's endpoints in the bridge order, and the best
+     without bridges (the cuts replace it when they beat it) */
+  for (int s = 0; s < 2; s++)
+    for (size_t i = 0; i < 2 * w->reg[s]->n; i++)
+      {
+        size_t k = conf_index (w, s, i);
+        w->cx[k] = w->reg[s]->pts[i];
+        w->ct[k] = w->tp[s][i];
+        w->cside[k] = s;
+      }
+  const int face[2] = { hbest == 1 || hbest == 3, hbest == 1 || hbest == 2 };
+  conf_sides (w, face, hbest >= 2);
   res->n_short = 0;
   for (int s = 0; s < 2; s++)
     {
@@ -775,9 +916,11 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
         res->n_short += (i + 1 < np ? r->pts[i + 1] : r->pts[0] + Lc)
                         - r->pts[i] <= 2.0 * b->side.eps;
     }
+  w->nconf = nr + nl;
   if (nr == 0 || nl == 0)
     {
       corr->now = corr->late;
+      conf_sort (w, res->m);
       return HOLENT_SUCCESS;
     }
 
@@ -791,6 +934,7 @@ annulus_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
     table_free (&T);
   if (st)
     return st;
+  conf_sort (w, res->m);
   corr->now = res->S < one;
   return HOLENT_SUCCESS;
 }
@@ -837,6 +981,9 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
     *ncross = 0;
   w->nconf = 0;
   w->annulus = 0;
+  w->have_conf = 0;
+  w->chorizon = 0;
+  w->chside = -1;
   if (left->n == 0 || right->n == 0)
     {
       /* One side: the one-sided BTZ problem (times do not matter to the
@@ -846,20 +993,30 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
       int st = holent_hrt_entropy (w->rt, &b->side, w->reg[s], w->tp[s],
                                    res, w->pairs, w->arcs, &bi, &bj);
       if (st)
-        *bad_side = s;
-      else   /* the minimiser, for holent_tfd_configuration */
-        for (size_t i = 0; i < np; i++, w->nconf++)
-          {
-            w->x[i] = w->reg[s]->pts[i];
-            w->t[i] = w->tp[s][i];
-            w->side[i] = s;
-          }
-      return st;
+        {
+          *bad_side = s;
+          return st;
+        }
+      /* the minimiser, for holent_tfd_minimiser */
+      for (size_t i = 0; i < np; i++, w->nconf++)
+        {
+          w->x[i] = w->reg[s]->pts[i];
+          w->t[i] = w->tp[s][i];
+          w->side[i] = s;
+        }
+      for (size_t k = 0; k < np / 2; k++)
+        w->cwind[k] = 0;
+      w->chorizon = res->horizon;
+      w->chside = res->horizon ? s : -1;
+      w->have_conf = 1;
+      return HOLENT_SUCCESS;
     }
   if (b->side.circle)
     {
-      w->annulus = 1;  /* no configuration kept (holent_tfd_configuration) */
-      return annulus_entropy (w, b, res, ncross, corr, bad_side);
+      w->annulus = 1;  /* its configuration is kept apart (w->cx, ...) */
+      int st = annulus_entropy (w, b, res, ncross, corr, bad_side);
+      w->have_conf = st == HOLENT_SUCCESS;
+      return st;
     }
 
   /* The line: bridge order, right ascending, then left descending.  */
@@ -880,8 +1037,12 @@ tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
   if (st)
     return st;
   w->nconf = N;
+  w->have_conf = 1;
   for (size_t k = 0; k < n; k++)
-    w->arcs[k] = NAN;
+    {
+      w->arcs[k] = NAN;
+      w->cwind[k] = 0;
+    }
   res->n_short = 0;
   for (size_t i = 0; i + 1 < N; i++)
     res->n_short += w->side[i] == w->side[i + 1]
@@ -1070,23 +1231,45 @@ holent_tfd_scrambling (holent_tfd_workspace *w, const holent_tfd_bg *b,
 }
 
 int
+holent_tfd_minimiser (const holent_tfd_workspace *w, holent_tfd_config *conf)
+{
+  if (w == NULL || conf == NULL)
+    return HOLENT_EINVAL;
+  if (!w->have_conf)
+    return HOLENT_EEMPTY;
+  const int a = w->annulus;
+  conf->npts = w->nconf;
+  conf->x = a ? w->cx : w->x;
+  conf->t = a ? w->ct : w->t;
+  conf->side = a ? w->cside : w->side;
+  conf->pairs = a ? w->cpairs : w->pairs;
+  conf->arcs = a ? w->carcs : w->arcs;
+  conf->winding = w->cwind;
+  conf->horizon = w->chorizon;
+  conf->horizon_side = w->chside;
+  return HOLENT_SUCCESS;
+}
+
+int
 holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
                           const double **x, const double **t,
                           const int **side, const size_t **pairs,
                           const double **arcs)
 {
-  if (w == NULL || npts == NULL || x == NULL || t == NULL || side == NULL
+  holent_tfd_config c;
+  if (npts == NULL || x == NULL || t == NULL || side == NULL
       || pairs == NULL || arcs == NULL)
     return HOLENT_EINVAL;
-  if (w->annulus)
-    return HOLENT_EUNSUP;
-  if (w->nconf == 0)
+  int st = holent_tfd_minimiser (w, &c);
+  if (st)
+    return st;
+  if (c.npts == 0)
     return HOLENT_EEMPTY;
-  *npts = w->nconf;
-  *x = w->x;
-  *t = w->t;
-  *side = w->side;
-  *pairs = w->pairs;
-  *arcs = w->arcs;
+  *npts = c.npts;
+  *x = c.x;
+  *t = c.t;
+  *side = c.side;
+  *pairs = c.pairs;
+  *arcs = c.arcs;
   return HOLENT_SUCCESS;
 }

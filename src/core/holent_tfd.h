@@ -155,14 +155,40 @@ int holent_tfd_entropy (holent_tfd_workspace *w, const holent_tfd_bg *b,
                         int *bad_side, size_t *bad_row);
 
 /* The minimiser of the last successful holent_tfd_entropy on w (pointers
- * into w, valid until its next use): the npts endpoints x with their
+ * into w, valid until its next use).  The npts endpoints x with their
  * times t (the shift included) and sides (0 left, 1 right), in the
- * boundary order of the bridge slice (one side: ascending), the npts/2
- * geodesics as index pairs into them (first < second) and, for a
- * one-sided region, the arcs they subtend (as holent_rt_entropy; NaN
- * through the bridge).  HOLENT_EEMPTY when there is none,
- * HOLENT_EUNSUP after a two-sided region on a circle (the annulus keeps
- * no configuration).  */
+ * boundary order of the bridge slice: right side ascending, then left
+ * side descending (one side: ascending; on a circle x in [0, L)).  The
+ * npts/2 geodesics as index pairs into them (first < second, sorted by
+ * first index); per geodesic within a side on a circle the arc it
+ * subtends (holent_rt_entropy's arcs: it runs over the arc of that
+ * length from one endpoint to the other in the positive sense), NaN
+ * through the bridge and on the two-sided line; per geodesic through the
+ * bridge its winding w, the lifted separation being xR - xL + w L (0 on
+ * the line and within a side).  horizon: 1 when the horizon circle is
+ * part of the surface, with horizon_side the side s whose A_s + gamma_s
+ * is homologous to it (a one-sided circle region: that side; on the
+ * annulus: the side whose face of the hole lies in A_s alone), -1
+ * without.  A two-sided region of two whole circles has npts = 0.  */
+typedef struct
+{
+  size_t npts;
+  const double *x, *t;
+  const int *side;
+  const size_t *pairs;
+  const double *arcs;
+  const long *winding;
+  int horizon, horizon_side;
+} holent_tfd_config;
+
+/* *conf receives the minimiser above; HOLENT_EEMPTY when there is none
+   (no successful holent_tfd_entropy on w yet).  */
+int holent_tfd_minimiser (const holent_tfd_workspace *w,
+                          holent_tfd_config *conf);
+
+/* The same as separate outputs (without the windings and the horizon's
+ * side: holent_tfd_minimiser).  HOLENT_EEMPTY when there is none or it
+ * has no endpoints.  */
 int holent_tfd_configuration (const holent_tfd_workspace *w, size_t *npts,
                               const double **x, const double **t,
                               const int **side, const size_t **pairs,

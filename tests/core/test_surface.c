@@ -101,6 +101,29 @@ main (void)
   HT_STATUS (holent_surface_tfd (w, &tc, 2, 0, 1, 1, 0, 1, 1, 1e-3), HOLENT_EDOM);
   HT_STATUS (holent_surface_tfd (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 1e-3), HOLENT_EUNSUP);
   HT_STATUS (holent_surface_tfd_horizon (NULL, &tc, 0, 1), HOLENT_EINVAL);
+  HT_STATUS (holent_surface_tfd_winding (w, &tf, 0, 0, 0, 1, 0, 1, NAN, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_tfd_winding (w, &tc, 0, 0, 1, 1, 0, 1, 1, 1, 1e-3), HOLENT_EDOM);
+  HT_STATUS (holent_surface_tfd_winding (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 0, 1e-3), HOLENT_EUNSUP);
+  HT_STATUS (holent_surface_tfd_winding (NULL, &tc, 0, 0, 0, 1, 0, 1, NAN, 0, 1e-3), HOLENT_EINVAL);
+  /* a bridge of winding w joins the left point to the image xR + w L of
+     the right one: the third column changes by xR - xL + w L, the ends
+     on the boundaries X_K = -+cosh(R t), T_K = sinh(R t) (R = L/beta in
+     the circle's bulk units) */
+  for (long wd = -2; wd <= 2; wd++)
+    for (int rl = 0; rl < 2; rl++)
+      {
+        double xl = 0.3, tl = 0.1, xr = 0.5, tr = -0.2, L = 2 * M_PI;
+        HT_STATUS (rl ? holent_surface_tfd_winding (w, &tc, xr, tr, 1, xl, tl, 0, NAN, wd, 1e-4)
+                      : holent_surface_tfd_winding (w, &tc, xl, tl, 0, xr, tr, 1, NAN, wd, 1e-4), 0);
+        size_t e = w->cur.n - 1, il = rl ? e : 0, ir = rl ? 0 : e;
+        HT_CLOSE (w->cur.t[0], rl ? xr : xl, 1e-13);   /* from the first point */
+        HT_CLOSE (w->cur.t[ir] - w->cur.t[il], xr - xl + wd * L, 1e-13);
+        HT_CLOSE (w->cur.x[il], -cosh (L / 3 * tl), 1e-13);
+        HT_CLOSE (w->cur.y[ir], sinh (L / 3 * tr), 1e-13);
+      }
+  /* the shortest winding of holent_surface_tfd: 0.5 - 5.9 + L */
+  HT_STATUS (holent_surface_tfd (w, &tc, 5.9, 0, 0, 0.5, 0, 1, NAN, 1e-4), 0);
+  HT_CLOSE (w->cur.t[w->cur.n - 1], 0.5 + 2 * M_PI, 1e-13);
   HT_STATUS (holent_surface_pair (w, NULL, 0, 0, 1, 0, 1, 1e-3), HOLENT_EINVAL);
   double eta, xc, rc;
   HT_STATUS (holent_quench_crossing (NULL, 1, 0.2, &eta, &xc, &rc), HOLENT_EINVAL);

@@ -280,6 +280,240 @@ test_annulus (void)
   holent_tfd_workspace_free (w);
 }
 
+/* Embedding distance of two boundary points (side, x, t) of the covering
+   planar BTZ, first brought by isometries to x = 0 and to symmetric
+   times (the Killing time moves right times forward and forward left
+   times back), so that the inner product does not cancel.  */
+static double
+kr_pair (double R, double eps, int s1, double x1, double t1, int s2,
+         double x2, double t2)
+{
+  double X[4], Y[4];
+  if (s1 == s2)
+    {
+      double t0 = 0.5 * (t1 + t2);
+      t1 -= t0;
+      t2 -= t0;
+    }
+  else
+    {
+      double h = 0.5 * (t1 - t2) * (s1 ? 1.0 : -1.0);   /* half of tR - tL */
+      t1 -= h * (s1 ? 1.0 : -1.0);
+      t2 -= h * (s2 ? 1.0 : -1.0);
+    }
+  kr_boundary (R, eps, s1, 0.0, t1, X);
+  kr_boundary (R, eps, s2, x2 - x1, t2, Y);
+  return kr_dist (X, Y);
+}
+
+/* Parity of the crossings of the lifted curve from (s1, a) to (s2, b)
+   with the lifts (left pL + kL, right pR + kL) of a reference path from
+   A^c on the left to A^c on the right (doc/tfd_shock.md, section 3).  */
+static int
+ref_parity (int s1, double a, int s2, double b, double pL, double pR,
+            double L)
+{
+  int n = 0;
+  for (int k = -8; k <= 8; k++)
+    {
+      if (s1 == s2)
+        {
+          double p = (s1 ? pR : pL) + k * L;
+          n += p > fmin (a, b) && p < fmax (a, b);
+        }
+      else
+        {
+          double l = s1 ? b : a, r = s1 ? a : b;
+          n += (l - pL - k * L) * (r - pR - k * L) < 0.0;
+        }
+    }
+  return n & 1;
+}
+
+/* n random disjoint intervals on a circle (rows may wrap), times small
+   enough for an achronal side; *p a point of the complement.  */
+static void
+rand_side (size_t n, double L, double *a, double *b, double *ta,
+           double *tb, double *p)
+{
+  double x[8], sep;
+  do
+    {
+      for (size_t i = 0; i < 2 * n; i++)
+        x[i] = L * rand () / (RAND_MAX + 1.0);
+      for (size_t i = 1; i < 2 * n; i++)   /* insertion sort */
+        for (size_t j = i; j > 0 && x[j - 1] > x[j]; j--)
+          {
+            double q = x[j];
+            x[j] = x[j - 1];
+            x[j - 1] = q;
+          }
+      sep = x[0] + L - x[2 * n - 1];
+      for (size_t i = 1; i < 2 * n; i++)
+        sep = fmin (sep, x[i] - x[i - 1]);
+    }
+  while (sep < 0.03 * L);
+  int comp = rand () & 1;   /* the complement's rows: one wraps */
+  for (size_t i = 0; i < n; i++)
+    {
+      size_t k = 2 * i + comp;
+      a[i] = x[k];
+      b[i] = k + 1 < 2 * n ? x[k + 1] : x[0] + L;
+      ta[i] = 0.9 * sep * (rand () / (RAND_MAX + 1.0) - 0.5);
+      tb[i] = 0.9 * sep * (rand () / (RAND_MAX + 1.0) - 0.5);
+    }
+  *p = 0.5 * (b[0] + (n > 1 ? a[1] : a[0] + L));
+}
+
+/* The annulus' minimiser (holent_tfd_minimiser) for random two-sided
+   regions with times: every endpoint used once, the sum of its pieces'
+   lengths (within a side over the recorded arc, through the bridge at
+   the recorded winding), each the embedding distance acosh(-X.Y) of the
+   covering planar BTZ (Banados, Henneaux, Teitelboim and Zanelli 1993,
+   PRD 48, 1506), plus the horizon's R L when it is used, is the minimum;
+   bridges join endpoints of one kind, and the Z2 homology holds (an
+   even number of crossings with a reference path, common practice).  */
+static void
+test_annulus_conf (void)
+{
+  holent_tfd_bg b;
+  holent_tfd_workspace *w = holent_tfd_workspace_alloc (6);
+  holent_tfd_config cf;
+  holent_rt_result res;
+  size_t nc;
+  const double eps = 1e-6, c = 3.0;
+  int nbridge = 0, nhor = 0, nwind = 0, bad = 0;
+  srand (11);
+  for (int trial = 0; trial < 300; trial++)
+    {
+      double beta = 0.5 + 2.0 * rand () / (RAND_MAX + 1.0);
+      double L = trial % 3 ? 1.0 + 6.0 * rand () / (RAND_MAX + 1.0)
+                           : 0.3 + 1.0 * rand () / (RAND_MAX + 1.0);
+      double R = 2.0 * M_PI / beta;
+      double dt = 1.2 * beta * pow (rand () / (RAND_MAX + 1.0), 2);
+      double a[2][4], bb[2][4], ta[2][4], tb[2][4], p[2];
+      size_t n[2] = { 1 + rand () % 3, 1 + rand () % 3 };
+      HT_STATUS (holent_tfd_init (&b, 1, L, eps, beta, c, 0.0),
+                 HOLENT_SUCCESS);
+      for (int s = 0; s < 2; s++)
+        rand_side (n[s], L, a[s], bb[s], ta[s], tb[s], &p[s]);
+      holent_tfd_side sl = { n[0], a[0], bb[0], ta[0], tb[0] };
+      holent_tfd_side sr = { n[1], a[1], bb[1], ta[1], tb[1] };
+      int st = holent_tfd_entropy (w, &b, &sl, &sr, dt, &res, &nc, NULL,
+                                   NULL);
+      HT_STATUS (st, HOLENT_SUCCESS);
+      HT_STATUS (holent_tfd_minimiser (w, &cf), HOLENT_SUCCESS);
+      if (st || cf.npts != 2 * (n[0] + n[1]))
+        {
+          bad++;
+          continue;
+        }
+      size_t m = cf.npts / 2, used[16] = { 0 }, ncr = 0;
+      double len = 0.0;
+      int par = cf.horizon;
+      for (size_t k = 0; k < m; k++)
+        {
+          size_t i = cf.pairs[2 * k], j = cf.pairs[2 * k + 1];
+          used[i]++;
+          used[j]++;
+          int si = cf.side[i], sj = cf.side[j];
+          double x1, x2, t1, t2;
+          if (si == sj)
+            {
+              /* over the recorded arc, from the endpoint it starts at */
+              size_t lo = cf.x[i] < cf.x[j] ? i : j, hi = i + j - lo;
+              double d = cf.x[hi] - cf.x[lo], arc = cf.arcs[k];
+              int fwd = fabs (arc - d) < fabs (arc - (L - d));
+              x1 = fwd ? cf.x[lo] : cf.x[hi];
+              t1 = fwd ? cf.t[lo] : cf.t[hi];
+              t2 = fwd ? cf.t[hi] : cf.t[lo];
+              x2 = x1 + arc;
+              bad += cf.winding[k] != 0 || !(arc > 0.0 && arc < L);
+            }
+          else
+            {
+              size_t l = si ? j : i, r = i + j - l;
+              x1 = cf.x[l];
+              t1 = cf.t[l];
+              x2 = cf.x[r] + cf.winding[k] * L;
+              t2 = cf.t[r];
+              si = 0;
+              sj = 1;
+              ncr++;
+              /* the shortest winding would reduce to [-L/2, L/2] */
+              nwind += fabs (x2 - x1) > 0.5 * L * (1.0 + 1e-9);
+              /* both ends of one kind: starts of intervals or ends */
+              int kind[2];
+              for (int q = 0; q < 2; q++)
+                {
+                  double x = q ? cf.x[r] : cf.x[l];
+                  kind[q] = 0;
+                  for (size_t u = 0; u < n[q]; u++)
+                    kind[q] |= fabs (remainder (x - a[q][u], L)) < 1e-12;
+                }
+              HT_CHECK (kind[0] == kind[1], "trial %d: bridge of two kinds",
+                        trial);
+            }
+          len += kr_pair (R, eps, si, x1, t1, sj, x2, t2);
+          par += ref_parity (si, x1, sj, x2, p[0], p[1], L);
+        }
+      for (size_t i = 0; i < cf.npts; i++)
+        bad += used[i] != 1;
+      HT_CHECK (nc == ncr, "trial %d: crossings %zu vs %zu", trial, nc, ncr);
+      HT_CHECK (cf.horizon == res.horizon
+                && (cf.horizon ? cf.horizon_side == 0
+                                 || cf.horizon_side == 1
+                               : cf.horizon_side == -1),
+                "trial %d: horizon %d side %d", trial, cf.horizon,
+                cf.horizon_side);
+      HT_CHECK (par % 2 == 0, "trial %d: odd crossings with the reference "
+                "path", trial);
+      double S = c / 6.0 * len + (cf.horizon ? c / 6.0 * R * L : 0.0);
+      HT_CHECK (fabs (S - res.S) <= 1e-9 * fabs (res.S),
+                "trial %d: pieces %.15g, minimum %.15g", trial, S, res.S);
+      nbridge += ncr > 0;
+      nhor += cf.horizon;
+    }
+  HT_CHECK (bad == 0, "%d malformed configurations", bad);
+  /* every kind occurs: bridges, non-shortest windings, the horizon */
+  HT_CHECK (nbridge > 50 && nwind > 0 && nhor > 5,
+            "bridges %d, long windings %d, horizons %d", nbridge, nwind, nhor);
+  /* two whole sides: no endpoints, no horizon */
+  double wa[1] = { 0.0 }, wb[1] = { 2.0 }, z[1] = { 0.0 };
+  HT_STATUS (holent_tfd_init (&b, 1, 2.0, eps, 1.0, c, 0.0), HOLENT_SUCCESS);
+  holent_tfd_side W = { 1, wa, wb, z, z };
+  HT_STATUS (holent_tfd_entropy (w, &b, &W, &W, 0.0, &res, &nc, NULL, NULL),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_minimiser (w, &cf), HOLENT_SUCCESS);
+  HT_CHECK (cf.npts == 0 && !cf.horizon, "whole u whole: %zu", cf.npts);
+  const double *x, *t, *arcs;
+  const int *side;
+  const size_t *pairs;
+  size_t np;
+  HT_STATUS (holent_tfd_configuration (w, &np, &x, &t, &side, &pairs, &arcs),
+             HOLENT_EEMPTY);
+  /* A_L and the whole right: the face of the right hole lies in A_R, so
+     S = S(A_L^c) one-sided: the complement's geodesic, no horizon, or
+     the geodesic of A_L with the horizon counted on the right */
+  double la[1] = { 0.2 }, lb[1] = { 1.5 };
+  holent_tfd_side I = { 1, la, lb, z, z };
+  HT_STATUS (holent_tfd_entropy (w, &b, &I, &W, 0.0, &res, &nc, NULL, NULL),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_minimiser (w, &cf), HOLENT_SUCCESS);
+  HT_CHECK (cf.npts == 2 && cf.side[0] == 0 && cf.winding[0] == 0,
+            "A_L u whole right: %zu points", cf.npts);
+  HT_CHECK (cf.horizon ? cf.horizon_side == 1 : cf.horizon_side == -1,
+            "the horizon belongs to the whole side: %d", cf.horizon_side);
+  HT_STATUS (holent_tfd_configuration (w, &np, &x, &t, &side, &pairs, &arcs),
+             HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_minimiser (NULL, &cf), HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_minimiser (w, NULL), HOLENT_EINVAL);
+  holent_tfd_workspace *w2 = holent_tfd_workspace_alloc (2);
+  HT_STATUS (holent_tfd_minimiser (w2, &cf), HOLENT_EEMPTY);
+  holent_tfd_workspace_free (w2);
+  holent_tfd_workspace_free (w);
+}
+
 static void
 test_cross (void)
 {
@@ -558,6 +792,7 @@ main (void)
   test_cross ();
   test_winding ();
   test_annulus ();
+  test_annulus_conf ();
   test_shift ();
   test_regions ();
   return HT_DONE ();
