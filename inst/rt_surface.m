@@ -47,8 +47,20 @@
 ## line, L/beta on a circle; horizons |X_K| = |T_K|), the horizon as the
 ## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  No
 ## runner-up on this path.  Regions on both sides of a circle are not
-## supported (as in @code{rt_entropy}); geodesics through a shock are not
-## drawn (@code{holent:unsupported}).
+## supported (as in @code{rt_entropy}).
+##
+## @strong{Shock wave} (@qcode{"shock_alpha"} > 0, Shenker and Stanford 2014;
+## @file{doc/tfd_shock.md}): a geodesic through the bridge crosses the
+## shock u = 0 once, where it is continued after a shift of the Kruskal v
+## by alpha.  Its curve is two pieces of BTZ geodesics separated by a row
+## of NaN (so that @code{plot} leaves the gap): from the left boundary
+## point to the crossing (u = 0, v + alpha) in the left side's coordinates
+## (X_K = T_K = (v + alpha)/2), then from (u = 0, v) in the right side's
+## coordinates to the right boundary point (in the order of the pair: the
+## right piece first when the pair starts on the right).  The crossing
+## (v, x) is the stationary point of the length, the one the entropy
+## uses; the jump along the null shock has zero length, so the two
+## pieces' lengths add up to the regulated length of @code{rt_entropy}.
 ##
 ## @var{surf} (a struct array of the size of the cell) has fields
 ## @table @code
@@ -56,7 +68,8 @@
 ## @qcode{"half_plane"} or @qcode{"disk"}.
 ## @item curves
 ## a cell row, one k x 2 (k x 3 with t) array per geodesic, in the order
-## of @code{pairs}.
+## of @code{pairs}; a geodesic through a shock has one NaN row between its
+## two pieces.
 ## @item S, pairs, arcs, horizon, endpoints, intervals
 ## the entropy of the configuration and the fields of @code{rt_entropy}'s
 ## configuration.
@@ -117,6 +130,18 @@ endfunction
 %! assert (c(:,2).^2 + (c(:,1) - 1).^2 - (c(:,3) - 0.5).^2, 0.75 * ones (rows (c), 1), 1e-12);
 %! assert (c([1 end], :), [0 0 0; 2 0 1], 1e-14);
 %! assert (s.times', [0 1]);
+
+%!test
+%! ## Through a shock (alpha = 2) at t = 0 over equal intervals: two pieces
+%! ## split by a NaN row, crossing u = 0 at X_K = T_K = -+alpha/4 (right
+%! ## coordinates v = -alpha/2, left v + alpha; the symmetric point of
+%! ## doc/tfd_shock.md, section 2).
+%! bg = ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 2);
+%! s = rt_surface (bg, struct ("left", [0 3], "right", [0 3]));
+%! c = s.curves{1};
+%! i = find (isnan (c(:,1)));
+%! assert (isscalar (i) && all (isnan (c(i,:))));
+%! assert (sort (c([i-1 i+1], 1:2)), [-0.5 -0.5; 0.5 0.5], 1e-14);
 
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
