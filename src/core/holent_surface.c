@@ -747,6 +747,54 @@ emb_full (holent_curve *c, const emb_chart *ch, double xm, double h,
   return curve_finite (c, i0);
 }
 
+/* A bridge geodesic through the shock (doc/tfd_shock.md, section 2;
+   doc/surfaces.md): the BTZ piece from the left boundary point to the
+   crossing (u = 0, v + alpha) in the left coordinates, a row of NaN (the
+   jump along the null shock, of zero length), the BTZ piece from
+   (u = 0, v) in the right coordinates to the right boundary point; the
+   crossing is holent_tfd_shock_crossing's.  (x1, t1) on side s1 and
+   (x2, t2) on the other side, boundary units (x2 already lifted on a
+   circle); pushed from the first point to the second.  */
+static int
+emb_shock (holent_curve *c, const emb_chart *ch, const holent_tfd_bg *b,
+           double x1, double t1, int s1, double x2, double t2, double tol)
+{
+  double sc = ch->sc, xL = s1 ? x2 : x1, tL = s1 ? t2 : t1;
+  double xR = s1 ? x1 : x2, tR = s1 ? t1 : t2, xc, v;
+  int st = holent_tfd_shock_crossing (b, xL, tL, xR, tR, &xc, &v);
+  if (st)
+    return st;
+  /* bulk units, x centred on the midpoint */
+  double xm = 0.5 * (x1 + x2) / sc, y = xc / sc - xm;
+  for (int side = 0; side < 2; side++)
+    {
+      double P[4], Q[4], bp[3], x = side ? xR : xL, t = side ? tR : tL;
+      geo_par g;
+      emb_bulk (ch, y, 0.0, side ? v : v + b->alpha, P);
+      emb_ray (ch, x / sc - xm, t / sc, side, Q);
+      kruskal_boundary (ch, x / sc, t / sc, side, bp);
+      size_t i0 = c->n;
+      if ((st = emb_piece (&g, ch, xm, KIND_RAY, P, Q))
+          || (st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), 0))
+          || (st = push (c, bp[0], bp[1], bp[2])))
+        return st;
+      /* the crossing exactly on u = 0: X_K = T_K = v/2 */
+      c->x[i0] = c->y[i0] = 0.5 * (side ? v : v + b->alpha);
+      c->t[i0] = xc;
+      if ((st = curve_finite (c, i0)))
+        return st;
+      if (side == 0)
+        {
+          curve_reverse (c, i0);
+          if ((st = push (c, NAN, NAN, NAN)))
+            return st;
+        }
+    }
+  if (s1)   /* from the right point to the left one */
+    curve_reverse (c, 0);
+  return HOLENT_SUCCESS;
+}
+
 /* The sorted endpoints xa < xb of a circle region, joined over the arc
    ARC (the forward one xb - xa or its complement): the start and the end
    of the geodesic in the positive direction.  */
@@ -877,54 +925,6 @@ holent_surface_quench (holent_surface_workspace *w,
       || (st = push_boundary (c, &bh, xm + h, t)))
     return st;
   return curve_finite (c, 0);
-}
-
-/* A bridge geodesic through the shock (doc/tfd_shock.md, section 2;
-   doc/surfaces.md): the BTZ piece from the left boundary point to the
-   crossing (u = 0, v + alpha) in the left coordinates, a row of NaN (the
-   jump along the null shock, of zero length), the BTZ piece from
-   (u = 0, v) in the right coordinates to the right boundary point; the
-   crossing is holent_tfd_shock_crossing's.  (x1, t1) on side s1 and
-   (x2, t2) on the other side, boundary units (x2 already lifted on a
-   circle); pushed from the first point to the second.  */
-static int
-emb_shock (holent_curve *c, const emb_chart *ch, const holent_tfd_bg *b,
-           double x1, double t1, int s1, double x2, double t2, double tol)
-{
-  double sc = ch->sc, xL = s1 ? x2 : x1, tL = s1 ? t2 : t1;
-  double xR = s1 ? x1 : x2, tR = s1 ? t1 : t2, xc, v;
-  int st = holent_tfd_shock_crossing (b, xL, tL, xR, tR, &xc, &v);
-  if (st)
-    return st;
-  /* bulk units, x centred on the midpoint */
-  double xm = 0.5 * (x1 + x2) / sc, y = xc / sc - xm;
-  for (int side = 0; side < 2; side++)
-    {
-      double P[4], Q[4], bp[3], x = side ? xR : xL, t = side ? tR : tL;
-      geo_par g;
-      emb_bulk (ch, y, 0.0, side ? v : v + b->alpha, P);
-      emb_ray (ch, x / sc - xm, t / sc, side, Q);
-      kruskal_boundary (ch, x / sc, t / sc, side, bp);
-      size_t i0 = c->n;
-      if ((st = emb_piece (&g, ch, xm, KIND_RAY, P, Q))
-          || (st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), 0))
-          || (st = push (c, bp[0], bp[1], bp[2])))
-        return st;
-      /* the crossing exactly on u = 0: X_K = T_K = v/2 */
-      c->x[i0] = c->y[i0] = 0.5 * (side ? v : v + b->alpha);
-      c->t[i0] = xc;
-      if ((st = curve_finite (c, i0)))
-        return st;
-      if (side == 0)
-        {
-          curve_reverse (c, i0);
-          if ((st = push (c, NAN, NAN, NAN)))
-            return st;
-        }
-    }
-  if (s1)   /* from the right point to the left one */
-    curve_reverse (c, 0);
-  return HOLENT_SUCCESS;
 }
 
 int
