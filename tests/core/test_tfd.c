@@ -1,7 +1,9 @@
 /* Unit tests of holent_tfd.  Independent checks: the bridge length
  * extremised numerically (GSL Brent minimisers) over the crossing point
  * on the shock, with each leg the embedding distance acosh(-X.Y) of the
- * Kruskal embedding of BTZ; the published limits of Hartman and
+ * Kruskal embedding of BTZ, and the crossing point of
+ * holent_tfd_shock_crossing stationary for that sum; the published
+ * limits of Hartman and
  * Maldacena 2013 (JHEP 05 (2013) 014: 2 log((beta/(pi eps)) cosh(2 pi
  * t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
  * log(beta/(pi eps)) + 2 log(1 + alpha/2), from memory); the shock shift
