@@ -3,9 +3,8 @@
  * on the shock, with each leg the embedding distance acosh(-X.Y) of the
  * Kruskal embedding of BTZ, and the crossing point of
  * holent_tfd_shock_crossing stationary for that sum; the published
- * limits of Hartman and
- * Maldacena 2013 (JHEP 05 (2013) 014: 2 log((beta/(pi eps)) cosh(2 pi
- * t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
+ * limits of Hartman and Maldacena 2013 (JHEP 05 (2013) 014:
+ * 2 log((beta/(pi eps)) cosh(2 pi t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
  * log(beta/(pi eps)) + 2 log(1 + alpha/2), from memory); the shock shift
  * from the exact matching of r across a null shell; M against the first
  * law with the Bekenstein-Hawking entropy of holent_geo; the region
