@@ -44,10 +44,17 @@
 ## those within each side, and the horizon circle, when it is part of
 ## the surface, as a marker at the bifurcation point X_K = T_K = 0.
 ##
+## Through a shock wave (@qcode{"shock_alpha"} > 0, @file{doc/tfd_shock.md})
+## the shock runs along the null line u = 0 (X_K = T_K, in @code{shock});
+## each piece of a bridge geodesic is drawn in its own side's Kruskal
+## coordinates (the left one above that line, the right one below), and the
+## shift by alpha along the shock between its two crossings as a dotted
+## segment with both crossings marked (@code{jump}, one per geodesic).
+##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
 ## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label},
-## @code{time};
+## @code{time}, @code{shock}, @code{jump};
 ## and @code{surf}, the configuration drawn (from @code{rt_surface}).
 ##
 ## @seealso{rt_surface, rt_entropy, plot_surface_profile, plot_phase_diagram}
@@ -84,7 +91,8 @@ function h = plot_rt_surface (varargin)
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
               "surface", [], "runner_up", [], "horizon", [], "defect", [],
-              "brane", [], "cut", [], "label", [], "time", [], "surf", s);
+              "brane", [], "cut", [], "label", [], "time", [], "shock", [],
+              "jump", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
   if (strcmp (s.picture, "kruskal"))
@@ -99,6 +107,11 @@ function h = plot_rt_surface (varargin)
                       "color", pal.horizon, "linewidth", 1.2);
     h.defect = plot (hax, [sinh(u); sinh(u)]', [cosh(u); -cosh(u)]',
                      "color", pal.defect, "linewidth", 2);
+    if (isfield (bg, "shock_alpha") && bg.shock_alpha > 0)
+      ## the shock wave runs along the null line u = 0 (X_K = T_K)
+      h.shock = plot (hax, [-1.5 1.5], [-1.5 1.5], "color", pal.shock,
+                      "linewidth", 2);
+    endif
     xlabel (hax, "X_K");  ylabel (hax, "T_K");
   elseif (disk)
     if (bcft)
@@ -203,6 +216,17 @@ function h = plot_rt_surface (varargin)
     endif
   endif
   __holent_fig_props__ (fn, h.surface, props);
+  ## through a shock a curve is two pieces split by a NaN row: the shift
+  ## along the null shock u = 0, of zero length, dotted between the two
+  ## crossings, each marked
+  for k = 1:numel (s.curves)
+    c = s.curves{k};
+    for i = find (isnan (c(:,1)))'
+      h.jump(end+1) = plot (hax, c([i-1 i+1], 1), c([i-1 i+1], 2), ":o",
+                            "color", pal.surface, "linewidth", 3, "markersize", 7,
+                            "markerfacecolor", pal.shock);
+    endfor
+  endfor
   ## the time of curves that leave the constant-time slice: markers on the
   ## curve coloured by its third column (t, or v on a quench), a colour bar
   tc = cellfun (@(c) columns (c) > 2 && max (c(:,3)) > min (c(:,3)), s.curves);
@@ -381,6 +405,49 @@ endfunction
 %!   if (exist (png, "file"))
 %!     delete (png);
 %!   endif
+%! end_unwind_protect
+
+%!demo
+%! ## The same region through a shock wave (shift alpha = 2): each bridge
+%! ## geodesic is two BTZ pieces, one on each side of the shock u = 0
+%! ## (rose), joined by the shift along it (dotted, the crossings marked).
+%! figure ("visible", "off");
+%! bg = ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 2);
+%! h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.1);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_tfd_shock_demo.png"));
+
+%!test
+%! ## a shocked thermofield double, rendered headless: the shock line
+%! ## u = 0, and per bridge geodesic one dotted jump between its two
+%! ## crossings (the samples beside the curve's NaN row), on X_K = T_K
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bg = ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 1.5);
+%!   h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.1);
+%!   assert (numel (h.surface), 2);
+%!   assert (get (h.surface(1), "xdata")(:), h.surf.curves{1}(:,1));
+%!   assert (isscalar (h.shock) && ishghandle (h.shock));
+%!   assert (numel (h.jump), 2);
+%!   for k = 1:2
+%!     c = h.surf.curves{k};
+%!     i = find (isnan (c(:,1)));
+%!     assert (get (h.jump(k), "xdata")(:), c([i-1 i+1], 1));
+%!     assert (get (h.jump(k), "ydata")(:), c([i-1 i+1], 2));
+%!     assert (get (h.jump(k), "linestyle"), ":");
+%!     assert (abs (diff (get (h.jump(k), "xdata"))), 0.75, 1e-12);   # alpha/2
+%!   endfor
+%!   png = [tempname() ".png"];
+%!   print (f, "-dpng", png);
+%!   assert (exist (png, "file"), 2);
+%!   delete (png);
+%!   ## without a shock: no shock line, no jump
+%!   clf (f);
+%!   h = plot_rt_surface (ads3_background ("tfd", "line", "beta", 2),
+%!                        struct ("left", [0 3], "right", [0 3]));
+%!   assert (isempty (h.shock) && isempty (h.jump));
+%! unwind_protect_cleanup
+%!   close (f);
 %! end_unwind_protect
 
 %!error <Invalid call> plot_rt_surface (1)

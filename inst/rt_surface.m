@@ -51,8 +51,20 @@
 ## each side (over the arc in @code{arcs}), geodesics through the bridge
 ## at the winding of the minimiser (@code{windings}: the right point's
 ## image x_R + w L, the curve's x running over the lifted separation), and
-## the horizon circle when the Z2 homology asks for it.  Geodesics through
-## a shock are not drawn (@code{holent:unsupported}).
+## the horizon circle when the Z2 homology asks for it.
+##
+## @strong{Shock wave} (@qcode{"shock_alpha"} > 0, Shenker and Stanford 2014;
+## @file{doc/tfd_shock.md}): a geodesic through the bridge crosses the
+## shock u = 0 once, where it is continued after a shift of the Kruskal v
+## by alpha.  Its curve is two pieces of BTZ geodesics separated by a row
+## of NaN (so that @code{plot} leaves the gap): from the left boundary
+## point to the crossing (u = 0, v + alpha) in the left side's coordinates
+## (X_K = T_K = (v + alpha)/2), then from (u = 0, v) in the right side's
+## coordinates to the right boundary point (in the order of the pair: the
+## right piece first when the pair starts on the right).  The crossing
+## (v, x) is the stationary point of the length, the one the entropy
+## uses; the jump along the null shock has zero length, so the two
+## pieces' lengths add up to the regulated length of @code{rt_entropy}.
 ##
 ## @var{surf} (a struct array of the size of the cell) has fields
 ## @table @code
@@ -60,7 +72,8 @@
 ## @qcode{"half_plane"} or @qcode{"disk"}.
 ## @item curves
 ## a cell row, one k x 2 (k x 3 with t) array per geodesic, in the order
-## of @code{pairs}.
+## of @code{pairs}; a geodesic through a shock has one NaN row between its
+## two pieces.
 ## @item S, pairs, arcs, horizon, endpoints, intervals
 ## the entropy of the configuration and the fields of @code{rt_entropy}'s
 ## configuration.
@@ -149,10 +162,21 @@ endfunction
 %! assert (! s.horizon);
 %! assert (s.S, rt_entropy (bg, struct ("left", [4 5], "right", [4 5]), "t", 3), 1e-12);
 
+%!test
+%! ## Through a shock (alpha = 2) at t = 0 over equal intervals: two pieces
+%! ## split by a NaN row, crossing u = 0 at X_K = T_K = -+alpha/4 (right
+%! ## coordinates v = -alpha/2, left v + alpha; the symmetric point of
+%! ## doc/tfd_shock.md, section 2).
+%! bg = ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 2);
+%! s = rt_surface (bg, struct ("left", [0 3], "right", [0 3]));
+%! c = s.curves{1};
+%! i = find (isnan (c(:,1)));
+%! assert (isscalar (i) && all (isnan (c(i,:))));
+%! assert (sort (c([i-1 i+1], 1:2)), [-0.5 -0.5; 0.5 0.5], 1e-14);
+
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
-%!error id=holent:unsupported rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5, "shock_alpha", 0.1), struct ("left", [0 1], "right", [0 1]))
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")
 %!error <tol must lie> rt_surface (ads3_background ("vacuum", "line"), [0 1], "tol", 0)
 %!error <overlap> rt_surface (ads3_background ("vacuum", "line"), [0 2; 1 3])

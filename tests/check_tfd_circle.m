@@ -281,7 +281,19 @@
 %!  q = (4 * (d(:,1).^2 - d(:,2).^2) + R^2 * (1 - uv).^2 .* d(:,3).^2) ./ (1 + uv).^2;
 %!endfunction
 
-%!## The checks of one two-sided region on a circle (no shock): returns
+%!## A curve through a shock is two pieces split by a NaN row, each in its
+%!## own side's Kruskal coordinates (doc/tfd_shock.md, section 2); the
+%!## jump along the null shock adds nothing.
+%!function len = pieces_length (P, R, eps)
+%!  i = [0; find(isnan (P(:,1))); rows(P) + 1];
+%!  len = 0;
+%!  for k = 1:numel (i) - 1
+%!    len += kruskal_length (P(i(k)+1:i(k+1)-1,:), R, eps);
+%!  endfor
+%!endfunction
+
+%!## The checks of one two-sided region on a circle (with or without a
+%!## shock): returns
 %!## whether a bridge was used, whether one with |xR - xL + w L| > L/2
 %!## (not the shortest winding), and whether the horizon was.
 %!function [nb, nw, nh] = check_annulus (bg, A, pL, pR, t)
@@ -318,7 +330,17 @@
 %!      assert (all ((2 * sd(1) - 1) * c(:,1) >= abs (c(:,2)) - 1e-12));
 %!      assert (abs (c(end,3) - c(1,3)), s.arcs(k), 1e-12);
 %!    endif
-%!    len += kruskal_length (c, R, eps);
+%!    len += pieces_length (c, R, eps);
+%!    ## through a shock: one NaN row per bridge, the crossings on u = 0
+%!    ## shifted by alpha/2 in X_K (left coordinates above, right below)
+%!    j = find (isnan (c(:,1)));
+%!    assert (numel (j), (bg.shock_alpha > 0) * (sd(1) != sd(2)));
+%!    if (! isempty (j))
+%!      assert (c(j-1,1) - c(j-1,2), 0, 1e-13 * cosh (R * tm));
+%!      assert (c(j+1,1) - c(j+1,2), 0, 1e-13 * cosh (R * tm));
+%!      assert (abs (c(j+1,1) - c(j-1,1)), bg.shock_alpha / 2, 1e-12 * cosh (R * tm));
+%!      assert (c(j-1,3), c(j+1,3), 1e-12);
+%!    endif
 %!    par += crossings (sd(o(1)), c(1,3), sd(o(2)), c(end,3), pL, pR, L);
 %!  endfor
 %!  if (s.horizon)
@@ -376,3 +398,29 @@
 %! A = struct ("left", [0 0.45; 0.5 0.95], "right", [0 0.1]);
 %! [b, w, h] = check_annulus (bg, A, 0.47, 0.5, 0.75);
 %! assert (h && ! b);
+
+%!test
+%! ## The same checks through a shock wave (alpha > 0; Shenker and Stanford
+%! ## 2014, JHEP 03, 067): each bridge curve is two pieces, in the left and
+%! ## the right side's Kruskal coordinates, integrated each with the metric
+%! ## and summed, at the minimiser's winding (also one that is not the
+%! ## shortest), against rt_entropy to 1e-8.
+%! bg = ads3_background ("tfd", "circle", "beta", 1, "circumference", 5, ...
+%!                       "cutoff", 1e-6, "shock_alpha", 0.1);
+%! [b, w] = check_annulus (bg, struct ("left", [0 1], "right", [0 4]), 2, 4.5, 0);
+%! assert (b && w);
+%! rand ("seed", 11);
+%! nb = 0;
+%! for trial = 1:6
+%!   beta = 0.5 + 2 * rand ();  L = 1 + 6 * rand ();
+%!   bg = ads3_background ("tfd", "circle", "beta", beta, "circumference", L, ...
+%!                         "cutoff", 1e-6, "c", 3, "shock_alpha", 2 * rand ());
+%!   Al = rand_side (1 + floor (2 * rand ()), L);
+%!   Ar = rand_side (1 + floor (2 * rand ()), L);
+%!   pL = (Al(1,2) + [Al(2:end,1); Al(1,1) + L](1)) / 2;
+%!   pR = (Ar(1,2) + [Ar(2:end,1); Ar(1,1) + L](1)) / 2;
+%!   sc = min (1, beta / 4 / max (abs ([Al(:,3:4)(:); Ar(:,3:4)(:)])));
+%!   Al(:,3:4) *= sc;  Ar(:,3:4) *= sc;
+%!   nb += check_annulus (bg, struct ("left", Al, "right", Ar), pL, pR, 0.2 * beta * rand () ^ 2);
+%! endfor
+%! assert (nb >= 2);

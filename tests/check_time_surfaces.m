@@ -5,7 +5,8 @@
 ## regulated length of geodesic_length / rt_entropy; endpoints and times;
 ## the quench curve continuous across the shell with the refraction law
 ## derived below from the Vaidya metric; the two-sided curve through the
-## bridge.
+## bridge, and through a shock wave (its two pieces integrated on their
+## own, the crossing against fminbnd, the unshocked limit).
 
 %!## Proper length of the polyline (samples P, k x 3) in the metric g:
 %!## ds^2 = d' G(p) d for the straight segment of each pair of samples,
@@ -209,3 +210,169 @@
 %! assert (s.horizon_curve(:, 1:2), zeros (2, 2));
 %! c = s.curves{1};
 %! assert (all (c(:,1) > abs (c(:,2)) - 1e-15));
+
+%!## ---- geodesics through a shock wave (doc/tfd_shock.md, section 2) ----
+%!## A bridge geodesic through the shock is two pieces split by a NaN row.
+%!## Each piece is integrated on its own: the cubic spline through its
+%!## samples (in their cumulative chord length) and Octave's integral of
+%!## the Kruskal line element along it, from its crossing on u = 0 to the
+%!## cutoff r = 1/eps (found with fzero); the jump along the null shock
+%!## adds nothing.
+%!function [len, pieces] = shock_length (c, R, rc)
+%!  i = find (isnan (c(:,1)));
+%!  assert (numel (i), 1);
+%!  pieces = {c(i-1:-1:1,:), c(i+1:end,:)};    # each from its crossing out
+%!  len = 0;
+%!  for k = 1:2
+%!    P = pieces{k};
+%!    tau = [0; cumsum(sqrt (sum (diff (P).^2, 2)))];
+%!    pp = spline (tau', P');
+%!    dp = ppder (pp);
+%!    ## inside the cutoff while 1 + uv >= 2 R/(rc + R)
+%!    cutf = @(s) kruskal_in (ppval (pp, s)', R, rc, true);
+%!    j = find (1 + P(:,2).^2 - P(:,1).^2 < 2 * R / (rc + R), 1);
+%!    tc = fzero (cutf, tau([j-1 j]), optimset ("TolX", 1e-15));
+%!    f = @(s) reshape (sqrt (max (0, kruskal_rows (ppval (pp, s(:)')', ppval (dp, s(:)')', R))), size (s));
+%!    len += integral (f, 0, tc, "RelTol", 1e-10, "AbsTol", 1e-12);
+%!  endfor
+%!endfunction
+
+%!## the Kruskal line element of kruskal () for rows of points and tangents
+%!function q = kruskal_rows (p, d, R)
+%!  uv = p(:,2).^2 - p(:,1).^2;
+%!  q = (4 * (d(:,1).^2 - d(:,2).^2) + R^2 * (1 - uv).^2 .* d(:,3).^2) ./ (1 + uv).^2;
+%!endfunction
+
+%!## The embedding of a picture point (X_K, T_K, x) (doc/tfd_shock.md,
+%!## section 1; x in boundary units, R x the bulk angle) and the geodesic
+%!## distance acosh(-X.Y) of R^{2,2} (Banados, Henneaux, Teitelboim and
+%!## Zanelli 1993, PRD 48, 1506).
+%!function X = kr_embed (XK, TK, x, R)
+%!  u = TK - XK;  v = TK + XK;  w = 1 + u .* v;
+%!  X = [(1 - u .* v) ./ w .* cosh(R * x), (1 - u .* v) ./ w .* sinh(R * x), (v - u) ./ w, (v + u) ./ w];
+%!endfunction
+%!function d = kr_dist (X, Y)
+%!  d = acosh (X(:,1) .* Y(:,1) - X(:,2) .* Y(:,2) - X(:,3) .* Y(:,3) + X(:,4) .* Y(:,4));
+%!endfunction
+%!## the cutoff point r = rc of the boundary point (x, t) on side s (1 right)
+%!function X = kr_cut (x, t, s, R, rc)
+%!  q = sqrt ((rc - R) / (rc + R));
+%!  if (s)
+%!    u = -exp (-R * t) * q;  v = exp (R * t) * q;
+%!  else
+%!    u = exp (R * t) * q;  v = -exp (-R * t) * q;
+%!  endif
+%!  X = kr_embed ((v - u) / 2, (v + u) / 2, x, R);
+%!endfunction
+
+%!test
+%! ## (a), (c) Line, beta = 2, shift alpha = 1.5: each piece's integrated
+%! ## Kruskal length, summed, equals the two-sided length with the shock
+%! ## of geodesic_length; at tL = tR = 0, dx = 0 it is
+%! ## 2 log(beta/(pi eps)) + 2 log(1 + alpha/2) (Shenker and Stanford 2014,
+%! ## JHEP 03, 067).  The pieces stay on their sides of the shock (left
+%! ## u >= 0, right u <= 0), the jump is alpha/2 along X_K = T_K.
+%! eps = 1e-5;  beta = 2;  R = 2 * pi / beta;  al = 1.5;
+%! tf = ads3_background ("tfd", "line", "beta", beta, "cutoff", eps, "shock_alpha", al);
+%! s = rt_surface (tf, struct ("left", [0 3], "right", [0 3]), "tol", 1e-6);
+%! assert (sort (s.sides(s.pairs), 2), [0 1; 0 1]);
+%! for k = 1:2
+%!   c = s.curves{k};
+%!   [len, pc] = shock_length (c, R, 1 / eps);
+%!   assert (len, 2 * log (beta / (pi * eps)) + 2 * log (1 + al / 2), 1e-8 * len);
+%!   a = s.pairs(k,1);
+%!   left = pc{1 + (s.sides(a) == 1)};  right = pc{2 - (s.sides(a) == 1)};
+%!   assert (all (left(:,2) - left(:,1) >= -1e-15) && all (right(:,2) - right(:,1) <= 1e-15));
+%!   assert (left(1,1) - right(1,1), al / 2, 1e-14);
+%!   assert (left(1,1:2), [al al] / 4, 1e-14);    # the symmetric crossing
+%! endfor
+%! ## times and a separation: the closed form of geodesic_length
+%! nm = {"left", "right"};  n = 0;
+%! for q = [0.15 0.4 0.3; 0.7 -0.2 -0.5; -0.3 0.5 0.9]'
+%!   A = struct ("left", [0 3 q(1) q(1)], "right", [q(3) 3+q(3) q(2) q(2)]);
+%!   s = rt_surface (tf, A, "tol", 1e-6);
+%!   for k = find (diff (s.sides(s.pairs), 1, 2))'
+%!     a = s.pairs(k,:);
+%!     len = shock_length (s.curves{k}, R, 1 / eps);
+%!     ref = geodesic_length (tf, s.endpoints(a(1)), s.endpoints(a(2)), "t1", s.times(a(1)), ...
+%!                            "t2", s.times(a(2)), "side1", nm{s.sides(a(1)) + 1}, "side2", nm{s.sides(a(2)) + 1});
+%!     assert (len, ref, 1e-8 * ref);
+%!     n++;
+%!   endfor
+%! endfor
+%! assert (n, 6);    # every pair through the bridge
+
+%!test
+%! ## (b) The crossing point against an independent extremisation: the
+%! ## sum of the two unshocked BTZ legs, from the cutoff points to
+%! ## (u = 0, v, x) on the right and (u = 0, v + alpha, x) on the left,
+%! ## each acosh(-X.Y) in R^{2,2}, maximised over v with fminbnd and its
+%! ## maximum minimised over x with fminbnd (the geodesic is stationary
+%! ## at the crossing: a maximum along the null shock, a minimum across).
+%! eps = 1e-6;  beta = 1.5;  R = 2 * pi / beta;  al = 0.8;
+%! o = optimset ("TolX", 1e-12);
+%! tf = ads3_background ("tfd", "line", "beta", beta, "cutoff", eps, "shock_alpha", al);
+%! s = rt_surface (tf, struct ("left", [0 3 0.3 0.3], "right", [0.2 3.4 -0.1 -0.1]), "tol", 1e-6);
+%! for j = 1:2
+%!   a = s.pairs(j,:);
+%!   assert (sort (s.sides(a))', [0 1]);
+%!   c = s.curves{j};
+%!   if (s.sides(a(1)) == 1)
+%!     a = fliplr (a);     # left first
+%!     c = flipud (c);
+%!   endif
+%!   xL = s.endpoints(a(1));  tL = s.times(a(1));
+%!   xR = s.endpoints(a(2));  tR = s.times(a(2));
+%!   i = find (isnan (c(:,1)));
+%!   vl = 2 * c(i-1,1);  vr = 2 * c(i+1,1);  xc = c(i+1,3);
+%!   assert (vl - vr, al, 1e-13);
+%!   assert (c(i-1,3), xc);
+%!   ## x measured from the midpoint x0 (a boost of the X0-X1 plane): no
+%!   ## cancellation between cosh and sinh in the inner products
+%!   x0 = (xL + xR) / 2;
+%!   BL = kr_cut (xL - x0, tL, 0, R, 1 / eps);  BR = kr_cut (xR - x0, tR, 1, R, 1 / eps);
+%!   legs = @(v, x) kr_dist (BL, kr_embed ((v + al) / 2, (v + al) / 2, x - x0, R)) ...
+%!                  + kr_dist (BR, kr_embed (v / 2, v / 2, x - x0, R));
+%!   ## v where both legs are spacelike (-X.Y > 1), from a coarse scan
+%!   vv = linspace (-5, 5, 1001)';
+%!   ok = vv(imag (legs (vv, xc)) == 0);
+%!   assert (ok(1) > -5 && ok(end) < 5);
+%!   vbest = @(x) fminbnd (@(v) -legs (v, x), ok(1), ok(end), o);
+%!   xn = fminbnd (@(x) legs (vbest (x), x), xc - 1, xc + 1, o);
+%!   vn = vbest (xn);
+%!   assert ([xn vn], [xc vr], 1e-6);
+%!   ## and the stationary value is the integrated length
+%!   len = shock_length (c, R, 1 / eps);
+%!   assert (legs (vn, xn), len, 1e-8 * len);
+%! endfor
+
+%!test
+%! ## (d) alpha -> 0: the two pieces lie on the unshocked geodesic, the
+%! ## plane of the two boundary null rays in R^{2,2}, and meet; the length
+%! ## is the unshocked one (geodesic_length without the shock).
+%! eps = 1e-5;  beta = 2;  R = 2 * pi / beta;
+%! A = struct ("left", [0 1.5 0.2 0.2], "right", [0.4 1.9 0.1 0.1]);
+%! tf0 = ads3_background ("tfd", "line", "beta", beta, "cutoff", eps);
+%! s0 = rt_surface (tf0, A, "tol", 1e-6);
+%! s = rt_surface (ads3_background ("tfd", "line", "beta", beta, "cutoff", eps, "shock_alpha", 1e-12), A, "tol", 1e-6);
+%! assert (s.pairs, s0.pairs);
+%! nm = {"left", "right"};
+%! for k = 1:rows (s.pairs)
+%!   c = s.curves{k};  c0 = s0.curves{k};
+%!   i = find (isnan (c(:,1)));
+%!   assert (numel (i), 1);
+%!   assert (c([1 end], :), c0([1 end], :), 1e-14);
+%!   assert (c(i-1,:), c(i+1,:), 1e-11);
+%!   ## null rays of the endpoints; residual of X = a P + b Q
+%!   a = s.pairs(k,:);
+%!   x = c([1 end], 3);  t = s.times(a);  sd = s.sides(a);
+%!   N = [cosh(R * x), sinh(R * x), (2 * sd - 1) .* cosh(R * t), sinh(R * t)];
+%!   X = kr_embed (c(:,1), c(:,2), c(:,3), R);
+%!   X = X(all (isfinite (X), 2), :);
+%!   res = X - (X / N) * N;
+%!   assert (max (sqrt (sum (res.^2, 2)) ./ sqrt (sum (X.^2, 2))) < 1e-9);
+%!   len = shock_length (c, R, 1 / eps);
+%!   ref = geodesic_length (tf0, s.endpoints(a(1)), s.endpoints(a(2)), "t1", t(1), ...
+%!                          "t2", t(2), "side1", nm{sd(1) + 1}, "side2", nm{sd(2) + 1});
+%!   assert (len, ref, 1e-8 * ref);
+%! endfor

@@ -14,6 +14,7 @@ function c = __holent_palette__ ()
   c.defect = [0.42 0.22 0.50];       # plum: the conical defect
   c.brane = [0.36 0.44 0.20];        # olive: an end-of-the-world brane
   c.cut = [0.86 0.85 0.82];          # warm grey: beyond the brane
+  c.shock = [0.80 0.27 0.49];        # rose: a shock wave and its shift
   c.phases = [0.55 0.74 0.70; 0.95 0.80 0.55; 0.80 0.62 0.74;
               0.68 0.75 0.88; 0.86 0.86 0.62; 0.75 0.68 0.60];
 endfunction

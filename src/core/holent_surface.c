@@ -701,6 +701,16 @@ push_boundary (holent_curve *c, const emb_chart *ch, double x, double t)
   return push (c, x, 0.0, t);
 }
 
+/* The Kruskal picture point of the boundary point at bulk coordinate x
+   and bulk time t on side s (0 left): X_K = -+cosh(R t), T_K = sinh(R t).  */
+static void
+kruskal_boundary (const emb_chart *ch, double x, double t, int s, double *b)
+{
+  b[0] = (s ? 1.0 : -1.0) * cosh (ch->R * t);
+  b[1] = sinh (ch->R * t);
+  b[2] = ch->sc * x;
+}
+
 /* The whole geodesic between the boundary points xm -+ h (bulk units) at
    bulk times t1, t2, in chart ch (sides s1, s2 in Kruskal), pushed from
    the first to the second.  */
@@ -719,13 +729,8 @@ emb_full (holent_curve *c, const emb_chart *ch, double xm, double h,
   double b1[3], b2[3], bd;
   if (ch->chart == EM_KRUSKAL)
     {
-      /* boundary points: X_K = +-cosh(R t), T_K = sinh(R t) */
-      b1[0] = (s1 ? 1.0 : -1.0) * cosh (ch->R * t1);
-      b1[1] = sinh (ch->R * t1);
-      b1[2] = ch->sc * (xm - h);
-      b2[0] = (s2 ? 1.0 : -1.0) * cosh (ch->R * t2);
-      b2[1] = sinh (ch->R * t2);
-      b2[2] = ch->sc * (xm + h);
+      kruskal_boundary (ch, xm - h, t1, s1, b1);
+      kruskal_boundary (ch, xm + h, t2, s2, b2);
     }
   else
     {
@@ -740,6 +745,54 @@ emb_full (holent_curve *c, const emb_chart *ch, double xm, double h,
       || (st = push (c, b2[0], b2[1], b2[2])))
     return st;
   return curve_finite (c, i0);
+}
+
+/* A bridge geodesic through the shock (doc/tfd_shock.md, section 2;
+   doc/surfaces.md): the BTZ piece from the left boundary point to the
+   crossing (u = 0, v + alpha) in the left coordinates, a row of NaN (the
+   jump along the null shock, of zero length), the BTZ piece from
+   (u = 0, v) in the right coordinates to the right boundary point; the
+   crossing is holent_tfd_shock_crossing's.  (x1, t1) on side s1 and
+   (x2, t2) on the other side, boundary units (x2 already lifted on a
+   circle); pushed from the first point to the second.  */
+static int
+emb_shock (holent_curve *c, const emb_chart *ch, const holent_tfd_bg *b,
+           double x1, double t1, int s1, double x2, double t2, double tol)
+{
+  double sc = ch->sc, xL = s1 ? x2 : x1, tL = s1 ? t2 : t1;
+  double xR = s1 ? x1 : x2, tR = s1 ? t1 : t2, xc, v;
+  int st = holent_tfd_shock_crossing (b, xL, tL, xR, tR, &xc, &v);
+  if (st)
+    return st;
+  /* bulk units, x centred on the midpoint */
+  double xm = 0.5 * (x1 + x2) / sc, y = xc / sc - xm;
+  for (int side = 0; side < 2; side++)
+    {
+      double P[4], Q[4], bp[3], x = side ? xR : xL, t = side ? tR : tL;
+      geo_par g;
+      emb_bulk (ch, y, 0.0, side ? v : v + b->alpha, P);
+      emb_ray (ch, x / sc - xm, t / sc, side, Q);
+      kruskal_boundary (ch, x / sc, t / sc, side, bp);
+      size_t i0 = c->n;
+      if ((st = emb_piece (&g, ch, xm, KIND_RAY, P, Q))
+          || (st = sample_span (c, &g, tol, 0.0, geo_smax (&g, tol, 1.0), 0))
+          || (st = push (c, bp[0], bp[1], bp[2])))
+        return st;
+      /* the crossing exactly on u = 0: X_K = T_K = v/2 */
+      c->x[i0] = c->y[i0] = 0.5 * (side ? v : v + b->alpha);
+      c->t[i0] = xc;
+      if ((st = curve_finite (c, i0)))
+        return st;
+      if (side == 0)
+        {
+          curve_reverse (c, i0);
+          if ((st = push (c, NAN, NAN, NAN)))
+            return st;
+        }
+    }
+  if (s1)   /* from the right point to the left one */
+    curve_reverse (c, 0);
+  return HOLENT_SUCCESS;
 }
 
 /* The sorted endpoints xa < xb of a circle region, joined over the arc
@@ -912,8 +965,6 @@ tfd_curve (holent_surface_workspace *w, const holent_tfd_bg *b, double xa,
     }
   else
     {
-      if (b->alpha > 0.0)
-        return HOLENT_EUNSUP;   /* broken at the shock: not drawn */
       if (circle && shortest)   /* as holent_tfd_cross_length */
         x2 = x1 + remainder (x2 - x1, L);
       else   /* the image of the second point: xR - xL + winding L */
@@ -922,6 +973,8 @@ tfd_curve (holent_surface_workspace *w, const holent_tfd_bg *b, double xa,
   if ((winding != 0 && (sa == sb || !circle)) || !isfinite (x2))
     return HOLENT_EDOM;
   w->cur.n = 0;
+  if (sa != sb && b->alpha > 0.0)   /* broken at the shock */
+    return emb_shock (&w->cur, &ch, b, x1, t1, sa, x2, t2, tol);
   double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc;
   return emb_full (&w->cur, &ch, xm, h, t1 / sc, sa, t2 / sc, sb, tol);
 }

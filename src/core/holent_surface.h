@@ -130,8 +130,14 @@ int holent_surface_quench (holent_surface_workspace *w,
  * (xa, ta) on side sa (0 left, 1 right) to (xb, tb) on side sb: within a
  * side (on a circle xa < xb joined over ARC, as holent_surface_pair) or
  * through the bridge (on a circle the shortest winding, as
- * holent_tfd_cross_length).  HOLENT_EUNSUP through a shock (alpha > 0),
- * HOLENT_ETIMELIKE for a causal pair on one side.  */
+ * holent_tfd_cross_length).  Through a shock (alpha > 0) the bridge
+ * geodesic is two BTZ pieces: from the left boundary point to the
+ * crossing (u = 0, v + alpha) of holent_tfd_shock_crossing in the left
+ * side's coordinates, one row of NaN (the null jump along u = 0, of zero
+ * length), from (u = 0, v) in the right side's coordinates to the right
+ * boundary point; each piece sampled like the others, its crossing an
+ * exact sample with X_K = T_K.  HOLENT_ETIMELIKE for a causal pair on one
+ * side, HOLENT_ERANGE when the picture overflows.  */
 int holent_surface_tfd (holent_surface_workspace *w, const holent_tfd_bg *b,
                         double xa, double ta, int sa, double xb, double tb,
                         int sb, double arc, double tol);

@@ -186,6 +186,13 @@ lncosh (double x)
   return x + log1p (exp (-2.0 * x)) - M_LN2;
 }
 
+/* log(e^p + e^q) without overflow.  */
+static double
+logaddexp (double p, double q)
+{
+  return p > q ? p + log1p (exp (q - p)) : q + log1p (exp (p - q));
+}
+
 /* The bridge geodesic for a lifted separation dx = xR - xL (no
    reduction: on a circle each winding class has its own dx).  */
 static int
@@ -200,7 +207,7 @@ cross_len (const holent_tfd_bg *b, double dx, double tL, double tR,
   if (b->alpha > 0.0)
     {
       double h = log (0.5 * b->alpha) + k * (tL - tR);
-      g = g > h ? g + log1p (exp (h - g)) : h + log1p (exp (g - h));
+      g = logaddexp (g, h);
     }
   *len = b->side.pref + 2.0 * g;
   return isfinite (*len) ? HOLENT_SUCCESS : HOLENT_EDOM;
@@ -236,6 +243,35 @@ holent_tfd_cross_length_winding (const holent_tfd_bg *b, double xL,
     return HOLENT_EDOM;
   return cross_len (b, (xR - xL) + (double) winding * b->side.L, tL, tR,
                     len);
+}
+
+int
+holent_tfd_shock_crossing (const holent_tfd_bg *b, double xL, double tL,
+                           double xR, double tR, double *x, double *v)
+{
+  if (b == NULL || x == NULL || v == NULL)
+    return HOLENT_EINVAL;
+  if (!isfinite (xL) || !isfinite (tL) || !isfinite (xR) || !isfinite (tR)
+      || !isfinite (xR - xL))
+    return HOLENT_EINVAL;
+  /* Kruskal R in boundary units: R x and R t are 2 pi x/beta, 2 pi t/beta
+     on the line and on the circle alike.  The crossing (u = 0, v, x) in
+     the right coordinates, (0, v + alpha, x) in the left ones; the legs'
+     -X.P are cosh(R(x - xR)) - a v and cosh(R(x - xL)) + b (v + alpha),
+     a = e^{-R tR}, b = e^{R tL} (doc/tfd_shock.md, section 2).  Their
+     product is stationary at v = (b C_R - a C_L - a b alpha)/(2ab) (a
+     maximum) and, after that, at the x minimising b C_R + a C_L:
+     e^{2R(x - xm)} = (b e^{R h} + a e^{-R h})/(b e^{-R h} + a e^{R h}),
+     xm and h the midpoint and half the separation (kept apart so that
+     large x lose nothing).  */
+  double R = 2.0 * M_PI / b->beta, xm = 0.5 * (xL + xR), h = 0.5 * (xR - xL);
+  double y = 0.5 * (logaddexp (R * (tL + h), -R * (tR + h))
+                    - logaddexp (R * (tL - h), R * (h - tR)));
+  *x = xm + y / R;
+  /* v = C_R/(2a) - C_L/(2b) - alpha/2 */
+  *v = 0.5 * (exp (R * tR) * cosh (y - R * h) - exp (-R * tL) * cosh (y + R * h)
+              - b->alpha);
+  return isfinite (*x) && isfinite (*v) ? HOLENT_SUCCESS : HOLENT_ERANGE;
 }
 
 int

@@ -101,6 +101,18 @@ int holent_tfd_cross_length_winding (const holent_tfd_bg *b, double xL,
                                      double tL, double xR, double tR,
                                      long winding, double *len);
 
+/* The point where the bridge geodesic from the left point (xL, tL) to the
+ * right point (xR, tR) crosses the shock u = 0 (doc/tfd_shock.md,
+ * section 2): the Kruskal coordinate *v on the right side of the shock
+ * (the same point is v + alpha on the left side) and the boundary
+ * coordinate *x, the stationary point of the length (a maximum in v, a
+ * minimum in x).  xL and xR are taken as given (on a circle: the lifted
+ * separation of the winding class); alpha = 0 gives the point where the
+ * unshocked geodesic meets the horizon u = 0.  HOLENT_ERANGE when v
+ * overflows (times beyond about 100 beta).  */
+int holent_tfd_shock_crossing (const holent_tfd_bg *b, double xL, double tL,
+                               double xR, double tR, double *x, double *v);
+
 /* Length between two points of one side (side 0 left, 1 right): the
    covariant BTZ length (holent_hrt_length, class cls), untouched by the
    shock.  Left times run forward, which leaves the length unchanged.  */

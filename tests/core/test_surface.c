@@ -1,9 +1,130 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Unit tests of holent_surface: error paths, the Poincare semicircle, the
-   horizon circle, the runner-up of two intervals and a vacuum profile.  */
+   horizon circle, the runner-up of two intervals, a vacuum profile, the
+   two pieces of a bridge geodesic through a shock wave.  */
 #include <math.h>
 #include "holent_ctest.h"
 #include "holent_surface.h"
+
+/* Kruskal embedding of BTZ (R in boundary units; common practice, see
+   doc/tfd_shock.md): the bulk point of the picture (X_K, T_K, x) and the
+   null ray of a boundary point on side s (0 left).  */
+static void
+kr_embed (double R, double XK, double TK, double x, double X[4])
+{
+  double u = TK - XK, v = TK + XK, d = 1 + u * v;
+  X[0] = (1 - u * v) / d * cosh (R * x);
+  X[1] = (1 - u * v) / d * sinh (R * x);
+  X[2] = (v - u) / d;
+  X[3] = (v + u) / d;
+}
+
+static void
+kr_ray (double R, double x, double t, int s, double X[4])
+{
+  X[0] = cosh (R * x);
+  X[1] = sinh (R * x);
+  X[2] = (s ? 1 : -1) * cosh (R * t);
+  X[3] = sinh (R * t);
+}
+
+static double
+kr_dot (const double *X, const double *Y)
+{
+  return -X[0] * Y[0] + X[1] * Y[1] + X[2] * Y[2] - X[3] * Y[3];
+}
+
+/* A bridge geodesic through the shock of *ts from (xL, tL) on the left to
+   (xR, tR) on the right (xRl: xR lifted to the shortest winding on a
+   circle, or to xR + wd L when wd is not NOWIND, drawn by
+   holent_surface_tfd_winding): two pieces split by one NaN row, each from its crossing on
+   u = 0 (X_K = T_K, the same x, the left one alpha/2 further along X_K
+   and T_K) to its boundary point; every sample lies on the geodesic from
+   its crossing P to the boundary ray Q, i.e. in the plane of P and Q in
+   R^{2,2} (the residual of X = a P + b Q, P.P = -1, Q.Q = 0, is zero); the
+   embedding distances acosh(-X.Y) from the crossings to the cutoff
+   points (Fefferman-Graham, as test_tfd.c) add up to the bridge length.
+   Coordinates x in boundary units, R x the bulk angle (both pictures).  */
+#define NOWIND (-1000L)
+static void
+shock_pieces (holent_surface_workspace *w, const holent_tfd_bg *ts,
+              double xL, double tL, double xR, double tR, double xRl, long wd)
+{
+  const double R = 2 * M_PI / ts->beta;
+  for (int dir = 0; dir < 2; dir++)
+    {
+      if (wd != NOWIND)
+        HT_STATUS (dir ? holent_surface_tfd_winding (w, ts, xR, tR, 1, xL, tL, 0, NAN, wd, 1e-5)
+                       : holent_surface_tfd_winding (w, ts, xL, tL, 0, xR, tR, 1, NAN, wd, 1e-5), 0);
+      else if (dir == 0)
+        HT_STATUS (holent_surface_tfd (w, ts, xL, tL, 0, xR, tR, 1, NAN, 1e-5), 0);
+      else   /* from the right point: the same curve reversed */
+        HT_STATUS (holent_surface_tfd (w, ts, xR, tR, 1, xL, tL, 0, NAN, 1e-5), 0);
+      const holent_curve *c = &w->cur;
+      size_t nnan = 0, k = 0;
+      for (size_t i = 0; i < c->n; i++)
+        if (isnan (c->x[i]))
+          {
+            nnan++;
+            k = i;
+          }
+      HT_CHECK (nnan == 1 && isnan (c->y[k]) && isnan (c->t[k]) && k > 2
+                && k + 3 < c->n, "one NaN row, got %zu", nnan);
+      if (nnan != 1)
+        continue;
+      /* the lift is taken by the second point: from the right one, the
+         left point moves by -(xRl - xR) */
+      const double xl = dir ? xL + (xR - xRl) : xL, xr = dir ? xR : xRl;
+      size_t l0 = dir ? c->n - 1 : 0, lc = dir ? k + 1 : k - 1;
+      size_t r0 = dir ? 0 : c->n - 1, rc = dir ? k - 1 : k + 1;
+      HT_CLOSE (c->x[l0], -cosh (R * tL), 1e-15);
+      HT_CLOSE (c->y[l0], sinh (R * tL), 1e-15);
+      HT_CLOSE (c->t[l0], xl, 1e-15);
+      HT_CLOSE (c->x[r0], cosh (R * tR), 1e-15);
+      HT_CLOSE (c->t[r0], xr, 1e-15);
+      HT_CHECK (c->x[lc] == c->y[lc] && c->x[rc] == c->y[rc], "crossings on u = 0");
+      HT_CLOSE (c->x[lc] - c->x[rc], 0.5 * ts->alpha, 1e-14);
+      HT_CLOSE (c->t[lc], c->t[rc], 0);
+      double worst = 0, len = 0, ref;
+      /* x measured from the crossing: no cancellation in the products */
+      const double x0 = c->t[lc], rho = ts->beta / (2 * M_PI * ts->side.eps)
+                                        + M_PI * ts->side.eps / (2 * ts->beta);
+      const double q = sqrt ((rho - 1) / (rho + 1));
+      for (int side = 0; side < 2; side++)
+        {
+          size_t a = side ? rc : lc, e = side ? r0 : l0;
+          double P[4], Q[4], X[4], B[4], t = side ? tR : tL;
+          kr_embed (R, c->x[a], c->y[a], c->t[a] - x0, P);
+          kr_ray (R, (side ? xr : xl) - x0, t, side, Q);
+          /* the cutoff point: u v = -q^2 on the boundary point's ray */
+          double u = side ? -exp (-R * t) * q : exp (R * t) * q;
+          double v = side ? exp (R * t) * q : -exp (-R * t) * q;
+          kr_embed (R, 0.5 * (v - u), 0.5 * (v + u), (side ? xr : xl) - x0, B);
+          len += acosh (-kr_dot (P, B));
+          double pq = kr_dot (P, Q);
+          for (size_t i = a; i != e; i = (i < e) ? i + 1 : i - 1)
+            {
+              kr_embed (R, c->x[i], c->y[i], c->t[i] - x0, X);
+              /* X.Q = -a' ... : a = -(X.Q)/(-pq) from X.Q = a P.Q, then
+                 X.P = -a + b P.Q */
+              double ca = kr_dot (X, Q) / pq, cb = (kr_dot (X, P) + ca) / pq;
+              double nx = 0, res = 0;
+              for (int j = 0; j < 4; j++)
+                {
+                  double rj = X[j] - ca * P[j] - cb * Q[j];
+                  res += rj * rj;
+                  nx += X[j] * X[j];
+                }
+              double rel = sqrt (res / nx);
+              worst = rel > worst ? rel : worst;
+            }
+        }
+      HT_CHECK (worst < 1e-10, "samples off the geodesic by %g", worst);
+      HT_STATUS (wd == NOWIND ? holent_tfd_cross_length (ts, xL, tL, xR, tR, &ref)
+                 : holent_tfd_cross_length_winding (ts, xL, tL, xR, tR, wd, &ref), 0);
+      HT_CLOSE (len, ref, 1e-11);
+    }
+}
 
 int
 main (void)
@@ -99,11 +220,10 @@ main (void)
   HT_STATUS (holent_surface_tfd (w, &tf, 0, INFINITY, 1, 1, 0, 1, NAN, 1e-3), HOLENT_EDOM);
   HT_STATUS (holent_surface_tfd (w, &tc, 0, 0, 1, 1, 0, 1, NAN, 1e-3), HOLENT_EINVAL);
   HT_STATUS (holent_surface_tfd (w, &tc, 2, 0, 1, 1, 0, 1, 1, 1e-3), HOLENT_EDOM);
-  HT_STATUS (holent_surface_tfd (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 1e-3), HOLENT_EUNSUP);
   HT_STATUS (holent_surface_tfd_horizon (NULL, &tc, 0, 1), HOLENT_EINVAL);
   HT_STATUS (holent_surface_tfd_winding (w, &tf, 0, 0, 0, 1, 0, 1, NAN, 1, 1e-3), HOLENT_EDOM);
   HT_STATUS (holent_surface_tfd_winding (w, &tc, 0, 0, 1, 1, 0, 1, 1, 1, 1e-3), HOLENT_EDOM);
-  HT_STATUS (holent_surface_tfd_winding (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 0, 1e-3), HOLENT_EUNSUP);
+  HT_STATUS (holent_surface_tfd_winding (w, &ts, 0, 0, 0, 0, 0, 1, NAN, 1, 1e-3), HOLENT_EDOM);
   HT_STATUS (holent_surface_tfd_winding (NULL, &tc, 0, 0, 0, 1, 0, 1, NAN, 0, 1e-3), HOLENT_EINVAL);
   /* a bridge of winding w joins the left point to the image xR + w L of
      the right one: the third column changes by xR - xL + w L, the ends
@@ -152,6 +272,16 @@ main (void)
       worst = e > worst ? e : worst;
     }
   HT_CHECK (worst < 1e-14, "bridge off by %g", worst);
+  shock_pieces (w, &ts, 0.3, 0.2, 1.1, -0.4, 1.1, NOWIND);
+  {
+    /* the circle: the same through the shortest winding (xR lifted by -L) */
+    holent_tfd_bg tcs;
+    HT_STATUS (holent_tfd_init (&tcs, 1, 2 * M_PI, 1e-6, 3, 1, 1.5), 0);
+    shock_pieces (w, &tcs, 0.5, 0.2, 5.9, -0.1, 5.9 - 2 * M_PI, NOWIND);
+    /* and at the windings a minimiser may ask for, the shortest or not */
+    for (long wd = -1; wd <= 1; wd++)
+      shock_pieces (w, &tcs, 0.5, 0.2, 5.9, -0.1, 5.9 + wd * 2 * M_PI, wd);
+  }
   HT_STATUS (holent_surface_tfd_horizon (w, &tc, 0, 2 * M_PI), 0);
   {
     holent_tfd_workspace *tw = holent_tfd_workspace_alloc (2);

@@ -1,9 +1,10 @@
 /* Unit tests of holent_tfd.  Independent checks: the bridge length
  * extremised numerically (GSL Brent minimisers) over the crossing point
  * on the shock, with each leg the embedding distance acosh(-X.Y) of the
- * Kruskal embedding of BTZ; the published limits of Hartman and
- * Maldacena 2013 (JHEP 05 (2013) 014: 2 log((beta/(pi eps)) cosh(2 pi
- * t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
+ * Kruskal embedding of BTZ, and the crossing point of
+ * holent_tfd_shock_crossing stationary for that sum; the published
+ * limits of Hartman and Maldacena 2013 (JHEP 05 (2013) 014:
+ * 2 log((beta/(pi eps)) cosh(2 pi t/beta))) and Shenker and Stanford 2014 (JHEP 03 (2014) 067: 2
  * log(beta/(pi eps)) + 2 log(1 + alpha/2), from memory); the shock shift
  * from the exact matching of r across a null shell; M against the first
  * law with the Bekenstein-Hawking entropy of holent_geo; the region
@@ -560,6 +561,56 @@ test_cross (void)
   HT_STATUS (holent_tfd_cross_length (NULL, 0, 0, 0, 0, &len), HOLENT_EINVAL);
 }
 
+/* The crossing point on the shock (holent_tfd_shock_crossing) is the
+   stationary point of the sum of the two legs, each the embedding
+   distance acosh(-X.Y) to the cutoff point (Banados, Henneaux, Teitelboim
+   and Zanelli 1993 for the embedding): central differences in v and x
+   vanish, the sum is a maximum along the null shock (v) and its maximum
+   over v a minimum in x; its value is the bridge length.  */
+static void
+test_crossing (void)
+{
+  const double eps = 1e-6, beta = 2 * M_PI, h = 1e-4;   /* R = 1 */
+  static const double cases[][5] = {
+    /* alpha, xL, tL, xR, tR */
+    { 0.0, 0.0, 0.4, 0.7, 0.1 }, { 2.0, 0.2, 0.0, -0.5, 0.3 },
+    { 0.5, 0.0, -0.3, 1.2, 0.8 }, { 7.0, 1.0, 1.5, 1.0, -0.5 }
+  };
+  holent_tfd_bg b;
+  double x, v, len;
+  for (size_t k = 0; k < 4; k++)
+    {
+      const double *c = cases[k];
+      HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, c[0]), HOLENT_SUCCESS);
+      HT_STATUS (holent_tfd_shock_crossing (&b, c[1], c[2], c[3], c[4], &x, &v), HOLENT_SUCCESS);
+      HT_STATUS (holent_tfd_cross_length (&b, c[1], c[2], c[3], c[4], &len), HOLENT_SUCCESS);
+      ex_par e = { 1.0, eps, c[0], c[1], c[2], c[3], c[4], x };
+      double f0 = legs (v, &e), fp = legs (v + h, &e), fm = legs (v - h, &e);
+      HT_CHECK (fabs (-f0 - len) < 1e-9 * len, "case %zu: legs %.12g, length %.12g", k, -f0, len);
+      HT_CHECK (fabs (fp - fm) / (2 * h) < 1e-6 && fp > f0 && fm > f0,
+                "case %zu: not a maximum in v (%g %g %g)", k, fm - f0, fp - f0, (fp - fm) / (2 * h));
+      e.x = x + h;
+      fp = legs (v, &e);
+      e.x = x - h;
+      fm = legs (v, &e);
+      HT_CHECK (fabs (fp - fm) / (2 * h) < 1e-6, "case %zu: d/dx %g", k, (fp - fm) / (2 * h));
+      double m0 = over_v (x, &e), mp = over_v (x + 1e-3, &e), mm = over_v (x - 1e-3, &e);
+      HT_CHECK (mp > m0 && mm > m0 && fabs (m0 - len) < 1e-9 * len,
+                "case %zu: not a minimum in x (%g %g)", k, mm - m0, mp - m0);
+    }
+  /* times beyond double precision of v, and bad input */
+  HT_STATUS (holent_tfd_init (&b, 0, 0, eps, beta, 1.0, 1.0), HOLENT_SUCCESS);
+  HT_STATUS (holent_tfd_shock_crossing (&b, 0, 0, 0, 800, &x, &v), HOLENT_ERANGE);
+  HT_STATUS (holent_tfd_shock_crossing (&b, NAN, 0, 0, 0, &x, &v), HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_shock_crossing (NULL, 0, 0, 0, 0, &x, &v), HOLENT_EINVAL);
+  HT_STATUS (holent_tfd_shock_crossing (&b, 0, 0, 0, 0, NULL, &v), HOLENT_EINVAL);
+  /* symmetric point: dx = 0, tL = tR = 0 crosses at x = xL, v = -alpha/2
+     (the bridge T_K = 0 of the glued picture) */
+  HT_STATUS (holent_tfd_shock_crossing (&b, 0.3, 0, 0.3, 0, &x, &v), HOLENT_SUCCESS);
+  HT_CLOSE (x, 0.3, 1e-15);
+  HT_CLOSE (v, -0.5, 1e-15);
+}
+
 static void
 test_shift (void)
 {
@@ -790,6 +841,7 @@ main (void)
   test_scrambling ();
   gsl_set_error_handler_off ();
   test_cross ();
+  test_crossing ();
   test_winding ();
   test_annulus ();
   test_annulus_conf ();
