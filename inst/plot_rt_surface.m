@@ -76,7 +76,11 @@ function h = plot_rt_surface (varargin)
   endif
   s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
-    r = __holent_rt_surface__ (fn, bg, A, {"tol", tol, "configuration", "runner_up"});
+    ropt = {"tol", tol, "configuration", "runner_up"};
+    if (__holent_is_bcft__ (bg))
+      ropt = [ropt, topt];     # a BCFT thermofield double at the time t
+    endif
+    r = __holent_rt_surface__ (fn, bg, A, ropt);
   endif
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
@@ -193,6 +197,17 @@ function h = plot_rt_surface (varargin)
     c = s.horizon_curve;
     h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
   endif
+  if (strcmp (s.picture, "kruskal"))
+    ## the island's edges, where surfaces land on the brane (the brane
+    ## itself covers the diagram): filled, the runner-up's open
+    conf = {s, r};
+    face = {pal.brane, "none"};
+    for k = 1:2
+      if (! isempty (conf{k}) && ! isempty (conf{k}.brane.x))
+        h.brane(end+1) = island_edges (hax, conf{k}, pal.brane, face{k});
+      endif
+    endfor
+  endif
   __holent_fig_props__ (fn, h.surface, props);
   ## the time of curves that leave the constant-time slice: markers on the
   ## curve coloured by its third column (t, or v on a quench), a colour bar
@@ -227,6 +242,16 @@ function h = plot_rt_surface (varargin)
   if (! held)
     hold (hax, "off");
   endif
+endfunction
+
+## Markers at the landing points of the brane-ending curves of s (the last
+## numel (s.brane.x) of s.curves) in the Kruskal diagram.
+function hb = island_edges (hax, s, col, face)
+  nb = numel (s.brane.x);
+  P = cell2mat (cellfun (@(c) c(end, 1:2), s.curves(end-nb+1:end)(:),
+                         "uniformoutput", false));
+  hb = plot (hax, P(:,1), P(:,2), "o", "color", col,
+             "markerfacecolor", face, "markersize", 7, "linewidth", 1.5);
 endfunction
 
 %!demo
