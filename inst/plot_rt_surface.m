@@ -360,5 +360,51 @@ endfunction
 %!   close (f);
 %! end_unwind_protect
 
+%!demo
+%! ## The Page-curve competition of a radiation region R = [1, Inf) in the
+%! ## thermofield double of two BCFTs, before the Page time: the geodesic
+%! ## through the Einstein-Rosen bridge wins (solid), the island
+%! ## configuration ending on the brane is the runner-up (dashed, its
+%! ## landing points open circles), in the Kruskal diagram.
+%! figure ("visible", "off");
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%! h = plot_rt_surface (bg, [1 Inf], "t", 0.3, "runner_up", true);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_page_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! png = [tempname() ".png"];
+%! unwind_protect
+%!   ## bcft_tfd at a time: minimiser solid, runner-up dashed, both from
+%!   ## rt_surface's data; island edges marked at the landing points
+%!   bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%!   for t = [0.3 1.5]      # before and after the Page time 0.68 of R
+%!     clf (f);
+%!     h = plot_rt_surface (bg, [0.2 0.5; 1 Inf], "t", t, "runner_up", true);
+%!     r = rt_surface (bg, [0.2 0.5; 1 Inf], "t", t, "configuration", "runner_up", "tol", 2e-3);
+%!     assert (h.surf.picture, "kruskal");
+%!     assert (numel (h.runner_up), numel (r.curves));
+%!     for k = 1:numel (r.curves)
+%!       assert (get (h.runner_up(k), "xdata")(:), r.curves{k}(:,1));
+%!       assert (get (h.runner_up(k), "ydata")(:), r.curves{k}(:,2));
+%!       assert (get (h.runner_up(k), "linestyle"), "--");
+%!     endfor
+%!     assert (numel (h.surface), numel (h.surf.curves));
+%!     assert (r.S > h.surf.S);
+%!     ## the island configuration (minimiser after, runner-up before)
+%!     isl = merge (t < 0.68, r, h.surf);
+%!     assert (numel (h.brane), 1);
+%!     assert (get (h.brane, "xdata")(:), cellfun (@(c) c(end,1), isl.curves(end-numel (isl.brane.x)+1:end))(:));
+%!   endfor
+%!   print (f, "-dpng", png);
+%!   assert (exist (png, "file"), 2);
+%! unwind_protect_cleanup
+%!   close (f);
+%!   if (exist (png, "file"))
+%!     delete (png);
+%!   endif
+%! end_unwind_protect
+
 %!error <Invalid call> plot_rt_surface (1)
 %!error <runner_up must be> plot_rt_surface (ads3_background ("vacuum", "line"), [0 1], "runner_up", "yes")
