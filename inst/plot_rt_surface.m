@@ -29,7 +29,14 @@
 ## an interval is drawn in the disk of the doubled interval (the BCFT on
 ## the upper half circle), the other BCFT states in the half plane.  On the
 ## two-sided @code{"bcft_tfd"} one exterior is drawn with the island
-## configuration of the radiation region (@code{page_curve}).
+## configuration of the radiation region (@code{page_curve}); with the
+## option @qcode{"t"} the configuration at that boundary time on both
+## sides in the Kruskal diagram, with @qcode{"runner_up"} true the other
+## branch of the Page curve dashed (the island configuration before the
+## Page time, the geodesics through the bridge after it), the landing
+## points on the brane marked (in @code{brane}; filled for the minimal
+## surface, open for the runner-up).  @qcode{"runner_up"} on
+## @code{"bcft_tfd"} needs @qcode{"t"}.
 ##
 ## Regions with endpoint times (n x 4 rows), a quench (option
 ## @qcode{"t"}, the boundary time) and a thermofield double (a struct

@@ -694,7 +694,7 @@ surface_page (const char *fn, mxArray *plhs[], const holent_bcft_bg *bg,
   holent_bcft_workspace *ws;
   holent_surface_workspace *sw;
   mxArray *surf;
-  size_t nreg = surface_begin (fn, "R", A, &ws, &sw, &surf);
+  size_t nreg = surface_begin (fn, "A", A, &ws, &sw, &surf);
   const holent_poll *poll = holent_gw_poll (fn);
   for (size_t k = 0; k < nreg; k++)
     {
@@ -712,7 +712,7 @@ surface_page (const char *fn, mxArray *plhs[], const holent_bcft_bg *bg,
         {
           holent_surface_workspace_free (sw);
           mxDestroyArray (surf);
-          region_raise (fn, "R", A, k, ws, &err);
+          region_raise (fn, "A", A, k, ws, &err);
         }
       st = page_curves (sw, bg, &r, t, tol, &curves, &pairs, &bad);
       if (st)
@@ -784,7 +784,7 @@ do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
                      "\"bcft_tfd\" background needs the boundary time 't' "
                      "(without it the surface is the late-time island "
                      "configuration)");
-  const char *name = tfd ? "R" : "A";
+  const char *name = "A";   /* rt_surface's argument, also on "bcft_tfd" */
   holent_bcft_workspace *ws;
   holent_surface_workspace *sw;
   mxArray *surf;
