@@ -722,6 +722,11 @@ surface_page (const char *fn, mxArray *plhs[], const holent_bcft_bg *bg,
           mxDestroyArray (surf);
           holent_surface_workspace_free (sw);
           holent_bcft_workspace_free (ws);
+          if (st == HOLENT_ETOOBIG || st == HOLENT_ERANGE)
+            holent_gw_raise (fn, st, "t", HOLENT_NOINDEX, "must be nearer 0 "
+                             "for the Kruskal picture, whose coordinates "
+                             "grow like cosh(2 pi t/beta) (got %g; or take "
+                             "a larger tol)", t);
           holent_gw_raise (fn, st, "geodesic", bad, NULL);
         }
       size_t m = r.m;
