@@ -611,42 +611,53 @@ surface_begin (const char *fn, const char *name, const mxArray *A,
 
 /* ---- "surface" of a two-sided background at the time T ----------- */
 
+/* The geodesic k of a page configuration from endpoint i of side si to
+   endpoint j of side sj (0 left, 1 right) at time t, and its 1-based
+   indices into [pts; pts] in row k of PP (np rows).  */
+static int
+page_pair (holent_surface_workspace *sw, const holent_bcft_bg *bg,
+           const holent_bcft_result *r, size_t i, int si, size_t j, int sj,
+           double t, double tol, double *pp, size_t np, size_t k)
+{
+  pp[k] = (double) (i + (size_t) si * r->m + 1);
+  pp[k + np] = (double) (j + (size_t) sj * r->m + 1);
+  return holent_surface_tfd (sw, &bg->tfd, r->pts[i], t, si, r->pts[j], t,
+                             sj, 0.0, tol);
+}
+
 /* The configuration r of one side at time t and its mirror as Kruskal
    curves: pairs within the left side, within the right side, through the
-   bridge (a left point to its mirror), then the brane endings of the left
-   and of the right side.  *CELL and *PAIRS (1-based into [pts; pts]);
-   returns 0 or the status of the geodesic *BAD.  */
+   bridge (a left point to the same point on the right), then the brane
+   endings of the left and of the right side.  *CELL and *PAIRS (1-based
+   into [pts; pts]); returns 0 or the status of the curve *BAD.  */
 static int
 page_curves (holent_surface_workspace *sw, const holent_bcft_bg *bg,
              const holent_bcft_result *r, double t, double tol,
              mxArray **cell, mxArray **pairs, size_t *bad)
 {
-  size_t m = r->m, np = 2 * r->npairs + r->nbridge, nb = r->nbrane;
+  size_t n2 = 2 * r->npairs, np = n2 + r->nbridge, nb = r->nbrane;
   *cell = mxCreateCellMatrix (1, np + 2 * nb);
   *pairs = mxCreateDoubleMatrix (np, 2, mxREAL);
   double *pp = mxGetPr (*pairs);
   for (size_t k = 0; k < np + 2 * nb; k++)
     {
       int st;
-      if (k < np)
+      if (k < n2)
         {
-          /* within side 0, side 1, then the bridge (the same point) */
-          int side = k >= r->npairs && k < 2 * r->npairs;
-          size_t q = k < 2 * r->npairs ? k % r->npairs : k - 2 * r->npairs;
-          size_t i = k < 2 * r->npairs ? r->pairs[2 * q] : r->bridge[q];
-          size_t j = k < 2 * r->npairs ? r->pairs[2 * q + 1] : i;
-          int s2 = k < 2 * r->npairs ? side : 1;
-          pp[k] = (double) (i + side * m + 1);
-          pp[k + np] = (double) (j + s2 * m + 1);
-          st = holent_surface_tfd (sw, &bg->tfd, r->pts[i], t, side,
-                                   r->pts[j], t, s2, 0.0, tol);
+          const size_t *pq = r->pairs + 2 * (k % r->npairs);
+          int side = k >= r->npairs;
+          st = page_pair (sw, bg, r, pq[0], side, pq[1], side, t, tol, pp,
+                          np, k);
+        }
+      else if (k < np)
+        {
+          size_t i = r->bridge[k - n2];
+          st = page_pair (sw, bg, r, i, 0, i, 1, t, tol, pp, np, k);
         }
       else
-        {
-          size_t q = (k - np) % nb;
-          st = holent_surface_bcft_tfd_brane (sw, bg, r->pts[r->brane[q]], t,
-                                              k - np >= nb, tol);
-        }
+        st = holent_surface_bcft_tfd_brane (sw, bg,
+                                            r->pts[r->brane[(k - np) % nb]],
+                                            t, k - np >= nb, tol);
       if (st)
         {
           *bad = k;
@@ -706,13 +717,19 @@ surface_page (const char *fn, mxArray *plhs[], const holent_bcft_bg *bg,
       mxArray *curves = NULL, *pairs = NULL;
       int st = holent_bcft_page_prepare (ws, bg, n, p, p + n, &pg, &err,
                                          poll);
-      if (!st)
-        st = holent_bcft_page_configuration (ws, bg, t, runner, &r, &err);
       if (st)
         {
           holent_surface_workspace_free (sw);
           mxDestroyArray (surf);
           region_raise (fn, "A", A, k, ws, &err);
+        }
+      if ((st = holent_bcft_page_configuration (ws, bg, t, runner, &r, &err)))
+        {
+          holent_surface_workspace_free (sw);
+          holent_bcft_workspace_free (ws);
+          mxDestroyArray (surf);
+          static const char *const tname[] = { "t" };
+          holent_gw_raise_err (fn, &err, tname, 1);
         }
       st = page_curves (sw, bg, &r, t, tol, &curves, &pairs, &bad);
       if (st)

@@ -387,6 +387,7 @@
 %!error <needs the boundary time 't'> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "configuration", "runner_up")
 %!error <rt_surface: t: applies to the two-sided> rt_surface (ads3_background ("bcft", "half_line"), [1 2], "t", 1)
 %!error <rt_surface: t: must be nearer 0 for the Kruskal picture> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 Inf], "t", 300)
+%!error <rt_surface: t: is too far from 0> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 Inf], "t", 1e308, "configuration", "runner_up")
 %!error <rt_surface: t must not be NaN> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "t", NaN)
 %!error <plot_rt_surface: configuration "runner_up" on a two-sided> plot_rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "runner_up", true)
 %!error <single RT candidate> rt_surface (ads3_background ("bcft", "interval", "length", 3, "beta", 1), [0 3], "configuration", "runner_up")

@@ -1351,9 +1351,10 @@ holent_bcft_page_configuration (holent_bcft_workspace *w,
   int island = w->A[0] <= vb, bridged = island == (runner != 0);
   size_t k = bridged ? kb : 0;
   double v = bridged ? vb : w->A[0];
-  if (!(v < INFINITY))   /* no candidate of that kind (no endpoints) */
-    return holent_err_set (err, HOLENT_EDOM, -1, HOLENT_NOINDEX,
-                           "has no configuration of the other kind");
+  if (!(v < INFINITY))   /* R has endpoints: only h(t) can overflow */
+    return holent_err_set (err, HOLENT_ERANGE, 0, HOLENT_NOINDEX,
+                           "is too far from 0: a geodesic through the "
+                           "bridge is longer than the largest double");
   size_t bi = 0, np, nb, nbr = 0, nbb = 0;
   int bp = 0;
   (void) best_split (w, k, -1, &bi, &bp);

@@ -305,7 +305,8 @@ int holent_bcft_page_eval (const holent_bcft_workspace *w,
  * n of the merged region.  Pointers stay valid until w is used again.
  * Errors (ERR may be NULL): HOLENT_EINVAL for NULL or a w not prepared
  * by holent_bcft_page_prepare, HOLENT_EUNSUP unless bg is a TFD,
- * HOLENT_ENAN / HOLENT_EDOM for a NaN or infinite t.  */
+ * HOLENT_ENAN / HOLENT_EDOM for a NaN or infinite t, HOLENT_ERANGE for
+ * a t so late that the bridge length overflows (ERR's arg 0 names t).  */
 int holent_bcft_page_configuration (holent_bcft_workspace *w,
                                     const holent_bcft_bg *bg, double t,
                                     int runner, holent_bcft_result *res,

@@ -748,6 +748,11 @@ test_page_configuration (void)
   HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_ENAN);
   HT_CHECK (err.arg == 0, "names t");
   HT_STATUS (holent_bcft_page_configuration (w, &bg, INFINITY, 1, &r0, &err), HOLENT_EDOM);
+  /* the island wins at any late time; its competitor's bridge overflows */
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, -1e308, 0, &r0, &err), HOLENT_SUCCESS);
+  HT_CHECK (r0.nbridge == 0, "island at t = -1e308");
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, -1e308, 1, &r0, &err), HOLENT_ERANGE);
+  HT_CHECK (err.arg == 0, "names t");
   /* a one-sided entropy on w leaves it unprepared for the page */
   double a1 = 0.5, b1 = 2.0;
   HT_STATUS (holent_bcft_entropy (w, &hl, 1, &a1, &b1, &r0, NULL, NULL), HOLENT_SUCCESS);
