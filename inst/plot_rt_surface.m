@@ -29,7 +29,14 @@
 ## an interval is drawn in the disk of the doubled interval (the BCFT on
 ## the upper half circle), the other BCFT states in the half plane.  On the
 ## two-sided @code{"bcft_tfd"} one exterior is drawn with the island
-## configuration of the radiation region (@code{page_curve}).
+## configuration of the radiation region (@code{page_curve}); with the
+## option @qcode{"t"} the configuration at that boundary time on both
+## sides in the Kruskal diagram, with @qcode{"runner_up"} true the other
+## branch of the Page curve dashed (the island configuration before the
+## Page time, the geodesics through the bridge after it), the landing
+## points on the brane marked (in @code{brane}; filled for the minimal
+## surface, open for the runner-up).  @qcode{"runner_up"} on
+## @code{"bcft_tfd"} needs @qcode{"t"}.
 ##
 ## Regions with endpoint times (n x 4 rows), a quench (option
 ## @qcode{"t"}, the boundary time) and a thermofield double (a struct
@@ -86,7 +93,11 @@ function h = plot_rt_surface (varargin)
   endif
   s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
-    r = __holent_rt_surface__ (fn, bg, A, {"tol", tol, "configuration", "runner_up"});
+    ropt = {"tol", tol, "configuration", "runner_up"};
+    if (__holent_is_bcft__ (bg))
+      ropt = [ropt, topt];     # a BCFT thermofield double at the time t
+    endif
+    r = __holent_rt_surface__ (fn, bg, A, ropt);
   endif
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
@@ -215,6 +226,17 @@ function h = plot_rt_surface (varargin)
       h.surface(end+1) = plot (hax, c(:,1), c(:,2), "color", pal.surface, "linewidth", 3);
     endif
   endif
+  if (strcmp (s.picture, "kruskal"))
+    ## the island's edges, where surfaces land on the brane (the brane
+    ## itself covers the diagram): filled, the runner-up's open
+    conf = {s, r};
+    face = {pal.brane, "none"};
+    for k = 1:2
+      if (! isempty (conf{k}) && ! isempty (conf{k}.brane.x))
+        h.brane(end+1) = island_edges (hax, conf{k}, pal.brane, face{k});
+      endif
+    endfor
+  endif
   __holent_fig_props__ (fn, h.surface, props);
   ## through a shock a curve is two pieces split by a NaN row: the shift
   ## along the null shock u = 0, of zero length, dotted between the two
@@ -260,6 +282,16 @@ function h = plot_rt_surface (varargin)
   if (! held)
     hold (hax, "off");
   endif
+endfunction
+
+## Markers at the landing points of the brane-ending curves of s (the last
+## numel (s.brane.x) of s.curves) in the Kruskal diagram.
+function hb = island_edges (hax, s, col, face)
+  nb = numel (s.brane.x);
+  P = cell2mat (cellfun (@(c) c(end, 1:2), s.curves(end-nb+1:end)(:),
+                         "uniformoutput", false));
+  hb = plot (hax, P(:,1), P(:,2), "o", "color", col,
+             "markerfacecolor", face, "markersize", 7, "linewidth", 1.5);
 endfunction
 
 %!demo
@@ -400,6 +432,52 @@ endfunction
 %!   assert (numel (h.surface), rows (h.surf.pairs) + 1);
 %!   assert (get (h.surface(end), "marker"), "o");
 %!   print (f, "-dpng", png);
+%! unwind_protect_cleanup
+%!   close (f);
+%!   if (exist (png, "file"))
+%!     delete (png);
+%!   endif
+%! end_unwind_protect
+
+%!demo
+%! ## The Page-curve competition of a radiation region R = [1, Inf) in the
+%! ## thermofield double of two BCFTs, before the Page time: the geodesic
+%! ## through the Einstein-Rosen bridge wins (solid), the island
+%! ## configuration ending on the brane is the runner-up (dashed, its
+%! ## landing points open circles), in the Kruskal diagram.
+%! figure ("visible", "off");
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%! h = plot_rt_surface (bg, [1 Inf], "t", 0.3, "runner_up", true);
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_page_surface_demo.png"));
+
+%!test
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! png = [tempname() ".png"];
+%! unwind_protect
+%!   ## bcft_tfd at a time: minimiser solid, runner-up dashed, both from
+%!   ## rt_surface's data; island edges marked at the landing points
+%!   bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%!   for t = [0.3 1.5]      # before and after the Page time 0.68 of R
+%!     clf (f);
+%!     h = plot_rt_surface (bg, [0.2 0.5; 1 Inf], "t", t, "runner_up", true);
+%!     r = rt_surface (bg, [0.2 0.5; 1 Inf], "t", t, "configuration", "runner_up", "tol", 2e-3);
+%!     assert (h.surf.picture, "kruskal");
+%!     assert (numel (h.runner_up), numel (r.curves));
+%!     for k = 1:numel (r.curves)
+%!       assert (get (h.runner_up(k), "xdata")(:), r.curves{k}(:,1));
+%!       assert (get (h.runner_up(k), "ydata")(:), r.curves{k}(:,2));
+%!       assert (get (h.runner_up(k), "linestyle"), "--");
+%!     endfor
+%!     assert (numel (h.surface), numel (h.surf.curves));
+%!     assert (r.S > h.surf.S);
+%!     ## the island configuration (minimiser after, runner-up before)
+%!     isl = merge (t < 0.68, r, h.surf);
+%!     assert (numel (h.brane), 1);
+%!     assert (get (h.brane, "xdata")(:), cellfun (@(c) c(end,1), isl.curves(end-numel (isl.brane.x)+1:end))(:));
+%!   endfor
+%!   print (f, "-dpng", png);
+%!   assert (exist (png, "file"), 2);
 %! unwind_protect_cleanup
 %!   close (f);
 %!   if (exist (png, "file"))

@@ -28,7 +28,25 @@
 ## one-sided BCFT backgrounds the runner-up is the best other configuration
 ## of geodesics between endpoints, geodesics ending on a brane and the
 ## horizon (e.g. the brane-ending saddle of an interval whose connected
-## geodesic wins, and the reverse); not on @qcode{"bcft_tfd"}.
+## geodesic wins, and the reverse).  On the two-sided @qcode{"bcft_tfd"}
+## it needs the time @var{t} (below).
+##
+## @strong{Two-sided BCFT} (@code{ads3_background ("bcft_tfd", @dots{})},
+## @var{A} a radiation region R as in @code{page_curve}): without
+## @var{t}, the island configuration (the late-time surface) on one
+## exterior in the half plane, with the brane.  With @var{t}, the
+## minimiser of @code{page_curve} at the boundary time @var{t} on both
+## sides, or with @qcode{"runner_up"} the least configuration of the other
+## kind: the island configuration (no geodesic through the Einstein-Rosen
+## bridge) before the Page time, the best one with geodesics through the
+## bridge from the Page time on (@code{find_transition ("page_time",
+## @dots{})}), so that @code{S} is the other branch of the Page curve
+## (@file{doc/bcft.md}).  Picture @qcode{"kruskal"} as for a thermofield
+## double below: @code{endpoints} are R's endpoints on the left then on the
+## right side; @code{pairs} the geodesics within the left side, within the
+## right side, then through the bridge; the curves ending on the brane
+## follow (@code{brane.endpoint}, @code{brane.landing} in the [x, z] of
+## the exterior); @code{brane_curves} is empty.
 ##
 ## @strong{Time} (@file{doc/surfaces.md}): regions with endpoint times
 ## (n x 4 rows [start, end, t_start, t_end]) in every static bulk, a quench
@@ -173,6 +191,21 @@ endfunction
 %! i = find (isnan (c(:,1)));
 %! assert (isscalar (i) && all (isnan (c(i,:))));
 %! assert (sort (c([i-1 i+1], 1:2)), [-0.5 -0.5; 0.5 0.5], 1e-14);
+
+%!test
+%! ## Two-sided BCFT, R = [1, Inf) at t = 0.2, before its Page time: the
+%! ## geodesic through the bridge, (c/3) log((beta/(pi eps)) cosh(2 pi t/beta))
+%! ## (Hartman and Maldacena 2013, JHEP 05, 014), wins; the runner-up is the
+%! ## island configuration, (c/3)(log((beta/(pi eps)) sinh(2 pi/beta)) +
+%! ## arctanh T) (Calabrese and Cardy 2004; Takayanagi 2011, PRL 107, 101602).
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%! s = rt_surface (bg, [1 Inf], "t", 0.2);
+%! r = rt_surface (bg, [1 Inf], "t", 0.2, "configuration", "runner_up");
+%! e = bg.cutoff;
+%! assert (s.S, log (2 / (pi * e) * cosh (0.2 * pi)) / 3, 1e-12);
+%! assert (r.S, (log (2 / (pi * e) * sinh (pi)) + atanh (0.6)) / 3, 1e-12);
+%! assert ({s.picture, s.pairs, s.sides'}, {"kruskal", [1 2], [0 1]});
+%! assert (r.brane.endpoint', [1 2]);
 
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")

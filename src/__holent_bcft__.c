@@ -13,10 +13,13 @@
  *       disjointness only: STATUS 0 or a core status, the two rows.
  *   [S, KB, NB, SNO, INFO] = __holent_bcft__ ("page", FN, BG, R, T)
  *   X = __holent_bcft__ ("profile", FN, BG, Z, END)  (NaN where no brane)
- *   SURF = __holent_bcft__ ("surface", FN, BG, A, TOL [, RUNNER])
+ *   SURF = __holent_bcft__ ("surface", FN, BG, A, TOL [, RUNNER [, T]])
  *       the minimal configuration (RUNNER true: the runner-up) as curves
  *       (rt_surface), with the branes;
- *       on a two-sided background the island configuration of R = A.
+ *       on a two-sided background without T the island configuration of
+ *       R = A; with T the minimiser (or runner-up) at the boundary time
+ *       T on both sides in the Kruskal picture, with fields times, sides
+ *       (doc/surfaces.md).
  * Unpack, call the core, pack; no physics.  */
 #include <ctype.h>
 #include <stdio.h>
@@ -516,7 +519,8 @@ do_profile (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 
 static const char *surf_fields[] = {
   "picture", "curves", "S", "pairs", "horizon", "endpoints", "intervals",
-  "brane", "brane_curves", "horizon_curve", "horizon_depth"
+  "brane", "brane_curves", "horizon_curve", "horizon_depth", "times",
+  "sides"
 };
 #define N_SURF (sizeof surf_fields / sizeof surf_fields[0])
 
@@ -586,34 +590,228 @@ surf_branes (holent_surface_workspace *sw, const holent_bcft_bg *bg,
   return HOLENT_SUCCESS;
 }
 
+/* The regions of A (named NAME), the workspaces for the largest and the
+   output struct (one per region).  */
+static size_t
+surface_begin (const char *fn, const char *name, const mxArray *A,
+               holent_bcft_workspace **ws, holent_surface_workspace **sw,
+               mxArray **surf)
+{
+  size_t maxrows, nreg = holent_gw_regions (A, fn, name, &maxrows);
+  *ws = ws_alloc (fn, name, maxrows);
+  *sw = holent_surface_workspace_alloc ();
+  if (*sw == NULL)
+    {
+      holent_bcft_workspace_free (*ws);
+      holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
+    }
+  *surf = holent_gw_per_region_struct (A, N_SURF, surf_fields);
+  return nreg;
+}
+
+/* ---- "surface" of a two-sided background at the time T ----------- */
+
+/* The geodesic k of a page configuration from endpoint i of side si to
+   endpoint j of side sj (0 left, 1 right) at time t, and its 1-based
+   indices into [pts; pts] in row k of PP (np rows).  */
+static int
+page_pair (holent_surface_workspace *sw, const holent_bcft_bg *bg,
+           const holent_bcft_result *r, size_t i, int si, size_t j, int sj,
+           double t, double tol, double *pp, size_t np, size_t k)
+{
+  pp[k] = (double) (i + (size_t) si * r->m + 1);
+  pp[k + np] = (double) (j + (size_t) sj * r->m + 1);
+  return holent_surface_tfd (sw, &bg->tfd, r->pts[i], t, si, r->pts[j], t,
+                             sj, 0.0, tol);
+}
+
+/* The configuration r of one side at time t and its mirror as Kruskal
+   curves: pairs within the left side, within the right side, through the
+   bridge (a left point to the same point on the right), then the brane
+   endings of the left and of the right side.  *CELL and *PAIRS (1-based
+   into [pts; pts]); returns 0 or the status of the curve *BAD.  */
+static int
+page_curves (holent_surface_workspace *sw, const holent_bcft_bg *bg,
+             const holent_bcft_result *r, double t, double tol,
+             mxArray **cell, mxArray **pairs, size_t *bad)
+{
+  size_t n2 = 2 * r->npairs, np = n2 + r->nbridge, nb = r->nbrane;
+  *cell = mxCreateCellMatrix (1, np + 2 * nb);
+  *pairs = mxCreateDoubleMatrix (np, 2, mxREAL);
+  double *pp = mxGetPr (*pairs);
+  for (size_t k = 0; k < np + 2 * nb; k++)
+    {
+      int st;
+      if (k < n2)
+        {
+          const size_t *pq = r->pairs + 2 * (k % r->npairs);
+          int side = k >= r->npairs;
+          st = page_pair (sw, bg, r, pq[0], side, pq[1], side, t, tol, pp,
+                          np, k);
+        }
+      else if (k < np)
+        {
+          size_t i = r->bridge[k - n2];
+          st = page_pair (sw, bg, r, i, 0, i, 1, t, tol, pp, np, k);
+        }
+      else
+        st = holent_surface_bcft_tfd_brane (sw, bg,
+                                            r->pts[r->brane[(k - np) % nb]],
+                                            t, k - np >= nb, tol);
+      if (st)
+        {
+          *bad = k;
+          return st;
+        }
+      mxSetCell (*cell, k, holent_gw_columns3 (sw->cur.n, sw->cur.x,
+                                               sw->cur.y, sw->cur.t));
+    }
+  return HOLENT_SUCCESS;
+}
+
+/* The brane endings of both sides (the right ones mirror the left).  */
+static mxArray *
+page_branes (const holent_bcft_result *r)
+{
+  static const char *bf[] = { "endpoint", "x", "end", "landing" };
+  size_t nb = r->nbrane;
+  mxArray *br = mxCreateStructMatrix (1, 1, 4, bf);
+  mxArray *be = mxCreateDoubleMatrix (2 * nb, 1, mxREAL);
+  mxArray *bx = mxCreateDoubleMatrix (2 * nb, 1, mxREAL);
+  mxArray *bl = mxCreateDoubleMatrix (2 * nb, 2, mxREAL);
+  for (size_t i = 0; i < 2 * nb; i++)
+    {
+      size_t q = i % nb;
+      mxGetPr (be)[i] = (double) (r->brane[q] + (i >= nb) * r->m + 1);
+      mxGetPr (bx)[i] = r->pts[r->brane[q]];
+      mxGetPr (bl)[i] = r->brane_x[q];
+      mxGetPr (bl)[i + 2 * nb] = r->brane_z[q];
+    }
+  mxSetField (br, 0, "endpoint", be);
+  mxSetField (br, 0, "x", bx);
+  mxSetField (br, 0, "end", mxCreateDoubleMatrix (2 * nb, 1, mxREAL));
+  mxSetField (br, 0, "landing", bl);
+  return br;
+}
+
+static void
+surface_page (const char *fn, mxArray *plhs[], const holent_bcft_bg *bg,
+              const mxArray *A, double tol, int runner, double t)
+{
+  holent_err err;
+  if (!isfinite (t))
+    holent_gw_raise (fn, isnan (t) ? HOLENT_ENAN : HOLENT_EDOM, "t",
+                     HOLENT_NOINDEX, "must be finite");
+  holent_bcft_workspace *ws;
+  holent_surface_workspace *sw;
+  mxArray *surf;
+  size_t nreg = surface_begin (fn, "A", A, &ws, &sw, &surf);
+  const holent_poll *poll = holent_gw_poll (fn);
+  for (size_t k = 0; k < nreg; k++)
+    {
+      const mxArray *a = holent_gw_region (A, k);
+      size_t n = mxGetM (a), bad = 0;
+      const double *p = mxGetPr (a);
+      holent_bcft_page pg;
+      holent_bcft_result r;
+      mxArray *curves = NULL, *pairs = NULL;
+      int st = holent_bcft_page_prepare (ws, bg, n, p, p + n, &pg, &err,
+                                         poll);
+      if (st)
+        {
+          holent_surface_workspace_free (sw);
+          mxDestroyArray (surf);
+          region_raise (fn, "A", A, k, ws, &err);
+        }
+      if ((st = holent_bcft_page_configuration (ws, bg, t, runner, &r, &err)))
+        {
+          holent_surface_workspace_free (sw);
+          holent_bcft_workspace_free (ws);
+          mxDestroyArray (surf);
+          static const char *const tname[] = { "t" };
+          holent_gw_raise_err (fn, &err, tname, 1);
+        }
+      st = page_curves (sw, bg, &r, t, tol, &curves, &pairs, &bad);
+      if (st)
+        {
+          mxDestroyArray (curves);
+          mxDestroyArray (pairs);
+          mxDestroyArray (surf);
+          holent_surface_workspace_free (sw);
+          holent_bcft_workspace_free (ws);
+          if (st == HOLENT_ETOOBIG || st == HOLENT_ERANGE)
+            holent_gw_raise (fn, st, "t", HOLENT_NOINDEX, "must be nearer 0 "
+                             "for the Kruskal picture, whose coordinates "
+                             "grow like cosh(2 pi t/beta) (got %g; or take "
+                             "a larger tol)", t);
+          holent_gw_raise (fn, st, "geodesic", bad, NULL);
+        }
+      size_t m = r.m;
+      mxArray *pts = mxCreateDoubleMatrix (2 * m, 1, mxREAL);
+      mxArray *tp = mxCreateDoubleMatrix (2 * m, 1, mxREAL);
+      mxArray *sd = mxCreateDoubleMatrix (2 * m, 1, mxREAL);
+      for (size_t i = 0; i < 2 * m; i++)
+        {
+          mxGetPr (pts)[i] = r.pts[i % m];
+          mxGetPr (tp)[i] = t;
+          mxGetPr (sd)[i] = i >= m;
+        }
+      mxSetField (surf, k, "picture", mxCreateString ("kruskal"));
+      mxSetField (surf, k, "curves", curves);
+      mxSetField (surf, k, "S", mxCreateDoubleScalar (r.S));
+      mxSetField (surf, k, "pairs", pairs);
+      mxSetField (surf, k, "horizon", mxCreateLogicalScalar (0));
+      mxSetField (surf, k, "endpoints", pts);
+      mxSetField (surf, k, "times", tp);
+      mxSetField (surf, k, "sides", sd);
+      mxSetField (surf, k, "intervals", holent_gw_columns (n, p, p + n));
+      mxSetField (surf, k, "brane", page_branes (&r));
+      mxSetField (surf, k, "brane_curves", mxCreateCellMatrix (1, 0));
+      mxSetField (surf, k, "horizon_curve", mxCreateDoubleMatrix (0, 3,
+                                                                  mxREAL));
+      mxSetField (surf, k, "horizon_depth", mxCreateDoubleScalar (NAN));
+    }
+  holent_gw_poll_end ();
+  holent_surface_workspace_free (sw);
+  holent_bcft_workspace_free (ws);
+  plhs[0] = surf;
+}
+
 static void
 do_surface (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
 {
   char fn[64];
   holent_bcft_bg bg;
   holent_err err;
-  holent_gw_nargs (GW, nlhs, 1, nrhs, 5, 6);
+  holent_gw_nargs (GW, nlhs, 1, nrhs, 5, 7);
   holent_gw_string (prhs[1], GW, "FN", fn, sizeof fn);
   unpack_bg (prhs[2], fn, &bg);
   const mxArray *A = prhs[3];
   double tol = holent_gw_scalar (prhs[4], fn, "tol");
   int runner = nrhs > 5 && holent_gw_scalar (prhs[5], fn, "RUNNER") != 0.0;
   int tfd = bg.kind == HOLENT_BCFT_TFD;
-  if (runner && tfd)
-    holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
-                     "configuration \"runner_up\" is not available on a "
-                     "two-sided \"bcft_tfd\" background");
-  const char *name = tfd ? "R" : "A";
-  size_t maxrows, nreg = holent_gw_regions (A, fn, name, &maxrows);
-  holent_bcft_workspace *ws = ws_alloc (fn, name, maxrows);
-  holent_surface_workspace *sw = holent_surface_workspace_alloc ();
-  if (sw == NULL)
+  if (nrhs > 6)
     {
-      holent_bcft_workspace_free (ws);
-      holent_gw_raise (fn, HOLENT_ENOMEM, NULL, HOLENT_NOINDEX, NULL);
+      if (!tfd)
+        holent_gw_raise (fn, HOLENT_EOPTION, "t", HOLENT_NOINDEX,
+                         "applies to the two-sided \"bcft_tfd\" background "
+                         "only (a one-sided BCFT background is static)");
+      surface_page (fn, plhs, &bg, A, tol, runner,
+                    holent_gw_scalar (prhs[6], fn, "t"));
+      return;
     }
+  if (runner && tfd)
+    holent_gw_raise (fn, HOLENT_EOPTION, NULL, HOLENT_NOINDEX,
+                     "configuration \"runner_up\" on a two-sided "
+                     "\"bcft_tfd\" background needs the boundary time 't' "
+                     "(without it the surface is the late-time island "
+                     "configuration)");
+  const char *name = "A";   /* rt_surface's argument, also on "bcft_tfd" */
+  holent_bcft_workspace *ws;
+  holent_surface_workspace *sw;
+  mxArray *surf;
+  size_t nreg = surface_begin (fn, name, A, &ws, &sw, &surf);
   const holent_poll *poll = holent_gw_poll (fn);
-  mxArray *surf = holent_gw_per_region_struct (A, N_SURF, surf_fields);
   int disk = holent_surface_bcft_picture (&bg);
   for (size_t k = 0; k < nreg; k++)
     {

@@ -531,3 +531,14 @@ holent_gw_columns (size_t n, const double *a, const double *b)
     }
   return m;
 }
+
+mxArray *
+holent_gw_columns3 (size_t n, const double *a, const double *b,
+                    const double *c)
+{
+  mxArray *m = mxCreateDoubleMatrix (n, 3, mxREAL);
+  const double *col[3] = { a, b, c };
+  for (int k = 0; k < 3 && n > 0; k++)
+    memcpy (mxGetPr (m) + k * n, col[k], n * sizeof (double));
+  return m;
+}

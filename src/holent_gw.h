@@ -115,6 +115,9 @@ mxArray *holent_gw_pairs (size_t np, const size_t *pairs, const double *pts,
 /* An n x 1 copy of V; an n x 2 matrix [A, B].  */
 mxArray *holent_gw_column (size_t n, const double *v);
 mxArray *holent_gw_columns (size_t n, const double *a, const double *b);
+/* An n x 3 matrix [A, B, C] (curves with a third coordinate).  */
+mxArray *holent_gw_columns3 (size_t n, const double *a, const double *b,
+                             const double *c);
 
 /* A new real double array of the same dimensions as a.  */
 mxArray *holent_gw_like (const mxArray *a);

@@ -224,6 +224,171 @@
 %! assert (r.S >= s.S);
 %! assert (! isequal ({s.pairs, s.brane.x, s.horizon}, {r.pairs, r.brane.x, r.horizon}));
 
-%!error <not available on a two-sided> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "configuration", "runner_up")
+## ---- The two-sided BCFT at a boundary time t: minimiser and runner-up ----
+## Kruskal picture [X_K, T_K, x] of eternal planar BTZ (doc/surfaces.md),
+## u = T_K - X_K, v = T_K + X_K, metric (-4 du dv + R^2 (1 - uv)^2
+## dx^2)/(1 + uv)^2, R = 2 pi/beta.  It is the quadric
+## -X0^2 + X1^2 + X2^2 - X3^2 = -1 of R^{2,2} through X0 +- X1 = rho
+## e^{+-R x}, rho = (1 - uv)/(1 + uv), X2 = (v - u)/(1 + uv),
+## X3 = (v + u)/(1 + uv) (Banados, Henneaux, Teitelboim and Zanelli 1993,
+## PRD 48, 1506; common practice), so the geodesic distance is
+## cosh d = -X.Y; written in the chart (derived here) without the
+## cancellations of X.Y near the boundary:
+##   sinh^2(d/2) = ((1 - u1 v1)(1 - u2 v2) sinh^2(R dx/2) - du dv)
+##                 / ((1 + u1 v1)(1 + u2 v2)),
+## and for the null ray N = lim X/rho of a boundary point (u2 v2 = -1)
+##   -X.N = (2 (1 - u1 v1) sinh^2(R dx/2) - du dv)/(1 + u1 v1).
+
+%!## sinh^2(R dx/2), du and dv between the points p and q (rows)
+%!function [s2, du, dv] = kruskal_parts (p, q, R)
+%!  d = p - q;
+%!  du = d(:,2) - d(:,1);  dv = d(:,2) + d(:,1);
+%!  s2 = sinh (R * d(:,3) / 2).^2;
+%!endfunction
+
+%!function d = kruskal_dist (p, q, R)
+%!  uvp = (p(:,2) - p(:,1)) .* (p(:,2) + p(:,1));
+%!  uvq = (q(:,2) - q(:,1)) .* (q(:,2) + q(:,1));
+%!  [s2, du, dv] = kruskal_parts (p, q, R);
+%!  h = ((1 - uvp) .* (1 - uvq) .* s2 - du .* dv) ./ ((1 + uvp) .* (1 + uvq));
+%!  d = 2 * asinh (sqrt (max (h, 0)));
+%!endfunction
+
+%!## Regulated length of a sampled curve: the distances between consecutive
+%!## samples (the length of the curve if they lie on one geodesic) and, at
+%!## an end on the boundary, the regulated distance log(-2 X.N/(R eps))
+%!## from a sample X to the boundary point, whose cutoff point r = 1/eps is
+%!## N/(R eps) + O(eps) (common practice), taken from the first sample
+%!## with 1 + uv >= 1e-2 (nearer the boundary the rounding of X_K, T_K of
+%!## a few units costs digits in 1 + uv).  dev: the sum over all bulk
+%!## samples minus the distance between the first and the last (0 on one
+%!## geodesic).
+%!function [len, dev] = kruskal_length (c, R, eps)
+%!  bd = abs (c(:,1).^2 - c(:,2).^2 - 1) < 1e-12 * c(:,1).^2;   # on the boundary
+%!  assert (bd(1));
+%!  k = find (! bd);
+%!  assert (k', k(1):k(end));
+%!  seg = kruskal_dist (c(1:end-1,:), c(2:end,:), R);
+%!  dev = sum (seg(k(1:end-1))) - kruskal_dist (c(k(1),:), c(k(end),:), R);
+%!  deep = find (1 + (c(:,2) - c(:,1)) .* (c(:,2) + c(:,1)) >= 1e-2 & ! bd);
+%!  len = sum (seg(deep(1):deep(end)-1));
+%!  for e = find (bd)'
+%!    P = c(deep(1 + (e > deep(1)) * (numel (deep) - 1)),:);
+%!    uv = (P(2) - P(1)) * (P(2) + P(1));
+%!    [s2, du, dv] = kruskal_parts (P, c(e,:), R);
+%!    len += log (2 * (2 * (1 - uv) * s2 - du * dv) / (1 + uv) / (R * eps));
+%!  endfor
+%!endfunction
+
+%!## Which of s.pairs cross the bridge (join the two sides).
+%!function nb = n_bridge (s)
+%!  nb = sum (s.sides(s.pairs(:,1)) != s.sides(s.pairs(:,2)));
+%!endfunction
+
+%!test
+%! ## The two branches of the Page curve.  On bcft_tfd at a time t the
+%! ## minimiser is page_curve's and the runner-up is the best configuration
+%! ## of the other kind: before the Page time (find_transition) the
+%! ## Hartman-Maldacena geodesics through the bridge win and the runner-up
+%! ## is the island configuration; after it the reverse; at the Page time
+%! ## they agree.  For R = [b, Inf] against the closed forms
+%! ## S_HM = (c/3) log((beta/(pi eps)) cosh(2 pi t/beta)) (Hartman and
+%! ## Maldacena 2013, JHEP 05, 014) and S_island = (c/3) (log((beta/(pi eps))
+%! ## sinh(2 pi b/beta)) + arctanh T) (Calabrese and Cardy 2004, J. Stat.
+%! ## Mech. P06002, with log g of Takayanagi 2011, PRL 107, 101602; the
+%! ## competition as in Almheiri, Mahajan and Maldacena 2019,
+%! ## arXiv:1910.11077, from memory).
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6, "c", 6);
+%! eps = bg.cutoff;  beta = bg.beta;  c = bg.c;
+%! regs = {[1 Inf], [0.2 0.5; 1 Inf], [0.3 1.1; 1.6 2.4], [0.05 Inf]};
+%! for q = 1:numel (regs)
+%!   R = regs{q};
+%!   tp = find_transition ("page_time", bg, R);
+%!   ts = [0, tp / 2, tp * (1 - 1e-7), tp, tp + 1e-7, tp + 0.6];
+%!   for t = ts
+%!     [S, info] = page_curve (bg, R, t);
+%!     s = rt_surface (bg, R, "t", t);
+%!     r = rt_surface (bg, R, "t", t, "configuration", "runner_up");
+%!     assert (s.picture, "kruskal");
+%!     assert (s.S, S, 1e-10 * S);
+%!     other = merge (info.n_bridge > 0, info.S_island, info.S_no_island);
+%!     assert (r.S, other, 1e-10 * S);
+%!     assert (r.S >= s.S);
+%!     ## bridge geodesics before the Page time only (ties to the island)
+%!     assert (n_bridge (s) > 0, t < tp);
+%!     assert (n_bridge (r) > 0, t >= tp);
+%!     assert (n_bridge (s), info.n_bridge);
+%!     if (t == tp && tp > 0)
+%!       assert (r.S, s.S, 1e-10 * S);
+%!     endif
+%!     if (isinf (R(end)) && rows (R) == 1)
+%!       Shm = c / 3 * log (beta / (pi * eps) * cosh (2 * pi * t / beta));
+%!       Sis = c / 3 * (log (beta / (pi * eps) * sinh (2 * pi * R(1) / beta)) + atanh (0.6));
+%!       assert (sort ([s.S r.S]), sort ([Shm Sis]), 1e-10 * Sis);
+%!       ch = exp (atanh (0.6)) * sinh (2 * pi * R(1) / beta);
+%!       assert (tp, beta / (2 * pi) * acosh (max (ch, 1)), 1e-12);
+%!     endif
+%!   endfor
+%! endfor
+
+%!test
+%! ## The curves from the metric: each piece of the minimiser and of the
+%! ## runner-up before and after the Page time lies on one geodesic of the
+%! ## Kruskal metric (samples collinear in R^{2,2}), the pieces' regulated
+%! ## lengths add up to 6 S/c; the bridge geodesics run from the left
+%! ## boundary to the right one at constant x (translation invariance);
+%! ## the brane-ending ones stay on the slice of Schwarzschild time t
+%! ## (T_K/X_K = tanh(2 pi t/beta), boost invariance) outside the horizon,
+%! ## and, mapped back to the static slice (q^2 = X_K^2 - T_K^2,
+%! ## z = zh (1 - q^2)/(1 + q^2)), end orthogonally on the brane at
+%! ## distance arctanh T from the tensionless one (check_brane_curves).
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6, "c", 6, "cutoff", 1e-5);
+%! beta = bg.beta;  Rk = 2 * pi / beta;  zh = bg.zh;
+%! A = [0.2 0.5; 1 Inf];
+%! tp = find_transition ("page_time", bg, A);
+%! for t = [0.5 * tp, tp + 0.4]
+%!   for which = {"minimal", "runner_up"}
+%!     s = rt_surface (bg, A, "t", t, "configuration", which{1}, "tol", 1e-4);
+%!     total = 0;
+%!     nb = numel (s.brane.x);
+%!     for k = 1:numel (s.curves)
+%!       cv = s.curves{k};
+%!       [len, dev] = kruskal_length (cv, Rk, bg.cutoff);
+%!       assert (abs (dev) < 1e-10 * len);
+%!       total += len;
+%!       if (k <= rows (s.pairs))
+%!         e = s.pairs(k,:);
+%!         side = s.sides(e);
+%!         ends = [(2 * side - 1) .* cosh(Rk * t), sinh(Rk * t) * [1; 1], s.endpoints(e)];
+%!         assert (cv([1 end],:), ends, 1e-12 * cosh (Rk * t));
+%!         if (side(1) != side(2))
+%!           assert (cv(:,3), s.endpoints(e(1)) * ones (rows (cv), 1));
+%!           assert (any (cv(:,1) < 0) && any (cv(:,1) > 0));
+%!         endif
+%!       else
+%!         q = k - rows (s.pairs);
+%!         assert (abs (cv(:,2) - tanh (Rk * t) * abs (cv(:,1))) < 1e-12 * cosh (Rk * t));
+%!         q2 = cv(:,1).^2 - cv(:,2).^2;
+%!         assert (all (q2(2:end) > 0 & q2(2:end) < 1));
+%!         z = zh * (1 - q2) ./ (1 + q2);
+%!         assert (abs (z(1)) < 1e-12);
+%!         z(1) = 0;
+%!         assert ([cv(end,3), z(end)], s.brane.landing(q,:), 1e-12);
+%!         one = struct ("curves", {{[cv(:,3), z]}}, "brane", struct ("x", s.brane.x(q), "end", 0));
+%!         check_brane_curves (bg, one, @(p, w) dist_btz (p, w, zh), bg.tension,
+%!                             @(u, e) [0, zh / (1 + exp (-u))],
+%!                             @(zz, e) [brane_profile(bg, zz), zz], [1 1] * zh * (1 - 1e-9));
+%!       endif
+%!     endfor
+%!     assert (total * bg.c / 6, s.S, 1e-10 * s.S);
+%!   endfor
+%! endfor
+
+%!error <needs the boundary time 't'> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "configuration", "runner_up")
+%!error <rt_surface: t: applies to the two-sided> rt_surface (ads3_background ("bcft", "half_line"), [1 2], "t", 1)
+%!error <rt_surface: t: must be nearer 0 for the Kruskal picture> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 Inf], "t", 300)
+%!error <rt_surface: t: is too far from 0> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 Inf], "t", 1e308, "configuration", "runner_up")
+%!error <rt_surface: t must not be NaN> rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "t", NaN)
+%!error <plot_rt_surface: configuration "runner_up" on a two-sided> plot_rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2), [1 2], "runner_up", true)
 %!error <single RT candidate> rt_surface (ads3_background ("bcft", "interval", "length", 3, "beta", 1), [0 3], "configuration", "runner_up")
 %!error <rt_surface: A\(1,:\): must lie> rt_surface (ads3_background ("bcft", "half_line"), [-1 2])

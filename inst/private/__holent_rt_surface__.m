@@ -28,7 +28,9 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
                  "horizon_curve", {}, "horizon_depth", {}, "defect", {},
                  "brane", {}, "brane_curves", {}, "times", {}, "sides", {},
                  "windings", {}, "columns", {});
-  if (isfield (o, "t") || __holent_time_entropy__ ("timed", bg, A))
+  ## a BCFT thermofield double takes "t" on its own path (below)
+  if ((isfield (o, "t") && ! __holent_is_bcft__ (bg))
+      || __holent_time_entropy__ ("timed", bg, A))
     ## endpoint times, a thermofield double or a quench: the core's
     ## minimiser and its geodesics in the picture of the state
     if (strcmp (which, "runner_up"))
@@ -54,14 +56,26 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
   if (bcft)
     ## surfaces ending on the branes, and the branes (the core's minimiser)
     ru = strcmp (which, "runner_up");
+    targ = {};
+    if (isfield (o, "t"))
+      ## "bcft_tfd" at a boundary time: the Kruskal picture
+      targ = {__holent_scalar__(fn, "t", o.t, {-Inf, Inf, "()"})};
+    endif
     if (wascell)
-      s = __holent_bcft__ ("surface", fn, bg, A, tol, double (ru));
+      s = __holent_bcft__ ("surface", fn, bg, A, tol, double (ru), targ{:});
     else
-      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol, double (ru));
+      s = __holent_bcft__ ("surface", fn, bg, A{1}, tol, double (ru), targ{:});
     endif
     [s.arcs] = deal (zeros (0, 1));
     [s.defect] = deal (false);
-    s = static_fields (s);
+    if (isempty (targ))
+      s = static_fields (s);
+    else
+      [s.columns] = deal ({"X_K", "T_K", "x"});
+      for k = 1:numel (s)
+        s(k).windings = zeros (rows (s(k).pairs), 1);   # no bridge winds on a half line
+      endfor
+    endif
     surf = reshape (orderfields (s, surf), size (A));
     return;
   endif

@@ -588,9 +588,12 @@ struct holent_bcft_workspace
   double *bx, *bz, *bpt;
   double *ipair;           /* island configuration's pairs (coordinates) */
   size_t n_ipair;
+  size_t *bridge;          /* page configuration: bridge endings          */
+  double *cbx, *cbz;       /* and its landing points                      */
   /* state of the last call */
   size_t m, n, kmax, pg_m;
   int c0;
+  int page_ok;             /* the DP tables are a page_prepare's          */
 };
 
 holent_bcft_workspace *
@@ -626,10 +629,14 @@ holent_bcft_workspace_alloc (size_t nmax)
   w->bz = malloc (M * sizeof (double));
   w->bpt = malloc (M * sizeof (double));
   w->ipair = malloc (M * sizeof (double));
+  w->bridge = malloc (M * sizeof (size_t));
+  w->cbx = malloc (M * sizeof (double));
+  w->cbz = malloc (M * sizeof (double));
   if (!w->rows || !w->start || !w->end || !w->pts || !w->C || !w->lc
       || !w->rc || !w->P || !w->Pch || !w->F || !w->Fch || !w->G || !w->Gch
       || !w->A || !w->nbk || !w->pairs || !w->brane || !w->bend || !w->bx
-      || !w->bz || !w->bpt || !w->ipair)
+      || !w->bz || !w->bpt || !w->ipair || !w->bridge || !w->cbx
+      || !w->cbz)
     {
       holent_bcft_workspace_free (w);
       return NULL;
@@ -647,6 +654,7 @@ holent_bcft_workspace_free (holent_bcft_workspace *w)
   free (w->F); free (w->Fch); free (w->G); free (w->Gch); free (w->A);
   free (w->nbk); free (w->pairs); free (w->brane); free (w->bend);
   free (w->bx); free (w->bz); free (w->bpt); free (w->ipair);
+  free (w->bridge); free (w->cbx); free (w->cbz);
   free (w);
 }
 
@@ -979,6 +987,7 @@ prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
                              "...)"
                            : "BG is two-sided: use page_curve for its "
                              "radiation regions");
+  w->page_ok = 0;
   int st = normalise (w, bg, n, a, b, tfd, ns, err);
   if (st)
     return st;
@@ -987,6 +996,30 @@ prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg, size_t n,
     w->rc[i] = 0.0;
   st = run_dp (w, kmax ? w->m : 0, poll);
   return st ? holent_err_set (err, st, -1, HOLENT_NOINDEX, NULL) : st;
+}
+
+/* The fields of *res that point into w, the counts and the length; the
+   rest zero.  */
+static void
+fill_result (holent_bcft_result *res, const holent_bcft_workspace *w,
+             double length, size_t np, size_t nb, const double *bx,
+             const double *bz)
+{
+  memset (res, 0, sizeof *res);
+  res->length = length;
+  res->m = w->m;
+  res->npairs = np;
+  res->nbrane = nb;
+  res->pts = w->pts;
+  res->pairs = w->pairs;
+  res->brane = w->brane;
+  res->brane_end = w->bend;
+  res->brane_x = bx;
+  res->brane_z = bz;
+  res->bridge = w->bridge;
+  res->start = w->start;
+  res->end = w->end;
+  res->n = w->n;
 }
 
 int
@@ -1033,23 +1066,11 @@ holent_bcft_entropy (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   for (size_t q = 0; q < nb; q++)
     (void) brane_len (bg, w->pts[w->brane[q]], w->bend[q], w->bx + q,
                       w->bz + q);
-  memset (res, 0, sizeof *res);
-  res->length = bh && hlen > 0.0 ? best - hlen : best;
-  res->horizon = bh && hlen > 0.0;
-  res->S = bg->c / 6.0 * res->length + (res->horizon ? bg->S_H : 0.0);
-  res->m = w->m;
-  res->npairs = np;
-  res->nbrane = nb;
+  int hor = bh && hlen > 0.0;
+  fill_result (res, w, hor ? best - hlen : best, np, nb, w->bx, w->bz);
+  res->horizon = hor;
+  res->S = bg->c / 6.0 * res->length + (hor ? bg->S_H : 0.0);
   res->n_short = ns;
-  res->pts = w->pts;
-  res->pairs = w->pairs;
-  res->brane = w->brane;
-  res->brane_end = w->bend;
-  res->brane_x = w->bx;
-  res->brane_z = w->bz;
-  res->start = w->start;
-  res->end = w->end;
-  res->n = w->n;
   return HOLENT_SUCCESS;
 }
 
@@ -1226,6 +1247,7 @@ holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
         }
     }
   w->pg_m = m;
+  w->page_ok = 1;
   memset (pg, 0, sizeof *pg);
   pg->m = m;
   pg->h0 = bridge_half (bg, 0.0);
@@ -1254,6 +1276,25 @@ holent_bcft_page_prepare (holent_bcft_workspace *w, const holent_bcft_bg *bg,
   return HOLENT_SUCCESS;
 }
 
+/* Least A_k + k h over k >= 1 (one or more bridge geodesics per side),
+   *kb its k (the first on ties); Inf and 0 without endpoints.  */
+static double
+page_bridged (const holent_bcft_workspace *w, double h, size_t *kb)
+{
+  double best = INFINITY;
+  *kb = 0;
+  for (size_t k = 1; k <= w->pg_m; k++)
+    {
+      double v = w->A[k] + (double) k * h;
+      if (v < best)
+        {
+          best = v;
+          *kb = k;
+        }
+    }
+  return best;
+}
+
 int
 holent_bcft_page_eval (const holent_bcft_workspace *w,
                        const holent_bcft_bg *bg, size_t nt, const double *t,
@@ -1265,24 +1306,13 @@ holent_bcft_page_eval (const holent_bcft_workspace *w,
     return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
   if (bg->kind != HOLENT_BCFT_TFD)
     return holent_err_set (err, HOLENT_EUNSUP, -1, HOLENT_NOINDEX, NULL);
-  size_t m = w->pg_m;
   for (size_t i = 0; i < nt; i++)
     {
       if (!isfinite (t[i]))
         return holent_err_set (err, isnan (t[i]) ? HOLENT_ENAN : HOLENT_EDOM,
                                0, i, "must be a finite time");
-      double h = bridge_half (bg, t[i]);
-      double best = INFINITY;
-      size_t bk = 0;
-      for (size_t k = 1; k <= m; k++)
-        {
-          double v = w->A[k] + (double) k * h;
-          if (v < best)
-            {
-              best = v;
-              bk = k;
-            }
-        }
+      size_t bk;
+      double best = page_bridged (w, bridge_half (bg, t[i]), &bk);
       if (S_noisland)
         S_noisland[i] = bg->c / 3.0 * best;
       if (w->A[0] <= best)
@@ -1296,5 +1326,53 @@ holent_bcft_page_eval (const holent_bcft_workspace *w,
       if (nbrane)
         nbrane[i] = (double) w->nbk[bk];
     }
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_bcft_page_configuration (holent_bcft_workspace *w,
+                                const holent_bcft_bg *bg, double t,
+                                int runner, holent_bcft_result *res,
+                                holent_err *err)
+{
+  holent_err_clear (err);
+  if (w == NULL || bg == NULL || res == NULL || !w->page_ok)
+    return holent_err_set (err, HOLENT_EINVAL, -1, HOLENT_NOINDEX, NULL);
+  if (bg->kind != HOLENT_BCFT_TFD)
+    return holent_err_set (err, HOLENT_EUNSUP, -1, HOLENT_NOINDEX, NULL);
+  if (!isfinite (t))
+    return holent_err_set (err, isnan (t) ? HOLENT_ENAN : HOLENT_EDOM, 0,
+                           HOLENT_NOINDEX, "must be a finite time");
+  double h = bridge_half (bg, t);
+  size_t kb;
+  double vb = page_bridged (w, h, &kb);
+  /* the minimiser is the island one iff A_0 <= vb (page_eval); the
+     runner-up is the best of the other kind */
+  int island = w->A[0] <= vb, bridged = island == (runner != 0);
+  size_t k = bridged ? kb : 0;
+  double v = bridged ? vb : w->A[0];
+  if (!(v < INFINITY))   /* R has endpoints: only h(t) can overflow */
+    return holent_err_set (err, HOLENT_ERANGE, 0, HOLENT_NOINDEX,
+                           "is too far from 0: a geodesic through the "
+                           "bridge is longer than the largest double");
+  size_t bi = 0, np, nb, nbr = 0, nbb = 0;
+  int bp = 0;
+  (void) best_split (w, k, -1, &bi, &bp);
+  reconstruct (w, bi, bp, k, &np, &nb);
+  /* the right singles of the TFD's programme cross the bridge */
+  for (size_t q = 0; q < nb; q++)
+    if (w->bend[q])
+      w->bridge[nbr++] = w->brane[q];
+    else
+      {
+        w->brane[nbb] = w->brane[q];
+        w->bend[nbb] = 0;
+        (void) brane_len (bg, w->pts[w->brane[q]], 0, w->cbx + nbb,
+                          w->cbz + nbb);
+        nbb++;
+      }
+  fill_result (res, w, 2.0 * v, np, nbb, w->cbx, w->cbz);
+  res->S = bg->c / 6.0 * res->length;
+  res->nbridge = nbr;
   return HOLENT_SUCCESS;
 }

@@ -204,6 +204,9 @@ typedef struct
   const double *start;   /* merged intervals, ascending (workspace-owned) */
   const double *end;
   size_t n;              /* number of merged intervals                    */
+  size_t nbridge;        /* TFD (holent_bcft_page_configuration): geodesics
+                            through the Einstein-Rosen bridge per side    */
+  const size_t *bridge;  /* nbridge indices into pts                      */
 } holent_bcft_result;
 
 /* RT entropy of the region of n rows [a[i], b[i]] on a half-line or
@@ -282,5 +285,31 @@ int holent_bcft_page_eval (const holent_bcft_workspace *w,
                            const double *t, double *S, double *kbridge,
                            double *nbrane, double *S_noisland,
                            holent_err *err);
+
+/* The minimiser (RUNNER 0) or the runner-up (RUNNER 1) at the boundary
+ * time t (both sides) of the region of the last holent_bcft_page_prepare
+ * on w (with the same bg), as a configuration of one side: the other
+ * side is its mirror image (a symmetric configuration is optimal,
+ * doc/bcft.md).  The minimiser is page_eval's (ties go to fewer bridge
+ * geodesics).  The runner-up is the least configuration of the other
+ * kind: without a geodesic through the bridge when the minimiser has one
+ * (the island value S_island, independent of t), otherwise the least
+ * with at least one (page_eval's S_noisland).  So before the Page time the
+ * minimiser crosses the bridge and the runner-up is the island
+ * configuration, after it the reverse, and the two values are the two
+ * branches of the Page curve.  *res gets S and length of both sides, m
+ * and pts, the pairs within a side, the brane endings (brane_end 0) with
+ * their landing points, and nbridge, bridge: the endpoints whose geodesic
+ * crosses the bridge to the same point on the other side (each of
+ * length 2 h(t), independent of the point); horizon 0, and start, end,
+ * n of the merged region.  Pointers stay valid until w is used again.
+ * Errors (ERR may be NULL): HOLENT_EINVAL for NULL or a w not prepared
+ * by holent_bcft_page_prepare, HOLENT_EUNSUP unless bg is a TFD,
+ * HOLENT_ENAN / HOLENT_EDOM for a NaN or infinite t, HOLENT_ERANGE for
+ * a t so late that the bridge length overflows (ERR's arg 0 names t).  */
+int holent_bcft_page_configuration (holent_bcft_workspace *w,
+                                    const holent_bcft_bg *bg, double t,
+                                    int runner, holent_bcft_result *res,
+                                    holent_err *err);
 
 #endif /* HOLENT_BCFT_H */

@@ -1406,3 +1406,33 @@ holent_surface_bcft_brane (holent_surface_workspace *w,
         return st;
   return HOLENT_SUCCESS;
 }
+
+int
+holent_surface_bcft_tfd_brane (holent_surface_workspace *w,
+                               const holent_bcft_bg *bg, double x, double t,
+                               int side, double tol)
+{
+  if (w == NULL || bg == NULL || isnan (t) || (side != 0 && side != 1))
+    return HOLENT_EINVAL;
+  if (bg->kind != HOLENT_BCFT_TFD)
+    return HOLENT_EUNSUP;
+  if (!isfinite (t))
+    return HOLENT_EDOM;
+  double zh = bg->zh, ch = cosh (t / zh), sh = sinh (t / zh);
+  if (!isfinite (ch))
+    return HOLENT_ERANGE;
+  int st = holent_surface_bcft_brane_geodesic (w, bg, x, 0, tol);
+  if (st)
+    return st;
+  /* Kruskal u v = (z - zh)/(z + zh) on the exterior (z < zh: the
+     landing point lies outside the horizon), v/(-u) = e^{2 t/zh} */
+  holent_curve *c = &w->cur;
+  for (size_t i = 0; i < c->n; i++)
+    {
+      double z = c->y[i], q = sqrt ((zh - z) / (zh + z));
+      c->t[i] = c->x[i];
+      c->x[i] = (side ? q : -q) * ch;
+      c->y[i] = q * sh;
+    }
+  return HOLENT_SUCCESS;
+}

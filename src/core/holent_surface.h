@@ -214,4 +214,18 @@ int holent_surface_bcft_brane (holent_surface_workspace *w,
                                const holent_bcft_bg *bg, int end,
                                double zmax, double tol);
 
+/* Two-sided BCFT (bg a TFD): the geodesic from the boundary point x of
+ * side SIDE (0 left, 1 right) at boundary time t to the brane, in the
+ * Kruskal picture of holent_surface_tfd ([X_K, T_K, x], both times
+ * forward).  The brane is static, so the curve is the one of
+ * holent_surface_bcft_brane_geodesic (sampled to tol in the half plane
+ * of the exterior) on the slice of Schwarzschild time t, mapped point by
+ * point: (x, z) -> (+-q cosh(t/zh), q sinh(t/zh), x),
+ * q = sqrt((zh - z)/(zh + z)).  HOLENT_EUNSUP unless bg is a TFD,
+ * HOLENT_EINVAL for a NaN or a side other than 0, 1, HOLENT_EDOM for an
+ * infinite t, HOLENT_ERANGE when cosh(t/zh) overflows.  */
+int holent_surface_bcft_tfd_brane (holent_surface_workspace *w,
+                                   const holent_bcft_bg *bg, double x,
+                                   double t, int side, double tol);
+
 #endif /* HOLENT_SURFACE_H */

@@ -4,7 +4,9 @@
  * a GSL Brent minimisation of the hyperbolic distance over the landing
  * point on the brane; the dynamic programme against a brute-force
  * enumeration of every non-crossing configuration; the Page-curve
- * reduction against a brute force over two-sided configurations.  */
+ * reduction against a brute force over two-sided configurations, and its
+ * minimiser and runner-up at a time (the island and no-island classes)
+ * against that brute force split by geodesics through the bridge.  */
 #include <math.h>
 #include <stdlib.h>
 #include <string.h>
@@ -481,6 +483,55 @@ test_dp_brute (void)
   holent_bcft_workspace_free (w);
 }
 
+/* A random radiation region of n (<= 3) rows [a, b] in (0, 4), the last
+   reaching Inf when INF; xs gets its finite endpoints ascending.  */
+static void
+random_radiation (int n, int inf, double *a, double *b, double *xs)
+{
+  double cuts[6];
+  for (int k = 0; k < 2 * n; k++)
+    cuts[k] = 4.0 * (rand () + 1.0) / (RAND_MAX + 2.0);
+  for (int i = 1; i < 2 * n; i++)
+    for (int j = i; j > 0 && cuts[j] < cuts[j - 1]; j--)
+      {
+        double t = cuts[j]; cuts[j] = cuts[j - 1]; cuts[j - 1] = t;
+      }
+  for (int k = 0; k < n; k++)
+    {
+      a[k] = cuts[2 * k];
+      b[k] = cuts[2 * k + 1];
+    }
+  if (inf)
+    b[n - 1] = INFINITY;
+  memcpy (xs, cuts, (size_t) (inf ? 2 * n - 1 : 2 * n) * sizeof *xs);
+}
+
+/* Costs of the 2 m points of a two-sided region at time t: the left
+   points xs ascending, then the right ones descending (around the
+   boundary circle of a Cauchy slice, the brane on the arc from the last
+   back to the first): pairs within a side, through the bridge, and to
+   the brane.  */
+static void
+two_sided_costs (const holent_bcft_bg *bg, const double *xs, int m, double t,
+                 double pc[][16], double *lc)
+{
+  for (int i = 0; i < 2 * m; i++)
+    {
+      int si = i >= m;
+      double xi = si ? xs[2 * m - 1 - i] : xs[i];
+      for (int j = i + 1; j < 2 * m; j++)
+        {
+          int sj = j >= m;
+          double xj = sj ? xs[2 * m - 1 - j] : xs[j];
+          if (si == sj)
+            holent_bcft_pair_length (bg, xi, xj, pc[i] + j);
+          else
+            holent_tfd_cross_length (&bg->tfd, xi, t, xj, t, pc[i] + j);
+        }
+      holent_bcft_brane_length (bg, xi, 0, lc + i, NULL, NULL);
+    }
+}
+
 /* two-sided brute force: left points ascending then right descending;
    every single ends on the brane (the wrap-around arc) */
 static void
@@ -494,54 +545,19 @@ test_page_brute (void)
   for (int trial = 0; trial < 60; trial++)
     {
       int n = 1 + rand () % 2;
-      double cuts[4];
-      for (int k = 0; k < 2 * n; k++)
-        cuts[k] = 4.0 * (rand () + 1.0) / (RAND_MAX + 2.0);
-      for (int i = 1; i < 2 * n; i++)
-        for (int j = i; j > 0 && cuts[j] < cuts[j - 1]; j--)
-          {
-            double t = cuts[j]; cuts[j] = cuts[j - 1]; cuts[j - 1] = t;
-          }
-      double a[2], b[2];
-      for (int k = 0; k < n; k++)
-        {
-          a[k] = cuts[2 * k];
-          b[k] = cuts[2 * k + 1];
-        }
-      if (trial % 3 == 0)
-        b[n - 1] = INFINITY;
+      double a[2], b[2], xs[4];
+      random_radiation (n, trial % 3 == 0, a, b, xs);
       HT_STATUS (holent_bcft_page_prepare (w, &bg, (size_t) n, a, b, &pg, NULL, NULL), HOLENT_SUCCESS);
       int m = (int) pg.m;
-      double xs[4];
-      int k = 0;
-      for (int q = 0; q < n; q++)
-        {
-          xs[k++] = a[q];
-          if (isfinite (b[q]))
-            xs[k++] = b[q];
-        }
       const double ts[] = { 0.0, 0.3, 1.0, 2.5, -0.7 };
       for (int it = 0; it < 5; it++)
         {
           brute B;
           memset (&B, 0, sizeof B);
           B.N = 2 * m;
+          two_sided_costs (&bg, xs, m, ts[it], B.pc, B.lc);
           for (int i = 0; i < B.N; i++)
-            {
-              int si = i >= m;
-              double xi = si ? xs[2 * m - 1 - i] : xs[i];
-              for (int j = i + 1; j < B.N; j++)
-                {
-                  int sj = j >= m;
-                  double xj = sj ? xs[2 * m - 1 - j] : xs[j];
-                  if (si == sj)
-                    holent_bcft_pair_length (&bg, xi, xj, B.pc[i] + j);
-                  else
-                    holent_tfd_cross_length (&bg.tfd, xi, ts[it], xj, ts[it], B.pc[i] + j);
-                }
-              holent_bcft_brane_length (&bg, xi, 0, B.lc + i, NULL, NULL);
-              B.rc[i] = INFINITY;
-            }
+            B.rc[i] = INFINITY;
           B.best = INFINITY;
           brute_rec (&B, 0, 0.0);
           double S, kb, nb;
@@ -584,6 +600,163 @@ test_page_brute (void)
   holent_bcft_result r;
   b = 3;
   HT_STATUS (holent_bcft_entropy (w, &bg, 1, &a, &b, &r, NULL, NULL), HOLENT_EUNSUP);
+  holent_bcft_workspace_free (w);
+}
+
+/* ---- two-sided configurations at a time: the two classes ---- */
+
+/* Points 0..N-1 around the boundary circle of a Cauchy slice (left side
+   ascending, right side descending; the brane on the arc from N-1 back to
+   0): every non-crossing set of geodesics, each point paired or ending on
+   the brane outside every pair.  best[0] the least total without a pair
+   across the sides (through the bridge), best[1] with at least one.  */
+typedef struct
+{
+  int N, m;
+  double pc[16][16], lc[16];
+  int stack[16], sp;
+  double best[2];
+} brute2;
+
+static void
+brute2_rec (brute2 *B, int i, double acc, int ncross)
+{
+  if (i == B->N)
+    {
+      int c = ncross > 0;
+      if (!B->sp && acc < B->best[c])
+        B->best[c] = acc;
+      return;
+    }
+  B->stack[B->sp++] = i;                      /* open a pair */
+  brute2_rec (B, i + 1, acc, ncross);
+  B->sp--;
+  if (B->sp)                                  /* close the innermost */
+    {
+      int j = B->stack[--B->sp];
+      brute2_rec (B, i + 1, acc + B->pc[j][i],
+                  ncross + ((j < B->m) != (i < B->m)));
+      B->stack[B->sp++] = j;
+    }
+  else                                        /* to the brane */
+    brute2_rec (B, i + 1, acc + B->lc[i], ncross);
+}
+
+/* Length of a configuration of holent_bcft_page_configuration, from the
+   lengths of its parts: both sides' pairs and brane endings, and each
+   bridge geodesic (x, t) left to (x, t) right.  */
+static double
+conf_length (const holent_bcft_bg *bg, const holent_bcft_result *r, double t)
+{
+  double sum = 0.0, len;
+  for (size_t q = 0; q < r->npairs; q++)
+    {
+      holent_bcft_pair_length (bg, r->pts[r->pairs[2 * q]], r->pts[r->pairs[2 * q + 1]], &len);
+      sum += 2 * len;
+    }
+  for (size_t q = 0; q < r->nbrane; q++)
+    {
+      double xb, zb;
+      holent_bcft_brane_length (bg, r->pts[r->brane[q]], 0, &len, &xb, &zb);
+      HT_CHECK (xb == r->brane_x[q] && zb == r->brane_z[q], "landing point %zu", q);
+      sum += 2 * len;
+    }
+  for (size_t q = 0; q < r->nbridge; q++)
+    {
+      double x = r->pts[r->bridge[q]];
+      holent_tfd_cross_length (&bg->tfd, x, t, x, t, &len);
+      sum += len;
+    }
+  return sum;
+}
+
+static void
+test_page_configuration (void)
+{
+  holent_bcft_workspace *w = holent_bcft_workspace_alloc (3);
+  holent_bcft_bg bg, hl;
+  holent_bcft_page pg;
+  holent_bcft_result r0, r1;
+  holent_err err;
+  HT_STATUS (holent_bcft_bg_init (&bg, 2, 0, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_bg_init (&hl, 0, 1, 1e-4, 2.0, 0.4, 0, 3, 0, NULL), HOLENT_SUCCESS);
+  /* not prepared */
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, 0.0, 0, &r0, &err), HOLENT_EINVAL);
+  srand (4242);
+  for (int trial = 0; trial < 80; trial++)
+    {
+      int n = 1 + rand () % 3;
+      double a[3], b[3], xs[6];
+      random_radiation (n, trial % 2 == 0, a, b, xs);
+      HT_STATUS (holent_bcft_page_prepare (w, &bg, (size_t) n, a, b, &pg, NULL, NULL), HOLENT_SUCCESS);
+      int m = (int) pg.m;
+      double ts[6] = { 0.0, 0.4, 1.5, 4.0, -0.9, pg.page_time + 1e-3 };
+      for (int it = 0; it < 6; it++)
+        {
+          double t = ts[it];
+          brute2 B;
+          memset (&B, 0, sizeof B);
+          B.N = 2 * m;
+          B.m = m;
+          two_sided_costs (&bg, xs, m, t, B.pc, B.lc);
+          B.best[0] = B.best[1] = INFINITY;
+          brute2_rec (&B, 0, 0.0, 0);
+          HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_SUCCESS);
+          HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 1, &r1, &err), HOLENT_SUCCESS);
+          /* the minimiser is the lesser class, the runner-up the other
+             (ties to the island class, no bridge geodesic) */
+          int c = B.best[1] < B.best[0];
+          HT_CHECK ((r0.nbridge > 0) == c && (r1.nbridge > 0) == !c,
+                    "classes %zu %zu at t = %g", r0.nbridge, r1.nbridge, t);
+          HT_CLOSE (r0.S, bg.c / 6.0 * B.best[c], 1e-12);
+          HT_CLOSE (r1.S, bg.c / 6.0 * B.best[!c], 1e-12);
+          /* the page curve's two branches */
+          double S, Sn, kb;
+          HT_STATUS (holent_bcft_page_eval (w, &bg, 1, &t, &S, &kb, NULL, &Sn, NULL), HOLENT_SUCCESS);
+          HT_CLOSE (r0.S, S, 1e-12);
+          HT_CLOSE (r1.S, kb > 0 ? pg.S_island : Sn, 1e-12);
+          HT_CHECK ((double) r0.nbridge == kb, "bridges %zu vs %g", r0.nbridge, kb);
+          /* each configuration adds up to its value, every endpoint once */
+          HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_SUCCESS);
+          HT_CLOSE (r0.length, conf_length (&bg, &r0, t), 1e-12);
+          HT_CHECK (2 * r0.npairs + r0.nbrane + r0.nbridge == r0.m, "endpoints used once");
+          HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 1, &r1, &err), HOLENT_SUCCESS);
+          HT_CLOSE (r1.length, conf_length (&bg, &r1, t), 1e-12);
+          HT_CHECK (2 * r1.npairs + r1.nbrane + r1.nbridge == r1.m, "endpoints used once");
+          HT_CLOSE (r1.S, bg.c / 6.0 * r1.length, 1e-14);
+        }
+    }
+  /* [b, Inf): the Hartman-Maldacena geodesic before the Page time, the
+     island after; they swap there */
+  double a = 1.0, b = INFINITY, t;
+  HT_STATUS (holent_bcft_page_prepare (w, &bg, 1, &a, &b, &pg, NULL, NULL), HOLENT_SUCCESS);
+  t = 0.5 * pg.page_time;
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_SUCCESS);
+  HT_CHECK (r0.nbridge == 1 && r0.nbrane == 0, "before: bridge");
+  HT_CLOSE (r0.S, bg.c / 3.0 * log (bg.beta / (M_PI * bg.eps) * cosh (2 * M_PI * t / bg.beta)), 1e-12);
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 1, &r1, &err), HOLENT_SUCCESS);
+  HT_CHECK (r1.nbridge == 0 && r1.nbrane == 1, "before: the island is the runner-up");
+  t = 2.0 * pg.page_time;
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_SUCCESS);
+  HT_CHECK (r0.nbridge == 0 && r0.nbrane == 1, "after: island");
+  HT_CLOSE (r0.S, pg.S_island, 1e-12);
+  /* errors */
+  HT_STATUS (holent_bcft_page_configuration (NULL, &bg, 0.0, 0, &r0, &err), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, 0.0, 0, NULL, &err), HOLENT_EINVAL);
+  HT_STATUS (holent_bcft_page_configuration (w, &hl, 0.0, 0, &r0, &err), HOLENT_EUNSUP);
+  t = NAN;
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, t, 0, &r0, &err), HOLENT_ENAN);
+  HT_CHECK (err.arg == 0, "names t");
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, INFINITY, 1, &r0, &err), HOLENT_EDOM);
+  /* the island wins at any late time; its competitor's bridge overflows */
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, -1e308, 0, &r0, &err), HOLENT_SUCCESS);
+  HT_CHECK (r0.nbridge == 0, "island at t = -1e308");
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, -1e308, 1, &r0, &err), HOLENT_ERANGE);
+  HT_CHECK (err.arg == 0, "names t");
+  /* a one-sided entropy on w leaves it unprepared for the page */
+  double a1 = 0.5, b1 = 2.0;
+  HT_STATUS (holent_bcft_entropy (w, &hl, 1, &a1, &b1, &r0, NULL, NULL), HOLENT_SUCCESS);
+  HT_STATUS (holent_bcft_page_configuration (w, &bg, 0.0, 0, &r0, &err), HOLENT_EINVAL);
   holent_bcft_workspace_free (w);
 }
 
@@ -636,6 +809,7 @@ main (void)
   test_brane_lengths ();
   test_dp_brute ();
   test_page_brute ();
+  test_page_configuration ();
   test_poll ();
   return HT_DONE ();
 }
