@@ -5,6 +5,7 @@
 ## @deftypefn  {} {@var{h} =} plot_rt_surface (@var{bg}, @var{A})
 ## @deftypefnx {} {@var{h} =} plot_rt_surface (@var{hax}, @var{bg}, @var{A})
 ## @deftypefnx {} {@var{h} =} plot_rt_surface (@dots{}, "runner_up", @var{tf}, "tol", @var{tol}, @var{prop}, @var{val}, @dots{})
+## @deftypefnx {} {@var{h} =} plot_rt_surface (@dots{}, "picture", "penrose")
 ## Draw the RT configuration of the region @var{A} (an n x 2 matrix of
 ## intervals, as in @code{rt_entropy}) in the AdS3 background @var{bg} on
 ## the natural picture of the constant-time slice (@code{rt_surface}):
@@ -58,6 +59,17 @@
 ## shift by alpha along the shock between its two crossings as a dotted
 ## segment with both crossings marked (@code{jump}, one per geodesic).
 ##
+## The Kruskal window grows to hold every curve: at a boundary time t the
+## endpoints sit at T_K = sinh(2 pi t/beta), so late times squeeze the
+## picture onto the light cone.  @qcode{"picture"}, @qcode{"penrose"}
+## draws the same configuration compactified instead: with u = T_K - X_K,
+## v = T_K + X_K, the point (2/pi)(atan v - atan u, atan v + atan u).
+## The two-sided BTZ black hole becomes a square (common practice): the
+## boundaries uv = -1 the sides X = +-1, the singularities uv = 1 the top
+## and the bottom, the horizons and the shock u = 0 its diagonals.  The
+## curves in @var{h} are then the images of those in @code{h.surf}, which
+## stays in Kruskal coordinates.
+##
 ## @var{h} is a struct of graphics handles: @code{axes}, @code{bulk},
 ## @code{boundary}, @code{regions}, @code{surface}, @code{runner_up},
 ## @code{horizon}, @code{defect}, @code{brane}, @code{cut}, @code{label},
@@ -72,7 +84,7 @@ function h = plot_rt_surface (varargin)
   if (nargin < 2)
     print_usage ();
   endif
-  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol", "t"});
+  [hax, args, o, props] = __holent_fig_args__ (fn, varargin, 2, {"runner_up", "tol", "t", "picture"});
   [bg, A] = deal (args{:});
   tol = 2e-3;
   if (isfield (o, "tol"))
@@ -84,6 +96,13 @@ function h = plot_rt_surface (varargin)
   endif
   if (iscell (A))
     error ("holent:type", "%s: A must be one region (an n x 2 matrix), not a cell", fn);
+  endif
+  penrose = false;
+  if (isfield (o, "picture"))
+    if (! ischar (o.picture) || ! any (strcmp (o.picture, {"kruskal", "penrose"})))
+      error ("holent:option", "%s: picture must be \"kruskal\" or \"penrose\"", fn);
+    endif
+    penrose = strcmp (o.picture, "penrose");
   endif
   ## rt_surface's own path, its messages naming this function
   r = [];
@@ -106,21 +125,61 @@ function h = plot_rt_surface (varargin)
               "jump", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
-  if (strcmp (s.picture, "kruskal"))
+  if (penrose)
+    if (! strcmp (s.picture, "kruskal"))
+      error ("holent:option", "%s: picture \"penrose\" needs a two-sided picture (a thermofield double, or \"bcft_tfd\" with \"t\"); this configuration is drawn on the %s", fn, merge (disk, "Poincare disk", "upper half plane"));
+    endif
+    ## the region endpoints, found on the boundaries before the map
+    P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
+    ends = compact (P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :));
+    s = compact (s);
+    if (! isempty (r))
+      r = compact (r);
+    endif
+    ## the square: boundaries X = +-1, singularities T = +-1, horizons on
+    ## the diagonals
+    h.bulk = fill (hax, [-1 1 1 -1], [-1 -1 1 1], pal.bulk, "edgecolor", "none");
+    h.boundary = plot (hax, [1 1; -1 -1]', [-1 1; -1 1]', "color", pal.boundary,
+                       "linewidth", 1.2);
+    h.horizon = plot (hax, [-1 1; -1 1]', [-1 1; 1 -1]', ":", "color", pal.horizon,
+                      "linewidth", 1.2);
+    h.defect = plot (hax, [-1 1; -1 1]', [1 1; -1 -1]', "color", pal.defect,
+                     "linewidth", 2);
+    if (isfield (bg, "shock_alpha") && bg.shock_alpha > 0)
+      h.shock = plot (hax, [-1 1], [-1 1], "color", pal.shock, "linewidth", 2);
+    endif
+    kx = ky = 1.08;
+    xlabel (hax, "(2/\\pi)(atan v - atan u)");  ylabel (hax, "(2/\\pi)(atan v + atan u)");
+  elseif (strcmp (s.picture, "kruskal"))
     ## the Kruskal diagram of the two-sided geometry: boundaries
-    ## X^2 - T^2 = 1, singularities T^2 - X^2 = 1, horizons |X| = |T|
-    u = linspace (-1.2, 1.2, 241);
+    ## X^2 - T^2 = 1, singularities T^2 - X^2 = 1, horizons |X| = |T|;
+    ## the window grows (both axes alike) until it holds every curve, as
+    ## boundary points at a time t sit at T_K = sinh(2 pi t/beta)
+    kx = 1.9;  ky = 1.5;
+    cc = [s.curves(:); s.brane_curves(:)];
+    if (! isempty (r))
+      cc = [cc; r.curves(:)];
+    endif
+    for c = cc'
+      P = c{1}(all (isfinite (c{1}(:,1:2)), 2), 1:2);
+      if (! isempty (P))
+        g = max (1, 1.06 * max (max (abs (P(:,1))) / kx, max (abs (P(:,2))) / ky));
+        kx *= g;  ky *= g;
+      endif
+    endfor
+    u = linspace (-1, 1, 241) * asinh (ky);
     h.bulk = fill (hax, [cosh(u), -cosh(fliplr (u))], [sinh(u), sinh(fliplr (u))],
                    pal.bulk, "edgecolor", "none");
     h.boundary = plot (hax, [cosh(u); -cosh(u)]', [sinh(u); sinh(u)]',
                        "color", pal.boundary, "linewidth", 1.2);
-    h.horizon = plot (hax, [-1.5 1.5; -1.5 1.5]', [-1.5 1.5; 1.5 -1.5]', ":",
+    h.horizon = plot (hax, kx * [-1 1; -1 1]', kx * [-1 1; 1 -1]', ":",
                       "color", pal.horizon, "linewidth", 1.2);
+    u = linspace (-1, 1, 241) * asinh (kx);
     h.defect = plot (hax, [sinh(u); sinh(u)]', [cosh(u); -cosh(u)]',
                      "color", pal.defect, "linewidth", 2);
     if (isfield (bg, "shock_alpha") && bg.shock_alpha > 0)
       ## the shock wave runs along the null line u = 0 (X_K = T_K)
-      h.shock = plot (hax, [-1.5 1.5], [-1.5 1.5], "color", pal.shock,
+      h.shock = plot (hax, kx * [-1 1], kx * [-1 1], "color", pal.shock,
                       "linewidth", 2);
     endif
     xlabel (hax, "X_K");  ylabel (hax, "T_K");
@@ -255,8 +314,12 @@ function h = plot_rt_surface (varargin)
   if (strcmp (s.picture, "kruskal") && ! isempty (s.curves))
     ## the regions: their endpoints sit on the boundaries X^2 - T^2 = 1
     ## (the direction along them is not drawn), marked where curves start
-    P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
-    P = P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :);
+    if (penrose)
+      P = ends;
+    else
+      P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
+      P = P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :);
+    endif
     h.regions = plot (hax, P(:,1), P(:,2), "o", "color", pal.region,
                       "markerfacecolor", pal.region, "markersize", 8);
   endif
@@ -277,7 +340,7 @@ function h = plot_rt_surface (varargin)
     set (hax, "xlim", [-1.1 1.1], "ylim", [-1.1 1.1], "visible", "off");
   elseif (strcmp (s.picture, "kruskal"))
     axis (hax, "equal");
-    set (hax, "xlim", [-1.9 1.9], "ylim", [-1.5 1.5]);
+    set (hax, "xlim", [-kx kx], "ylim", [-ky ky]);
   endif
   if (! held)
     hold (hax, "off");
@@ -286,6 +349,23 @@ endfunction
 
 ## Markers at the landing points of the brane-ending curves of s (the last
 ## numel (s.brane.x) of s.curves) in the Kruskal diagram.
+## The compactified picture of Kruskal points (rows X_K, T_K, ...): u and
+## v through atan, the BTZ square |X|, |T| <= 1; a configuration's curves
+## all mapped.
+function P = compact (P)
+  if (isstruct (P))
+    P.curves = cellfun (@compact, P.curves, "uniformoutput", false);
+    P.brane_curves = cellfun (@compact, P.brane_curves, "uniformoutput", false);
+    P.horizon_curve = compact (P.horizon_curve);
+    return;
+  endif
+  if (isempty (P))
+    return;
+  endif
+  a = atan (P(:,2) - P(:,1));  b = atan (P(:,2) + P(:,1));
+  P(:,1:2) = [b - a, b + a] * (2 / pi);
+endfunction
+
 function hb = island_edges (hax, s, col, face)
   nb = numel (s.brane.x);
   P = cell2mat (cellfun (@(c) c(end, 1:2), s.curves(end-nb+1:end)(:),
@@ -528,5 +608,54 @@ endfunction
 %!   close (f);
 %! end_unwind_protect
 
+%!demo
+%! ## Late in the Page-curve competition the Kruskal picture hugs the light
+%! ## cone; compactified, the two-sided black hole is a square.
+%! figure ("visible", "off");
+%! bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%! h = plot_rt_surface (bg, [1 Inf], "t", 1.2, "runner_up", true, "picture", "penrose");
+%! print (gcf, "-dpng", fullfile (tempdir (), "holent_penrose_demo.png"));
+
+%!test
+%! ## the compactified picture: the region endpoints on the boundaries
+%! ## X_K^2 - T_K^2 = 1 land on the square's sides X = -+1 (uv = -1 makes
+%! ## atan v - atan u = -+pi/2; common practice), every drawn point inside
+%! ## the square, the curves drawn in order with the same number of samples
+%! ## as rt_surface's; a shock's two crossings on the diagonal u = 0.
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! png = [tempname() ".png"];
+%! unwind_protect
+%!   bg = ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6);
+%!   h = plot_rt_surface (bg, [1 Inf], "t", 1.2, "runner_up", true, "picture", "penrose");
+%!   assert ([get(h.axes, "xlim"), get(h.axes, "ylim")], 1.08 * [-1 1 -1 1]);
+%!   assert (sort (get (h.regions, "xdata")(:)), [-1; 1], 1e-12);
+%!   hl = [h.surface(:); h.runner_up(:)];
+%!   X = cell2mat (arrayfun (@(q) get (q, "xdata")(:), hl, "uniformoutput", false));
+%!   T = cell2mat (arrayfun (@(q) get (q, "ydata")(:), hl, "uniformoutput", false));
+%!   assert (all (abs (X) <= 1 + 1e-12 & abs (T) <= 1 + 1e-12));
+%!   for k = 1:numel (h.surface)
+%!     c = h.surf.curves{k};
+%!     u = c(:,2) - c(:,1);  v = c(:,2) + c(:,1);
+%!     assert (get (h.surface(k), "xdata")(:), 2 / pi * (atan (v) - atan (u)), 1e-14);
+%!   endfor
+%!   print (f, "-dpng", png);
+%!   assert (exist (png, "file"), 2);
+%!   clf (f);
+%!   bg = ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 1.5);
+%!   h = plot_rt_surface (bg, struct ("left", [0 3], "right", [0 3]), "t", 0.5, "picture", "penrose");
+%!   for k = 1:numel (h.jump)
+%!     assert (get (h.jump(k), "xdata"), get (h.jump(k), "ydata"), 1e-14);
+%!   endfor
+%!   assert (numel (h.jump), 2);
+%! unwind_protect_cleanup
+%!   close (f);
+%!   if (exist (png, "file"))
+%!     delete (png);
+%!   endif
+%! end_unwind_protect
+
 %!error <Invalid call> plot_rt_surface (1)
+%!error <picture "penrose" needs a two-sided picture> plot_rt_surface (ads3_background ("vacuum", "line"), [0 1], "picture", "penrose")
+%!error <picture must be> plot_rt_surface (ads3_background ("tfd", "line", "beta", 1), struct ("left", [0 1]), "picture", "disk")
 %!error <runner_up must be> plot_rt_surface (ads3_background ("vacuum", "line"), [0 1], "runner_up", "yes")

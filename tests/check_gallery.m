@@ -10,7 +10,7 @@
 %! out = tempname ();
 %! unwind_protect
 %!   files = render_gallery (out);
-%!   assert (numel (files), 11);
+%!   assert (numel (files), 15);
 %!   teal = [5 110 120];  amber = [230 143 31];
 %!   for k = 1:numel (files)
 %!     img = double (imread (files{k}));

@@ -74,6 +74,29 @@ function files = render_gallery (outdir)
     plot_rt_surface (ads3_background ("tfd", "line", "beta", 2),
                      struct ("left", [0 3], "right", [0 3]), "t", 0.2);
     files{end+1} = save_ (f, outdir, "tfd_bridge.png");
+    ## 12. both sides of a thermofield double on a circle: a bridge at a
+    ## winding that is not the shortest (it spans 3 of the circle's 5)
+    clf (f);
+    plot_rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5),
+                     struct ("left", [0 1], "right", [0 4]), "t", 0.1);
+    files{end+1} = save_ (f, outdir, "tfd_circle_windings.png");
+    ## 13. a shock wave in the thermofield double: bridges broken at u = 0
+    clf (f);
+    plot_rt_surface (ads3_background ("tfd", "line", "beta", 2, "shock_alpha", 2),
+                     struct ("left", [0 3], "right", [0 3]), "t", 0.1);
+    files{end+1} = save_ (f, outdir, "tfd_shock.png");
+    ## 14. the Page-curve competition after the Page time (about 0.25 for
+    ## R = [0.2, Inf)): the island wins, the bridge geodesic is the runner-up
+    clf (f);
+    plot_rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6),
+                     [0.2 Inf], "t", 0.35, "runner_up", true);
+    files{end+1} = save_ (f, outdir, "bcft_tfd_page.png");
+    ## 15. compactified: the two-sided black hole as a square; well after
+    ## the Page time of R = [0.2, Inf) the island has won
+    clf (f);
+    plot_rt_surface (ads3_background ("bcft_tfd", "half_line", "beta", 2, "tension", 0.6),
+                     [0.2 Inf], "t", 0.6, "runner_up", true, "picture", "penrose");
+    files{end+1} = save_ (f, outdir, "page_penrose.png");
   unwind_protect_cleanup
     close (f);
     warning (ws);
