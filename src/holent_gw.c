@@ -203,8 +203,10 @@ holent_gw_bg3 (const mxArray *s, const char *fn, holent_bg3 *bg)
       && (strcmp (word, "bcft") == 0 || strcmp (word, "bcft_tfd") == 0))
     holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
                      "BG is a BCFT background (a boundary and a brane), "
-                     "not supported here: use rt_entropy, "
-                     "interval_entropy or page_curve");
+                     "not supported on this path (this function, or "
+                     "regions with endpoint times); rt_entropy, "
+                     "interval_entropy and page_curve take BCFT regions "
+                     "at one boundary time");
   bg_word (s, fn, "bulk", bulk, sizeof bulk);
   int b = holent_bg3_bulk_from_name (bulk);
   if (b < 0)

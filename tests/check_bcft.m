@@ -297,3 +297,8 @@
 %!error <finite> rt_entropy (ads3_background ("bcft", "half_line"), [1 Inf])
 %!error <boundary x = 0> page_curve (ads3_background ("bcft_tfd", "half_line", "beta", 1), [0 2], 0)
 %!error <page_curve> rt_entropy (ads3_background ("bcft_tfd", "half_line", "beta", 1), [1 2])
+
+## Regions with endpoint times are refused on a BCFT background, naming
+## what is supported (no silent wrong number).
+%!error <regions with endpoint times> rt_entropy (ads3_background ("bcft", "half_line", "tension", 0.3), [0.3 1.2 0 0.2])
+%!error id=holent:unsupported rt_surface (ads3_background ("bcft", "half_line", "tension", 0.3), [0.3 1.2 0 0.2])

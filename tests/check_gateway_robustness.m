@@ -81,6 +81,10 @@
 ## holds it.  Forty calls on 2e6 values (16 MB a result) that leaked would
 ## raise the resident size by 640 MB; the bound allows for the allocator's
 ## slack.  Linux only (/proc); common practice, not a published check.
+## The values read back are checked against the thermal interval entropy
+## (c/3) log((beta/(pi eps)) sinh(pi l/beta) (Calabrese and Cardy 2004,
+## J. Stat. Mech. P06002) and the length 6/c times it (Ryu and Takayanagi
+## 2006, PRL 96, 181602).
 %!test
 %! if (exist ("/proc/self/statm", "file"))
 %!   bg = ads3_background ("thermal", "line", "beta", 0.7);
