@@ -118,6 +118,10 @@ function h = plot_rt_surface (varargin)
     endif
     r = __holent_rt_surface__ (fn, bg, A, ropt);
   endif
+  if (penrose && ! strcmp (s.picture, "kruskal"))
+    ## refused before any axes are made
+    error ("holent:option", "%s: picture \"penrose\" needs a two-sided picture (a thermofield double, or \"bcft_tfd\" with \"t\"); this configuration is drawn on the %s", fn, merge (strcmp (s.picture, "disk"), "Poincare disk", "upper half plane"));
+  endif
   [hax, held, pal] = __holent_fig_begin__ (hax);
   h = struct ("axes", hax, "bulk", [], "boundary", [], "regions", [],
               "surface", [], "runner_up", [], "horizon", [], "defect", [],
@@ -126,9 +130,6 @@ function h = plot_rt_surface (varargin)
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
   if (penrose)
-    if (! strcmp (s.picture, "kruskal"))
-      error ("holent:option", "%s: picture \"penrose\" needs a two-sided picture (a thermofield double, or \"bcft_tfd\" with \"t\"); this configuration is drawn on the %s", fn, merge (disk, "Poincare disk", "upper half plane"));
-    endif
     ## the region endpoints, found on the boundaries before the map
     P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
     ends = compact (P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :));

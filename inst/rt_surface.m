@@ -207,7 +207,22 @@ endfunction
 %! assert ({s.picture, s.pairs, s.sides'}, {"kruskal", [1 2], [0 1]});
 %! assert (r.brane.endpoint', [1 2]);
 
+%!test
+%! ## Late: after saturation (Hartman and Maldacena 2013) the geodesics
+%! ## stay within each side; at t = 40 beta their ends sit at
+%! ## X_K = -+cosh(2 pi t/beta), T_K = sinh(2 pi t/beta), about 1e109.
+%! bg = ads3_background ("tfd", "line", "beta", 1);
+%! A = struct ("left", [0 3], "right", [0 3]);
+%! s = rt_surface (bg, A, "t", 40);
+%! assert (s.sides(s.pairs(:,1)), s.sides(s.pairs(:,2)));
+%! for k = 1:2
+%!   c = s.curves{k};  sd = s.sides(s.pairs(k,1));
+%!   assert (c([1 end], 1:2), [1 1; 1 1] .* [(2*sd-1) * cosh(80*pi), sinh(80*pi)], 1e-15 * cosh (80*pi));
+%!   assert (all (isfinite (c(:))));
+%! endfor
+
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
+%!error <t: must be nearer 0 for the Kruskal picture> rt_surface (ads3_background ("tfd", "line", "beta", 1), struct ("left", [0 3], "right", [0 3]), "t", 200)
 %!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")

@@ -930,6 +930,11 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
       else
         st = holent_surface_pair (g.sw, &b.geo, x[i], tp[i], x[j], tp[j],
                                   arcs[k], tol);
+      if ((st == HOLENT_ERANGE || st == HOLENT_ETOOBIG) && b.kind == BG_TFD)
+        fail (&g, st, "t", HOLENT_NOINDEX, "must be nearer 0 for the "
+              "Kruskal picture, whose coordinates grow like "
+              "cosh(2 pi t/beta) (geodesic %zu; or take a larger tol)",
+              k + 1);
       if (st)
         fail (&g, st, "geodesic", k, "%s", holent_strerror (st));
       mxSetCell (cell, k, curve3 (&g.sw->cur));

@@ -192,11 +192,16 @@ typedef struct
 {
   const geo_par *g;
   double tol;
+  int rel;       /* Kruskal picture: tol relative to max(1, |X_K|, |T_K|) */
   holent_curve *c;
 } refine_ctx;
 
 /* Append the points of (sa, sb], refining while the curve's midpoint is
-   farther than tol from the chord's.  */
+   farther than tol from the chord's.  Kruskal coordinates grow like
+   e^{R |t|} towards late boundary points, so there the deviation allowed
+   grows with the point's distance from the bifurcation point: an absolute
+   tol would ask for ever more samples where the picture is ever coarser,
+   while near the bifurcation point (|X_K|, |T_K| <= 1) it stays tol.  */
 static int
 refine (const refine_ctx *rc, double sa, const double *pa, double sb,
         const double *pb, int depth)
@@ -205,7 +210,10 @@ refine (const refine_ctx *rc, double sa, const double *pa, double sb,
   geo_eval (rc->g, sm, &pm[0], &pm[1], &pm[2], &bd);
   double dev = hypot (pm[0] - 0.5 * (pa[0] + pb[0]),
                       pm[1] - 0.5 * (pa[1] + pb[1]));
-  if (dev > rc->tol && depth < 40)
+  double tol = rc->tol;
+  if (rc->rel)
+    tol *= fmax (1.0, fmax (fabs (pm[0]), fabs (pm[1])));
+  if (dev > tol && depth < 40)
     {
       int st = refine (rc, sa, pa, sm, pm, depth + 1);
       if (st)
@@ -239,7 +247,8 @@ sample_span (holent_curve *c, const geo_par *g, double tol, double s0,
 {
   const int nseg = 32;
   double pa[3], pb[3], bd;
-  refine_ctx rc = { g, tol, c };
+  refine_ctx rc = { g, tol, g->fam == FAM_EMB && g->chart.chart == EM_KRUSKAL,
+                    c };
   int st;
   geo_eval (g, s0, &pa[0], &pa[1], &pa[2], &bd);
   if (!skip && (st = push (c, pa[0], pa[1], pa[2])))
@@ -976,7 +985,36 @@ tfd_curve (holent_surface_workspace *w, const holent_tfd_bg *b, double xa,
   if (sa != sb && b->alpha > 0.0)   /* broken at the shock */
     return emb_shock (&w->cur, &ch, b, x1, t1, sa, x2, t2, tol);
   double xm = 0.5 * (x1 + x2) / sc, h = 0.5 * (x2 - x1) / sc;
-  return emb_full (&w->cur, &ch, xm, h, t1 / sc, sa, t2 / sc, sb, tol);
+  if (sa != sb)
+    return emb_full (&w->cur, &ch, xm, h, t1 / sc, sa, t2 / sc, sb, tol);
+  /* Within a side: built at the times centred on their mean t0, then
+     carried to t0 by the Killing flow, the boost u -> u e^{-+a},
+     v -> v e^{+-a}, a = R t0 (right side upper signs; the left side's
+     forward time is the flow backwards).  Built at t0 itself, the
+     embedding's components would hold e^{2a} and overflow from
+     2 pi t0/beta of about 110 on, long before the picture does.  */
+  double t0 = 0.5 * (t1 + t2);
+  st = emb_full (&w->cur, &ch, xm, h, (t1 - t0) / sc, sa, (t2 - t0) / sc,
+                     sb, tol);
+  if (st || t0 == 0.0)
+    return st;
+  double a = (sa ? 1.0 : -1.0) * ch.R * t0 / sc, eu = exp (-a), ev = exp (a);
+  holent_curve *c = &w->cur;
+  for (size_t i = 0; i < c->n; i++)
+    {
+      double u = (c->y[i] - c->x[i]) * eu, v = (c->y[i] + c->x[i]) * ev;
+      c->x[i] = 0.5 * (v - u);
+      c->y[i] = 0.5 * (v + u);
+    }
+  /* the boundary ends exactly where the boundary points are */
+  double bp[3];
+  kruskal_boundary (&ch, x1 / sc, t1 / sc, sa, bp);
+  c->x[0] = bp[0];
+  c->y[0] = bp[1];
+  kruskal_boundary (&ch, x2 / sc, t2 / sc, sb, bp);
+  c->x[c->n - 1] = bp[0];
+  c->y[c->n - 1] = bp[1];
+  return curve_finite (c, 0);
 }
 
 int

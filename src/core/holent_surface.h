@@ -21,7 +21,9 @@
  * comes within tol/16 of the boundary, then every step is halved while the
  * midpoint of the curve is farther than tol (picture units) from the
  * midpoint of the chord (at most 40 halvings); the exact boundary
- * endpoints close the curve.
+ * endpoints close the curve.  In the Kruskal picture the distance allowed
+ * is tol max(1, |X_K|, |T_K|) at the midpoint: the coordinates grow like
+ * e^{2 pi |t|/beta} towards late boundary points.
  *
  * AdS_{d+1} strips and balls: the profile is a geodesic of the conformally
  * flat 2-metric Omega^2 (dr^2 + dz^2/f), Omega = r^{d-2}/z^{d-1} (strip:

@@ -303,6 +303,44 @@ main (void)
     holent_tfd_workspace_free (tw);
   }
   HT_CHECK (w->cur.n == 2, "horizon points");
+  {
+    /* A geodesic within one side at equal late times t0 (right and left):
+       every sample's v = T_K + X_K (right; u = T_K - X_K on the left) is
+       e^{R t0} sqrt((r - R)/(r + R)), r = R (1 - uv)/(1 + uv) the radius
+       of the constant-time BTZ geodesic over [x1, x2],
+       r(x) = R cosh(R h)/sqrt(cosh^2(R h) - cosh^2(R (x - xm)))
+       (Hubeny, Rangamani and Takayanagi 2007, JHEP 07, 062; common
+       practice), h the half width: the picture at Killing time t0 without
+       the overflow of the embedding at 2 pi t0/beta above 110.  */
+    holent_tfd_bg tl;
+    HT_STATUS (holent_tfd_init (&tl, 0, 0, 1e-3, 1, 1, 0), 0);
+    const double R = 2 * M_PI, x1 = 0.5, x2 = 2.5, xm = 1.5, h = 1.0;
+    const double t0s[4] = { 0, 3, 20, 60 };
+    for (int k = 0; k < 4; k++)
+      for (int sd = 0; sd < 2; sd++)
+        {
+          double t0 = t0s[k], worst = 0;
+          HT_STATUS (holent_surface_tfd (w, &tl, x1, t0, sd, x2, t0, sd, NAN, 1e-3), 0);
+          const holent_curve *c = &w->cur;
+          HT_CHECK (c->n > 40, "samples %zu", c->n);
+          HT_CLOSE (c->x[0], (sd ? 1 : -1) * cosh (R * t0), 1e-15);
+          HT_CLOSE (c->y[c->n - 1], sinh (R * t0), 1e-15);
+          for (size_t i = 1; i + 1 < c->n; i++)
+            {
+              double y = R * (c->t[i] - xm), ch = cosh (R * h);
+              /* cosh^2(Rh) - cosh^2(y) without cancellation */
+              double den = sinh (R * h - y) * sinh (R * h + y);
+              double r = R * ch / sqrt (den);
+              if (!(r < 1e6))   /* near the ends: the closed form cancels */
+                continue;
+              double q = sqrt ((r - R) / (r + R)) * exp (R * t0);
+              double got = sd ? c->y[i] + c->x[i] : c->y[i] - c->x[i];
+              double e = fabs (got / q - 1);
+              worst = e > worst ? e : worst;
+            }
+          HT_CHECK (worst < 1e-9, "t0 = %g side %d: off by %g", t0, sd, worst);
+        }
+  }
 
   holent_surface_workspace_free (w);
   holent_surface_workspace_free (NULL);
