@@ -787,31 +787,46 @@ annulus_cuts (holent_tfd_workspace *w, const holent_tfd_bg *b,
   st = holent_rt_count (&line, n1, &cut_count, &cut_lcount);
   if (st)
     return st;
-  /* A lower bound on the rest of a cut: every point pays at least half
-     its cheapest length (any pair, class or winding of the tables),
-     which holds for every perfect matching.  Cuts that cannot beat the
+  /* A lower bound on the rest of a cut, from the dual of the matching
+     LP: point weights y with y_p + y_q <= the cheapest length of any
+     pair (any class or winding of the tables) give sum y <= the cost of
+     every perfect matching of any subset of the points, crossing or not
+     (weak duality of the matching LP; common practice).  Start from half the cheapest length at each
+     point, then raise each y_p to min_q (w(p, q) - y_q) in two sweeps
+     (coordinate ascent: feasibility is kept).  Cuts that cannot beat the
      best so far are skipped (with a margin above the rounding of the
-     sums), which prunes most of them once the bridge is long.  */
+     sums), which prunes most of them.  */
   double *mins = w->pmin;  /* left points, then right ones */
   double lb_all = 0.0, lb_abs = 0.0;
   int prune = c->tab != NULL;
+  for (int sweep = 0; prune && sweep < 3; sweep++)
+    for (size_t q = 0; q < nl + nr; q++)
+      {
+        const int s = q < nl ? 0 : 1;
+        const size_t p = s ? q - nl : q, n = c->tab->n[s];
+        const size_t nw = 2 * TFD_WMAX + 1, off = s ? nl : 0;
+        const size_t ooff = s ? 0 : nl;
+        double m = INFINITY;
+        for (size_t u = 0; u < n; u++)
+          if (u != p)
+            m = fmin (m, fmin (c->tab->arc[s][p * n + u],
+                               c->tab->arc[s][u * n + p])
+                           - (sweep ? mins[off + u] : 0.0));
+        for (size_t u = 0; u < (s ? nl : nr); u++)
+          {
+            double mc = INFINITY;
+            for (size_t k = 0; k < nw; k++)
+              mc = fmin (mc, c->tab->cross[(s ? u * nr + p : p * nr + u)
+                                           * nw + k]);
+            m = fmin (m, mc - (sweep ? mins[ooff + u] : 0.0));
+          }
+        /* sweep 0: half the cheapest; later: the largest feasible */
+        mins[q] = sweep ? m : 0.5 * m;
+      }
   for (size_t q = 0; prune && q < nl + nr; q++)
     {
-      const int s = q < nl ? 0 : 1;
-      const size_t p = s ? q - nl : q, n = c->tab->n[s];
-      const size_t nw = 2 * TFD_WMAX + 1;
-      double m = INFINITY;
-      for (size_t u = 0; u < n; u++)
-        if (u != p)
-          m = fmin (m, fmin (c->tab->arc[s][p * n + u],
-                             c->tab->arc[s][u * n + p]));
-      for (size_t u = 0; u < (s ? nl : nr); u++)
-        for (size_t k = 0; k < nw; k++)
-          m = fmin (m, c->tab->cross[(s ? u * nr + p : p * nr + u) * nw
-                                     + k]);
-      mins[q] = 0.5 * m;
-      lb_all += 0.5 * m;
-      lb_abs += fabs (0.5 * m);
+      lb_all += mins[q];
+      lb_abs += fabs (mins[q]);
     }
   const double total = (double) nr * (double) nl;
   for (size_t i = 0; i < nr; i++)
