@@ -13,7 +13,8 @@
  *    X_K = -+cosh(2 pi t/beta), T_K = sinh(2 pi t/beta) of its endpoints
  *    (common practice: the boundary of the two-sided BTZ in Kruskal
  *    coordinates), x on the endpoint's (lifted on a circle) coordinate;
- *  - a bridge through a shock has exactly one NaN row, others none.
+ *  - a bridge through a shock has exactly one NaN row, others none;
+ *  - the line's runner-up is never below the minimum.
  * fuzz-core: holent_tfd holent_surface holent_rt holent_region holent_interval holent_root holent_geo holent_hrt holent_vmath holent_status holent_bcft holent_quench holent_hd_bg holent_strip holent_ball holent_slab holent_ode holent_hd_size holent_bg3 holent_thermo
  * fuzz-runs: 1500 (make check)
  * SPDX-License-Identifier: GPL-3.0-or-later  */
@@ -181,6 +182,16 @@ LLVMFuzzerTestOneInput (const uint8_t *data, size_t size)
       if (cf.horizon)
         CHECK (holent_surface_tfd_horizon (sw, &b, 0.0, L) == HOLENT_SUCCESS,
                "horizon");
+      /* the runner-up (line): never below the minimum */
+      size_t rp[4 * NI];
+      double Sr;
+      st = holent_surface_tfd_runner_up (sw, &b, cf.npts, cf.x, cf.t, cf.side,
+                                         cf.pairs, rp, &Sr);
+      CHECK (valid_status (st), "runner-up status %d", st);
+      CHECK (st != HOLENT_EUNSUP || circle, "runner-up refused on the line");
+      if (st == HOLENT_SUCCESS)
+        CHECK (isfinite (Sr) && Sr >= res.S - 1e-12 * (1.0 + fabs (res.S)),
+               "runner-up %.17g below the minimum %.17g", Sr, res.S);
     }
   /* raw numbers, sides and windings */
   double xa = (fz_byte (&in) & 1 ? -1 : 1) * fz_mag (&in, -12, 12);

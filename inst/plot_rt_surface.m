@@ -47,7 +47,8 @@
 ## markers along them (@code{time}, with a colour bar); the
 ## thermofield double in its Kruskal diagram (X_K, T_K), with the two
 ## boundaries, the horizons (dotted, in @code{horizon}) and the
-## singularities (in @code{defect}); on a circle a region on both sides
+## singularities (in @code{defect}), with @qcode{"runner_up"} true on a
+## line the best other pairing dashed (@code{rt_surface}); on a circle a region on both sides
 ## shows the geodesics through the bridge at the minimiser's winding and
 ## those within each side, and the horizon circle, when it is part of
 ## the surface, as a marker at the bifurcation point X_K = T_K = 0.
@@ -113,8 +114,8 @@ function h = plot_rt_surface (varargin)
   s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
     ropt = {"tol", tol, "configuration", "runner_up"};
-    if (__holent_is_bcft__ (bg))
-      ropt = [ropt, topt];     # a BCFT thermofield double at the time t
+    if (__holent_is_bcft__ (bg) || (isfield (bg, "state") && strcmp (bg.state, "tfd")))
+      ropt = [ropt, topt];     # a thermofield double at the time t
     endif
     r = __holent_rt_surface__ (fn, bg, A, ropt);
   endif
@@ -654,6 +655,28 @@ endfunction
 %!   if (exist (png, "file"))
 %!     delete (png);
 %!   endif
+%! end_unwind_protect
+
+%!test
+%! ## the thermofield double on a line with its runner-up: after the
+%! ## Hartman-Maldacena time of A_L = A_R = [0, 3] (t = 1.5 at beta = 1)
+%! ## the geodesics within each side win, the bridge is dashed
+%! warning ("off", "Octave:gnuplot-graphics", "local");
+%! f = figure ("visible", "off");
+%! unwind_protect
+%!   bg = ads3_background ("tfd", "line", "beta", 1);
+%!   A = struct ("left", [0 3], "right", [0 3]);
+%!   h = plot_rt_surface (bg, A, "t", 1.7, "runner_up", true);
+%!   r = rt_surface (bg, A, "t", 1.7, "configuration", "runner_up", "tol", 2e-3);
+%!   assert (numel (h.runner_up), 2);
+%!   for k = 1:2
+%!     assert (get (h.runner_up(k), "xdata")(:), r.curves{k}(:,1));
+%!     assert (get (h.runner_up(k), "linestyle"), "--");
+%!   endfor
+%!   assert (r.sides(r.pairs(:,1)) != r.sides(r.pairs(:,2)));   # through the bridge
+%!   assert (h.surf.sides(h.surf.pairs(:,1)), h.surf.sides(h.surf.pairs(:,2)));
+%! unwind_protect_cleanup
+%!   close (f);
 %! end_unwind_protect
 
 %!error <Invalid call> plot_rt_surface (1)

@@ -63,8 +63,15 @@
 ## @qcode{"kruskal"} [X_K, T_K, x], X_K = (v - u)/2, T_K = (v + u)/2
 ## (boundaries X_K = +-cosh(R t), T_K = sinh(R t), R = 2 pi/beta on a
 ## line, L/beta on a circle; horizons |X_K| = |T_K|), the horizon as the
-## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  No
-## runner-up on this path.  On a circle a region on both sides gives the
+## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  The
+## runner-up on this path exists for the thermofield double on a line:
+## the best other non-crossing pairing of the endpoints in the order of
+## the bridge slice (right ascending, then left descending), each pair
+## within a side or through the bridge (with the shock), for up to 8
+## intervals in all (the Hartman-Maldacena competition: the bridge
+## against the geodesics within each side).  Regions with times on a
+## static bulk, a quench and the circle's annulus have none
+## (@code{holent:unsupported}).  On a circle a region on both sides gives the
 ## minimiser over the annulus (@file{doc/tfd_shock.md}): geodesics within
 ## each side (over the arc in @code{arcs}), geodesics through the bridge
 ## at the winding of the minimiser (@code{windings}: the right point's

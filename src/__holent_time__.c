@@ -847,12 +847,15 @@ curve3 (const holent_curve *c)
 }
 
 /* [C, PTS, TP, SIDE, PAIRS, ARCS, S, HOR, HC, PICTURE, WIND] =
-   ("surface", FN, BG, A, T, TOL): the minimiser of the one region A at
-   shift/time T and its geodesics sampled to TOL (holent_surface); WIND
-   the winding of each geodesic through the bridge of a thermofield
-   double on a circle (else 0).  */
+   ("surface", FN, BG, A, T, TOL[, RUNNER]): the minimiser of the one
+   region A at shift/time T and its geodesics sampled to TOL
+   (holent_surface); WIND the winding of each geodesic through the bridge
+   of a thermofield double on a circle (else 0).  RUNNER true: the best
+   other candidate instead (the line's thermofield double only,
+   holent_surface_tfd_runner_up).  */
 static void
-do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
+do_surface (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
+            const mxArray *prhs[])
 {
   gw_state g;
   time_bg b;
@@ -863,6 +866,11 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
   const mxArray *A = prhs[3];
   double t = holent_gw_scalar (prhs[4], fn, "t");
   double tol = holent_gw_scalar (prhs[5], fn, "tol");
+  int runner = nrhs > 6 && holent_gw_scalar (prhs[6], fn, "runner") != 0.0;
+  if (runner && b.kind != BG_TFD)
+    holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
+                     "configuration \"runner_up\" is not available for "
+                     "regions with times or a quench");
   if (!isfinite (t))
     holent_gw_raise (fn, isnan (t) ? HOLENT_ENAN : HOLENT_EDOM, "t",
                      HOLENT_NOINDEX, "must be finite");
@@ -897,6 +905,33 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
       pairs = cf.pairs;
       arcs = cf.arcs;
       wind = cf.winding;
+      if (runner)
+        {
+          /* g.pairs and g.arcs hold 2 (rows + 1) and rows + 1 entries:
+             room for np and np/2 */
+          st = holent_surface_tfd_runner_up (g.sw, &b.tfd, np, x, tp, side,
+                                             pairs, g.pairs, &S);
+          if (st == HOLENT_EUNSUP)
+            fail (&g, st, NULL, HOLENT_NOINDEX, "configuration "
+                  "\"runner_up\" is not available on the thermofield "
+                  "double of a circle (its annulus has windings and the "
+                  "horizon; the line's is)");
+          if (st == HOLENT_EDOM)
+            fail (&g, st, "A", HOLENT_NOINDEX, "has a single candidate "
+                  "configuration: there is no runner-up");
+          if (st == HOLENT_ETOOBIG)
+            fail (&g, st, "A", HOLENT_NOINDEX, "must have at most %zu "
+                  "intervals in all for the runner-up (a brute force)",
+                  (size_t) HOLENT_SURFACE_RUNNER_NMAX);
+          if (st)
+            fail (&g, st, "A", HOLENT_NOINDEX, "%s", holent_strerror (st));
+          pairs = g.pairs;
+          for (size_t k = 0; k < np / 2; k++)
+            g.arcs[k] = NAN;
+          arcs = g.arcs;
+          wind = NULL;
+          horizon = 0;
+        }
     }
   else
     {
@@ -923,7 +958,7 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], const mxArray *prhs[])
             }
           st = holent_surface_tfd_winding (g.sw, &b.tfd, x[i], tp[i],
                                            side[i], x[j], tp[j], side[j],
-                                           arcs[k], wind[k], tol);
+                                           arcs[k], wind ? wind[k] : 0, tol);
         }
       else if (b.kind == BG_QUENCH)
         st = holent_surface_quench (g.sw, &b.quench, x[i], x[j], t, tol);
@@ -1329,8 +1364,8 @@ mexFunction (int nlhs, mxArray *plhs[], int nrhs, const mxArray *prhs[])
     }
   else if (strcmp (mode, "surface") == 0)
     {
-      holent_gw_nargs (fn, nlhs, 11, nrhs, 6, 6);
-      do_surface (fn, nlhs, plhs, prhs);
+      holent_gw_nargs (fn, nlhs, 11, nrhs, 6, 7);
+      do_surface (fn, nlhs, plhs, nrhs, prhs);
     }
   else if (strcmp (mode, "interval") == 0)
     {

@@ -33,15 +33,16 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
       || __holent_time_entropy__ ("timed", bg, A))
     ## endpoint times, a thermofield double or a quench: the core's
     ## minimiser and its geodesics in the picture of the state
-    if (strcmp (which, "runner_up"))
-      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available for regions with times, a thermofield double or a quench", fn);
+    ru = strcmp (which, "runner_up");
+    if (ru && ! strcmp (bg.state, "tfd"))
+      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available for regions with times or a quench", fn);
     endif
     t = 0;
     if (isfield (o, "t"))
       t = __holent_scalar__ (fn, "t", o.t, {-Inf, Inf, "()"});
     endif
     for k = 1:numel (A)
-      surf(k) = orderfields (timed_surface (fn, bg, A{k}, t, tol), surf);
+      surf(k) = orderfields (timed_surface (fn, bg, A{k}, t, tol, ru), surf);
     endfor
     surf = reshape (surf, size (A));
     return;
@@ -126,7 +127,7 @@ function s = static_fields (s)
 endfunction
 
 ## One region with times, on a thermofield double or a quench.
-function s = timed_surface (fn, bg, A, t, tol)
+function s = timed_surface (fn, bg, A, t, tol, ru)
   if (isnumeric (A))
     A = __holent_time_entropy__ ("double", A);
   elseif (isstruct (A) && isscalar (A))
@@ -135,7 +136,7 @@ function s = timed_surface (fn, bg, A, t, tol)
     endfor
   endif
   [s.curves, s.endpoints, s.times, s.sides, s.pairs, s.arcs, s.S, s.horizon, ...
-   s.horizon_curve, s.picture, s.windings] = __holent_time__ ("surface", fn, bg, A, t, tol);
+   s.horizon_curve, s.picture, s.windings] = __holent_time__ ("surface", fn, bg, A, t, tol, double (ru));
   quench = strcmp (bg.state, "quench");
   switch (s.picture)
     case "kruskal"

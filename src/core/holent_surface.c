@@ -1050,10 +1050,15 @@ holent_surface_tfd_horizon (holent_surface_workspace *w,
 static int
 pairing_add (holent_surface_workspace *w, const int *match, size_t np)
 {
-  if (w->npairing == w->cap_pairing)
+  /* the capacity counts entries, not pairings: a workspace serves
+     regions of different sizes one after the other */
+  size_t need = (w->npairing + 1) * np;
+  if (need > w->cap_pairing)
     {
-      size_t cap = w->cap_pairing ? 2 * w->cap_pairing : 64;
-      size_t *p = realloc (w->pairings, cap * np * sizeof *p);
+      size_t cap = 2 * w->cap_pairing > 64 * np ? 2 * w->cap_pairing
+                                                 : 64 * np;
+      cap = cap > need ? cap : need;
+      size_t *p = realloc (w->pairings, cap * sizeof *p);
       if (p == NULL)
         return HOLENT_ENOMEM;
       w->pairings = p;
@@ -1105,6 +1110,20 @@ pairings (holent_surface_workspace *w, int *match, size_t np)
   return HOLENT_SUCCESS;
 }
 
+/* Every non-crossing pairing of np = 2 n points into w (n at most
+   RUNNER_NMAX).  */
+static int
+all_pairings (holent_surface_workspace *w, size_t np)
+{
+  if (np / 2 > HOLENT_SURFACE_RUNNER_NMAX)
+    return HOLENT_ETOOBIG;
+  int match[2 * HOLENT_SURFACE_RUNNER_NMAX];
+  for (size_t i = 0; i < np; i++)
+    match[i] = -1;
+  w->npairing = 0;
+  return pairings (w, match, np);
+}
+
 static int
 same_conf (size_t m, const size_t *p, const double *a, int h,
            const size_t *q, const double *b, int k, double tol)
@@ -1132,13 +1151,7 @@ holent_surface_runner_up (holent_surface_workspace *w,
   size_t n = r->n, np = 2 * n;
   if (r->whole || n == 0)
     return HOLENT_EDOM;
-  if (n > HOLENT_SURFACE_RUNNER_NMAX)
-    return HOLENT_ETOOBIG;
-  int match[2 * HOLENT_SURFACE_RUNNER_NMAX];
-  for (size_t i = 0; i < np; i++)
-    match[i] = -1;
-  w->npairing = 0;
-  int st = pairings (w, match, np);
+  int st = all_pairings (w, np);
   if (st)
     return st;
   /* faces: with a horizon, or a defect, the face is named by a boundary
@@ -1176,6 +1189,62 @@ holent_surface_runner_up (holent_surface_workspace *w,
           memcpy (pairs, pq, np * sizeof *pairs);
           memcpy (arcs, arc, n * sizeof *arcs);
           *horizon = hz;
+        }
+    }
+  if (!isfinite (best))
+    return HOLENT_EDOM;  /* a single candidate: no runner-up */
+  *S = best;
+  return HOLENT_SUCCESS;
+}
+
+int
+holent_surface_tfd_runner_up (holent_surface_workspace *w,
+                              const holent_tfd_bg *b, size_t np,
+                              const double *x, const double *t,
+                              const int *side, const size_t *pmin,
+                              size_t *pairs, double *S)
+{
+  if (w == NULL || b == NULL || x == NULL || t == NULL || side == NULL
+      || pmin == NULL || pairs == NULL || S == NULL)
+    return HOLENT_EINVAL;
+  if (b->side.circle)
+    return HOLENT_EUNSUP;   /* the annulus: windings and the horizon */
+  if (np == 0 || np % 2)
+    return HOLENT_EDOM;
+  size_t n = np / 2;
+  int st = all_pairings (w, np);
+  if (st)
+    return st;
+  /* every non-crossing pairing in the bridge order is a candidate on the
+     line (holent_tfd_entropy): each pair within a side or through the
+     bridge, the horizon never (it is not compact) */
+  double best = INFINITY, zero[HOLENT_SURFACE_RUNNER_NMAX] = { 0 };
+  for (size_t q = 0; q < w->npairing; q++)
+    {
+      const size_t *pq = w->pairings + q * np;
+      if (same_conf (n, pq, zero, 0, pmin, zero, 0, 0.0))
+        continue;
+      double len = 0.0;
+      for (size_t i = 0; i < n && len < INFINITY; i++)
+        {
+          size_t a = pq[2 * i], c = pq[2 * i + 1];
+          double d;
+          if (side[a] == side[c])
+            st = holent_tfd_side_length (b, x[a], t[a], x[c], t[c],
+                                         HOLENT_GEO_SHORTER, &d);
+          else if (side[a])   /* a on the right */
+            st = holent_tfd_cross_length (b, x[c], t[c], x[a], t[a], &d);
+          else
+            st = holent_tfd_cross_length (b, x[a], t[a], x[c], t[c], &d);
+          if (st)
+            return st;
+          len += d;
+        }
+      double Sq = b->side.c / 6.0 * len;
+      if (Sq < best)
+        {
+          best = Sq;
+          memcpy (pairs, pq, np * sizeof *pairs);
         }
     }
   if (!isfinite (best))

@@ -65,7 +65,7 @@ typedef struct
   holent_curve cur;
   /* runner-up enumeration scratch */
   size_t *pairings;       /* all non-crossing pairings, 2n per pairing   */
-  size_t npairing, cap_pairing;
+  size_t npairing, cap_pairing;   /* pairings held; room in entries   */
   size_t *stack;
 } holent_surface_workspace;
 
@@ -179,6 +179,21 @@ int holent_surface_runner_up (holent_surface_workspace *w,
                               const holent_region *r, const size_t *pmin,
                               const double *amin, int hmin, size_t *pairs,
                               double *arcs, int *horizon, double *S);
+
+/* The best candidate other than the minimiser (pairs pmin, sorted by
+ * first index) of a two-sided region on the line's thermofield double:
+ * every non-crossing pairing of the np endpoints x, t, side in the bridge
+ * order of holent_tfd_minimiser (the candidates of holent_tfd_entropy on
+ * the line: each pair within a side, holent_tfd_side_length, or through
+ * the bridge, holent_tfd_cross_length with the shock), by brute force
+ * for np/2 <= RUNNER_NMAX.  pairs (np) and *S (c/6 times the regulated
+ * length) receive it.  EUNSUP on a circle, EDOM for a single candidate,
+ * ETOOBIG above RUNNER_NMAX.  */
+int holent_surface_tfd_runner_up (holent_surface_workspace *w,
+                                  const holent_tfd_bg *b, size_t np,
+                                  const double *x, const double *t,
+                                  const int *side, const size_t *pmin,
+                                  size_t *pairs, double *S);
 
 /* Profile of the strip of turning point top = z* (ball = 0) or of the
  * ball of tip depth top (ball = 1), sampled to tol into w->cur as points

@@ -342,6 +342,54 @@ main (void)
         }
   }
 
+  {
+    /* The runner-up on the line's thermofield double: A_L = A_R = [0, 3]
+       at t = 0 (beta = 1, c = 1), endpoints in the bridge order R0, R3,
+       L3, L0.  The minimiser joins them through the bridge, 2 geodesics
+       of 2 log((beta/(pi eps)) cosh(2 pi t/beta)) (Hartman and Maldacena
+       2013, JHEP 05, 014); the runner-up is the pair within the sides,
+       2 x 2 log((beta/(pi eps)) sinh(pi l/beta)) (Calabrese and Cardy
+       2004), S = c/6 times the lengths.  */
+    holent_tfd_bg tl;
+    HT_STATUS (holent_tfd_init (&tl, 0, 0, 1e-3, 1, 1, 0), 0);
+    const double x[4] = { 0, 3, 3, 0 }, t[4] = { 0, 0, 0, 0 };
+    const int sd[4] = { 1, 1, 0, 0 };
+    const size_t pmin[4] = { 0, 3, 1, 2 };
+    size_t pr[4];
+    double S, k = 1.0 / (M_PI * 1e-3);
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 4, x, t, sd, pmin, pr, &S), 0);
+    HT_CHECK (pr[0] == 0 && pr[1] == 1 && pr[2] == 2 && pr[3] == 3, "pairs");
+    HT_CLOSE (S, 4.0 * log (k * sinh (3 * M_PI)) / 6.0, 1e-13);
+    /* from the pair within the sides, the runner-up is the bridge */
+    const size_t pin[4] = { 0, 1, 2, 3 };
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 4, x, t, sd, pin, pr, &S), 0);
+    HT_CHECK (pr[0] == 0 && pr[1] == 3 && pr[2] == 1 && pr[3] == 2, "pairs");
+    HT_CLOSE (S, 4.0 * log (k) / 6.0, 1e-13);
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 2, x, t, sd, pin, pr, &S), HOLENT_EDOM);
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 3, x, t, sd, pmin, pr, &S), HOLENT_EDOM);
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tc, 4, x, t, sd, pmin, pr, &S), HOLENT_EUNSUP);
+    HT_STATUS (holent_surface_tfd_runner_up (NULL, &tl, 4, x, t, sd, pmin, pr, &S), HOLENT_EINVAL);
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 18, x, t, sd, pmin, pr, &S), HOLENT_ETOOBIG);
+    /* the same workspace, then 8 intervals on the right (1430 pairings of
+       16 points after 2 of 4: its scratch grows by entries, under ASan):
+       the intervals [2k, 2k + 1] with gaps of 1; the runner-up nests two
+       neighbours, [2k, 2k + 3] over [2k + 1, 2k + 2], so one geodesic of
+       length 1 becomes one of length 3 (the lengths of Calabrese and
+       Cardy as above) */
+    double x8[16], t8[16] = { 0 };
+    int s8[16];
+    size_t p8[16], r8[16];
+    for (int i = 0; i < 16; i++)
+      {
+        x8[i] = i;
+        s8[i] = 1;
+        p8[i] = (size_t) i;
+      }
+    HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 16, x8, t8, s8, p8, r8, &S), 0);
+    HT_CLOSE (S, (7.0 * 2.0 * log (k * sinh (M_PI))
+                  + 2.0 * log (k * sinh (3 * M_PI))) / 6.0, 1e-13);
+  }
+
   holent_surface_workspace_free (w);
   holent_surface_workspace_free (NULL);
   return HT_DONE ();
