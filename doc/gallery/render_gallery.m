@@ -69,10 +69,11 @@ function files = render_gallery (outdir)
     clf (f);
     plot_rt_surface (ads3_background ("vacuum", "line"), [0 2 0 1.2; 3 4.5 0.4 0]);
     files{end+1} = save_ (f, outdir, "boosted_intervals.png");
-    ## 11. the thermofield double: geodesics through the Einstein-Rosen bridge
+    ## 11. the thermofield double: geodesics through the Einstein-Rosen
+    ## bridge, those within each side the runner-up
     clf (f);
     plot_rt_surface (ads3_background ("tfd", "line", "beta", 2),
-                     struct ("left", [0 3], "right", [0 3]), "t", 0.2);
+                     struct ("left", [0 3], "right", [0 3]), "t", 0.2, "runner_up", true);
     files{end+1} = save_ (f, outdir, "tfd_bridge.png");
     ## 12. both sides of a thermofield double on a circle: a bridge at a
     ## winding that is not the shortest (it spans 3 of the circle's 5)
