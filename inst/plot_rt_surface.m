@@ -48,7 +48,8 @@
 ## thermofield double in its Kruskal diagram (X_K, T_K), with the two
 ## boundaries, the horizons (dotted, in @code{horizon}) and the
 ## singularities (in @code{defect}), with @qcode{"runner_up"} true on a
-## line the best other pairing dashed (@code{rt_surface}); on a circle a region on both sides
+## line the best other pairing dashed (@code{rt_surface}; also for
+## endpoint times on a line and on a quench); on a circle a region on both sides
 ## shows the geodesics through the bridge at the minimiser's winding and
 ## those within each side, and the horizon circle, when it is part of
 ## the surface, as a marker at the bifurcation point X_K = T_K = 0.
@@ -114,9 +115,7 @@ function h = plot_rt_surface (varargin)
   s = __holent_rt_surface__ (fn, bg, A, [{"tol", tol}, topt]);
   if (ru)
     ropt = {"tol", tol, "configuration", "runner_up"};
-    if (__holent_is_bcft__ (bg) || (isfield (bg, "state") && strcmp (bg.state, "tfd")))
-      ropt = [ropt, topt];     # a thermofield double at the time t
-    endif
+    ropt = [ropt, topt];       # the runner-up at the same time
     r = __holent_rt_surface__ (fn, bg, A, ropt);
   endif
   if (penrose && ! strcmp (s.picture, "kruskal"))

@@ -64,13 +64,14 @@
 ## (boundaries X_K = +-cosh(R t), T_K = sinh(R t), R = 2 pi/beta on a
 ## line, L/beta on a circle; horizons |X_K| = |T_K|), the horizon as the
 ## bifurcation circle X_K = T_K = 0.  Sampled with the same rule.  The
-## runner-up on this path exists for the thermofield double on a line:
-## the best other non-crossing pairing of the endpoints in the order of
-## the bridge slice (right ascending, then left descending), each pair
-## within a side or through the bridge (with the shock), for up to 8
-## intervals in all (the Hartman-Maldacena competition: the bridge
-## against the geodesics within each side).  Regions with times on a
-## static bulk, a quench and the circle's annulus have none
+## runner-up on this path (up to 8 intervals in all, a brute force): on
+## a line with endpoint times and on a quench (line or circle), the best
+## other non-crossing pairing of the endpoints; on the thermofield double
+## of a line, the best other non-crossing pairing in the order of the
+## bridge slice (right ascending, then left descending), each pair within
+## a side or through the bridge (with the shock): the Hartman-Maldacena
+## competition of the bridge against the geodesics within each side.
+## Regions with times on a circle and the circle's annulus have none
 ## (@code{holent:unsupported}).  On a circle a region on both sides gives the
 ## minimiser over the annulus (@file{doc/tfd_shock.md}): geodesics within
 ## each side (over the arc in @code{arcs}), geodesics through the bridge
@@ -230,7 +231,8 @@ endfunction
 
 %!error <Invalid call> rt_surface (ads3_background ("vacuum", "line"))
 %!error <t: must be nearer 0 for the Kruskal picture> rt_surface (ads3_background ("tfd", "line", "beta", 1), struct ("left", [0 3], "right", [0 3]), "t", 200)
-%!error <not available for regions with times> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
+%!error <not available for regions with times on a circle> rt_surface (ads3_background ("vacuum", "circle"), [0 1 0 0.5; 2 3 0 0], "configuration", "runner_up")
+%!error <single candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1 0 0.5], "configuration", "runner_up")
 %!error <configuration must be> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "best")
 %!error <single RT candidate> rt_surface (ads3_background ("vacuum", "line"), [0 1], "configuration", "runner_up")
 %!error <tol must lie> rt_surface (ads3_background ("vacuum", "line"), [0 1], "tol", 0)

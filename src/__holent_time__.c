@@ -867,10 +867,6 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
   double t = holent_gw_scalar (prhs[4], fn, "t");
   double tol = holent_gw_scalar (prhs[5], fn, "tol");
   int runner = nrhs > 6 && holent_gw_scalar (prhs[6], fn, "runner") != 0.0;
-  if (runner && b.kind != BG_TFD)
-    holent_gw_raise (fn, HOLENT_EUNSUP, NULL, HOLENT_NOINDEX,
-                     "configuration \"runner_up\" is not available for "
-                     "regions with times or a quench");
   if (!isfinite (t))
     holent_gw_raise (fn, isnan (t) ? HOLENT_ENAN : HOLENT_EDOM, "t",
                      HOLENT_NOINDEX, "must be finite");
@@ -905,33 +901,6 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
       pairs = cf.pairs;
       arcs = cf.arcs;
       wind = cf.winding;
-      if (runner)
-        {
-          /* g.pairs and g.arcs hold 2 (rows + 1) and rows + 1 entries:
-             room for np and np/2 */
-          st = holent_surface_tfd_runner_up (g.sw, &b.tfd, np, x, tp, side,
-                                             pairs, g.pairs, &S);
-          if (st == HOLENT_EUNSUP)
-            fail (&g, st, NULL, HOLENT_NOINDEX, "configuration "
-                  "\"runner_up\" is not available on the thermofield "
-                  "double of a circle (its annulus has windings and the "
-                  "horizon; the line's is)");
-          if (st == HOLENT_EDOM)
-            fail (&g, st, "A", HOLENT_NOINDEX, "has a single candidate "
-                  "configuration: there is no runner-up");
-          if (st == HOLENT_ETOOBIG)
-            fail (&g, st, "A", HOLENT_NOINDEX, "must have at most %zu "
-                  "intervals in all for the runner-up (a brute force)",
-                  (size_t) HOLENT_SURFACE_RUNNER_NMAX);
-          if (st)
-            fail (&g, st, "A", HOLENT_NOINDEX, "%s", holent_strerror (st));
-          pairs = g.pairs;
-          for (size_t k = 0; k < np / 2; k++)
-            g.arcs[k] = NAN;
-          arcs = g.arcs;
-          wind = NULL;
-          horizon = 0;
-        }
     }
   else
     {
@@ -941,6 +910,45 @@ do_surface (const char *fn, int nlhs, mxArray *plhs[], int nrhs,
         for (size_t i = 0; i < np; i++)
           g.tp[i] = t;
       tp = g.tp;
+    }
+  if (runner)
+    {
+      /* the best other candidate: g.pairs and g.arcs hold 2 (rows + 1)
+         and rows + 1 entries, room for np and np/2 (the minimiser's pairs
+         are read before they are overwritten) */
+      int st;
+      if (b.kind == BG_TFD)
+        st = holent_surface_tfd_runner_up (g.sw, &b.tfd, np, x, tp, side,
+                                           pairs, g.pairs, &S);
+      else if (b.kind == BG_QUENCH)
+        st = holent_surface_quench_runner_up (g.sw, &b.quench, np, x, t,
+                                              pairs, g.pairs, &S);
+      else
+        st = holent_surface_hrt_runner_up (g.sw, &b.geo, np, x, tp, pairs,
+                                           g.pairs, &S);
+      if (st == HOLENT_EUNSUP)
+        fail (&g, st, NULL, HOLENT_NOINDEX, "configuration \"runner_up\" "
+              "is not available for %s on a circle (its %s); on a line it "
+              "is", b.kind == BG_TFD ? "a thermofield double"
+                                     : "regions with times",
+              b.kind == BG_TFD ? "annulus has windings and the horizon"
+                               : "faces and horizon");
+      if (st == HOLENT_EDOM)
+        fail (&g, st, "A", HOLENT_NOINDEX, "has a single candidate "
+              "configuration: there is no runner-up");
+      if (st == HOLENT_ETOOBIG)
+        fail (&g, st, "A", HOLENT_NOINDEX, "must have at most %zu "
+              "intervals in all for the runner-up (a brute force)",
+              (size_t) HOLENT_SURFACE_RUNNER_NMAX);
+      if (st)
+        fail (&g, st, "A", HOLENT_NOINDEX, "%s", holent_strerror (st));
+      pairs = g.pairs;
+      for (size_t k = 0; k < np / 2; k++)
+        g.arcs[k] = b.kind == BG_TFD ? NAN
+                                     : x[pairs[2 * k + 1]] - x[pairs[2 * k]];
+      arcs = g.arcs;
+      wind = NULL;
+      horizon = 0;
     }
   size_t m = g.m;
   mxArray *cell = mxCreateCellMatrix (1, m);

@@ -465,5 +465,54 @@
 %! assert (ntrial == 12 && nshock >= 1 && nswap >= 3);
 %! ## refusals: the circle's annulus, a single candidate
 %! A = struct ("left", [0 3], "right", [0 3]);
-%! fail ('rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5), A, "configuration", "runner_up")', "not available on the thermofield double of a circle");
+%! fail ('rt_surface (ads3_background ("tfd", "circle", "beta", 1, "circumference", 5), A, "configuration", "runner_up")', "not available for a thermofield double on a circle");
 %! fail ('rt_surface (ads3_background ("tfd", "line", "beta", 1), struct ("right", [0 3]), "configuration", "runner_up")', "single candidate");
+
+%!test
+%! ## The runner-up with endpoint times on static lines (vacuum, thermal,
+%! ## rotating) and on the global quench (line and circle, at a time t):
+%! ## against every non-crossing pairing of the sorted endpoints priced
+%! ## here with geodesic_length (the candidates of the time path; common
+%! ## practice), the best for the minimiser and the second best for the
+%! ## runner-up, to 1e-12; the runner-up's curves end on its endpoints.
+%! rand ("seed", 23);
+%! bgs = {ads3_background("vacuum", "line"), ads3_background("thermal", "line", "beta", 1.3), ...
+%!        ads3_background("rotating", "line", "beta_L", 0.8, "beta_R", 1.9), ...
+%!        ads3_background("quench", "line", "beta", 1), ads3_background("quench", "circle", "beta", 2)};
+%! for k = 1:numel (bgs)
+%!   bg = bgs{k};  quench = strcmp (bg.state, "quench");
+%!   for trial = 1:3
+%!     n = 2 + (trial == 3);
+%!     x = cumsum (0.2 + rand (2 * n, 1));
+%!     if (quench && strcmp (bg.boundary, "circle"))
+%!       x *= 5 / (x(end) + 0.3);
+%!     endif
+%!     tt = (! quench) * 0.08 * (rand (2 * n, 1) - 0.5);
+%!     A = [x(1:2:end), x(2:2:end), tt(1:2:end), tt(2:2:end)];
+%!     tq = 0.3 + rand ();
+%!     if (quench)
+%!       A = A(:, 1:2);  opt = {"t", tq};
+%!     else
+%!       opt = {};
+%!     endif
+%!     N = 2 * n;  W = zeros (N);
+%!     for i = 1:N
+%!       for j = i+1:N
+%!         if (quench)
+%!           W(i,j) = geodesic_length (bg, x(i), x(j), "t", tq);
+%!         else
+%!           W(i,j) = geodesic_length (bg, x(i), x(j), "t1", tt(i), "t2", tt(j));
+%!         endif
+%!       endfor
+%!     endfor
+%!     C = nc_pairings (1:N);
+%!     cost = sort (cellfun (@(p) bg.c / 6 * sum (W(sub2ind ([N N], p(:,1), p(:,2)))), C));
+%!     s = rt_surface (bg, A, opt{:});
+%!     r = rt_surface (bg, A, opt{:}, "configuration", "runner_up");
+%!     assert ([s.S, r.S], cost(1:2), 1e-12 * abs (cost(1:2)));
+%!     for q = 1:rows (r.pairs)
+%!       c = r.curves{q};  e = r.pairs(q,:);
+%!       assert (sort (c([1 end], 3)), sort (merge (quench, [tq; tq], r.times(e))), 1e-12);
+%!     endfor
+%!   endfor
+%! endfor

@@ -33,10 +33,7 @@ function surf = __holent_rt_surface__ (fn, bg, A, opts)
       || __holent_time_entropy__ ("timed", bg, A))
     ## endpoint times, a thermofield double or a quench: the core's
     ## minimiser and its geodesics in the picture of the state
-    ru = strcmp (which, "runner_up");
-    if (ru && ! strcmp (bg.state, "tfd"))
-      error ("holent:unsupported", "%s: configuration \"runner_up\" is not available for regions with times or a quench", fn);
-    endif
+    ru = strcmp (which, "runner_up");   # the gateway says where it exists
     t = 0;
     if (isfield (o, "t"))
       t = __holent_scalar__ (fn, "t", o.t, {-Inf, Inf, "()"});

@@ -1197,6 +1197,105 @@ holent_surface_runner_up (holent_surface_workspace *w,
   return HOLENT_SUCCESS;
 }
 
+/* The length of the pair (a, b) of a runner-up's candidates.  */
+typedef int (*pair_len_fn) (const void *ctx, size_t a, size_t b,
+                            double *len);
+
+/* The best non-crossing pairing of np points other than pmin (any order
+   of its pairs), priced pair by pair: *S = c6 times its length.  */
+static int
+pairing_runner_up (holent_surface_workspace *w, size_t np,
+                   const size_t *pmin, pair_len_fn len_fn, const void *ctx,
+                   double c6, size_t *pairs, double *S)
+{
+  if (np == 0 || np % 2)
+    return HOLENT_EDOM;
+  size_t n = np / 2;
+  int st = all_pairings (w, np);
+  if (st)
+    return st;
+  /* the minimiser as the enumeration writes pairings: each pair (lower,
+     upper), sorted by the lower (read before pairs, which may alias it) */
+  size_t pm[2 * HOLENT_SURFACE_RUNNER_NMAX];
+  for (size_t i = 0; i < n; i++)
+    {
+      size_t a = pmin[2 * i], b = pmin[2 * i + 1];
+      if (a >= np || b >= np)
+        return HOLENT_EINVAL;
+      size_t k = i;
+      for (; k > 0 && pm[2 * (k - 1)] > (a < b ? a : b); k--)
+        {
+          pm[2 * k] = pm[2 * (k - 1)];
+          pm[2 * k + 1] = pm[2 * (k - 1) + 1];
+        }
+      pm[2 * k] = a < b ? a : b;
+      pm[2 * k + 1] = a < b ? b : a;
+    }
+  double best = INFINITY, zero[HOLENT_SURFACE_RUNNER_NMAX] = { 0 };
+  for (size_t q = 0; q < w->npairing; q++)
+    {
+      const size_t *pq = w->pairings + q * np;
+      if (same_conf (n, pq, zero, 0, pm, zero, 0, 0.0))
+        continue;
+      double len = 0.0;
+      for (size_t i = 0; i < n; i++)
+        {
+          double d;
+          if ((st = len_fn (ctx, pq[2 * i], pq[2 * i + 1], &d)))
+            return st;
+          len += d;
+        }
+      if (c6 * len < best)
+        {
+          best = c6 * len;
+          memcpy (pairs, pq, np * sizeof *pairs);
+        }
+    }
+  if (!isfinite (best))
+    return HOLENT_EDOM;  /* a single candidate: no runner-up */
+  *S = best;
+  return HOLENT_SUCCESS;
+}
+
+typedef struct
+{
+  const holent_tfd_bg *b;
+  const holent_geo_bg *geo;
+  const holent_quench_bg *q;
+  const double *x, *t;
+  const int *side;
+  double tq;
+} pair_ctx;
+
+static int
+tfd_pair_len (const void *vc, size_t a, size_t c, double *len)
+{
+  const pair_ctx *p = vc;
+  const double *x = p->x, *t = p->t;
+  if (p->side[a] == p->side[c])
+    return holent_tfd_side_length (p->b, x[a], t[a], x[c], t[c],
+                                   HOLENT_GEO_SHORTER, len);
+  if (p->side[a])   /* a on the right */
+    return holent_tfd_cross_length (p->b, x[c], t[c], x[a], t[a], len);
+  return holent_tfd_cross_length (p->b, x[a], t[a], x[c], t[c], len);
+}
+
+static int
+hrt_pair_len (const void *vc, size_t a, size_t c, double *len)
+{
+  const pair_ctx *p = vc;
+  double im;
+  return holent_hrt_length (p->geo, p->x[a], p->t[a], p->x[c], p->t[c],
+                            HOLENT_GEO_SHORTER, 0, len, &im);
+}
+
+static int
+quench_pair_len (const void *vc, size_t a, size_t c, double *len)
+{
+  const pair_ctx *p = vc;
+  return holent_quench_points_length (p->q, p->x[a], p->x[c], p->tq, len);
+}
+
 int
 holent_surface_tfd_runner_up (holent_surface_workspace *w,
                               const holent_tfd_bg *b, size_t np,
@@ -1209,48 +1308,43 @@ holent_surface_tfd_runner_up (holent_surface_workspace *w,
     return HOLENT_EINVAL;
   if (b->side.circle)
     return HOLENT_EUNSUP;   /* the annulus: windings and the horizon */
-  if (np == 0 || np % 2)
-    return HOLENT_EDOM;
-  size_t n = np / 2;
-  int st = all_pairings (w, np);
-  if (st)
-    return st;
   /* every non-crossing pairing in the bridge order is a candidate on the
      line (holent_tfd_entropy): each pair within a side or through the
      bridge, the horizon never (it is not compact) */
-  double best = INFINITY, zero[HOLENT_SURFACE_RUNNER_NMAX] = { 0 };
-  for (size_t q = 0; q < w->npairing; q++)
-    {
-      const size_t *pq = w->pairings + q * np;
-      if (same_conf (n, pq, zero, 0, pmin, zero, 0, 0.0))
-        continue;
-      double len = 0.0;
-      for (size_t i = 0; i < n && len < INFINITY; i++)
-        {
-          size_t a = pq[2 * i], c = pq[2 * i + 1];
-          double d;
-          if (side[a] == side[c])
-            st = holent_tfd_side_length (b, x[a], t[a], x[c], t[c],
-                                         HOLENT_GEO_SHORTER, &d);
-          else if (side[a])   /* a on the right */
-            st = holent_tfd_cross_length (b, x[c], t[c], x[a], t[a], &d);
-          else
-            st = holent_tfd_cross_length (b, x[a], t[a], x[c], t[c], &d);
-          if (st)
-            return st;
-          len += d;
-        }
-      double Sq = b->side.c / 6.0 * len;
-      if (Sq < best)
-        {
-          best = Sq;
-          memcpy (pairs, pq, np * sizeof *pairs);
-        }
-    }
-  if (!isfinite (best))
-    return HOLENT_EDOM;  /* a single candidate: no runner-up */
-  *S = best;
-  return HOLENT_SUCCESS;
+  pair_ctx c = { b, NULL, NULL, x, t, side, 0.0 };
+  return pairing_runner_up (w, np, pmin, tfd_pair_len, &c, b->side.c / 6.0,
+                            pairs, S);
+}
+
+int
+holent_surface_hrt_runner_up (holent_surface_workspace *w,
+                              const holent_geo_bg *bg, size_t np,
+                              const double *x, const double *t,
+                              const size_t *pmin, size_t *pairs, double *S)
+{
+  if (w == NULL || bg == NULL || x == NULL || t == NULL || pmin == NULL
+      || pairs == NULL || S == NULL)
+    return HOLENT_EINVAL;
+  if (bg->circle)
+    return HOLENT_EUNSUP;   /* the faces and the horizon of a circle */
+  pair_ctx c = { NULL, bg, NULL, x, t, NULL, 0.0 };
+  return pairing_runner_up (w, np, pmin, hrt_pair_len, &c, bg->c / 6.0,
+                            pairs, S);
+}
+
+int
+holent_surface_quench_runner_up (holent_surface_workspace *w,
+                                 const holent_quench_bg *q, size_t np,
+                                 const double *x, double t,
+                                 const size_t *pmin, size_t *pairs,
+                                 double *S)
+{
+  if (w == NULL || q == NULL || x == NULL || pmin == NULL || pairs == NULL
+      || S == NULL || isnan (t))
+    return HOLENT_EINVAL;
+  pair_ctx c = { NULL, NULL, q, x, NULL, NULL, t };
+  return pairing_runner_up (w, np, pmin, quench_pair_len, &c, q->vac.c / 6.0,
+                            pairs, S);
 }
 
 /* ---- AdS_{d+1} strip and ball profiles ---- */

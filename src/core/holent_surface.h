@@ -195,6 +195,26 @@ int holent_surface_tfd_runner_up (holent_surface_workspace *w,
                                   const int *side, const size_t *pmin,
                                   size_t *pairs, double *S);
 
+/* The same on a static line with endpoint times (x ascending, times t):
+ * every non-crossing pairing, each geodesic the covariant one of
+ * holent_hrt_length (the candidates of the time path on a line; the
+ * horizon of a line is not compact).  EUNSUP on a circle (its faces and
+ * horizon), otherwise as holent_surface_tfd_runner_up.  */
+int holent_surface_hrt_runner_up (holent_surface_workspace *w,
+                                  const holent_geo_bg *bg, size_t np,
+                                  const double *x, const double *t,
+                                  const size_t *pmin, size_t *pairs,
+                                  double *S);
+
+/* The same for the global quench at time t (holent_quench_entropy's
+ * candidates: every non-crossing pairing of the sorted endpoints x, each
+ * geodesic with holent_quench_points_length, on a line or a circle).  */
+int holent_surface_quench_runner_up (holent_surface_workspace *w,
+                                     const holent_quench_bg *q, size_t np,
+                                     const double *x, double t,
+                                     const size_t *pmin, size_t *pairs,
+                                     double *S);
+
 /* Profile of the strip of turning point top = z* (ball = 0) or of the
  * ball of tip depth top (ball = 1), sampled to tol into w->cur as points
  * (x or r, z) from the turning point (0, top) to the boundary (half

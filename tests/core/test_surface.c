@@ -386,6 +386,24 @@ main (void)
         p8[i] = (size_t) i;
       }
     HT_STATUS (holent_surface_tfd_runner_up (w, &tl, 16, x8, t8, s8, p8, r8, &S), 0);
+    /* the Poincare line with the same points at t = 0: the vacuum
+       lengths 2 log(l/eps) (common practice), one 1 -> one 3 again; the
+       minimiser given in another order of its pairs; refusals */
+    size_t p8r[16];
+    for (int i = 0; i < 8; i++)
+      {
+        p8r[2 * i] = (size_t) (15 - 2 * i);
+        p8r[2 * i + 1] = (size_t) (14 - 2 * i);
+      }
+    double Sv;
+    HT_STATUS (holent_surface_hrt_runner_up (w, &bg, 16, x8, t8, p8r, r8, &Sv), 0);
+    HT_CLOSE (Sv, (7.0 * 2.0 * log (1e6) + 2.0 * log (3e6)) / 6.0, 1e-13);
+    HT_STATUS (holent_surface_hrt_runner_up (w, &bc, 16, x8, t8, p8, r8, &Sv), HOLENT_EUNSUP);
+    HT_STATUS (holent_surface_hrt_runner_up (NULL, &bg, 16, x8, t8, p8, r8, &Sv), HOLENT_EINVAL);
+    HT_STATUS (holent_surface_quench_runner_up (w, &q, 16, x8, NAN, p8, r8, &Sv), HOLENT_EINVAL);
+    /* the quench before the shell (t < 0) is the vacuum */
+    HT_STATUS (holent_surface_quench_runner_up (w, &q, 16, x8, -1.0, p8, r8, &Sv), 0);
+    HT_CLOSE (Sv, (7.0 * 2.0 * log (1e6) + 2.0 * log (3e6)) / 6.0, 1e-13);
     HT_CLOSE (S, (7.0 * 2.0 * log (k * sinh (M_PI))
                   + 2.0 * log (k * sinh (3 * M_PI))) / 6.0, 1e-13);
   }
