@@ -17,8 +17,6 @@
 #include "fuzz_input.h"
 #include "holent_ineq.h"
 
-#define CHECK(c, ...) \
-  do { if (!(c)) { fprintf (stderr, __VA_ARGS__); fprintf (stderr, "\n"); abort (); } } while (0)
 
 static long double
 S (const double *s, uint32_t x)

@@ -5,6 +5,13 @@
 #include <math.h>
 #include <stddef.h>
 #include <stdint.h>
+#include <stdio.h>
+#include <stdlib.h>
+
+/* An oracle of a harness: a failed one names itself and aborts, which
+   libFuzzer reports with the input.  */
+#define CHECK(c, ...) \
+  do { if (!(c)) { fprintf (stderr, __VA_ARGS__); fprintf (stderr, "\n"); abort (); } } while (0)
 
 typedef struct
 {

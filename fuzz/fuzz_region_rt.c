@@ -24,8 +24,6 @@
 #include "holent_interval.h"
 
 #define NR 12
-#define CHECK(c, ...) \
-  do { if (!(c)) { fprintf (stderr, __VA_ARGS__); fprintf (stderr, "\n"); abort (); } } while (0)
 
 static holent_rt_workspace *ws_dp, *ws_fast;
 static holent_region *reg, *comp;

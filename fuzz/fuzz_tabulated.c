@@ -26,8 +26,6 @@
 #include "holent_strip.h"
 
 #define NZ 700
-#define CHECK(c, ...) \
-  do { if (!(c)) { fprintf (stderr, __VA_ARGS__); fprintf (stderr, "\n"); abort (); } } while (0)
 
 static holent_strip_workspace *sw;
 

@@ -25,8 +25,6 @@
 #include "holent_surface.h"
 
 #define NI 3
-#define CHECK(c, ...) \
-  do { if (!(c)) { fprintf (stderr, __VA_ARGS__); fprintf (stderr, "\n"); abort (); } } while (0)
 
 static holent_tfd_workspace *tw;
 static holent_surface_workspace *sw;

@@ -129,10 +129,11 @@ function h = plot_rt_surface (varargin)
               "jump", [], "surf", s);
   disk = strcmp (s.picture, "disk");
   bcft = ! isempty (s.brane_curves);
+  if (strcmp (s.picture, "kruskal"))
+    ends = region_ends (s);   # before any map
+  endif
   if (penrose)
-    ## the region endpoints, found on the boundaries before the map
-    P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
-    ends = compact (P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :));
+    ends = compact (ends);
     s = compact (s);
     if (! isempty (r))
       r = compact (r);
@@ -313,15 +314,7 @@ function h = plot_rt_surface (varargin)
   ## curve coloured by its third column (t, or v on a quench), a colour bar
   tc = cellfun (@(c) columns (c) > 2 && max (c(:,3)) > min (c(:,3)), s.curves);
   if (strcmp (s.picture, "kruskal") && ! isempty (s.curves))
-    ## the regions: their endpoints sit on the boundaries X^2 - T^2 = 1
-    ## (the direction along them is not drawn), marked where curves start
-    if (penrose)
-      P = ends;
-    else
-      P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
-      P = P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :);
-    endif
-    h.regions = plot (hax, P(:,1), P(:,2), "o", "color", pal.region,
+    h.regions = plot (hax, ends(:,1), ends(:,2), "o", "color", pal.region,
                       "markerfacecolor", pal.region, "markersize", 8);
   endif
   if (any (tc) && ! strcmp (s.picture, "kruskal"))
@@ -350,6 +343,17 @@ endfunction
 
 ## Markers at the landing points of the brane-ending curves of s (the last
 ## numel (s.brane.x) of s.curves) in the Kruskal diagram.
+## The region endpoints of a Kruskal configuration: the curve ends on the
+## boundaries X_K^2 - T_K^2 = 1 (the direction along them is not drawn;
+## ends on a brane are not region endpoints).
+function P = region_ends (s)
+  P = zeros (0, 2);
+  if (! isempty (s.curves))
+    P = cell2mat (cellfun (@(c) c([1 end], 1:2), s.curves(:), "uniformoutput", false));
+    P = P(abs (P(:,1) .^ 2 - P(:,2) .^ 2 - 1) < 1e-6, :);
+  endif
+endfunction
+
 ## The compactified picture of Kruskal points (rows X_K, T_K, ...): u and
 ## v through atan, the BTZ square |X|, |T| <= 1; a configuration's curves
 ## all mapped.
